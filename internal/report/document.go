@@ -1,0 +1,101 @@
+package report
+
+// Document is the result document of a study (see the study-file contract):
+// all values in N, mm and MPa. Fields that only sampling produces are
+// pointers or nil slices so that `check --json` leaves them out.
+type Document struct {
+	Title       string `json:"title"`
+	ToolVersion string `json:"tool_version"`
+	InputSHA256 string `json:"input_sha256"`
+	Units       string `json:"units"` // always "N-mm-MPa"
+
+	Method      string    `json:"method,omitempty"`
+	Seed        *uint64   `json:"seed,omitempty"`
+	Evaluations *int64    `json:"evaluations,omitempty"`
+	Pf          *float64  `json:"pf,omitempty"`
+	PfCI        []float64 `json:"pf_ci,omitempty"`
+	PfCoV       *float64  `json:"pf_cov,omitempty"`
+	Beta        *float64  `json:"beta,omitempty"`
+	BetaCI      []float64 `json:"beta_ci,omitempty"`
+
+	TargetBeta    *float64 `json:"target_beta,omitempty"`
+	MeetsTarget   *bool    `json:"meets_target,omitempty"`
+	ReserveFactor *float64 `json:"reserve_factor,omitempty"`
+
+	GoverningAxis string `json:"governing_axis,omitempty"`
+
+	Nominal  *Nominal  `json:"nominal,omitempty"`
+	Capacity *Summary  `json:"capacity,omitempty"`
+	Demand   *Summary  `json:"demand,omitempty"`
+	FORM     *FORM     `json:"form,omitempty"`
+	Tornado  []Tornado `json:"tornado,omitempty"`
+	Sobol    []Sobol   `json:"sobol,omitempty"`
+	Sweep    []Point   `json:"sweep,omitempty"`
+	Variants []Variant `json:"variants,omitempty"`
+	Warnings []string  `json:"warnings"`
+}
+
+// Nominal is the deterministic picture at nominal (mean) values.
+type Nominal struct {
+	Capacity            float64 `json:"capacity"`
+	EulerLoad           float64 `json:"euler_load"`
+	Slenderness         float64 `json:"slenderness"`
+	RelativeSlenderness float64 `json:"relative_slenderness"`
+	K                   float64 `json:"k"`
+	Axis                string  `json:"axis"`
+}
+
+// Summary describes the sampled distribution of a quantity.
+type Summary struct {
+	Mean float64 `json:"mean"`
+	SD   float64 `json:"sd"`
+	P01  float64 `json:"p01"`
+	P05  float64 `json:"p05"`
+	P50  float64 `json:"p50"`
+	P95  float64 `json:"p95"`
+	P99  float64 `json:"p99"`
+}
+
+// FORM is the first-order reliability result.
+type FORM struct {
+	Beta        float64            `json:"beta"`
+	Pf          float64            `json:"pf"`
+	DesignPoint map[string]float64 `json:"design_point"`
+	Importance  map[string]float64 `json:"importance"`
+}
+
+// Tornado is one bar of a tornado chart: the output with the variable at its
+// low and at its high fractile, the others at their medians.
+type Tornado struct {
+	Variable  string  `json:"variable"`
+	LowValue  float64 `json:"low_value"`
+	HighValue float64 `json:"high_value"`
+	Low       float64 `json:"low"`
+	High      float64 `json:"high"`
+}
+
+// Sobol holds the first-order and total Sobol indices of one variable with
+// their bootstrap intervals.
+type Sobol struct {
+	Variable string     `json:"variable"`
+	First    float64    `json:"first"`
+	Total    float64    `json:"total"`
+	FirstCI  [2]float64 `json:"first_ci"`
+	TotalCI  [2]float64 `json:"total_ci"`
+}
+
+// Point is one row of a sweep.
+type Point struct {
+	Value float64    `json:"value"`
+	Pf    float64    `json:"pf"`
+	Beta  float64    `json:"beta"`
+	PfCI  [2]float64 `json:"pf_ci"`
+}
+
+// Variant is one named alternative of a study.
+type Variant struct {
+	Name string     `json:"name"`
+	Pf   float64    `json:"pf"`
+	Beta float64    `json:"beta"`
+	PfCI [2]float64 `json:"pf_ci"`
+}

@@ -1,0 +1,114 @@
+package sim
+
+// Method names an estimator of the failure probability.
+type Method string
+
+// The estimators Run knows.
+const (
+	Auto           Method = "auto"
+	MonteCarlo     Method = "monte-carlo"
+	LatinHypercube Method = "latin-hypercube"
+	FORMMethod     Method = "form"
+	Importance     Method = "importance"
+	Subset         Method = "subset"
+	// ConditionalQMC integrates the Model's Linear input exactly and draws
+	// the others by randomised quasi-Monte Carlo.
+	ConditionalQMC Method = "conditional-qmc"
+)
+
+// Result is the outcome of Run.
+type Result struct {
+	// Method is the estimator that produced Pf; Reason says why auto chose it.
+	Method Method
+	Reason string
+	// Evaluations counts calls of the limit state, FORM's included.
+	Evaluations int64
+	// Failures counts failed samples (crude sampling methods only).
+	Failures int64
+	// Pf is the failure probability, PfCI its interval at Confidence and
+	// PfCoV the coefficient of variation of the estimator.
+	Pf, PfCoV float64
+	PfCI      [2]float64
+	// Beta = -Phi^-1(Pf); BetaCI maps PfCI (BetaCI[0] from PfCI[1]).
+	Beta   float64
+	BetaCI [2]float64
+	// Confidence is the level of the intervals, e.g. 0.95.
+	Confidence float64
+	// FORM holds the first-order analysis when one was run.
+	FORM *FORMResult
+	// Outputs summarises the Model's outputs over the samples (for
+	// rare-event methods, over an auxiliary crude sample).
+	Outputs []OutputStats
+	// Convergence traces the estimate as evaluations grow.
+	Convergence []ConvergencePoint
+	// Kept is a bounded, reproducible subsample of evaluated points.
+	Kept *Samples
+	// Incomplete is set when the run was cancelled before it finished.
+	Incomplete bool
+	// Warnings are diagnostics a reader should see.
+	Warnings []string
+}
+
+// ConvergencePoint is the estimate after a number of evaluations.
+type ConvergencePoint struct {
+	Evaluations int64
+	Pf          float64
+	PfCI        [2]float64
+	PfCoV       float64
+}
+
+// OutputStats describes the distribution of one Model output (or of the
+// limit state itself, named "g") over the samples, in constant memory.
+type OutputStats struct {
+	Name     string
+	N        int64
+	Mean, SD float64
+	// Min and Max are the extreme sampled values.
+	Min, Max float64
+	// Quantiles holds the values at the probabilities in QuantileLevels.
+	Quantiles []float64
+	// Hist is a fixed-bin histogram of the values.
+	Hist Histogram
+}
+
+// QuantileLevels are the probabilities of OutputStats.Quantiles.
+var QuantileLevels = []float64{0.01, 0.05, 0.50, 0.95, 0.99}
+
+// Histogram is a fixed-bin histogram: bin i covers
+// [Lo + i*Width, Lo + (i+1)*Width). Values outside are counted in Under and
+// Over.
+type Histogram struct {
+	Lo, Width   float64
+	Counts      []float64
+	Under, Over float64
+}
+
+// Samples is a table of kept sample points: one row per point, columns
+// named by Names (the inputs, then the outputs, then "g").
+type Samples struct {
+	Names []string
+	Rows  [][]float64
+}
+
+// DesignPoint is a most probable failure point found by FORM.
+type DesignPoint struct {
+	// Beta is the distance of U from the origin of standard normal space.
+	Beta float64
+	// U and X are the point in standard normal and physical space.
+	U, X []float64
+	// Alpha is the unit vector -U/Beta; Importance holds Alpha[i]^2.
+	Alpha, Importance []float64
+}
+
+// FORMResult is the outcome of a first-order reliability analysis.
+type FORMResult struct {
+	// Beta and Pf are for the whole (series) system of design points.
+	Beta, Pf float64
+	// Points lists the design points found, the most probable first.
+	Points []DesignPoint
+	// Evaluations counts limit-state calls.
+	Evaluations int
+	// Converged reports success; Status says how the search ended.
+	Converged bool
+	Status    string
+}
