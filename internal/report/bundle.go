@@ -1,0 +1,107 @@
+package report
+
+import "strutrisk/sim"
+
+// Bundle is everything a report is drawn from: the result document plus
+// the data behind the tables and pictures. The caller (the command) fills it;
+// report only presents it. Nil or empty parts are left out of the report.
+type Bundle struct {
+	// Doc is the result document, written as results.json.
+	Doc *Document
+	// StudyFile is the path of the study as the user gave it.
+	StudyFile string
+	// Inputs lists every input of the study, random or not.
+	Inputs []Input
+	// Check is the deterministic check at nominal values.
+	Check []CheckRow
+	// Defaults lists the defaults that applied (each one line).
+	Defaults []string
+	// Capacity, Demand and Margin summarise the sampled capacity, demand and
+	// limit state g (N); NominalCapacity is marked on the histogram.
+	Capacity, Demand, Margin *sim.OutputStats
+	NominalCapacity          float64
+	// Convergence traces pf and its band against evaluations.
+	Convergence []sim.ConvergencePoint
+	// Samples is the kept sample table, written as samples.csv.
+	Samples *sim.Samples
+	// Diagnostics are method facts (evaluations, CoV, FORM status, why the
+	// method was chosen), shown as a two-column table.
+	Diagnostics []KV
+	// TornadoOutput names the output of the tornado chart, e.g.
+	// "capacity (kN)"; TornadoBase is its value with every input at median.
+	TornadoOutput string
+	TornadoBase   float64
+	// SobolOutput says what the Sobol indices are of, e.g. "indicator of
+	// failure" or "capacity"; SobolNote carries caveats (correlations).
+	SobolOutput, SobolNote string
+	// Spearman holds the rank correlation of each input with the margin.
+	Spearman []KV
+	// Slenderness is the capacity-against-relative-slenderness picture.
+	Slenderness *SlendernessChart
+	// Series are curves of beta against a swept parameter, one per variant
+	// (a single unnamed series for a plain sweep); SweepLabel names the axis.
+	Series     []Series
+	SweepLabel string
+	// Updates are prior and updated distributions from measurements.
+	Updates []Update
+	// Trace is the beam-column load-deflection path at the design point.
+	Trace *Trace
+}
+
+// Input is one row of the inputs table.
+type Input struct {
+	Name   string // path in the study file, e.g. "material.yield"
+	Dist   string // distribution name, or "fixed"
+	Params string // parameters as written, e.g. "mean 300 MPa, cov 0.07"
+	Mean   float64
+	CoV    float64 // 0 for a fixed value
+	Unit   string
+}
+
+// CheckRow is one line of the deterministic check: a quantity per axis.
+type CheckRow struct {
+	Quantity     string
+	Major, Minor string
+	Unit         string
+}
+
+// KV is a labelled value already formatted for reading.
+type KV struct {
+	Key, Value string
+}
+
+// SlendernessChart holds deterministic capacity curves against relative
+// slenderness (capacity / squash load) and a cloud of sampled members.
+type SlendernessChart struct {
+	Curves []Curve
+	// Cloud are sampled (relative slenderness, capacity ratio) points.
+	Cloud [][2]float64
+	// Member is the nominal member's point.
+	Member [2]float64
+}
+
+// Curve is a named line.
+type Curve struct {
+	Name string
+	X, Y []float64
+}
+
+// Series is beta (with interval) against a swept value, for one variant.
+type Series struct {
+	Name   string
+	Points []Point
+}
+
+// Update shows the prior and updated (predictive) densities of a variable.
+type Update struct {
+	Variable     string
+	Unit         string
+	Prior, After sim.Dist
+	Data         []float64
+}
+
+// Trace is a load-deflection path and a deflected shape.
+type Trace struct {
+	Deflection, Load []float64 // path: lateral deflection (mm), load (N)
+	Position, Shape  []float64 // deflected shape at the limit: x (mm), v (mm)
+}
