@@ -1,0 +1,21 @@
+package column
+
+import "errors"
+
+// Errors returned by the capacity models and the effective length
+// functions. They are package-level values, so an evaluation that fails
+// allocates nothing either; compare with errors.Is.
+var (
+	ErrLength       = errors.New("column: member length must be positive and finite")
+	ErrModulus      = errors.New("column: elastic modulus E must be positive and finite")
+	ErrYield        = errors.New("column: yield strength fy must be positive and finite")
+	ErrArea         = errors.New("column: section area A must be positive and finite")
+	ErrRadius       = errors.New("column: radius of gyration r must be positive and finite")
+	ErrFibre        = errors.New("column: extreme-fibre distance c must be positive and finite")
+	ErrK            = errors.New("column: effective length factor K must be positive and finite")
+	ErrImperfection = errors.New("column: bow and eccentricity must be finite numbers")
+	ErrAlpha        = errors.New("column: imperfection factor alpha must be non-negative and finite")
+	ErrAxis         = errors.New("column: axis must be Major, Minor or Both")
+	ErrSpring       = errors.New("column: end spring stiffness must be non-negative (0 pinned, +Inf fixed)")
+	ErrSecond       = errors.New("column: second moment of area I must be positive and finite")
+)

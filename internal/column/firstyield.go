@@ -1,0 +1,125 @@
+package column
+
+import "math"
+
+// FirstYield returns the axial load at which the extreme fibre of a pinned
+// elastic member first reaches the yield strength, with the initial
+// half-sine bow of amplitude e0 = |Bow| and the end eccentricity e = |Ecc|
+// acting together:
+//
+//	P/A [1 + (c/r^2)(e sec((pi/2) sqrt(P/PE)) + e0/(1 - P/PE))] = fy
+//
+// with PE = pi^2 E A r^2 / (K L)^2. The eccentricity term is the secant
+// formula (Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., §1.9;
+// Gere, Mechanics of Materials, eq. 11-59); the bow term is the
+// amplification 1/(1 - P/PE) of an initially curved bar (Timoshenko &
+// Gere, §1.12). The two add exactly: the beam-column equation
+// EI v” + P v = -P (e + v0) is linear in v, so the deflections of the two
+// cases superpose, and for pinned ends both have their maximum (and the
+// moment P(e + v0 + v) its maximum) at mid-height. Within linear-elastic
+// second-order theory the equation is therefore the exact first-yield
+// condition of a pinned member, not an approximation; K L stands in for L
+// for other ends, which is the usual effective-length idealisation.
+//
+// With e = 0 it is the Perry-Robertson equation, solved in closed form as
+// the smaller root of (fy - s)(sE - s) = eta s sE, eta = e0 c / r^2. With
+// e > 0 the root is found by safeguarded Newton iteration on
+// (0, min(A fy, PE)). The capacity tends to the squash load A fy as the
+// imperfections vanish and to PE as the member grows slender.
+//
+// FirstYield evaluates axis, or both axes taking the weaker when axis is
+// Both (a tie reports Minor). Invalid input returns an error (see
+// Member.Validate), never NaN.
+func FirstYield(m *Member, axis Axis) (Result, error) {
+	if err := m.Validate(axis); err != nil {
+		return Result{}, err
+	}
+	return weaker(m, axis, firstYield, GovernsFirstYield), nil
+}
+
+// PerryRobertson is the "perry-robertson" model: FirstYield for a member
+// whose imperfection is its bow. It evaluates the same combined equation,
+// so an eccentricity, if the member has one, is included.
+func PerryRobertson(m *Member, axis Axis) (Result, error) { return FirstYield(m, axis) }
+
+// Secant is the "secant" model: FirstYield for a member loaded at an end
+// eccentricity (the secant formula). It evaluates the same combined
+// equation, so a bow, if the member has one, is included.
+func Secant(m *Member, axis Axis) (Result, error) { return FirstYield(m, axis) }
+
+// firstYield is FirstYield about one axis of a validated member.
+func firstYield(m *Member, a Axis) float64 {
+	r, c := m.Props.R[a], m.Props.C[a]
+	lam := m.K[a] * m.Length / r
+	// rho = fy/sE = lam_bar^2, the load ratio P/PE at the squash load.
+	rho := m.Fy * lam * lam / (math.Pi * math.Pi * m.E)
+	k := c / (r * r)
+	eta := math.Abs(m.Bow) * k
+	ecc := math.Abs(m.Ecc) * k
+	return m.Props.A * m.Fy * firstYieldChi(rho, eta, ecc)
+}
+
+// perryChi returns the smaller root chi of (1 - chi)(1 - chi rho) = eta chi,
+// the Perry-Robertson equation (Ayrton & Perry 1886; Robertson 1925) in
+// terms of chi = s/fy and rho = fy/sE. The form 2/(B + sqrt(D)) with
+// D = (1 - rho)^2 + eta (2 + 2 rho + eta) = B^2 - 4 rho avoids cancellation.
+func perryChi(rho, eta float64) float64 {
+	b := 1 + eta + rho
+	d := (1-rho)*(1-rho) + eta*(2+2*rho+eta)
+	return 2 / (b + math.Sqrt(d))
+}
+
+// firstYieldChi solves chi [1 + ecc sec((pi/2) sqrt(chi rho)) +
+// eta/(1 - chi rho)] = 1 for chi in (0, min(1, 1/rho)), where ecc = e c/r^2
+// and eta = e0 c/r^2.
+func firstYieldChi(rho, eta, ecc float64) float64 {
+	if ecc == 0 {
+		return perryChi(rho, eta)
+	}
+	hi := 1.0
+	if rho > 1 {
+		hi = 1 / rho
+	}
+	lo := 0.0
+	// The left-hand side g is increasing and convex in chi, and sec θ ≥
+	// 1/(1 - q) for q = chi rho in [0, 1), so the Perry root with
+	// eta + ecc lies at or right of the root: Newton then descends
+	// monotonically. The bracket [lo, hi] guards against round-off.
+	x := perryChi(rho, eta+ecc)
+	for i := 0; i < 100; i++ {
+		g, dg := firstYieldG(x, rho, eta, ecc)
+		if g > 0 {
+			hi = x
+		} else {
+			lo = x
+			if g == 0 {
+				return x
+			}
+		}
+		next := x - g/dg
+		if !(next > lo && next < hi) { // also catches NaN and Inf
+			next = 0.5 * (lo + hi)
+		}
+		if math.Abs(next-x) <= 4e-16*x || hi-lo <= 4e-16*hi {
+			return next
+		}
+		x = next
+	}
+	return x
+}
+
+// firstYieldG returns g(chi) - 1 and its derivative, where g is the
+// left-hand side of the first-yield equation over fy.
+func firstYieldG(x, rho, eta, ecc float64) (g, dg float64) {
+	q := x * rho
+	if q >= 1 {
+		return math.Inf(1), math.Inf(1)
+	}
+	th := 0.5 * math.Pi * math.Sqrt(q)
+	sin, cos := math.Sincos(th)
+	sec := 1 / cos
+	w := 1 / (1 - q)
+	g = x*(1+ecc*sec+eta*w) - 1
+	dg = 1 + ecc*sec*(1+0.5*th*sin*sec) + eta*w*w
+	return g, dg
+}

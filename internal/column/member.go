@@ -1,0 +1,78 @@
+package column
+
+import "math"
+
+// Limits reported in Result.Governs.
+const (
+	GovernsFirstYield = "first-yield"    // FirstYield, PerryRobertson, Secant
+	GovernsCurve      = "buckling-curve" // Curve
+)
+
+// String returns "major", "minor" or "both".
+func (a Axis) String() string {
+	switch a {
+	case Major:
+		return "major"
+	case Minor:
+		return "minor"
+	case Both:
+		return "both"
+	}
+	return "axis(?)"
+}
+
+// positive reports whether x is a positive finite number (false for NaN).
+func positive(x float64) bool { return x > 0 && x <= math.MaxFloat64 }
+
+// Validate checks the inputs a capacity evaluation about axis (Major,
+// Minor or Both) reads: E, Fy, Length, Props.A, and per axis K, Props.R and
+// Props.C must be positive and finite; Bow and Ecc must be finite (they act
+// by their magnitude). The capacity models call it themselves; it is
+// exported for callers that want to check a member before using the
+// float64 helpers (Slenderness, RelativeSlenderness, Euler).
+func (m *Member) Validate(axis Axis) error {
+	if axis != Major && axis != Minor && axis != Both {
+		return ErrAxis
+	}
+	switch {
+	case !positive(m.Length):
+		return ErrLength
+	case !positive(m.E):
+		return ErrModulus
+	case !positive(m.Fy):
+		return ErrYield
+	case !positive(m.Props.A):
+		return ErrArea
+	case math.IsNaN(m.Bow) || math.IsInf(m.Bow, 0) || math.IsNaN(m.Ecc) || math.IsInf(m.Ecc, 0):
+		return ErrImperfection
+	}
+	lo, hi := axis, axis
+	if axis == Both {
+		lo, hi = Major, Minor
+	}
+	for a := lo; a <= hi; a++ {
+		switch {
+		case !positive(m.K[a]):
+			return ErrK
+		case !positive(m.Props.R[a]):
+			return ErrRadius
+		case !positive(m.Props.C[a]):
+			return ErrFibre
+		}
+	}
+	return nil
+}
+
+// weaker runs eval on the requested axis, or on both axes keeping the
+// smaller resistance (a tie reports Minor).
+func weaker(m *Member, axis Axis, eval func(m *Member, a Axis) float64, governs string) Result {
+	if axis != Both {
+		return Result{N: eval(m, axis), Axis: axis, Governs: governs}
+	}
+	nMaj := eval(m, Major)
+	nMin := eval(m, Minor)
+	if nMaj < nMin {
+		return Result{N: nMaj, Axis: Major, Governs: governs}
+	}
+	return Result{N: nMin, Axis: Minor, Governs: governs}
+}
