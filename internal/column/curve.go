@@ -1,0 +1,75 @@
+package column
+
+import (
+	"fmt"
+	"math"
+)
+
+// CurveAlpha returns the imperfection factor alpha of the buckling curve
+// named "a0", "a", "b", "c" or "d" (EN 1993-1-1:2005 Table 6.1:
+// 0.13, 0.21, 0.34, 0.49, 0.76).
+func CurveAlpha(name string) (float64, error) {
+	switch name {
+	case "a0":
+		return 0.13, nil
+	case "a":
+		return 0.21, nil
+	case "b":
+		return 0.34, nil
+	case "c":
+		return 0.49, nil
+	case "d":
+		return 0.76, nil
+	}
+	return 0, fmt.Errorf("column: unknown buckling curve %q (want a0, a, b, c or d)", name)
+}
+
+// Curve returns the flexural buckling resistance chi A fy of the
+// generalised-imperfection buckling curves of EN 1993-1-1:2005 6.3.1.2
+// (eq. 6.49):
+//
+//	chi = 1 / (Phi + sqrt(Phi^2 - lam^2)) <= 1
+//	Phi = 0.5 [1 + alpha (lam - 0.2) + lam^2]
+//
+// with the relative slenderness lam = sqrt(A fy / Ncr) (eq. 6.50),
+// Ncr from K L, and alpha = Member.Alpha per axis (see CurveAlpha). For
+// lam <= 0.2, chi = 1 (6.3.1.2(4)). Bow and Ecc are not used: the curves
+// carry their own equivalent imperfection. No partial factor is applied.
+//
+// Curve evaluates axis, or both axes taking the weaker when axis is Both
+// (a tie reports Minor). Invalid input returns an error, never NaN.
+func Curve(m *Member, axis Axis) (Result, error) {
+	if err := m.Validate(axis); err != nil {
+		return Result{}, err
+	}
+	if axis == Major || axis == Both {
+		if !(m.Alpha[Major] >= 0 && m.Alpha[Major] <= math.MaxFloat64) {
+			return Result{}, ErrAlpha
+		}
+	}
+	if axis == Minor || axis == Both {
+		if !(m.Alpha[Minor] >= 0 && m.Alpha[Minor] <= math.MaxFloat64) {
+			return Result{}, ErrAlpha
+		}
+	}
+	return weaker(m, axis, curve, GovernsCurve), nil
+}
+
+// curve is Curve about one axis of a validated member.
+func curve(m *Member, a Axis) float64 {
+	lam := slenderness(m, a) / (math.Pi * math.Sqrt(m.E/m.Fy))
+	return m.Props.A * m.Fy * curveChi(lam, m.Alpha[a])
+}
+
+// curveChi is the reduction factor of EN 1993-1-1:2005 eq. (6.49).
+func curveChi(lam, alpha float64) float64 {
+	if lam <= 0.2 {
+		return 1
+	}
+	if lam > 1e150 { // lam^2 would overflow; chi -> 1/lam^2
+		return 1 / lam / lam
+	}
+	phi := 0.5 * (1 + alpha*(lam-0.2) + lam*lam)
+	chi := 1 / (phi + math.Sqrt(phi*phi-lam*lam))
+	return math.Min(chi, 1)
+}
