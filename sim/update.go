@@ -192,7 +192,11 @@ func UpdateLognormal(prior Prior, data []float64) (*Posterior, error) {
 func (p *Posterior) Predictive() Dist {
 	f := math.Sqrt(1 + 1/p.N)
 	if p.Sigma > 0 {
-		return updLognormal{mu: p.M, sigma: p.Sigma * f}
+		d, err := NewLognormalLog(p.M, p.Sigma*f)
+		if err != nil {
+			panic(err) // M finite and Sigma > 0 are checked by UpdateLognormal
+		}
+		return d
 	}
 	return newLogStudentsT(p.M, p.S*f, p.Nu)
 }

@@ -3,7 +3,9 @@ package sim
 import (
 	"fmt"
 	"math"
+	"math/rand/v2"
 
+	"gonum.org/v1/gonum/mathext"
 	"gonum.org/v1/gonum/stat/distuv"
 )
 
@@ -13,10 +15,15 @@ import (
 type logStudentsT struct {
 	mu, sigma float64
 	t         distuv.StudentsT // standard: Mu 0, Sigma 1
+	chi       Gamma            // chi-square(nu)/nu, for draw
 }
 
 func newLogStudentsT(mu, sigma, nu float64) logStudentsT {
-	return logStudentsT{mu: mu, sigma: sigma, t: distuv.StudentsT{Mu: 0, Sigma: 1, Nu: nu}}
+	g, err := NewGammaShape(nu/2, 2/nu)
+	if err != nil {
+		panic("sim: log-Student-t with nu = " + fmtNum(nu))
+	}
+	return logStudentsT{mu: mu, sigma: sigma, t: distuv.StudentsT{Mu: 0, Sigma: 1, Nu: nu}, chi: g.(Gamma)}
 }
 
 func (d logStudentsT) z(x float64) float64 { return (math.Log(x) - d.mu) / d.sigma }
@@ -35,8 +42,16 @@ func (d logStudentsT) Survival(x float64) float64 {
 	return d.t.Survival(d.z(x))
 }
 
+// Quantile and FromStdNormal are written out rather than calling quantile
+// and fromStd, whose interface argument would move d to the heap.
 func (d logStudentsT) Quantile(p float64) float64 {
-	return math.Exp(d.mu + d.sigma*d.t.Quantile(p))
+	if !(p >= 0 && p <= 1) {
+		panic(badProb)
+	}
+	if p <= 0.5 {
+		return d.lowerQ(p)
+	}
+	return d.upperQ(1 - p)
 }
 
 func (d logStudentsT) Prob(x float64) float64 {
@@ -52,17 +67,11 @@ func (d logStudentsT) Mean() float64 { return math.Inf(1) }
 // StdDev is infinite, as the mean.
 func (d logStudentsT) StdDev() float64 { return math.Inf(1) }
 
-// FromStdNormal works from the lower tail on both sides, so that both
-// Phi(u) and the t quantile keep their accuracy for large |u|.
 func (d logStudentsT) FromStdNormal(u float64) float64 {
-	if u == 0 {
-		return math.Exp(d.mu)
+	if u <= 0 {
+		return d.lowerQ(stdCDF(u))
 	}
-	t := d.t.Quantile(distuv.UnitNormal.CDF(-math.Abs(u)))
-	if u > 0 {
-		t = -t
-	}
-	return math.Exp(d.mu + d.sigma*t)
+	return d.upperQ(stdCDF(-u))
 }
 
 func (d logStudentsT) ToStdNormal(x float64) float64 {
@@ -71,62 +80,34 @@ func (d logStudentsT) ToStdNormal(x float64) float64 {
 	}
 	z := d.z(x)
 	if z <= 0 {
-		return distuv.UnitNormal.Quantile(d.t.CDF(z))
+		return stdQuantile(d.t.CDF(z))
 	}
-	return -distuv.UnitNormal.Quantile(d.t.CDF(-z))
+	return -stdQuantile(d.t.CDF(-z))
 }
 
 func (d logStudentsT) String() string {
-	return fmt.Sprintf("log-Student-t(median %.4g, log-scale %.4g, nu %.3g)", math.Exp(d.mu), d.sigma, d.t.Nu)
+	return "log-Student-t(median " + fmtNum(math.Exp(d.mu)) + ", log-scale " + fmtNum(d.sigma) +
+		", nu " + fmt.Sprint(d.t.Nu) + ")"
 }
 
-// updLognormal is the lognormal with ln X ~ N(mu, sigma²), kept here so the
-// update does not depend on the order in which distribution files land.
-type updLognormal struct{ mu, sigma float64 }
-
-func (d updLognormal) z(x float64) float64 { return (math.Log(x) - d.mu) / d.sigma }
-
-func (d updLognormal) CDF(x float64) float64 {
-	if x <= 0 {
-		return 0
-	}
-	return distuv.UnitNormal.CDF(d.z(x))
-}
-
-func (d updLognormal) Survival(x float64) float64 {
-	if x <= 0 {
-		return 1
-	}
-	return distuv.UnitNormal.CDF(-d.z(x))
-}
-
-func (d updLognormal) Quantile(p float64) float64 {
-	return math.Exp(d.mu + d.sigma*distuv.UnitNormal.Quantile(p))
-}
-
-func (d updLognormal) Prob(x float64) float64 {
-	if x <= 0 {
-		return 0
-	}
-	return distuv.UnitNormal.Prob(d.z(x)) / (d.sigma * x)
-}
-
-func (d updLognormal) Mean() float64 { return math.Exp(d.mu + d.sigma*d.sigma/2) }
-
-func (d updLognormal) StdDev() float64 {
-	s2 := d.sigma * d.sigma
-	return d.Mean() * math.Sqrt(math.Expm1(s2))
-}
-
-func (d updLognormal) FromStdNormal(u float64) float64 { return math.Exp(d.mu + d.sigma*u) }
-
-func (d updLognormal) ToStdNormal(x float64) float64 {
-	if x <= 0 {
+// lowerT returns the p-quantile of the standard Student-t for p <= 1/2,
+// accurate for tiny p: F(-y) = I_x(nu/2, 1/2)/2 with x = nu/(nu + y²).
+func (d logStudentsT) lowerT(p float64) float64 {
+	if p <= 0 {
 		return math.Inf(-1)
 	}
-	return d.z(x)
+	if p >= 0.5 {
+		return 0
+	}
+	x := mathext.InvRegIncBeta(d.t.Nu/2, 0.5, 2*p)
+	return -math.Sqrt(d.t.Nu * (1 - x) / x)
 }
 
-func (d updLognormal) String() string {
-	return fmt.Sprintf("lognormal(mean %.4g, cov %.3g)", d.Mean(), math.Sqrt(math.Expm1(d.sigma*d.sigma)))
+func (d logStudentsT) lowerQ(p float64) float64 { return math.Exp(d.mu + d.sigma*d.lowerT(p)) }
+func (d logStudentsT) upperQ(q float64) float64 { return math.Exp(d.mu - d.sigma*d.lowerT(q)) }
+
+// draw uses T = Z / sqrt(W), W = chi-square(nu)/nu independent of Z.
+func (d logStudentsT) draw(r *rand.Rand) float64 {
+	z := r.NormFloat64()
+	return math.Exp(d.mu + d.sigma*z/math.Sqrt(d.chi.draw(r)))
 }
