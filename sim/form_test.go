@@ -1,0 +1,278 @@
+package sim
+
+import (
+	"math"
+	"strings"
+	"sync/atomic"
+	"testing"
+)
+
+// lnParams returns the parameters of ln X for a lognormal X of mean m and
+// coefficient of variation v: sigma^2 = ln(1 + v^2), mu = ln m - sigma^2/2
+// (the standard moment relations of the lognormal distribution).
+func lnParams(m, v float64) (mu, sigma float64) {
+	sigma = math.Sqrt(math.Log(1 + v*v))
+	return math.Log(m) - sigma*sigma/2, sigma
+}
+
+// lognormalRSBeta is the exact reliability index of g = R - S for
+// independent lognormal R and S (means mr, ms; CoVs vr, vs):
+//
+//	beta = ln[(mr/ms) sqrt((1+vs^2)/(1+vr^2))] / sqrt(ln[(1+vr^2)(1+vs^2)])
+//
+// since ln R - ln S is normal (e.g. Melchers, Structural Reliability
+// Analysis and Prediction, 2nd ed., Wiley 1999, ch. 3; from memory).
+func lognormalRSBeta(mr, vr, ms, vs float64) float64 {
+	return math.Log(mr/ms*math.Sqrt((1+vs*vs)/(1+vr*vr))) / math.Sqrt(math.Log((1+vr*vr)*(1+vs*vs)))
+}
+
+// lognormalRSSpace is g = R - S in standard normal space for lognormal R, S.
+func lognormalRSSpace(mr, vr, ms, vs float64) *uSpace {
+	mur, sr := lnParams(mr, vr)
+	mus, ss := lnParams(ms, vs)
+	return funcSpace(2, func(u []float64) float64 {
+		return math.Exp(mur+sr*u[0]) - math.Exp(mus+ss*u[1])
+	})
+}
+
+func TestFORMSinglePoint(t *testing.T) {
+	cases := []struct {
+		name     string
+		sp       *uSpace
+		beta     float64
+		tol      float64
+		wantImp0 float64 // importance of the first input; < 0 to skip
+	}{
+		{
+			// Cornell (1969): R ~ N(200, 20), S ~ N(100, 30), g = R - S,
+			// beta = (muR - muS)/sqrt(sR^2 + sS^2) = 100/sqrt(1300).
+			name: "normal R-S",
+			sp: funcSpace(2, func(u []float64) float64 {
+				return (200 + 20*u[0]) - (100 + 30*u[1])
+			}),
+			beta:     100 / math.Sqrt(1300),
+			tol:      1e-6,
+			wantImp0: 400.0 / 1300,
+		},
+		{
+			// Lognormal R (mean 150, V 0.10) and S (mean 100, V 0.20):
+			// exact formula in lognormalRSBeta, 1.894516.
+			name:     "lognormal R-S",
+			sp:       lognormalRSSpace(150, 0.10, 100, 0.20),
+			beta:     lognormalRSBeta(150, 0.10, 100, 0.20),
+			tol:      1e-6,
+			wantImp0: math.Log(1.01) / math.Log(1.01*1.04),
+		},
+		{
+			// Paraboloid g = beta - u2 + (kappa/2) u1^2, beta = 3,
+			// kappa = 0.2: the design point is (0, 3), so FORM gives
+			// Phi(-3) (the exact Pf is 1.04360e-3 by quadrature; FORM
+			// cannot see the curvature). Standard curved benchmark,
+			// e.g. Breitung, J. Eng. Mech. 110(3), 1984, 357-366.
+			name: "paraboloid kappa 0.2",
+			sp: funcSpace(2, func(u []float64) float64 {
+				return 3 - u[1] + 0.1*u[0]*u[0]
+			}),
+			beta:     3,
+			tol:      1e-6,
+			wantImp0: 0,
+		},
+		{
+			name: "paraboloid kappa -0.2",
+			sp: funcSpace(2, func(u []float64) float64 {
+				return 3 - u[1] - 0.1*u[0]*u[0]
+			}),
+			beta:     3,
+			tol:      1e-6,
+			wantImp0: 0,
+		},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			var calls atomic.Int64
+			sp := &uSpace{dim: c.sp.dim, newG: func() func([]float64) float64 { return countingG(c.sp.newG(), &calls) }}
+			r := formRun(sp, nil)
+			if !r.Converged {
+				t.Fatalf("not converged: %s", r.Status)
+			}
+			if len(r.Points) != 1 {
+				t.Fatalf("%d design points, want 1: %+v", len(r.Points), r.Points)
+			}
+			if math.Abs(r.Beta-c.beta) > c.tol {
+				t.Errorf("beta = %.9f, want %.9f", r.Beta, c.beta)
+			}
+			if want := formTail(c.beta); math.Abs(r.Pf-want) > 1e-6*want {
+				t.Errorf("pf = %.6g, want Phi(-beta) = %.6g", r.Pf, want)
+			}
+			p := r.Points[0]
+			var sum float64
+			for _, v := range p.Importance {
+				sum += v
+			}
+			if math.Abs(sum-1) > 1e-12 {
+				t.Errorf("importance factors sum to %v", sum)
+			}
+			if math.Abs(p.Importance[0]-c.wantImp0) > 1e-5 {
+				t.Errorf("importance[0] = %.7f, want %.7f", p.Importance[0], c.wantImp0)
+			}
+			// Alpha = -U/Beta at the design point.
+			for i := range p.U {
+				if math.Abs(p.Alpha[i]+p.U[i]/p.Beta) > 1e-5 {
+					t.Errorf("alpha[%d] = %v, -u/beta = %v", i, p.Alpha[i], -p.U[i]/p.Beta)
+				}
+			}
+			if int64(r.Evaluations) != calls.Load() {
+				t.Errorf("Evaluations = %d, g was called %d times", r.Evaluations, calls.Load())
+			}
+		})
+	}
+}
+
+func TestFORMSymmetricTwoPoints(t *testing.T) {
+	// g = b - |u1|: failure on both sides, exact Pf = 2 Phi(-b); the two
+	// design points are opposite (rho = -1), so the series system is exact.
+	const b = 3.0
+	sp := funcSpace(2, func(u []float64) float64 { return b - math.Abs(u[0]) + 0*u[1] })
+	r := formRun(sp, nil)
+	if !r.Converged {
+		t.Fatalf("not converged: %s", r.Status)
+	}
+	if len(r.Points) != 2 {
+		t.Fatalf("%d design points, want 2", len(r.Points))
+	}
+	want := 2 * formTail(b)
+	if math.Abs(r.Pf-want) > 1e-9*want {
+		t.Errorf("pf = %.8g, want 2 Phi(-%g) = %.8g", r.Pf, b, want)
+	}
+	if u0, u1 := r.Points[0].U[0], r.Points[1].U[0]; math.Abs(u0+u1) > 1e-4 || math.Abs(math.Abs(u0)-b) > 1e-4 {
+		t.Errorf("design points at u1 = %v and %v, want -+%g", u0, u1, b)
+	}
+}
+
+// bowCase is g = R - S (1 + |e|) with R ~ N(muR, sR), S ~ N(muS, sS) and
+// an imperfection e ~ N(0, se) as likely to either side.
+type bowCase struct{ muR, sR, muS, sS, se float64 }
+
+func (c bowCase) space() *uSpace {
+	return funcSpace(3, func(u []float64) float64 {
+		return (c.muR + c.sR*u[0]) - (c.muS+c.sS*u[1])*(1+math.Abs(c.se*u[2]))
+	})
+}
+
+// exactPf integrates over e: given e, g is normal with mean
+// muR - muS(1+|e|) and variance sR^2 + sS^2 (1+|e|)^2.
+func (c bowCase) exactPf() float64 {
+	f := func(z float64) float64 {
+		k := 1 + c.se*z
+		m := c.muR - c.muS*k
+		s := math.Sqrt(c.sR*c.sR + c.sS*c.sS*k*k)
+		return 2 * formPhi(z) * formTail(m/s)
+	}
+	return formSimpson(f, 0, 12, 1e-16)
+}
+
+func formPhi(z float64) float64 { return math.Exp(-z*z/2) / math.Sqrt(2*math.Pi) }
+
+func TestFORMBowTwoPoints(t *testing.T) {
+	// Single-point FORM sees one side of the bow only and misses about
+	// half of Pf; the two-point series system recovers it. The reference
+	// is the exact 1-D integral over e (bowCase.exactPf).
+	c := bowCase{muR: 300, sR: 30, muS: 150, sS: 15, se: 0.3}
+	exact := c.exactPf()
+	r := formRun(c.space(), nil)
+	if !r.Converged {
+		t.Fatalf("not converged: %s", r.Status)
+	}
+	if len(r.Points) != 2 {
+		t.Fatalf("%d design points, want 2: %s", len(r.Points), r.Status)
+	}
+	p0, p1 := r.Points[0], r.Points[1]
+	if math.Abs(p0.Beta-p1.Beta) > 1e-4 || math.Abs(p0.U[2]+p1.U[2]) > 1e-3 || math.Abs(p0.U[2]) < 0.1 {
+		t.Errorf("points not mirrored in e: %v, %v", p0.U, p1.U)
+	}
+	single := formTail(p0.Beta)
+	if ratio := r.Pf / exact; math.Abs(ratio-1) > 0.15 {
+		t.Errorf("two-point FORM pf = %.4g, exact %.4g (ratio %.3f)", r.Pf, exact, ratio)
+	}
+	if ratio := single / exact; ratio > 0.65 {
+		t.Errorf("single-point pf = %.4g should miss about half of %.4g", single, exact)
+	}
+	t.Logf("exact %.5g, series %.5g, single point %.5g, beta %.4f, %d evaluations", exact, r.Pf, single, r.Beta, r.Evaluations)
+}
+
+func TestFORMNotConverged(t *testing.T) {
+	cases := []struct {
+		name, status string
+		g            func(u []float64) float64
+	}{
+		// g >= 1 everywhere, flattening as u1 -> -inf.
+		{"never negative", "", func(u []float64) float64 { return 2 + math.Tanh(u[0]) + 0*u[1] }},
+		{"zero gradient", "zero gradient", func(u []float64) float64 { return 1 + u[0]*u[0] + u[1]*u[1] }},
+		// The root u1 = 0.5 lies beyond the region where g is defined.
+		{"undefined beyond", "undefined", func(u []float64) float64 {
+			if u[0] > 0.4 {
+				return math.NaN()
+			}
+			return 3 - 6*u[0] + 0*u[1]
+		}},
+		{"undefined at median", "median", func(u []float64) float64 { return math.NaN() }},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			r := formRun(funcSpace(2, c.g), &FORMSettings{MaxIter: 50})
+			if r.Converged {
+				t.Fatalf("converged (%s) on a pathological g", r.Status)
+			}
+			t.Logf("status: %s", r.Status)
+			if !strings.Contains(r.Status, c.status) {
+				t.Errorf("status %q does not mention %q", r.Status, c.status)
+			}
+		})
+	}
+}
+
+func TestFORMIterationLimit(t *testing.T) {
+	r := formRun(lognormalRSSpace(150, 0.10, 100, 0.20), &FORMSettings{MaxIter: 1, Tol: 1e-15})
+	if r.Converged || !strings.Contains(r.Status, "not converged after 1") {
+		t.Errorf("converged = %v, status %q", r.Converged, r.Status)
+	}
+}
+
+func TestFORMSeriesSystem(t *testing.T) {
+	// Sheppard (1899): P(Z1 > 0, Z2 > 0) = 1/4 + asin(rho)/(2 pi).
+	for _, rho := range []float64{-0.9, -0.5, 0, 0.3, 0.8, 0.99} {
+		got := formUnion2(0, 0, rho)
+		want := 1 - (0.25 + math.Asin(rho)/(2*math.Pi))
+		if math.Abs(got-want) > 1e-10 {
+			t.Errorf("rho %v: union %.12f, want %.12f", rho, got, want)
+		}
+	}
+	// Independent points: 1 - (1 - p1)(1 - p2), in the far tail.
+	p1, p2 := formTail(4), formTail(4.5)
+	if got, want := formUnion2(4, 4.5, 0), p1+p2-p1*p2; math.Abs(got-want) > 1e-9*want {
+		t.Errorf("independent union %.10g, want %.10g", got, want)
+	}
+	// Three points, trivariate orthant probability (Steck 1962 / the
+	// classical formula): P(all Z_i > 0) = 1/8 + sum asin(rho_ij)/(4 pi);
+	// at b = 0, P(union Z_i > 0) = 1 - P(all Z_i <= 0) = 1 - P(all > 0).
+	r := [][]float64{{1, 0.5, 0.2}, {0.5, 1, -0.3}, {0.2, -0.3, 1}}
+	orth := 0.125 + (math.Asin(0.5)+math.Asin(0.2)+math.Asin(-0.3))/(4*math.Pi)
+	if got := formUnionGenz([]float64{0, 0, 0}, r); math.Abs(got-(1-orth)) > 2e-4 {
+		t.Errorf("trivariate union %.6f, want %.6f", got, 1-orth)
+	}
+	// Three independent tail events.
+	b := []float64{3, 3.5, 4}
+	id := [][]float64{{1, 0, 0}, {0, 1, 0}, {0, 0, 1}}
+	want := 1 - (1-formTail(3))*(1-formTail(3.5))*(1-formTail(4))
+	if got := formUnionGenz(b, id); math.Abs(got-want) > 1e-6*want {
+		t.Errorf("independent 3-union %.8g, want %.8g", got, want)
+	}
+	// Singular: two opposite points and a third orthogonal one.
+	al := [][]float64{{1, 0}, {-1, 0}, {0, 1}}
+	want = 1 - (1-2*formTail(3))*(1-formTail(3.5))
+	// (The regularised singular case makes the lattice integrand
+	// discontinuous: about 1 % accuracy.)
+	if got := formSeriesPf([]float64{3, 3, 3.5}, al); math.Abs(got-want) > 2e-2*want {
+		t.Errorf("singular 3-union %.8g, want %.8g", got, want)
+	}
+}
