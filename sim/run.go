@@ -2,7 +2,9 @@ package sim
 
 import (
 	"context"
-	"errors"
+	"fmt"
+	"math"
+	"runtime"
 )
 
 // Progress reports the state of a running estimate.
@@ -26,13 +28,156 @@ type Settings struct {
 	Workers int
 	// Confidence is the level of the intervals; default 0.95.
 	Confidence float64
-	// Keep is the number of sample points kept in Result.Kept; default 2000.
+	// Keep is the number of sample points kept in Result.Kept; default
+	// 2000, negative for none.
 	Keep int
 	// Progress, if not nil, is called from time to time (never concurrently).
 	Progress func(Progress)
+	// Replicates is the number of independent randomisations of
+	// conditional quasi-Monte Carlo; default 16.
+	Replicates int
+	// AuxSamples is the size of the crude sample that describes the
+	// outputs when the estimator's own samples cannot (conditional
+	// quasi-Monte Carlo, FORM, importance sampling, subset simulation);
+	// default 20000, negative for none.
+	AuxSamples int64
 }
 
-// Run estimates the failure probability of m.
+// Defaults of Settings.
+const (
+	DefaultSamples    = 1_000_000
+	DefaultConfidence = 0.95
+	DefaultKeep       = 2000
+	DefaultReplicates = 16
+	DefaultAuxSamples = 20000
+	// autoTargetCoV is the precision auto plans for when TargetCoV is 0.
+	autoTargetCoV = 0.05
+)
+
+// withDefaults returns a copy of s with zero fields set to their defaults.
+func (s *Settings) withDefaults() Settings {
+	var c Settings
+	if s != nil {
+		c = *s
+	}
+	if c.Method == "" {
+		c.Method = Auto
+	}
+	if c.Samples == 0 {
+		c.Samples = DefaultSamples
+	}
+	if c.Workers <= 0 {
+		c.Workers = runtime.NumCPU()
+	}
+	if c.Confidence == 0 {
+		c.Confidence = DefaultConfidence
+	}
+	if c.Keep == 0 {
+		c.Keep = DefaultKeep
+	}
+	if c.Replicates == 0 {
+		c.Replicates = DefaultReplicates
+	}
+	if c.AuxSamples == 0 {
+		c.AuxSamples = DefaultAuxSamples
+	}
+	return c
+}
+
+func (s *Settings) check() error {
+	switch {
+	case s.Samples < 0:
+		return fmt.Errorf("sim: Samples must be positive, got %d", s.Samples)
+	case !(s.Confidence > 0 && s.Confidence < 1):
+		return fmt.Errorf("sim: Confidence must be in (0, 1), got %v", s.Confidence)
+	case s.TargetCoV < 0 || math.IsNaN(s.TargetCoV):
+		return fmt.Errorf("sim: TargetCoV must be zero or positive, got %v", s.TargetCoV)
+	case s.Replicates < 2:
+		return fmt.Errorf("sim: Replicates must be at least 2, got %d", s.Replicates)
+	}
+	return nil
+}
+
+// Run estimates the failure probability of m with the method of s (nil s
+// means all defaults). The result is the same for any number of workers.
+// When ctx is cancelled Run returns what it finished with
+// Result.Incomplete set.
 func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
-	return nil, errors.New("sim: Run is not implemented yet")
+	cfg := s.withDefaults()
+	if err := cfg.check(); err != nil {
+		return nil, err
+	}
+	if m == nil || m.G == nil {
+		return nil, fmt.Errorf("sim: the model has no limit-state function G")
+	}
+	t, err := NewTransform(m)
+	if err != nil {
+		return nil, err
+	}
+	if ctx == nil {
+		ctx = context.Background()
+	}
+	var res *Result
+	switch cfg.Method {
+	case MonteCarlo, LatinHypercube:
+		e := &crudeEngine{m: m, t: t, lhs: cfg.Method == LatinHypercube, seed: cfg.Seed, stream: streamMC, n: cfg.Samples}
+		if e.lhs {
+			e.stream = streamLHS
+		}
+		res, err = e.run(ctx, &cfg, cfg.Method)
+	case ConditionalQMC:
+		res, err = conditionalQMC(ctx, m, t, &cfg)
+	case FORMMethod:
+		res, err = runFORM(m, &cfg)
+	case Importance:
+		var f *FORMResult
+		f, err = FORM(m, nil)
+		if err != nil {
+			return nil, fmt.Errorf("sim: importance sampling needs FORM, which failed: %v", err)
+		}
+		res, err = importanceSampling(ctx, m, t, f, &cfg)
+		if res != nil {
+			res.FORM = f
+			res.Evaluations += int64(f.Evaluations)
+		}
+	case Subset:
+		res, err = subsetSimulation(ctx, m, t, &cfg)
+	case Auto:
+		res, err = auto(ctx, m, t, &cfg)
+	default:
+		return nil, fmt.Errorf("sim: unknown method %q (want one of auto, monte-carlo, latin-hypercube, conditional-qmc, form, importance, subset)", cfg.Method)
+	}
+	if err != nil {
+		return nil, err
+	}
+	res.Confidence = cfg.Confidence
+	if res.Method == "" {
+		res.Method = cfg.Method
+	}
+	if res.Outputs == nil && cfg.AuxSamples > 0 && !res.Incomplete {
+		out, kept, err := Describe(ctx, m, cfg.AuxSamples, cfg.Keep, cfg.Seed)
+		if err != nil {
+			return nil, err
+		}
+		res.Outputs = out
+		if res.Kept == nil {
+			res.Kept = kept
+		}
+	}
+	return res, nil
+}
+
+// runFORM wraps a FORM analysis as a Result.
+func runFORM(m *Model, s *Settings) (*Result, error) {
+	f, err := FORM(m, nil)
+	if err != nil {
+		return nil, err
+	}
+	res := &Result{Method: FORMMethod, FORM: f, Evaluations: int64(f.Evaluations), Pf: f.Pf, Beta: f.Beta,
+		PfCI: [2]float64{f.Pf, f.Pf}, BetaCI: [2]float64{f.Beta, f.Beta}, Confidence: s.Confidence}
+	if !f.Converged {
+		res.Warnings = append(res.Warnings, "FORM did not converge: "+f.Status)
+	}
+	res.Warnings = append(res.Warnings, "FORM is a first-order approximation: its pf has no sampling interval")
+	return res, nil
 }

@@ -245,3 +245,52 @@ func (t *Transform) correlate(z []float64) {
 type quantileDrawer struct{ d Dist }
 
 func (q quantileDrawer) draw(r *randRand) float64 { return q.d.Quantile(uniformOpen(r)) }
+
+// drawX stores in x a random point of the model drawn from r; z is a
+// scratch slice of Dim values. Independent variables are drawn by their
+// fastest exact method, correlated ones through the copula.
+func (t *Transform) drawX(x, z []float64, r *randRand) {
+	if t.chol == nil {
+		for i, d := range t.draws {
+			x[i] = d.draw(r)
+		}
+		return
+	}
+	for i, d := range t.draws {
+		if t.corr[i] {
+			z[i] = r.NormFloat64()
+		} else {
+			x[i] = d.draw(r)
+		}
+	}
+	t.correlate(z)
+	for i, v := range t.vars {
+		if t.corr[i] {
+			x[i] = v.Dist.FromStdNormal(z[i])
+		}
+	}
+}
+
+// fromUniform stores in x the point whose independent uniform coordinates
+// (before the copula) are p, all in (0, 1); z is scratch.
+func (t *Transform) fromUniform(x, p, z []float64) {
+	if t.chol == nil {
+		for i, v := range t.vars {
+			x[i] = v.Dist.Quantile(p[i])
+		}
+		return
+	}
+	for i, v := range t.vars {
+		if t.corr[i] {
+			z[i] = stdQuantile(p[i])
+		} else {
+			x[i] = v.Dist.Quantile(p[i])
+		}
+	}
+	t.correlate(z)
+	for i, v := range t.vars {
+		if t.corr[i] {
+			x[i] = v.Dist.FromStdNormal(z[i])
+		}
+	}
+}

@@ -1,0 +1,95 @@
+package sim
+
+import (
+	"context"
+	"fmt"
+	"math"
+)
+
+// auto chooses an estimator. FORM runs first (its design point and
+// importance factors are reported whatever follows). Then:
+//   - conditional quasi-Monte Carlo when the model states a usable linear
+//     input, since it is exact in that input and smooth in the others;
+//   - plain Monte Carlo when FORM's pf is large enough for the budget to
+//     reach the target CoV, n >= (1 - pf)/(pf CoV^2);
+//   - importance sampling around the design points otherwise;
+//   - subset simulation when FORM fails or importance sampling fails or
+//     flags its own result.
+//
+// Result.Reason says which was used and why.
+func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, error) {
+	target := s.TargetCoV
+	if target == 0 {
+		target = autoTargetCoV
+	}
+	f, ferr := FORM(m, nil)
+	var formEvals int64
+	formOK := ferr == nil && f != nil && f.Converged
+	if ferr == nil && f != nil {
+		formEvals = int64(f.Evaluations)
+	} else {
+		f = nil
+	}
+	finish := func(res *Result, reason string) *Result {
+		res.Reason = reason
+		if f != nil {
+			res.FORM = f
+			res.Evaluations += formEvals
+		}
+		return res
+	}
+	formNote := ""
+	switch {
+	case ferr != nil:
+		formNote = fmt.Sprintf("FORM failed (%v)", ferr)
+	case !formOK:
+		formNote = fmt.Sprintf("FORM did not converge (%s)", f.Status)
+	default:
+		formNote = fmt.Sprintf("FORM beta = %.3f, pf = %.3g", f.Beta, f.Pf)
+	}
+
+	if why := linearUsable(m, t); why == "" {
+		res, err := conditionalQMC(ctx, m, t, s)
+		if err != nil {
+			return nil, err
+		}
+		return finish(res, fmt.Sprintf("the limit state is linear in %q, which is integrated exactly; the other inputs are drawn by randomised quasi-Monte Carlo (%s)", m.Vars[m.Linear.Index].Name, formNote)), nil
+	}
+
+	mc := func(why string) (*Result, error) {
+		e := &crudeEngine{m: m, t: t, seed: s.Seed, stream: streamMC, n: s.Samples}
+		res, err := e.run(ctx, s, MonteCarlo)
+		if err != nil {
+			return nil, err
+		}
+		return finish(res, why), nil
+	}
+	subset := func(why string) (*Result, error) {
+		res, err := subsetSimulation(ctx, m, t, s)
+		if err != nil {
+			return mc(why + fmt.Sprintf("; subset simulation failed (%v), so plain Monte Carlo was used", err))
+		}
+		res.Method = Subset
+		return finish(res, why+"; subset simulation was used"), nil
+	}
+
+	if !formOK {
+		return subset(formNote)
+	}
+	need := (1 - f.Pf) / (f.Pf * target * target)
+	if f.Pf > 0 && need <= float64(s.Samples) {
+		return mc(fmt.Sprintf("%s: plain Monte Carlo reaches CoV %.3g within about %.3g of the %d samples allowed", formNote, target, need, s.Samples))
+	}
+	res, err := importanceSampling(ctx, m, t, f, s)
+	switch {
+	case err != nil:
+		return subset(fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples; importance sampling failed (%v)", formNote, need, err))
+	case !(res.PfCoV <= 2*target) && !res.Incomplete:
+		return subset(fmt.Sprintf("%s: importance sampling did not reach its precision (CoV %.3g), a sign of a poor design point", formNote, res.PfCoV))
+	}
+	res.Method = Importance
+	if math.IsNaN(res.Pf) {
+		return subset(formNote + ": importance sampling returned no estimate")
+	}
+	return finish(res, fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples, more than the %d allowed; importance sampling around the design point", formNote, need, s.Samples)), nil
+}

@@ -1,0 +1,205 @@
+package sim
+
+import (
+	"context"
+	"fmt"
+	"math"
+	"math/bits"
+	"sync"
+	"sync/atomic"
+)
+
+// qmcChunk is the number of points of one work unit of conditional
+// quasi-Monte Carlo; chunks are aligned so each holds whole strata of the
+// Sobol' net.
+const qmcChunk = 1024
+
+// linearUsable reports why m.Linear cannot be used, or "" when it can.
+func linearUsable(m *Model, t *Transform) string {
+	l := m.Linear
+	switch {
+	case l == nil:
+		return "the model states no linear input"
+	case l.Index < 0 || l.Index >= len(m.Vars):
+		return fmt.Sprintf("the linear input index %d is out of range", l.Index)
+	case l.Split == nil:
+		return "the linear input has no Split function"
+	case t.Correlated(l.Index):
+		return fmt.Sprintf("the linear input %q is correlated with another variable", m.Vars[l.Index].Name)
+	}
+	if _, ok := m.Vars[l.Index].Dist.(Fixed); ok {
+		return fmt.Sprintf("the linear input %q is fixed", m.Vars[l.Index].Name)
+	}
+	return ""
+}
+
+// conditionalProb returns P(h - c X < 0) for X ~ d.
+func conditionalProb(d Dist, h, c float64) float64 {
+	switch {
+	case c > 0:
+		return d.Survival(h / c)
+	case c < 0:
+		return d.CDF(h / c)
+	case h < 0:
+		return 1
+	}
+	return 0
+}
+
+// conditionalQMC estimates pf = E[P(g < 0 | rest)] where the Linear input
+// is integrated exactly through its distribution and the rest is drawn by
+// randomised quasi-Monte Carlo: s.Replicates independent Owen-scrambled
+// Sobol' sequences of 2^k points each, k growing until the budget is spent
+// or the CoV target is met (checked after each doubling). The standard
+// error is that of the mean of the replicate estimates, and the interval a
+// Student's t interval on them.
+func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, error) {
+	if why := linearUsable(m, t); why != "" {
+		return nil, fmt.Errorf("sim: conditional-qmc cannot be used: %s", why)
+	}
+	idx := m.Linear.Index
+	dj := m.Vars[idx].Dist
+	nvar := t.Dim()
+	R := s.Replicates
+	perRep := s.Samples / int64(R)
+	if perRep < 1 {
+		return nil, fmt.Errorf("sim: conditional-qmc needs at least %d samples (one per replicate), got %d", R, s.Samples)
+	}
+	// Points per replicate: powers of two, from qmcChunk (or less when the
+	// budget is small) up to the largest that fits the budget.
+	maxN := int64(1) << (63 - bits.LeadingZeros64(uint64(perRep)))
+	maxN = min(maxN, 1<<31)
+	n0 := min(int64(qmcChunk), maxN)
+
+	rest := make([]int, 0, nvar-1)
+	for i := 0; i < nvar; i++ {
+		if i != idx {
+			rest = append(rest, i)
+		}
+	}
+	nsob := min(len(rest), sobolMaxDim)
+	dirs := sobolDirections(nsob)
+	// One scrambling seed per replicate and dimension.
+	seeds := make([][]uint32, R)
+	for r := range seeds {
+		seeds[r] = make([]uint32, len(rest))
+		for j := range seeds[r] {
+			seeds[r][j] = uint32(splitmix64(s.Seed ^ splitmix64(streamQMC<<56^uint64(r)<<20^uint64(j))))
+		}
+	}
+
+	sums := make([][]float64, R) // per replicate, per chunk
+	res := &Result{Method: ConditionalQMC, Confidence: s.Confidence}
+	var done, prev int64
+	var pf, se float64
+	for n := n0; n <= maxN; n *= 2 {
+		if ctx.Err() != nil {
+			break
+		}
+		// Work units: the chunks of [prev, n) of every replicate.
+		type unit struct {
+			r     int
+			start int64
+			size  int
+			slot  int
+		}
+		var units []unit
+		for r := 0; r < R; r++ {
+			for st := prev; st < n; st += qmcChunk {
+				size := int(min(int64(qmcChunk), n-st))
+				units = append(units, unit{r: r, start: st, size: size, slot: len(sums[r])})
+				sums[r] = append(sums[r], 0)
+			}
+		}
+		var next atomic.Int64
+		var wg sync.WaitGroup
+		for w := 0; w < min(s.Workers, len(units)); w++ {
+			wg.Add(1)
+			go func() {
+				defer wg.Done()
+				x, p, z := make([]float64, nvar), make([]float64, nvar), make([]float64, nvar)
+				rng := newBlockRNG()
+				for {
+					k := int(next.Add(1) - 1)
+					if k >= len(units) || ctx.Err() != nil {
+						return
+					}
+					u := units[k]
+					rng.seed(s.Seed, streamQMC, uint64(u.r)<<32|uint64(u.start/qmcChunk))
+					sum := 0.0
+					p[idx] = 0.5
+					for i := 0; i < u.size; i++ {
+						pt := uint32(u.start) + uint32(i)
+						for j, dim := range rest {
+							if j < nsob {
+								p[dim] = toUnit(owenScramble(sobolAt(&dirs[j], pt), seeds[u.r][j]))
+							} else {
+								p[dim] = uniformOpen(rng.r)
+							}
+						}
+						t.fromUniform(x, p, z)
+						h, c := m.Linear.Split(x)
+						sum += conditionalProb(dj, h, c)
+					}
+					sums[u.r][u.slot] = sum
+				}
+			}()
+		}
+		wg.Wait()
+		if ctx.Err() != nil {
+			res.Incomplete = true
+			break
+		}
+		done = int64(R) * n
+		prev = n
+		// Replicate estimates, summed in chunk order.
+		var mean, m2 float64
+		est := make([]float64, R)
+		for r := range est {
+			t := 0.0
+			for _, v := range sums[r] {
+				t += v
+			}
+			est[r] = t / float64(n)
+			mean += est[r]
+		}
+		mean /= float64(R)
+		for _, e := range est {
+			m2 += (e - mean) * (e - mean)
+		}
+		pf = mean
+		se = math.Sqrt(m2 / float64(R-1) / float64(R))
+		cov := math.Inf(1)
+		if pf > 0 {
+			cov = se / pf
+		}
+		ci := TInterval(pf, se, R-1, s.Confidence)
+		res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: done, Pf: pf, PfCI: ci, PfCoV: cov})
+		if s.Progress != nil {
+			s.Progress(Progress{Done: done, Total: int64(R) * maxN, Pf: pf, CoV: cov})
+		}
+		if s.TargetCoV > 0 && cov <= s.TargetCoV {
+			break
+		}
+	}
+	if done == 0 {
+		res.Incomplete = true
+		res.Pf, res.PfCoV = math.NaN(), math.Inf(1)
+		res.PfCI = [2]float64{0, 1}
+		res.Beta, res.BetaCI = math.NaN(), BetaInterval(res.PfCI)
+		return res, nil
+	}
+	res.Evaluations = done
+	res.Pf = pf
+	res.PfCoV = math.Inf(1)
+	if pf > 0 {
+		res.PfCoV = se / pf
+	}
+	res.PfCI = TInterval(pf, se, R-1, s.Confidence)
+	res.Beta = BetaFromPf(pf)
+	res.BetaCI = BetaInterval(res.PfCI)
+	if len(rest) > sobolMaxDim {
+		res.Warnings = append(res.Warnings, fmt.Sprintf("conditional-qmc: only the first %d of %d inputs use the Sobol' sequence; the others are pseudo-random", sobolMaxDim, len(rest)))
+	}
+	return res, nil
+}
