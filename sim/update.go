@@ -109,14 +109,16 @@ type Posterior struct {
 // (values of X, all positive) by Bayes' rule, with the conjugate normal model
 // on the log scale.
 //
-// Known variance (prior.Sigma > 0), after EN 1990:2002 Annex D, D.7 with V_X
-// known, and the normal conjugate update (from memory):
+// Known variance (prior.Sigma > 0), the normal conjugate update of the mean
+// (EN 1990:2002 Annex D, D.7 "V_X known" when the prior is vague):
 //
 //	n″ = n' + n,  m″ = (n' m' + n ȳ) / n″
 //
-// Unknown variance (prior.Sigma = 0), the normal-gamma update of the Bayesian
-// procedure in EN 1990:2002 Annex D (from memory), with ν = n - 1 and
-// δ(n') = 1 when n' > 0, else 0:
+// Unknown variance (prior.Sigma = 0), the normal-gamma update in the
+// notation of Raiffa and Schlaifer, Applied Statistical Decision Theory
+// (1961), as used for the Bayesian procedure behind EN 1990:2002 Annex D,
+// D.7 "V_X unknown" (from memory), with ν = n - 1 and δ(n') = 1 when n' > 0,
+// else 0:
 //
 //	n″ = n' + n,  ν″ = ν' + ν + δ(n'),  m″ = (n' m' + n ȳ) / n″
 //	ν″ s″² + n″ m″² = ν' s'² + n' m'² + ν s_y² + n ȳ²

@@ -343,6 +343,35 @@ func TestUpdateDists(t *testing.T) {
 	}
 }
 
+// TestUpdateTQuantileTails checks the lower-tail Student-t quantile used by
+// the log-Student-t against the closed forms for nu = 1, 2 and 4 (Student-t
+// distribution, quantile function; from memory):
+//
+//	nu = 1: t = -cot(pi p)
+//	nu = 2: t = (2p - 1) / sqrt(2p(1 - p))
+//	nu = 4: a = 4p(1 - p), q = cos(acos(sqrt(a))/3)/sqrt(a), t = -2 sqrt(q - 1)
+func TestUpdateTQuantileTails(t *testing.T) {
+	t.Parallel()
+	closed := map[float64]func(p float64) float64{
+		1: func(p float64) float64 { return -1 / math.Tan(math.Pi*p) },
+		2: func(p float64) float64 { return (2*p - 1) / math.Sqrt(2*p*(1-p)) },
+		4: func(p float64) float64 {
+			a := 4 * p * (1 - p)
+			q := math.Cos(math.Acos(math.Sqrt(a))/3) / math.Sqrt(a)
+			return -2 * math.Sqrt(q-1)
+		},
+	}
+	for nu, f := range closed {
+		d := newLogStudentsT(0, 1, nu)
+		for _, p := range []float64{1e-15, 1e-9, 1e-5, 0.01, 0.2, 0.45} {
+			got, want := d.lowerT(p), f(p)
+			if math.Abs(got-want) > 1e-9*math.Abs(want) {
+				t.Errorf("nu = %g: t quantile at p = %g is %.12g, closed form %.12g", nu, p, got, want)
+			}
+		}
+	}
+}
+
 func BenchmarkLogStudentsTFromStdNormal(b *testing.B) {
 	d := Dist(newLogStudentsT(5.8, 0.08, 4))
 	var s float64
