@@ -77,7 +77,8 @@ func TestCurveChi(t *testing.T) {
 // The generalised imperfection e0 = alpha (lam - 0.2) W/A turns the
 // Perry-Robertson first-yield equation into the EN 1993-1-1 curve: the two
 // models must agree where they are the same model (EN 1993-1-1:2005
-// 6.3.1.2 and its Ayrton-Perry background, Maquoi & Rondal 1978).
+// 6.3.1.2 and its Ayrton-Perry background, Maquoi & Rondal 1978, from
+// memory).
 func TestPerryRobertsonReproducesCurve(t *testing.T) {
 	for _, name := range []string{"a0", "a", "b", "c", "d"} {
 		alpha, _ := CurveAlpha(name)

@@ -5,7 +5,7 @@ import "fmt"
 // kFixedPinned is pi/u with u the smallest positive root of tan u = u
 // (u = 4.493409457909064): the theoretical effective length factor of a
 // member fixed at one end and pinned at the other (Timoshenko & Gere,
-// Theory of Elastic Stability, 2nd ed., §2.5).
+// Theory of Elastic Stability, 2nd ed., ch. 2).
 const kFixedPinned = 0.6991556596428413
 
 // EndsK returns the theoretical effective length factor K of a member

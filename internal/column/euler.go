@@ -5,13 +5,13 @@ import "math"
 // EulerLoad returns the elastic critical load pi^2 E I / Le^2 of a
 // perfectly straight, centrally loaded strut of effective length Le
 // (Euler 1744; e.g. Timoshenko & Gere, Theory of Elastic Stability,
-// §2.1). The inputs are not checked.
+// ch. 2). The inputs are not checked.
 func EulerLoad(e, i, le float64) float64 {
 	return math.Pi * math.Pi * e * i / (le * le)
 }
 
 // EulerStress returns the elastic critical stress pi^2 E / lambda^2 for the
-// slenderness lambda = Le/r (Timoshenko & Gere, §2.1). The inputs are not
+// slenderness lambda = Le/r (Timoshenko & Gere, ch. 2). The inputs are not
 // checked.
 func EulerStress(e, slenderness float64) float64 {
 	return math.Pi * math.Pi * e / (slenderness * slenderness)

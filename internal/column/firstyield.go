@@ -10,11 +10,12 @@ import "math"
 //	P/A [1 + (c/r^2)(e sec((pi/2) sqrt(P/PE)) + e0/(1 - P/PE))] = fy
 //
 // with PE = pi^2 E A r^2 / (K L)^2. The eccentricity term is the secant
-// formula (Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., §1.9;
+// formula (Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., ch. 1;
 // Gere, Mechanics of Materials, eq. 11-59); the bow term is the
 // amplification 1/(1 - P/PE) of an initially curved bar (Timoshenko &
-// Gere, §1.12). The two add exactly: the beam-column equation
-// EI v” + P v = -P (e + v0) is linear in v, so the deflections of the two
+// Gere, ch. 1; Case & Chilver, Strength of Materials and Structures,
+// ch. 18). The two add exactly: the beam-column equation
+// E I d2v/dx2 + P v = -P (e + v0) is linear in v, so the deflections of the two
 // cases superpose, and for pinned ends both have their maximum (and the
 // moment P(e + v0 + v) its maximum) at mid-height. Within linear-elastic
 // second-order theory the equation is therefore the exact first-yield
@@ -88,19 +89,26 @@ func firstYieldChi(rho, eta, ecc float64) float64 {
 	x := perryChi(rho, eta+ecc)
 	for i := 0; i < 100; i++ {
 		g, dg := firstYieldG(x, rho, eta, ecc)
+		if g == 0 {
+			return x
+		}
 		if g > 0 {
 			hi = x
 		} else {
 			lo = x
-			if g == 0 {
-				return x
-			}
 		}
-		next := x - g/dg
+		step := g / dg
+		next := x - step
+		if math.Abs(step) <= 1e-15*x { // converged to rounding level
+			if next > lo && next < hi {
+				return next
+			}
+			return x
+		}
 		if !(next > lo && next < hi) { // also catches NaN and Inf
 			next = 0.5 * (lo + hi)
 		}
-		if math.Abs(next-x) <= 4e-16*x || hi-lo <= 4e-16*hi {
+		if hi-lo <= 1e-15*hi {
 			return next
 		}
 		x = next

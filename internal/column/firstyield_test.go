@@ -88,7 +88,7 @@ func TestSecantGere(t *testing.T) {
 // v” + k^2 v = -k^2 (e + e0 sin(pi x/L)), v(0) = v(L) = 0, k^2 = P/(E I),
 // by RK4 shooting, and returns the largest extreme-fibre stress
 // P/A + P max|e + e0 sin + v| c / I at the grid points (Timoshenko & Gere,
-// Theory of Elastic Stability, §1.9 and §1.12, set up numerically).
+// Theory of Elastic Stability, ch. 1, set up numerically).
 func beamColumnStress(m *Member, p float64) float64 {
 	const n = 2000 // even: the midpoint is a grid point
 	l := m.Length

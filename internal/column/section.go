@@ -13,7 +13,8 @@ import (
 // an error. Errors name the dimension that is wrong.
 //
 // Closed forms for the elastic properties of thin and solid sections, e.g.
-// Young & Budynas, Roark's Formulas for Stress and Strain, Table A.1. The
+// Young & Budynas, Roark's Formulas for Stress and Strain, Appendix A
+// (from memory). The
 // corners of rectangular hollow sections are taken as square.
 func (s Section) Properties() (Props, error) {
 	r, err := s.Reduced()

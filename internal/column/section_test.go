@@ -200,7 +200,8 @@ func TestPropertiesIntegrated(t *testing.T) {
 }
 
 // Closed forms quoted in handbooks, as a check that does not rely on the
-// integration above (Roark's Formulas for Stress and Strain, Table A.1).
+// integration above (Roark's Formulas for Stress and Strain, Appendix A;
+// from memory).
 func TestPropertiesClosedForms(t *testing.T) {
 	p, err := Section{Shape: ShapeRound, Diameter: 40}.Properties()
 	if err != nil {

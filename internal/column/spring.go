@@ -7,7 +7,7 @@ import "math"
 // of dimensionless stiffness ra and rb, R = k L / (E I): 0 is a pin and
 // +Inf a full fixity. u = L sqrt(P/(E I)) at buckling is the root in
 // (pi, 2 pi] of the exact stability equation of the elastic member
-// (Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., §2.5, with
+// (Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., ch. 2, with
 // the spring end conditions E I v” = ±k v'):
 //
 //	u^2 + (ra + rb)(1 - u cot u) + ra rb (2 tan(u/2)/u - 1) = 0

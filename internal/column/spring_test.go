@@ -7,7 +7,7 @@ import (
 )
 
 // Theoretical effective length factors of the classic ends (Timoshenko &
-// Gere, Theory of Elastic Stability, §2.1-2.5; the "theoretical K" column
+// Gere, Theory of Elastic Stability, ch. 2; the "theoretical K" column
 // of AISC 360-22 Commentary Table C-A-7.1: 0.5, 0.7, 1.0, 2.0).
 func TestEndsK(t *testing.T) {
 	tests := []struct {
@@ -36,7 +36,7 @@ func TestEndsK(t *testing.T) {
 }
 
 // Braced member with rotational end springs, R = k L/(E I): the exact
-// roots of the stability equation (Timoshenko & Gere, §2.5), tabulated in
+// roots of the stability equation (Timoshenko & Gere, ch. 2), tabulated in
 // the project's references from an independent 4x4 determinant solution.
 func TestSpringKTable(t *testing.T) {
 	inf := math.Inf(1)
