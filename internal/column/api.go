@@ -67,8 +67,9 @@ type Member struct {
 }
 
 // Result is a capacity: the axial resistance N (N), the axis that governs
-// and the limit that governed ("first-yield", "squash", "buckling curve",
-// "ultimate", ...).
+// and the limit that governed (GovernsFirstYield "first-yield",
+// GovernsCurve "buckling-curve", or a beam-column limit such as
+// "ultimate").
 type Result struct {
 	N       float64
 	Axis    Axis
