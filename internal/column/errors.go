@@ -17,5 +17,6 @@ var (
 	ErrAlpha        = errors.New("column: imperfection factor alpha must be non-negative and finite")
 	ErrAxis         = errors.New("column: axis must be Major, Minor or Both")
 	ErrSpring       = errors.New("column: end spring stiffness must be non-negative (0 pinned, +Inf fixed)")
+	ErrRange        = errors.New("column: the squash load A fy is out of the floating-point range; check the units")
 	ErrSecond       = errors.New("column: second moment of area I must be positive and finite")
 )

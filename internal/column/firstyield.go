@@ -54,28 +54,46 @@ func firstYield(m *Member, a Axis) float64 {
 	lam := m.K[a] * m.Length / r
 	// rho = fy/sE = lam_bar^2, the load ratio P/PE at the squash load.
 	rho := m.Fy * lam * lam / (math.Pi * math.Pi * m.E)
-	k := c / (r * r)
-	eta := math.Abs(m.Bow) * k
-	ecc := math.Abs(m.Ecc) * k
-	return m.Props.A * m.Fy * firstYieldChi(rho, eta, ecc)
+	return m.Props.A * m.Fy * firstYieldChi(rho, relImp(m.Bow, r, c), relImp(m.Ecc, r, c))
+}
+
+// relImp returns the imperfection e as the relative bending stress
+// |e| c / r^2, written so that e = 0 gives 0 whatever r and c.
+func relImp(e, r, c float64) float64 {
+	if e == 0 {
+		return 0
+	}
+	return math.Abs(e) / r * (c / r)
 }
 
 // perryChi returns the smaller root chi of (1 - chi)(1 - chi rho) = eta chi,
 // the Perry-Robertson equation (Ayrton & Perry 1886; Robertson 1925) in
 // terms of chi = s/fy and rho = fy/sE. The form 2/(B + sqrt(D)) with
-// D = (1 - rho)^2 + eta (2 + 2 rho + eta) = B^2 - 4 rho avoids cancellation.
+// B = 1 + eta + rho and D = (1 - rho)^2 + eta (2 + 2 rho + eta) = B^2 - 4 rho
+// avoids cancellation; everything is scaled by max(1, rho, eta) so that no
+// intermediate overflows.
 func perryChi(rho, eta float64) float64 {
-	b := 1 + eta + rho
-	d := (1-rho)*(1-rho) + eta*(2+2*rho+eta)
-	return 2 / (b + math.Sqrt(d))
+	if math.IsInf(rho, 1) || math.IsInf(eta, 1) {
+		return 0
+	}
+	if rho <= 1e150 && eta <= 1e150 {
+		b := 1 + eta + rho
+		d := (1-rho)*(1-rho) + eta*(2+2*rho+eta)
+		return 2 / (b + math.Sqrt(d))
+	}
+	s := math.Max(rho, eta)
+	r, e, u := rho/s, eta/s, 1/s
+	b := u + e + r
+	d := (u-r)*(u-r) + e*(2*u+2*r+e)
+	return 2 / s / (b + math.Sqrt(d))
 }
 
 // firstYieldChi solves chi [1 + ecc sec((pi/2) sqrt(chi rho)) +
 // eta/(1 - chi rho)] = 1 for chi in (0, min(1, 1/rho)), where ecc = e c/r^2
 // and eta = e0 c/r^2.
 func firstYieldChi(rho, eta, ecc float64) float64 {
-	if ecc == 0 {
-		return perryChi(rho, eta)
+	if ecc == 0 || math.IsInf(rho, 1) || math.IsInf(eta, 1) || math.IsInf(ecc, 1) {
+		return perryChi(rho, eta+ecc)
 	}
 	hi := 1.0
 	if rho > 1 {

@@ -305,6 +305,7 @@ func TestCapacityErrors(t *testing.T) {
 		{"zero modulus", func(m *Member) { m.E = 0 }, Major, ErrModulus},
 		{"negative yield", func(m *Member) { m.Fy = -275 }, Both, ErrYield},
 		{"zero area", func(m *Member) { m.Props.A = 0 }, Both, ErrArea},
+		{"overflowing squash load", func(m *Member) { m.Props.A, m.Fy = 1e200, 1e200 }, Both, ErrRange},
 		{"zero K", func(m *Member) { m.K[Minor] = 0 }, Both, ErrK},
 		{"NaN K", func(m *Member) { m.K[Major] = nan }, Major, ErrK},
 		{"zero r", func(m *Member) { m.Props.R[Major] = 0 }, Both, ErrRadius},

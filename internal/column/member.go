@@ -26,10 +26,11 @@ func positive(x float64) bool { return x > 0 && x <= math.MaxFloat64 }
 
 // Validate checks the inputs a capacity evaluation about axis (Major,
 // Minor or Both) reads: E, Fy, Length, Props.A, and per axis K, Props.R and
-// Props.C must be positive and finite; Bow and Ecc must be finite (they act
-// by their magnitude). The capacity models call it themselves; it is
-// exported for callers that want to check a member before using the
-// float64 helpers (Slenderness, RelativeSlenderness, Euler).
+// Props.C must be positive and finite, and so must the squash load A fy;
+// Bow and Ecc must be finite (they act by their magnitude). The capacity
+// models call it themselves; it is exported for callers that want to check
+// a member before using the float64 helpers (Slenderness,
+// RelativeSlenderness, Euler).
 func (m *Member) Validate(axis Axis) error {
 	if axis != Major && axis != Minor && axis != Both {
 		return ErrAxis
@@ -43,6 +44,8 @@ func (m *Member) Validate(axis Axis) error {
 		return ErrYield
 	case !positive(m.Props.A):
 		return ErrArea
+	case !positive(m.Props.A * m.Fy):
+		return ErrRange
 	case math.IsNaN(m.Bow) || math.IsInf(m.Bow, 0) || math.IsNaN(m.Ecc) || math.IsInf(m.Ecc, 0):
 		return ErrImperfection
 	}
