@@ -108,3 +108,21 @@ func TestCurveAxes(t *testing.T) {
 		t.Errorf("Both = %+v, want major with chi 0.342235 (curve b, lam 1.5)", res)
 	}
 }
+
+// The BS 5950-1:2000 Annex C strut curve is the EN 1993-1-1 curve with
+// alpha = a lambda1/1000 at lam = lambda/lambda1 (lambda1 = pi sqrt(E/py),
+// lambda0 = 0.2 lambda1): Annex C values at py = 275, a = 3.5, computed from
+// the Annex formula, pc/py = 0.860259, 0.511953, 0.270591 at lambda = 50,
+// 100, 150.
+func TestCurveMatchesBS5950(t *testing.T) {
+	const e, py = 205000.0, 275.0
+	lambda1 := math.Pi * math.Sqrt(e/py)
+	for _, tt := range []struct{ lambda, ratio float64 }{{50, 0.860259}, {100, 0.511953}, {150, 0.270591}} {
+		m := strut(1000, 30, 45, e, py, tt.lambda*30)
+		m.Alpha = [2]float64{3.5 * lambda1 / 1000, 3.5 * lambda1 / 1000}
+		res, _ := Curve(&m, Both)
+		if got := res.N / (m.Props.A * py); math.Abs(got-tt.ratio) > 5e-7 {
+			t.Errorf("lambda %g: pc/py = %.7f, want %.6f", tt.lambda, got, tt.ratio)
+		}
+	}
+}
