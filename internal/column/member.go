@@ -1,6 +1,9 @@
 package column
 
-import "math"
+import (
+	"fmt"
+	"math"
+)
 
 // Limits reported in Result.Governs.
 const (
@@ -18,7 +21,7 @@ func (a Axis) String() string {
 	case Both:
 		return "both"
 	}
-	return "axis(?)"
+	return fmt.Sprintf("Axis(%d)", int(a))
 }
 
 // positive reports whether x is a positive finite number (false for NaN).

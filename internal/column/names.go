@@ -1,0 +1,45 @@
+package column
+
+import "fmt"
+
+var shapeNames = [...]string{
+	ShapeI:      "I",
+	ShapeRHS:    "RHS",
+	ShapeCHS:    "CHS",
+	ShapeRect:   "rect",
+	ShapeRound:  "round",
+	ShapeCustom: "custom",
+}
+
+// String returns the study-file name of the shape: "I", "RHS", "CHS",
+// "rect", "round" or "custom".
+func (s Shape) String() string {
+	if s >= 0 && int(s) < len(shapeNames) {
+		return shapeNames[s]
+	}
+	return fmt.Sprintf("Shape(%d)", int(s))
+}
+
+// ParseShape returns the shape named as in a study file (see
+// Shape.String).
+func ParseShape(name string) (Shape, error) {
+	for s, n := range shapeNames {
+		if n == name {
+			return Shape(s), nil
+		}
+	}
+	return 0, fmt.Errorf("column: unknown section shape %q (want I, RHS, CHS, rect, round or custom)", name)
+}
+
+// ParseAxis returns the axis named "major", "minor" or "both".
+func ParseAxis(name string) (Axis, error) {
+	switch name {
+	case "major":
+		return Major, nil
+	case "minor":
+		return Minor, nil
+	case "both":
+		return Both, nil
+	}
+	return 0, fmt.Errorf("column: unknown axis %q (want major, minor or both)", name)
+}
