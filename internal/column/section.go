@@ -68,7 +68,8 @@ func (s Section) Properties() (Props, error) {
 // Reduced returns the section with its ThicknessLoss t removed and set to
 // zero: an I section loses t on both faces of the flanges and the web
 // (depth and width shrink by 2t, flange and web by 2t, and the root
-// radius, whose centre stays put, grows by t); RHS and CHS lose t on the
+// radius, whose centre stays put, grows by t; a zero root radius, a sharp
+// corner, stays zero); RHS and CHS lose t on the
 // outside (depth, width or diameter shrink by 2t, the wall by t); solid
 // shapes lose t on every face. A custom section with a thickness loss is
 // an error. Reduced also checks the dimensions before and after the loss.
