@@ -1,0 +1,83 @@
+package report
+
+import (
+	"bytes"
+	"fmt"
+	"strings"
+
+	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/draw"
+	"gonum.org/v1/plot/vg/vgimg"
+	"gonum.org/v1/plot/vg/vgsvg"
+)
+
+// pngDPI is the resolution of PNG pictures: a 16 cm wide picture is 945
+// pixels wide, sharp in a document and on a screen.
+const pngDPI = 150
+
+// figure is one picture of a report: one plot, or several side by side.
+type figure struct {
+	// Name is the file stem, e.g. "tornado".
+	Name string
+	// Caption says what the picture shows, for the HTML and Markdown.
+	Caption string
+	// W and H are the size of the whole picture.
+	W, H vg.Length
+	// Plots are the panels, in one row.
+	Plots []*plot.Plot
+}
+
+// render draws f in the format "svg" or "png" and returns the bytes. It
+// never panics: a plotting panic (gonum/plot panics on some degenerate
+// data) is returned as an error so that the picture is skipped.
+func (f *figure) render(format string) (out []byte, err error) {
+	defer func() {
+		if r := recover(); r != nil {
+			out, err = nil, fmt.Errorf("report: picture %s could not be drawn: %v", f.Name, r)
+		}
+	}()
+	var buf bytes.Buffer
+	switch format {
+	case "svg":
+		c := vgsvg.New(f.W, f.H)
+		f.draw(draw.New(c))
+		if _, err := c.WriteTo(&buf); err != nil {
+			return nil, err
+		}
+	case "png":
+		c := vgimg.NewWith(vgimg.UseWH(f.W, f.H), vgimg.UseDPI(pngDPI))
+		f.draw(draw.New(c))
+		if _, err := (vgimg.PngCanvas{Canvas: c}).WriteTo(&buf); err != nil {
+			return nil, err
+		}
+	default:
+		return nil, fmt.Errorf("report: unknown picture format %q (want svg or png)", format)
+	}
+	return buf.Bytes(), nil
+}
+
+// draw lays the panels out in one row on dc.
+func (f *figure) draw(dc draw.Canvas) {
+	if len(f.Plots) == 1 {
+		f.Plots[0].Draw(dc)
+		return
+	}
+	tiles := draw.Tiles{Rows: 1, Cols: len(f.Plots), PadX: vg.Points(12), PadTop: vg.Points(2), PadBottom: vg.Points(2), PadLeft: vg.Points(2), PadRight: vg.Points(6)}
+	row := [][]*plot.Plot{f.Plots}
+	cs := plot.Align(row, tiles, dc)
+	for j, p := range f.Plots {
+		p.Draw(cs[0][j])
+	}
+}
+
+// inlineSVG returns the SVG of a picture ready to be placed inside HTML: the
+// XML declaration removed and the font family given generic fallbacks.
+func inlineSVG(svg []byte) string {
+	s := string(svg)
+	if i := strings.Index(s, "<svg"); i > 0 {
+		s = s[i:]
+	}
+	s = strings.ReplaceAll(s, "font-family:Liberation Sans", "font-family:'Liberation Sans',Arial,Helvetica,sans-serif")
+	return s
+}

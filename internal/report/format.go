@@ -1,0 +1,140 @@
+package report
+
+import (
+	"math"
+	"strconv"
+	"strings"
+)
+
+// notAvailable stands in the text for a number that is missing or not
+// finite, so that no "NaN" or "+Inf" ever reaches a reader.
+const notAvailable = "n/a"
+
+// finite reports whether x is neither NaN nor infinite.
+func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
+
+// sig formats x to n significant digits without an exponent for ordinary
+// magnitudes, e.g. sig(1234.567, 4) = "1235", sig(0.0123456, 3) = "0.0123".
+func sig(x float64, n int) string {
+	if !finite(x) {
+		return notAvailable
+	}
+	if x == 0 {
+		return "0"
+	}
+	a := math.Abs(x)
+	if a >= 1e7 || a < 1e-4 {
+		return sci(x, n)
+	}
+	e := int(math.Floor(math.Log10(a)))
+	dec := n - 1 - e
+	if dec < 0 {
+		p := math.Pow10(-dec)
+		return strconv.FormatFloat(math.Round(x/p)*p, 'f', 0, 64)
+	}
+	return strconv.FormatFloat(x, 'f', dec, 64)
+}
+
+// sci formats x in scientific notation with n significant digits and a
+// short exponent, e.g. sci(0.00277, 3) = "2.77e-3".
+func sci(x float64, n int) string {
+	if !finite(x) {
+		return notAvailable
+	}
+	s := strconv.FormatFloat(x, 'e', n-1, 64)
+	mant, exp, ok := strings.Cut(s, "e")
+	if !ok {
+		return s
+	}
+	sign := ""
+	if exp[0] == '-' {
+		sign = "-"
+	}
+	exp = strings.TrimLeft(exp[1:], "0")
+	if exp == "" {
+		return mant
+	}
+	return mant + "e" + sign + exp
+}
+
+// prob formats a probability: scientific below 0.01, else 3 significant
+// digits.
+func prob(p float64) string {
+	if !finite(p) {
+		return notAvailable
+	}
+	if p != 0 && math.Abs(p) < 0.01 {
+		return sci(p, 3)
+	}
+	return sig(p, 3)
+}
+
+// fixed formats x with d decimals.
+func fixed(x float64, d int) string {
+	if !finite(x) {
+		return notAvailable
+	}
+	return strconv.FormatFloat(x, 'f', d, 64)
+}
+
+// percent formats a fraction as a percentage with one decimal.
+func percent(x float64) string {
+	if !finite(x) {
+		return notAvailable
+	}
+	return strconv.FormatFloat(100*x, 'f', 1, 64) + "%"
+}
+
+// display returns the factor and unit used to show a value held in the
+// internal unit u: forces in kN and moments in kN*m, everything else as it
+// is.
+func display(u string) (scale float64, unit string) {
+	switch u {
+	case "N":
+		return 1e-3, "kN"
+	case "N*mm", "N·mm":
+		return 1e-6, "kN·m"
+	}
+	return 1, u
+}
+
+// withUnit formats a value held in internal unit u for reading: converted
+// by display and followed by its unit when there is one.
+func withUnit(x float64, u string) string {
+	s, du := display(u)
+	v := sig(x*s, 4)
+	if du == "" || v == notAvailable {
+		return v
+	}
+	return v + " " + du
+}
+
+// kN formats a force held in N as kN.
+func kN(x float64) string { return withUnit(x, "N") }
+
+// intervalText formats [lo, hi] with f.
+func intervalText(ci []float64, f func(float64) string) string {
+	if len(ci) != 2 {
+		return notAvailable
+	}
+	return f(ci[0]) + " to " + f(ci[1])
+}
+
+// thousands formats an integer with a thin space between groups of three
+// digits, e.g. 1 000 000.
+func thousands(n int64) string {
+	s := strconv.FormatInt(n, 10)
+	neg := strings.HasPrefix(s, "-")
+	s = strings.TrimPrefix(s, "-")
+	var b strings.Builder
+	for i, r := range s {
+		if i > 0 && (len(s)-i)%3 == 0 {
+			b.WriteString(" ")
+		}
+		b.WriteRune(r)
+	}
+	if neg {
+		return "-" + b.String()
+	}
+	return b.String()
+}

@@ -1,0 +1,168 @@
+package report
+
+import (
+	"bytes"
+	"html/template"
+)
+
+// HTML returns the self-contained HTML report of b: every picture inline as
+// SVG, a small inline style sheet, no scripts and no links to anything
+// outside the file.
+func HTML(b *Bundle) ([]byte, error) {
+	pics, notes := renderPictures(b, true, false)
+	return htmlReport(b, pics, notes)
+}
+
+// htmlReport fills the report template.
+func htmlReport(b *Bundle, pics []picture, notes []string) ([]byte, error) {
+	var buf bytes.Buffer
+	if err := reportTemplate.Execute(&buf, makeView(b, pics, notes)); err != nil {
+		return nil, err
+	}
+	return buf.Bytes(), nil
+}
+
+var reportTemplate = template.Must(template.New("report").Parse(reportHTML))
+
+const reportHTML = `<!DOCTYPE html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<title>{{.Title}}</title>
+<style>
+body{font-family:"Liberation Sans",Arial,Helvetica,sans-serif;color:#222;max-width:60rem;margin:2rem auto;padding:0 1rem;line-height:1.45}
+h1{font-size:1.6rem;margin-bottom:.2rem}h2{font-size:1.25rem;border-bottom:1px solid #ccc;padding-bottom:.2rem;margin-top:2.2rem}h3{font-size:1.05rem;margin-top:1.5rem}
+table{border-collapse:collapse;margin:.6rem 0;font-size:.92rem}th,td{padding:.25rem .7rem;border-bottom:1px solid #e2e2e2;text-align:left;vertical-align:top}th{background:#f4f4f4}
+td.n{text-align:right;font-variant-numeric:tabular-nums}
+figure{margin:1.2rem 0}figure svg{max-width:100%;height:auto}figcaption{font-size:.88rem;color:#555}
+.verdict{font-weight:bold;padding:.4rem .7rem;display:inline-block;border-radius:3px}
+.met{background:#e3f1e7}.not-met{background:#f7e1de}.undecided{background:#fbf0d9}
+.caution{border-left:4px solid #c0392b;padding:.5rem .9rem;background:#fbf3f2}
+.side{display:flex;flex-wrap:wrap;gap:2rem}.muted{color:#666;font-size:.9rem}
+code{font-size:.9em}
+</style>
+</head>
+<body>
+<header>
+<h1>{{.Title}}</h1>
+<p class="muted">Reliability study of a compression member{{if .StudyFile}} · study file <code>{{.StudyFile}}</code>{{end}}{{if .ToolVersion}} · strutrisk {{.ToolVersion}}{{end}}</p>
+<p class="caution">{{.Caution}}</p>
+</header>
+
+<section id="result">
+<h2>Result</h2>
+{{if .Verdict}}<p class="verdict {{.VerdictClass}}">{{.Verdict}}</p>{{end}}
+{{if .Result}}<table>{{range .Result}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{else}}<p>No sampling result: deterministic check only.</p>{{end}}
+{{if .Influence}}<p>Most influential inputs: {{.Influence}}.</p>{{end}}
+{{with .Picture "capacity-demand"}}{{template "fig" .}}{{end}}
+{{with .Picture "margin"}}{{template "fig" .}}{{end}}
+{{if .Warnings}}<h3>Warnings</h3><ul>{{range .Warnings}}<li>{{.}}</li>{{end}}</ul>{{end}}
+</section>
+
+<section id="inputs">
+<h2>Inputs</h2>
+{{if .Inputs}}<table>
+<tr><th>input</th><th>distribution</th><th>parameters</th><th>mean</th><th>CoV</th><th>unit</th></tr>
+{{range .Inputs}}<tr><td>{{.Name}}</td><td>{{.Dist}}</td><td>{{.Params}}</td><td class="n">{{.Mean}}</td><td class="n">{{.CoV}}</td><td>{{.Unit}}</td></tr>
+{{end}}</table>{{else}}<p>The inputs were not given to the report.</p>{{end}}
+{{if .Defaults}}<h3>Defaults that applied</h3><ul>{{range .Defaults}}<li>{{.}}</li>{{end}}</ul>{{end}}
+</section>
+
+<section id="check">
+<h2>Deterministic check at nominal values</h2>
+{{if .Nominal}}<table>{{range .Nominal}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{end}}
+{{if .Check}}<table>
+<tr><th>quantity</th><th>major axis</th><th>minor axis</th><th>unit</th></tr>
+{{range .Check}}<tr><td>{{.Quantity}}</td><td class="n">{{.Major}}</td><td class="n">{{.Minor}}</td><td>{{.Unit}}</td></tr>
+{{end}}</table>{{end}}
+{{with .Picture "slenderness"}}{{template "fig" .}}{{end}}
+</section>
+
+<section id="sensitivity">
+<h2>Sensitivity</h2>
+{{if .Tornado}}<h3 id="tornado">One at a time (tornado): {{.TornadoOutput}}</h3>
+<p>All inputs at their medians give {{.TornadoBase}}.</p>
+{{with .Picture "tornado"}}{{template "fig" .}}{{end}}
+<table><tr><th>input</th><th>low value</th><th>high value</th><th>result at low</th><th>result at high</th><th>swing</th></tr>
+{{range .Tornado}}<tr><td>{{.Variable}}</td><td class="n">{{.LowValue}}</td><td class="n">{{.HighValue}}</td><td class="n">{{.Low}}</td><td class="n">{{.High}}</td><td class="n">{{.Swing}}</td></tr>
+{{end}}</table>{{end}}
+{{if .Sobol}}<h3 id="sobol">Variance-based (Sobol) indices of {{if .SobolOutput}}{{.SobolOutput}}{{else}}the output{{end}}</h3>
+{{if .SobolNote}}<p>{{.SobolNote}}</p>{{end}}
+{{with .Picture "sobol"}}{{template "fig" .}}{{end}}
+<table><tr><th>input</th><th>first order</th><th>95% interval</th><th>total</th><th>95% interval</th></tr>
+{{range .Sobol}}<tr><td>{{.Variable}}</td><td class="n">{{.First}}</td><td class="n">{{.FirstCI}}</td><td class="n">{{.Total}}</td><td class="n">{{.TotalCI}}</td></tr>
+{{end}}</table>{{end}}
+<div class="side">
+{{if .FORM}}<div id="form"><h3>FORM design point and importance</h3>
+<p>β = {{.FORMBeta}}, pf = {{.FORMPf}}</p>
+<table><tr><th>input</th><th>design point</th><th>importance α²</th></tr>
+{{range .FORM}}<tr><td>{{.Variable}}</td><td class="n">{{.DesignPoint}}</td><td class="n">{{.Importance}}</td></tr>
+{{end}}</table></div>{{end}}
+{{if .Spearman}}<div id="spearman"><h3>Rank correlation with the margin</h3>
+<table><tr><th>input</th><th>Spearman ρ</th></tr>
+{{range .Spearman}}<tr><td>{{.Key}}</td><td class="n">{{.Value}}</td></tr>
+{{end}}</table></div>{{end}}
+</div>
+{{if not (or .Tornado .Sobol .FORM .Spearman)}}<p>No sensitivity measures were computed.</p>{{end}}
+</section>
+
+{{if or .Sweep .Variants (.Picture "sweep")}}<section id="sweep">
+<h2>Sweep and variants</h2>
+{{with .Picture "sweep"}}{{template "fig" .}}{{end}}
+{{if .Sweep}}<table><tr><th>{{if .SweepLabel}}{{.SweepLabel}}{{else}}value{{end}}</th><th>pf</th><th>95% interval</th><th>β</th></tr>
+{{range .Sweep}}<tr><td class="n">{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td></tr>
+{{end}}</table>{{end}}
+{{if .Variants}}<table><tr><th>variant</th><th>pf</th><th>95% interval</th><th>β</th></tr>
+{{range .Variants}}<tr><td>{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td></tr>
+{{end}}</table>{{end}}
+</section>{{end}}
+
+{{if .Updates}}<section id="updates">
+<h2>Updating from measurements</h2>
+<table><tr><th>input</th><th>prior</th><th>updated</th><th>measurements</th></tr>
+{{range .Updates}}<tr><td>{{.Variable}}</td><td>{{.Prior}}</td><td>{{.After}}</td><td class="n">{{.N}}</td></tr>
+{{end}}</table>
+{{range .Updates}}{{with $.Picture .Picture}}{{template "fig" .}}{{end}}{{end}}
+</section>{{end}}
+
+{{with .Picture "beam-column"}}<section id="beam-column">
+<h2>Numerical beam-column</h2>
+{{template "fig" .}}
+</section>{{end}}
+
+<section id="method">
+<h2>Method and diagnostics</h2>
+{{if .Diagnostics}}<table>{{range .Diagnostics}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{end}}
+{{with .Picture "convergence"}}{{template "fig" .}}{{end}}
+{{if .Notes}}<h3>Pictures left out</h3><ul>{{range .Notes}}<li>{{.}}</li>{{end}}</ul>{{end}}
+</section>
+
+<section id="reproducibility">
+<h2>Reproducibility</h2>
+<table>
+<tr><th>tool version</th><td>{{if .ToolVersion}}{{.ToolVersion}}{{else}}not recorded{{end}}</td></tr>
+<tr><th>study file</th><td>{{if .StudyFile}}<code>{{.StudyFile}}</code>{{else}}not recorded{{end}}</td></tr>
+<tr><th>SHA-256 of the study file</th><td>{{if .InputSHA}}<code>{{.InputSHA}}</code>{{else}}not recorded{{end}}</td></tr>
+<tr><th>seed</th><td>{{if .Seed}}{{.Seed}}{{else}}none (no sampling){{end}}</td></tr>
+<tr><th>units of the result document</th><td>{{if .Units}}{{.Units}}{{else}}N-mm-MPa{{end}}</td></tr>
+</table>
+<p class="muted">The same study file, seed and tool version give the same numbers, whatever the number of workers.</p>
+</section>
+
+<section id="cautions">
+<h2>Cautions</h2>
+<p class="caution">{{.Caution}}</p>
+<ul>
+<li>The probability of failure is that of the stated model: the distributions, correlations and capacity model written in the study. Gross errors, deterioration and actions not listed are outside it.</li>
+<li>Intervals describe the sampling error of the estimate only, not the uncertainty of the inputs' own parameters.</li>
+<li>Sensitivity measures rank the inputs as modelled; Sobol indices assume independent inputs.</li>
+</ul>
+</section>
+</body>
+</html>
+{{define "fig"}}<figure id="fig-{{.Name}}">
+{{.SVG}}
+<figcaption>{{.Caption}}</figcaption>
+</figure>{{end}}
+`

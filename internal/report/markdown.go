@@ -1,0 +1,192 @@
+package report
+
+import (
+	"fmt"
+	"strings"
+)
+
+// Markdown returns the report of b as Markdown (summary.md): the same facts
+// as the HTML report, in tables, for a reader without a browser. Pictures
+// are not included; they are written beside it as files.
+func Markdown(b *Bundle) string {
+	if b == nil {
+		b = &Bundle{}
+	}
+	v := makeView(b, nil, nil)
+	var w strings.Builder
+	fmt.Fprintf(&w, "# %s\n\n", mdText(v.Title))
+	fmt.Fprintf(&w, "> %s\n\n", v.Caution)
+
+	w.WriteString("## Result\n\n")
+	if v.Verdict != "" {
+		fmt.Fprintf(&w, "**%s**\n\n", mdText(v.Verdict))
+	}
+	if len(v.Result) > 0 {
+		mdKV(&w, v.Result)
+	} else {
+		w.WriteString("No sampling result: deterministic check only.\n\n")
+	}
+	if v.Influence != "" {
+		fmt.Fprintf(&w, "Most influential inputs: %s.\n\n", mdText(v.Influence))
+	}
+	if len(v.Warnings) > 0 {
+		w.WriteString("Warnings:\n\n")
+		for _, s := range v.Warnings {
+			fmt.Fprintf(&w, "- %s\n", mdText(s))
+		}
+		w.WriteString("\n")
+	}
+
+	w.WriteString("## Inputs\n\n")
+	rows := make([][]string, len(v.Inputs))
+	for i, in := range v.Inputs {
+		rows[i] = []string{in.Name, in.Dist, in.Params, in.Mean, in.CoV, in.Unit}
+	}
+	mdTable(&w, []string{"input", "distribution", "parameters", "mean", "CoV", "unit"}, rows)
+	if len(v.Defaults) > 0 {
+		w.WriteString("Defaults that applied:\n\n")
+		for _, s := range v.Defaults {
+			fmt.Fprintf(&w, "- %s\n", mdText(s))
+		}
+		w.WriteString("\n")
+	}
+
+	w.WriteString("## Deterministic check at nominal values\n\n")
+	mdKV(&w, v.Nominal)
+	rows = rows[:0]
+	for _, c := range v.Check {
+		rows = append(rows, []string{c.Quantity, c.Major, c.Minor, c.Unit})
+	}
+	mdTable(&w, []string{"quantity", "major axis", "minor axis", "unit"}, rows)
+
+	w.WriteString("## Sensitivity\n\n")
+	if len(v.Tornado) > 0 {
+		fmt.Fprintf(&w, "### One at a time (tornado): %s\n\nAll inputs at their medians give %s.\n\n", mdText(v.TornadoOutput), v.TornadoBase)
+		rows = rows[:0]
+		for _, t := range v.Tornado {
+			rows = append(rows, []string{t.Variable, t.LowValue, t.HighValue, t.Low, t.High, t.Swing})
+		}
+		mdTable(&w, []string{"input", "low value", "high value", "result at low", "result at high", "swing"}, rows)
+	}
+	if len(v.Sobol) > 0 {
+		what := v.SobolOutput
+		if what == "" {
+			what = "the output"
+		}
+		fmt.Fprintf(&w, "### Sobol indices of %s\n\n", mdText(what))
+		if v.SobolNote != "" {
+			fmt.Fprintf(&w, "%s\n\n", mdText(v.SobolNote))
+		}
+		rows = rows[:0]
+		for _, s := range v.Sobol {
+			rows = append(rows, []string{s.Variable, s.First, s.FirstCI, s.Total, s.TotalCI})
+		}
+		mdTable(&w, []string{"input", "first order", "95% interval", "total", "95% interval"}, rows)
+	}
+	if len(v.FORM) > 0 {
+		fmt.Fprintf(&w, "### FORM design point and importance\n\nβ = %s, pf = %s\n\n", v.FORMBeta, v.FORMPf)
+		rows = rows[:0]
+		for _, f := range v.FORM {
+			rows = append(rows, []string{f.Variable, f.DesignPoint, f.Importance})
+		}
+		mdTable(&w, []string{"input", "design point", "importance α²"}, rows)
+	}
+	if len(v.Spearman) > 0 {
+		w.WriteString("### Rank correlation with the margin\n\n")
+		rows = rows[:0]
+		for _, s := range v.Spearman {
+			rows = append(rows, []string{s.Key, s.Value})
+		}
+		mdTable(&w, []string{"input", "Spearman ρ"}, rows)
+	}
+
+	if len(v.Sweep) > 0 || len(v.Variants) > 0 {
+		w.WriteString("## Sweep and variants\n\n")
+		label := v.SweepLabel
+		if label == "" {
+			label = "value"
+		}
+		for _, t := range []struct {
+			head string
+			pts  []pointRow
+		}{{label, v.Sweep}, {"variant", v.Variants}} {
+			if len(t.pts) == 0 {
+				continue
+			}
+			rows = rows[:0]
+			for _, p := range t.pts {
+				rows = append(rows, []string{p.Name, p.Pf, p.PfCI, p.Beta})
+			}
+			mdTable(&w, []string{t.head, "pf", "95% interval", "β"}, rows)
+		}
+	}
+	if len(v.Updates) > 0 {
+		w.WriteString("## Updating from measurements\n\n")
+		rows = rows[:0]
+		for _, u := range v.Updates {
+			rows = append(rows, []string{u.Variable, u.Prior, u.After, u.N})
+		}
+		mdTable(&w, []string{"input", "prior", "updated", "measurements"}, rows)
+	}
+
+	w.WriteString("## Method and diagnostics\n\n")
+	mdKV(&w, v.Diagnostics)
+
+	w.WriteString("## Reproducibility\n\n")
+	orNot := func(s string) string {
+		if s == "" {
+			return "not recorded"
+		}
+		return s
+	}
+	mdKV(&w, []KV{
+		{"tool version", orNot(v.ToolVersion)},
+		{"study file", orNot(v.StudyFile)},
+		{"SHA-256 of the study file", orNot(v.InputSHA)},
+		{"seed", orNot(v.Seed)},
+	})
+
+	w.WriteString("## Cautions\n\n")
+	fmt.Fprintf(&w, "%s\n", v.Caution)
+	return w.String()
+}
+
+// mdText escapes the characters that would break a Markdown table cell or
+// start unintended formatting.
+func mdText(s string) string {
+	r := strings.NewReplacer("|", `\|`, "\n", " ", "*", `\*`, "_", `\_`)
+	return r.Replace(s)
+}
+
+// mdKV writes a two-column table of labelled values.
+func mdKV(w *strings.Builder, kv []KV) {
+	rows := make([][]string, len(kv))
+	for i, p := range kv {
+		rows[i] = []string{p.Key, p.Value}
+	}
+	mdTable(w, []string{"", ""}, rows)
+}
+
+// mdTable writes a Markdown table; nothing when there are no rows.
+func mdTable(w *strings.Builder, head []string, rows [][]string) {
+	if len(rows) == 0 {
+		return
+	}
+	line := func(cells []string) {
+		w.WriteString("|")
+		for _, c := range cells {
+			w.WriteString(" " + mdText(c) + " |")
+		}
+		w.WriteString("\n")
+	}
+	line(head)
+	w.WriteString("|")
+	for range head {
+		w.WriteString(" --- |")
+	}
+	w.WriteString("\n")
+	for _, r := range rows {
+		line(r)
+	}
+	w.WriteString("\n")
+}

@@ -1,0 +1,131 @@
+package report
+
+import (
+	"math"
+	"strconv"
+
+	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/plotter"
+	"gonum.org/v1/plot/vg"
+)
+
+// decadeTicks marks powers of ten on a logarithmic axis, labelled in plain
+// digits grouped by thousands up to 10^6 and as 1e7, 1e8... beyond, with
+// unlabelled minor ticks at 2..9 times each power.
+type decadeTicks struct{}
+
+// Ticks implements plot.Ticker. min and max must be positive.
+func (decadeTicks) Ticks(min, max float64) []plot.Tick {
+	if !(min > 0) || !(max > min) || !finite(min) || !finite(max) {
+		return nil
+	}
+	var ticks []plot.Tick
+	for e := int(math.Floor(math.Log10(min))); e <= int(math.Ceil(math.Log10(max))); e++ {
+		v := math.Pow10(e)
+		label := ""
+		switch {
+		case e >= 0 && e <= 6:
+			label = thousands(int64(v))
+		case e > 6:
+			label = "1e" + strconv.Itoa(e)
+		default:
+			label = strconv.FormatFloat(v, 'g', -1, 64)
+		}
+		if v >= min*0.999 && v <= max*1.001 {
+			ticks = append(ticks, plot.Tick{Value: v, Label: label})
+		}
+		for k := 2; k <= 9; k++ {
+			if m := v * float64(k); m >= min && m <= max {
+				ticks = append(ticks, plot.Tick{Value: m})
+			}
+		}
+	}
+	return ticks
+}
+
+// probTicks marks a logarithmic probability axis with powers of ten
+// written 1e-3 etc.
+type probTicks struct{}
+
+// Ticks implements plot.Ticker. min and max must be positive.
+func (probTicks) Ticks(min, max float64) []plot.Tick {
+	if !(min > 0) || !(max > min) || !finite(min) || !finite(max) {
+		return nil
+	}
+	var ticks []plot.Tick
+	for e := int(math.Floor(math.Log10(min))); e <= int(math.Ceil(math.Log10(max))); e++ {
+		v := math.Pow10(e)
+		if v >= min*0.999 && v <= max*1.001 {
+			ticks = append(ticks, plot.Tick{Value: v, Label: sci(v, 1)})
+		}
+		for k := 2; k <= 9; k++ {
+			if m := v * float64(k); m >= min && m <= max {
+				ticks = append(ticks, plot.Tick{Value: m})
+			}
+		}
+	}
+	return ticks
+}
+
+// convergenceFigure draws the failure probability estimate and its
+// interval against the number of evaluations on a logarithmic axis.
+func convergenceFigure(b *Bundle) *figure {
+	var pts []plotter.XY
+	var band plotter.XYs
+	var upper plotter.XYs
+	for _, c := range b.Convergence {
+		x := float64(c.Evaluations)
+		if !(x > 0) || !finite(c.Pf) {
+			continue
+		}
+		pts = append(pts, plotter.XY{X: x, Y: c.Pf})
+		if finite(c.PfCI[0]) && finite(c.PfCI[1]) && c.PfCI[0] <= c.PfCI[1] {
+			band = append(band, plotter.XY{X: x, Y: c.PfCI[0]})
+			upper = append(upper, plotter.XY{X: x, Y: c.PfCI[1]})
+		}
+	}
+	if len(pts) < 2 || pts[0].X == pts[len(pts)-1].X {
+		return nil
+	}
+	p := newPlot("Convergence of the estimate", "limit-state evaluations (log scale)", "probability of failure pf (–)")
+	addGrid(p, false)
+	if len(band) >= 2 {
+		for i := len(upper) - 1; i >= 0; i-- {
+			band = append(band, upper[i])
+		}
+		pg, err := plotter.NewPolygon(band)
+		if err == nil {
+			pg.Color = faded(colCapacity, 0x40)
+			pg.LineStyle.Width = 0
+			p.Add(pg)
+			p.Legend.Add("95% interval", pg)
+		}
+	}
+	ln, err := plotter.NewLine(plotter.XYs(pts))
+	if err != nil {
+		return nil
+	}
+	ln.LineStyle = lineStyle(colCapacity, 1.5, false)
+	p.Add(ln)
+	p.Legend.Add("estimate of pf", ln)
+	p.X.Scale = plot.LogScale{}
+	p.X.Tick.Marker = decadeTicks{}
+	p.Y.Min = math.Min(p.Y.Min, 0)
+	p.Y.Tick.Marker = probLinearTicks{}
+	return &figure{Name: "convergence", Caption: "Estimate of the failure probability and its 95% interval as the number of limit-state evaluations grows.", W: 16 * vg.Centimeter, H: 9 * vg.Centimeter, Plots: []*plot.Plot{p}}
+}
+
+// probLinearTicks are the default ticks of a linear axis, labelled in the
+// report's probability format (3.0e-3 rather than 0.0030).
+type probLinearTicks struct{}
+
+// Ticks implements plot.Ticker.
+func (probLinearTicks) Ticks(min, max float64) []plot.Tick {
+	ticks := plot.DefaultTicks{}.Ticks(min, max)
+	for i := range ticks {
+		if ticks[i].Label != "" {
+			ticks[i].Label = prob(ticks[i].Value)
+		}
+	}
+	return ticks
+}

@@ -1,0 +1,83 @@
+package report
+
+import (
+	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/plotter"
+	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/draw"
+)
+
+// finiteXYs pairs x and y, dropping pairs that are not finite.
+func finiteXYs(x, y []float64) plotter.XYs {
+	n := min(len(x), len(y))
+	xy := make(plotter.XYs, 0, n)
+	for i := 0; i < n; i++ {
+		if finite(x[i]) && finite(y[i]) {
+			xy = append(xy, plotter.XY{X: x[i], Y: y[i]})
+		}
+	}
+	return xy
+}
+
+// slendernessFigure draws the deterministic capacity curves against
+// relative slenderness, the sampled members as a cloud and the nominal
+// member as a marked point.
+func slendernessFigure(b *Bundle) *figure {
+	s := b.Slenderness
+	if s == nil {
+		return nil
+	}
+	p := newPlot("Capacity against relative slenderness", "relative slenderness λ (–)", "capacity / squash load N/Ny (–)")
+	addGrid(p, true)
+	drawn := 0
+	var cloud plotter.XYs
+	for _, c := range s.Cloud {
+		if finite(c[0]) && finite(c[1]) {
+			cloud = append(cloud, plotter.XY{X: c[0], Y: c[1]})
+		}
+	}
+	if len(cloud) > 0 {
+		sc, err := plotter.NewScatter(cloud)
+		if err == nil {
+			sc.GlyphStyle = draw.GlyphStyle{Color: faded(colSafe, 0x66), Radius: vg.Points(1.3), Shape: draw.CircleGlyph{}}
+			p.Add(sc)
+			p.Legend.Add("sampled members", sc)
+			drawn++
+		}
+	}
+	for i, c := range s.Curves {
+		xy := finiteXYs(c.X, c.Y)
+		if len(xy) < 2 {
+			continue
+		}
+		ln, err := plotter.NewLine(xy)
+		if err != nil {
+			continue
+		}
+		ln.LineStyle = lineStyle(seriesColor(i), 1.6, false)
+		if i%len(palette) == 1 {
+			ln.LineStyle = lineStyle(colDemand, 1.6, false)
+		}
+		p.Add(ln)
+		name := c.Name
+		if name == "" {
+			name = "capacity model"
+		}
+		p.Legend.Add(name, ln)
+		drawn++
+	}
+	if m := s.Member; finite(m[0]) && finite(m[1]) && (m[0] != 0 || m[1] != 0) {
+		sc, err := plotter.NewScatter(plotter.XYs{{X: m[0], Y: m[1]}})
+		if err == nil {
+			sc.GlyphStyle = draw.GlyphStyle{Color: colFailure, Radius: vg.Points(4.5), Shape: draw.CrossGlyph{}}
+			p.Add(sc)
+			p.Legend.Add("this member (nominal)", sc)
+			drawn++
+		}
+	}
+	if drawn == 0 {
+		return nil
+	}
+	p.X.Min, p.Y.Min = 0, 0
+	return &figure{Name: "slenderness", Caption: "Capacity as a fraction of the squash load against relative slenderness: the deterministic curve of each capacity model, the sampled members (cloud) and the nominal member (cross).", W: 16 * vg.Centimeter, H: 10 * vg.Centimeter, Plots: []*plot.Plot{p}}
+}

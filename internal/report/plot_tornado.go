@@ -1,0 +1,158 @@
+package report
+
+import (
+	"math"
+	"sort"
+	"strings"
+
+	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/plotter"
+	"gonum.org/v1/plot/text"
+	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/draw"
+)
+
+// tornadoScale reads the unit in parentheses at the end of the tornado
+// output's name. The values are held in N, mm, MPa; an output named in kN
+// or N is a force and is shown in kN.
+func tornadoScale(name string) (scale float64, label string) {
+	label = name
+	i := strings.LastIndex(name, "(")
+	if i < 0 || !strings.HasSuffix(name, ")") {
+		return 1, label
+	}
+	switch u := strings.TrimSpace(name[i+1 : len(name)-1]); u {
+	case "kN", "N":
+		return 1e-3, strings.TrimSpace(name[:i]) + " (kN)"
+	}
+	return 1, label
+}
+
+// inputUnit returns the unit of the input named n, or "".
+func inputUnit(b *Bundle, n string) string {
+	for _, in := range b.Inputs {
+		if in.Name == n {
+			return in.Unit
+		}
+	}
+	return ""
+}
+
+// tornadoFigure draws the one-at-a-time sensitivity as two-sided horizontal
+// bars about the result with every input at its median; each bar end is
+// labelled with the input value that produced it.
+func tornadoFigure(b *Bundle) *figure {
+	d := doc(b)
+	if len(d.Tornado) == 0 || !finite(b.TornadoBase) {
+		return nil
+	}
+	scale, xlabel := tornadoScale(b.TornadoOutput)
+	if xlabel == "" {
+		xlabel = "output"
+	}
+	rows := make([]Tornado, 0, len(d.Tornado))
+	for _, r := range d.Tornado {
+		if finite(r.Low) && finite(r.High) {
+			rows = append(rows, r)
+		}
+	}
+	if len(rows) == 0 {
+		return nil
+	}
+	// Smallest swing at the bottom, largest at the top.
+	sort.SliceStable(rows, func(i, j int) bool { return math.Abs(rows[i].High-rows[i].Low) < math.Abs(rows[j].High-rows[j].Low) })
+	base := b.TornadoBase * scale
+	p := newPlot("One-at-a-time sensitivity (tornado)", xlabel, "")
+	const half = 0.32
+	lowCol, highCol := colCapacity, colDemand
+	var lowThumb, highThumb *plotter.Polygon
+	var left, right plotter.XYLabels
+	var leftStyle, rightStyle []text.Style
+	names := make([]string, len(rows))
+	xmin, xmax := base, base
+	for i, r := range rows {
+		names[i] = r.Variable
+		y := float64(i)
+		unit := inputUnit(b, r.Variable)
+		// Draw the longer half first so a shorter one on the same side stays visible.
+		halves := []struct {
+			v, in float64
+			c     any
+			low   bool
+		}{{r.Low * scale, r.LowValue, lowCol, true}, {r.High * scale, r.HighValue, highCol, false}}
+		if math.Abs(halves[1].v-base) > math.Abs(halves[0].v-base) {
+			halves[0], halves[1] = halves[1], halves[0]
+		}
+		for _, h := range halves {
+			pg, err := plotter.NewPolygon(plotter.XYs{{X: base, Y: y - half}, {X: h.v, Y: y - half}, {X: h.v, Y: y + half}, {X: base, Y: y + half}})
+			if err != nil {
+				return nil
+			}
+			pg.LineStyle.Width = 0
+			if h.low {
+				pg.Color = lowCol
+				lowThumb = pg
+			} else {
+				pg.Color = highCol
+				highThumb = pg
+			}
+			p.Add(pg)
+			label := withUnit(h.in, unit)
+			st := textStyle(8, colInk)
+			st.YAlign = draw.YCenter
+			if h.v < base || (h.v == base && h.low) {
+				st.XAlign = draw.XRight
+				left.XYs = append(left.XYs, plotter.XY{X: h.v, Y: y})
+				left.Labels = append(left.Labels, label)
+				leftStyle = append(leftStyle, st)
+			} else {
+				st.XAlign = draw.XLeft
+				right.XYs = append(right.XYs, plotter.XY{X: h.v, Y: y})
+				right.Labels = append(right.Labels, label)
+				rightStyle = append(rightStyle, st)
+			}
+			xmin, xmax = math.Min(xmin, h.v), math.Max(xmax, h.v)
+		}
+	}
+	for _, l := range []struct {
+		xy  plotter.XYLabels
+		st  []text.Style
+		off vg.Length
+	}{{left, leftStyle, -vg.Points(3)}, {right, rightStyle, vg.Points(3)}} {
+		if len(l.xy.XYs) == 0 {
+			continue
+		}
+		lb, err := plotter.NewLabels(l.xy)
+		if err != nil {
+			return nil
+		}
+		lb.TextStyle = l.st
+		lb.Offset = vg.Point{X: l.off}
+		p.Add(lb)
+	}
+	bl, err := plotter.NewLine(plotter.XYs{{X: base, Y: -0.5}, {X: base, Y: float64(len(rows)) - 0.5}})
+	if err != nil {
+		return nil
+	}
+	bl.LineStyle = lineStyle(colInk, 1, true)
+	p.Add(bl)
+	// Room for the value labels beyond the bar ends.
+	span := xmax - xmin
+	if span == 0 {
+		span = math.Max(math.Abs(base), 1)
+	}
+	p.X.Min, p.X.Max = xmin-0.3*span, xmax+0.3*span
+	p.Y.Min, p.Y.Max = -0.6, float64(len(rows))-0.4
+	p.NominalY(names...)
+	p.Y.Tick.Label.Font.Size = 9
+	if lowThumb != nil {
+		p.Legend.Add("input at its low fractile", lowThumb)
+	}
+	if highThumb != nil {
+		p.Legend.Add("input at its high fractile", highThumb)
+	}
+	p.Legend.Add("all inputs at median: "+sig(base, 4), bl)
+	p.Legend.Top = false
+	h := 3.5*vg.Centimeter + vg.Length(len(rows))*0.85*vg.Centimeter
+	return &figure{Name: "tornado", Caption: "Each input in turn at its low and high fractile with the others at their medians; bars are the change of " + xlabel + " from the median result, labelled with the input value.", W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
+}

@@ -1,0 +1,224 @@
+package report
+
+import (
+	"fmt"
+	"html/template"
+	"math"
+	"strconv"
+)
+
+// view is the report's content formatted for reading, shared by the HTML
+// and Markdown writers so that both carry the same facts.
+type view struct {
+	Title, StudyFile, ToolVersion, InputSHA, Seed, Units string
+
+	Result       []KV
+	Verdict      string
+	VerdictClass string // "met", "not-met", "undecided" or ""
+
+	Inputs   []inputRow
+	Check    []CheckRow
+	Nominal  []KV
+	Defaults []string
+
+	TornadoOutput, TornadoBase string
+	Tornado                    []tornadoRow
+	SobolOutput, SobolNote     string
+	Sobol                      []sobolRow
+	FORMBeta, FORMPf           string
+	FORM                       []formRow
+	Spearman                   []KV
+	Influence                  string
+
+	SweepLabel string
+	Sweep      []pointRow
+	Variants   []pointRow
+
+	Updates     []updateRow
+	Diagnostics []KV
+	Warnings    []string
+	Notes       []string
+
+	Pictures map[string]pictureView
+	Caution  string
+}
+
+type inputRow struct{ Name, Dist, Params, Mean, CoV, Unit string }
+
+type tornadoRow struct{ Variable, LowValue, HighValue, Low, High, Swing string }
+
+type sobolRow struct{ Variable, First, FirstCI, Total, TotalCI string }
+
+type formRow struct{ Variable, DesignPoint, Importance string }
+
+type pointRow struct{ Name, Pf, PfCI, Beta string }
+
+type updateRow struct{ Variable, Prior, After, N, Picture string }
+
+// pictureView is a rendered picture ready for the HTML.
+type pictureView struct {
+	Name, Caption string
+	SVG           template.HTML
+}
+
+// makeView formats b for reading.
+func makeView(b *Bundle, pics []picture, notes []string) *view {
+	d := doc(b)
+	v := &view{
+		Title:       d.Title,
+		StudyFile:   b.StudyFile,
+		ToolVersion: d.ToolVersion,
+		InputSHA:    d.InputSHA256,
+		Units:       d.Units,
+		Check:       b.Check,
+		Defaults:    b.Defaults,
+		Diagnostics: b.Diagnostics,
+		Spearman:    b.Spearman,
+		Warnings:    d.Warnings,
+		Notes:       notes,
+		Pictures:    map[string]pictureView{},
+		Caution:     Caution,
+		SobolOutput: b.SobolOutput,
+		SobolNote:   b.SobolNote,
+		SweepLabel:  b.SweepLabel,
+	}
+	if v.Title == "" {
+		v.Title = "strutrisk study"
+	}
+	if d.Seed != nil {
+		v.Seed = strconv.FormatUint(*d.Seed, 10)
+	}
+	f2 := func(x float64) string { return fixed(x, 2) }
+	if d.Pf != nil {
+		v.Result = append(v.Result, KV{"probability of failure pf", prob(*d.Pf)})
+		if len(d.PfCI) == 2 {
+			v.Result = append(v.Result, KV{"95% interval of pf", intervalText(d.PfCI, prob)})
+		}
+		if d.PfCoV != nil {
+			v.Result = append(v.Result, KV{"coefficient of variation of the estimate", percent(*d.PfCoV)})
+		}
+	}
+	if d.Beta != nil {
+		v.Result = append(v.Result, KV{"reliability index β", f2(*d.Beta)})
+		if len(d.BetaCI) == 2 {
+			v.Result = append(v.Result, KV{"95% interval of β", intervalText(d.BetaCI, f2)})
+		}
+	}
+	if vd := targetVerdict(&d); vd != noTarget {
+		v.Result = append(v.Result, KV{"target β", f2(*d.TargetBeta)})
+		v.Verdict = "Target " + verdictText(vd) + "."
+		v.VerdictClass = map[verdict]string{met: "met", notMet: "not-met", undecided: "undecided"}[vd]
+	}
+	if d.ReserveFactor != nil {
+		v.Result = append(v.Result, KV{"reserve factor (load factor at which the target is just met)", f2(*d.ReserveFactor)})
+	}
+	if d.GoverningAxis != "" {
+		v.Result = append(v.Result, KV{"governing axis", d.GoverningAxis})
+	}
+	if d.Method != "" {
+		v.Result = append(v.Result, KV{"method", d.Method})
+	}
+	if d.Evaluations != nil {
+		v.Result = append(v.Result, KV{"limit-state evaluations", thousands(*d.Evaluations)})
+	}
+	if d.Capacity != nil {
+		v.Result = append(v.Result, KV{"capacity: mean, sd, 5% fractile", kN(d.Capacity.Mean) + ", " + kN(d.Capacity.SD) + ", " + kN(d.Capacity.P05)})
+	}
+	if d.Demand != nil {
+		v.Result = append(v.Result, KV{"demand: mean, sd, 95% fractile", kN(d.Demand.Mean) + ", " + kN(d.Demand.SD) + ", " + kN(d.Demand.P95)})
+	}
+
+	for _, in := range b.Inputs {
+		cov := ""
+		if in.CoV != 0 {
+			cov = fixed(in.CoV, 3)
+		}
+		s, u := display(in.Unit)
+		v.Inputs = append(v.Inputs, inputRow{in.Name, in.Dist, in.Params, sig(in.Mean*s, 4), cov, u})
+	}
+	if n := d.Nominal; n != nil {
+		v.Nominal = []KV{
+			{"nominal capacity", kN(n.Capacity)},
+			{"Euler load", kN(n.EulerLoad)},
+			{"slenderness KL/r", sig(n.Slenderness, 4)},
+			{"relative slenderness", fixed(n.RelativeSlenderness, 3)},
+			{"effective length factor K", fixed(n.K, 3)},
+			{"axis", n.Axis},
+		}
+	}
+
+	scale, out := tornadoScale(b.TornadoOutput)
+	v.TornadoOutput = out
+	if len(d.Tornado) > 0 {
+		v.TornadoBase = sig(b.TornadoBase*scale, 4)
+	}
+	for _, t := range d.Tornado {
+		u := inputUnit(b, t.Variable)
+		v.Tornado = append(v.Tornado, tornadoRow{t.Variable, withUnit(t.LowValue, u), withUnit(t.HighValue, u),
+			sig(t.Low*scale, 4), sig(t.High*scale, 4), sig(math.Abs(t.High-t.Low)*scale, 3)})
+	}
+	ci := func(c [2]float64) string { return fixed(c[0], 3) + " to " + fixed(c[1], 3) }
+	for _, s := range d.Sobol {
+		v.Sobol = append(v.Sobol, sobolRow{s.Variable, fixed(s.First, 3), ci(s.FirstCI), fixed(s.Total, 3), ci(s.TotalCI)})
+	}
+	if f := d.FORM; f != nil {
+		v.FORMBeta, v.FORMPf = f2(f.Beta), prob(f.Pf)
+		names := sortedKeys(f.DesignPoint)
+		for _, k := range sortedKeys(f.Importance) {
+			if _, ok := f.DesignPoint[k]; !ok {
+				names = append(names, k)
+			}
+		}
+		for _, k := range names {
+			dp, imp := notAvailable, notAvailable
+			if x, ok := f.DesignPoint[k]; ok {
+				dp = withUnit(x, inputUnit(b, k))
+			}
+			if a, ok := f.Importance[k]; ok {
+				imp = fixed(a, 3)
+			}
+			v.FORM = append(v.FORM, formRow{k, dp, imp})
+		}
+	}
+	if measure, top := topInfluences(&d, 3); len(top) > 0 {
+		s := ""
+		for i, t := range top {
+			if i > 0 {
+				s += ", "
+			}
+			s += fmt.Sprintf("%s (%s)", t.Name, sig(t.Weight, 2))
+		}
+		v.Influence = s + " — by " + measure
+	}
+
+	for _, p := range d.Sweep {
+		v.Sweep = append(v.Sweep, pointRow{sig(p.Value, 4), prob(p.Pf), intervalText(p.PfCI[:], prob), f2(p.Beta)})
+	}
+	for _, p := range d.Variants {
+		v.Variants = append(v.Variants, pointRow{p.Name, prob(p.Pf), intervalText(p.PfCI[:], prob), f2(p.Beta)})
+	}
+	for k, u := range b.Updates {
+		r := updateRow{Variable: u.Variable, N: strconv.Itoa(len(u.Data)), Picture: "update-" + strconv.Itoa(k+1)}
+		if u.Prior != nil {
+			r.Prior = u.Prior.String()
+		}
+		if u.After != nil {
+			r.After = u.After.String()
+		}
+		v.Updates = append(v.Updates, r)
+	}
+	for _, p := range pics {
+		if p.svg != nil {
+			v.Pictures[p.fig.Name] = pictureView{p.fig.Name, p.fig.Caption, template.HTML(inlineSVG(p.svg))}
+		}
+	}
+	return v
+}
+
+// Picture returns the named picture, so templates can ask for it.
+func (v *view) Picture(name string) *pictureView {
+	if p, ok := v.Pictures[name]; ok {
+		return &p
+	}
+	return nil
+}
