@@ -1,12 +1,89 @@
 // Command strutrisk runs reliability and sensitivity studies of columns.
+//
+// Usage:
+//
+//	strutrisk run STUDY.toml [--out DIR] [--seed N] [--samples N] [--method M] [--json] [--require-target] [--workers N]
+//	strutrisk check STUDY.toml [--json]
+//	strutrisk new [NAME]
+//
+// run estimates the probability that the column of a study fails and the
+// inputs that drive it, prints a summary and writes results.json,
+// samples.csv, summary.txt and the report files into the output folder.
+// check validates a study and prints the deterministic picture at nominal
+// values without sampling. new prints a commented starter study.
+//
+// Exit status: 0 the command completed (whether or not the target was
+// met); 1 the target was not met and --require-target was given; 2 bad
+// input (a problem in the study file, an unknown flag, a missing file);
+// 3 an internal failure; 130 the run was interrupted (what finished is
+// written, marked incomplete).
+//
+// Results depend entirely on the inputs and models stated in the study.
+// strutrisk supports, and never replaces, the judgement of a licensed
+// engineer and the codes that apply where the structure stands.
 package main
 
 import (
 	"fmt"
+	"io"
 	"os"
 )
 
+// version is the tool version written into every result document.
+const version = "0.1.0"
+
+// Exit statuses.
+const (
+	exitOK          = 0
+	exitTarget      = 1
+	exitInput       = 2
+	exitInternal    = 3
+	exitInterrupted = 130
+)
+
+const caution = `Caution: results depend entirely on the inputs and models stated in the
+study. strutrisk supports, and never replaces, the judgement of a licensed
+engineer and the codes that apply where the structure stands.`
+
+const usage = `strutrisk estimates how likely a column or strut is to fail, and which
+uncertainty drives that, from a study file (TOML).
+
+Usage:
+  strutrisk run STUDY.toml [flags]     sample the study; print a summary, write results
+  strutrisk check STUDY.toml [--json]  validate; deterministic check at nominal values
+  strutrisk new [NAME]                 print a commented starter study
+  strutrisk COMMAND --help             help on a command
+
+Exit status: 0 done (target met or not), 1 target not met with
+--require-target, 2 bad input, 3 internal failure, 130 interrupted.
+
+` + caution + "\n"
+
 func main() {
-	fmt.Fprintln(os.Stderr, "strutrisk: not built yet")
-	os.Exit(3)
+	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))
+}
+
+// run is the whole command: it reads args (without the program name),
+// writes to stdout and stderr, and returns the exit status.
+func run(args []string, stdout, stderr io.Writer) int {
+	if len(args) == 0 {
+		fmt.Fprint(stderr, usage)
+		return exitInput
+	}
+	switch args[0] {
+	case "run":
+		return runCmd(args[1:], stdout, stderr)
+	case "check":
+		return checkCmd(args[1:], stdout, stderr)
+	case "new":
+		return newCmd(args[1:], stdout, stderr)
+	case "help", "-h", "-help", "--help":
+		fmt.Fprint(stdout, usage)
+		return exitOK
+	case "version", "--version":
+		fmt.Fprintln(stdout, "strutrisk", version)
+		return exitOK
+	}
+	fmt.Fprintf(stderr, "strutrisk: unknown command %q: use run, check or new (strutrisk --help)\n", args[0])
+	return exitInput
 }

@@ -1,0 +1,239 @@
+package main
+
+import (
+	"context"
+	"fmt"
+	"math"
+	"sort"
+
+	"strutrisk/internal/report"
+	"strutrisk/sim"
+)
+
+// results are everything run computed.
+type results struct {
+	l        *loaded
+	settings sim.Settings
+	res      *sim.Result
+	form     *sim.FORMResult
+	formErr  error
+	base     float64
+	tornado  []sim.TornadoRow
+	sobol    []sim.SobolIndex
+	sobolMsg string
+	warnings []string
+}
+
+// analyse runs the estimate and the sensitivity measures.
+func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*results, error) {
+	r := &results{l: l, settings: *s}
+	m := l.md.Sim
+	res, err := sim.Run(ctx, m, s)
+	if err != nil {
+		return nil, err
+	}
+	r.res = res
+	r.warnings = append(r.warnings, res.Warnings...)
+	if res.Incomplete {
+		r.warnings = append(r.warnings, fmt.Sprintf("incomplete: the run was interrupted after %d evaluations; the estimate is from the samples finished", res.Evaluations))
+		return r, nil
+	}
+	bar.stage("FORM")
+	r.form = res.FORM
+	if r.form == nil && len(m.Vars) > 0 {
+		r.form, r.formErr = sim.FORM(m, nil)
+		if r.formErr != nil {
+			r.warnings = append(r.warnings, "form: "+r.formErr.Error())
+		}
+	}
+	if r.form != nil && !r.form.Converged {
+		r.warnings = append(r.warnings, "form: the design-point search did not converge ("+r.form.Status+"); its beta and importance are indicative only")
+	}
+	sens := l.st.Sensitivity
+	margin := l.md.MarginModel()
+	if sens.Tornado && len(m.Vars) > 0 {
+		bar.stage("tornado")
+		base, rows, err := sim.Tornado(margin, &sim.TornadoSettings{Low: sens.TornadoLow, High: sens.High, Output: 0})
+		if err != nil {
+			r.warnings = append(r.warnings, "tornado: "+err.Error())
+		} else {
+			r.base, r.tornado = base, rows
+		}
+	}
+	if sens.Sobol && len(m.Vars) > 1 && ctx.Err() == nil {
+		bar.stage("Sobol indices")
+		idx, err := sim.Sobol(ctx, margin, &sim.SobolSettings{Samples: sens.SobolSamples, Seed: s.Seed, Output: 0, Workers: s.Workers})
+		if err != nil {
+			r.warnings = append(r.warnings, "sobol: "+err.Error())
+		} else {
+			r.sobol = idx
+			r.sobolMsg = sim.SobolIndependenceWarning(margin)
+		}
+	}
+	return r, nil
+}
+
+// document fills the complete result document.
+func (r *results) document() *report.Document {
+	d := r.l.baseDocument()
+	res := r.res
+	d.Method = string(res.Method)
+	seed := r.settings.Seed
+	d.Seed = &seed
+	ev := res.Evaluations
+	d.Evaluations = &ev
+	pf, cov, beta := res.Pf, res.PfCoV, res.Beta
+	d.Pf, d.PfCoV, d.Beta = &pf, finitePtr(cov), finitePtr(beta)
+	d.PfCI = []float64{res.PfCI[0], res.PfCI[1]}
+	d.BetaCI = []float64{finite(res.BetaCI[0]), finite(res.BetaCI[1])}
+	if d.TargetBeta != nil {
+		// The target is met when the estimated pf does not exceed the
+		// target's Phi(-beta_t).
+		meets := res.Pf <= sim.PfFromBeta(*d.TargetBeta)
+		d.MeetsTarget = &meets
+	}
+	for _, o := range res.Outputs {
+		switch o.Name {
+		case "capacity":
+			d.Capacity = summaryOf(o)
+		case "demand":
+			d.Demand = summaryOf(o)
+		}
+	}
+	if f := r.form; f != nil && len(f.Points) > 0 {
+		p := f.Points[0]
+		ff := &report.FORM{Beta: f.Beta, Pf: f.Pf, DesignPoint: map[string]float64{}, Importance: map[string]float64{}}
+		for i, v := range r.l.md.Sim.Vars {
+			ff.DesignPoint[v.Name] = p.X[i]
+			ff.Importance[v.Name] = p.Importance[i]
+		}
+		d.FORM = ff
+	}
+	for _, t := range r.tornado {
+		d.Tornado = append(d.Tornado, report.Tornado{Variable: t.Variable, LowValue: t.LowValue, HighValue: t.HighValue, Low: t.Low, High: t.High})
+	}
+	for _, s := range r.sobol {
+		d.Sobol = append(d.Sobol, report.Sobol{Variable: s.Variable, First: s.First, Total: s.Total, FirstCI: s.FirstCI, TotalCI: s.TotalCI})
+	}
+	d.Warnings = append(d.Warnings, r.warnings...)
+	if r.sobolMsg != "" {
+		d.Warnings = append(d.Warnings, "sobol: "+r.sobolMsg)
+	}
+	return d
+}
+
+func finite(v float64) float64 {
+	if math.IsInf(v, 1) {
+		return math.MaxFloat64
+	}
+	if math.IsInf(v, -1) {
+		return -math.MaxFloat64
+	}
+	return v
+}
+
+// finitePtr returns nil for a value JSON cannot carry (NaN, Inf).
+func finitePtr(v float64) *float64 {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return nil
+	}
+	return &v
+}
+
+func summaryOf(o sim.OutputStats) *report.Summary {
+	s := &report.Summary{Mean: o.Mean, SD: o.SD}
+	q := func(p float64) float64 {
+		for i, l := range sim.QuantileLevels {
+			if l == p && i < len(o.Quantiles) {
+				return o.Quantiles[i]
+			}
+		}
+		return math.NaN()
+	}
+	s.P01, s.P05, s.P50, s.P95, s.P99 = q(0.01), q(0.05), q(0.50), q(0.95), q(0.99)
+	return s
+}
+
+// influential returns the names of the three most influential variables
+// with a short reason: by FORM importance when FORM converged, else by
+// the tornado swing.
+func (r *results) influential() []string {
+	type iv struct {
+		name string
+		v    float64
+	}
+	var list []iv
+	how := ""
+	if f := r.form; f != nil && f.Converged && len(f.Points) > 0 {
+		for i, v := range r.l.md.Sim.Vars {
+			list = append(list, iv{v.Name, f.Points[0].Importance[i]})
+		}
+		how = "FORM importance %.0f %%"
+	} else {
+		total := 0.0
+		for _, t := range r.tornado {
+			total += t.Swing()
+		}
+		for _, t := range r.tornado {
+			list = append(list, iv{t.Variable, t.Swing() / total})
+		}
+		how = "tornado share %.0f %%"
+	}
+	sort.SliceStable(list, func(i, j int) bool { return list[i].v > list[j].v })
+	var out []string
+	for i := 0; i < len(list) && i < 3; i++ {
+		out = append(out, fmt.Sprintf("%s ("+how+")", list[i].name, 100*list[i].v))
+	}
+	return out
+}
+
+// bundle is everything the report draws from.
+func (r *results) bundle() *report.Bundle {
+	l := r.l
+	b := &report.Bundle{
+		Doc:             r.document(),
+		StudyFile:       l.st.File,
+		Inputs:          l.inputs(),
+		Check:           l.checkRows(),
+		Defaults:        l.st.Defaults,
+		Convergence:     r.res.Convergence,
+		Samples:         r.res.Kept,
+		NominalCapacity: l.nom.Capacity,
+		TornadoOutput:   "margin g = capacity - demand (N)",
+		TornadoBase:     r.base,
+		SobolOutput:     "margin g = capacity - demand",
+		SobolNote:       r.sobolMsg,
+	}
+	for i := range r.res.Outputs {
+		o := &r.res.Outputs[i]
+		switch o.Name {
+		case "capacity":
+			b.Capacity = o
+		case "demand":
+			b.Demand = o
+		case "g":
+			b.Margin = o
+		}
+	}
+	b.Diagnostics = []report.KV{
+		{Key: "method", Value: string(r.res.Method)},
+		{Key: "why", Value: r.res.Reason},
+		{Key: "evaluations", Value: fmt.Sprint(r.res.Evaluations)},
+		{Key: "cov of pf", Value: fmt.Sprintf("%.3g", r.res.PfCoV)},
+		{Key: "seed", Value: fmt.Sprint(r.settings.Seed)},
+	}
+	if r.form != nil {
+		b.Diagnostics = append(b.Diagnostics, report.KV{Key: "FORM", Value: fmt.Sprintf("beta %.3f, %d evaluations, %s", r.form.Beta, r.form.Evaluations, r.form.Status)})
+	}
+	if r.res.Kept != nil {
+		if rows, err := sim.SpearmanTable(r.res.Kept, "g"); err == nil {
+			for _, rc := range rows {
+				if math.IsNaN(rc.Rho) || rc.Name == "g" {
+					continue
+				}
+				b.Spearman = append(b.Spearman, report.KV{Key: rc.Name, Value: fmt.Sprintf("%+.3f", rc.Rho)})
+			}
+		}
+	}
+	return b
+}

@@ -1,0 +1,191 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"math"
+	"strings"
+
+	"strutrisk/internal/column"
+	"strutrisk/internal/report"
+	"strutrisk/internal/study"
+)
+
+// loaded is a checked study with its model and nominal picture.
+type loaded struct {
+	st  *study.Study
+	md  *study.Model
+	nom *study.Nominal
+}
+
+// load reads, checks and builds the study at path, printing problems to
+// stderr. A non-zero status means stop.
+func load(path string, stderr io.Writer) (*loaded, int) {
+	st, err := study.Load(path)
+	if err != nil {
+		var se *study.Error
+		if errors.As(err, &se) {
+			for _, p := range se.Problems {
+				fmt.Fprintf(stderr, "strutrisk: %s\n", p)
+			}
+			fmt.Fprintf(stderr, "strutrisk: %d problem%s in %s; nothing was run\n", len(se.Problems), plural(len(se.Problems)), path)
+			return nil, exitInput
+		}
+		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", path, err)
+		return nil, exitInput
+	}
+	md, err := study.Build(st)
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk: %s: member.section: %v\n", path, err)
+		return nil, exitInput
+	}
+	nom, err := md.Nominal()
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", path, err)
+		return nil, exitInput
+	}
+	return &loaded{st: st, md: md, nom: nom}, exitOK
+}
+
+func plural(n int) string {
+	if n == 1 {
+		return ""
+	}
+	return "s"
+}
+
+// baseDocument is the result document without sampling fields.
+func (l *loaded) baseDocument() *report.Document {
+	st, n := l.st, l.nom
+	a := n.Axis
+	d := &report.Document{
+		Title:         st.Title,
+		ToolVersion:   version,
+		InputSHA256:   st.SHA256,
+		Units:         "N-mm-MPa",
+		GoverningAxis: a.String(),
+		Nominal: &report.Nominal{
+			Capacity:            n.Capacity,
+			EulerLoad:           n.Euler[a],
+			Slenderness:         n.Slenderness[a],
+			RelativeSlenderness: n.RelSlenderness[a],
+			K:                   n.Member.K[a],
+			Axis:                a.String(),
+		},
+		Warnings: append([]string{}, st.Warnings...),
+	}
+	if st.HasTarget {
+		t := st.Target
+		d.TargetBeta = &t
+	}
+	return d
+}
+
+// checkRows is the deterministic check, per axis.
+func (l *loaded) checkRows() []report.CheckRow {
+	n := l.nom
+	m := &n.Member
+	row := func(q, unit string, f func(a column.Axis) string) report.CheckRow {
+		return report.CheckRow{Quantity: q, Major: f(column.Major), Minor: f(column.Minor), Unit: unit}
+	}
+	g := func(v float64) string { return fmt.Sprintf("%.4g", v) }
+	rows := []report.CheckRow{
+		row("second moment of area I", "mm4", func(a column.Axis) string { return g(m.Props.I[a]) }),
+		row("radius of gyration r", "mm", func(a column.Axis) string { return fmt.Sprintf("%.1f", m.Props.R[a]) }),
+		row("elastic modulus W", "mm3", func(a column.Axis) string { return g(m.Props.W[a]) }),
+		row("effective length factor K ("+kHow(l.st, 0)+" / "+kHow(l.st, 1)+")", "", func(a column.Axis) string { return fmt.Sprintf("%.3f", m.K[a]) }),
+		row("slenderness K L / r", "", func(a column.Axis) string { return fmt.Sprintf("%.1f", n.Slenderness[a]) }),
+		row("relative slenderness", "", func(a column.Axis) string { return fmt.Sprintf("%.3f", n.RelSlenderness[a]) }),
+		row("Euler load", "kN", func(a column.Axis) string { return fmt.Sprintf("%.1f", n.Euler[a]/1e3) }),
+		row("capacity", "kN", func(a column.Axis) string {
+			if n.AxisCapacity[a] == 0 {
+				return "not checked"
+			}
+			return fmt.Sprintf("%.1f", n.AxisCapacity[a]/1e3)
+		}),
+	}
+	return rows
+}
+
+func kHow(st *study.Study, a int) string {
+	e := st.Ends[a]
+	switch e.How {
+	case "ends":
+		return e.Ends
+	case "springs":
+		return "springs"
+	case "default":
+		return "default"
+	}
+	if e.K != nil && e.K.Random() {
+		return "mean"
+	}
+	return "given"
+}
+
+// inputs lists every input of the study for the report.
+func (l *loaded) inputs() []report.Input {
+	var in []report.Input
+	for _, q := range l.st.Quantities {
+		r := report.Input{Name: q.Path, Unit: q.Unit()}
+		if q.Random() {
+			r.Dist, r.Params = q.DistName, q.Params
+			r.Mean = q.Dist.Mean()
+			if r.Mean != 0 {
+				r.CoV = q.Dist.StdDev() / math.Abs(r.Mean)
+			}
+		} else {
+			r.Dist, r.Mean = "fixed", q.Value
+			r.Params = fmt.Sprintf("%g %s", q.Value, q.Unit())
+		}
+		in = append(in, r)
+	}
+	return in
+}
+
+// checkText is the deterministic check as a person reads it.
+func (l *loaded) checkText() string {
+	var b strings.Builder
+	st, n := l.st, l.nom
+	fmt.Fprintf(&b, "%s\n", st.Title)
+	fmt.Fprintf(&b, "study %s (bare numbers in %s); values below in N, mm, MPa and kN\n\n", st.File, st.Units.Name)
+	fmt.Fprintf(&b, "Nominal member: %s section, A = %.0f mm2, L = %.0f mm, E = %.0f MPa, fy = %.1f MPa\n",
+		st.Section.Name, n.Member.Props.A, n.Member.Length, n.Member.E, n.Member.Fy)
+	if st.Model != "curve" {
+		fmt.Fprintf(&b, "  bow %.2f mm, eccentricity %.2f mm (means of their magnitude)\n", math.Abs(n.Member.Bow), math.Abs(n.Member.Ecc))
+	} else {
+		fmt.Fprintf(&b, "  imperfection factor alpha %.2f (major) / %.2f (minor)\n", n.Member.Alpha[0], n.Member.Alpha[1])
+	}
+	fmt.Fprintf(&b, "\n  %-44s %12s %12s\n", "", "major", "minor")
+	for _, r := range l.checkRows() {
+		q := r.Quantity
+		if r.Unit != "" {
+			q += " (" + r.Unit + ")"
+		}
+		fmt.Fprintf(&b, "  %-44s %12s %12s\n", q, r.Major, r.Minor)
+	}
+	fmt.Fprintf(&b, "\nCapacity model %s: the %s axis governs (%s), capacity %.1f kN", st.Model, n.Axis, n.Governs, n.Capacity/1e3)
+	if n.ModelFactor != 1 {
+		fmt.Fprintf(&b, " (model factor %.3g included)", n.ModelFactor)
+	}
+	fmt.Fprintf(&b, "\nDemand at mean loads %.1f kN", n.Demand/1e3)
+	if n.EffectFactor != 1 {
+		fmt.Fprintf(&b, " (effect factor %.3g included)", n.EffectFactor)
+	}
+	fmt.Fprintf(&b, "; utilisation %.3f\n", n.Utilisation)
+	if len(st.Defaults) > 0 {
+		fmt.Fprintf(&b, "\nDefaults that apply:\n")
+		for _, d := range st.Defaults {
+			fmt.Fprintf(&b, "  - %s\n", d)
+		}
+	}
+	if len(st.Warnings) > 0 {
+		fmt.Fprintf(&b, "\nWarnings:\n")
+		for _, w := range st.Warnings {
+			fmt.Fprintf(&b, "  - %s\n", w)
+		}
+	}
+	fmt.Fprintf(&b, "\n%s\n", caution)
+	return b.String()
+}

@@ -1,0 +1,59 @@
+package main
+
+import (
+	_ "embed"
+	"flag"
+	"fmt"
+	"io"
+	"strings"
+)
+
+//go:embed starter.toml
+var starter string
+
+const newHelp = `Usage: strutrisk new [NAME] > study.toml
+
+Prints a commented starter study on standard output; NAME, if given,
+becomes its title. The starter passes strutrisk check as it stands: edit
+its values to describe your column.
+`
+
+func newCmd(args []string, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("new", flag.ContinueOnError)
+	pos, help, err := parseArgs(fs, args)
+	if help {
+		fmt.Fprint(stdout, newHelp+"\n"+caution+"\n")
+		return exitOK
+	}
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk new: %v (strutrisk new --help)\n", err)
+		return exitInput
+	}
+	if len(pos) > 1 {
+		fmt.Fprintf(stderr, "strutrisk new: give at most one name (quote a name with spaces)\n")
+		return exitInput
+	}
+	title := "A new column study"
+	if len(pos) == 1 {
+		title = pos[0]
+	}
+	fmt.Fprint(stdout, strings.Replace(starter, "{{TITLE}}", tomlEscape(title), 1))
+	return exitOK
+}
+
+// tomlEscape escapes s for a TOML basic string.
+func tomlEscape(s string) string {
+	var b strings.Builder
+	for _, r := range s {
+		switch {
+		case r == '"' || r == '\\':
+			b.WriteByte('\\')
+			b.WriteRune(r)
+		case r < 0x20 || r == 0x7f:
+			fmt.Fprintf(&b, "\\u%04X", r)
+		default:
+			b.WriteRune(r)
+		}
+	}
+	return b.String()
+}

@@ -1,0 +1,67 @@
+package main
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"strutrisk/internal/report"
+	"strutrisk/sim"
+)
+
+// writeOutputs writes the report files of b into dir, atomically.
+func writeOutputs(dir string, b *report.Bundle, formats []string) ([]string, error) {
+	return report.Write(dir, b, formats)
+}
+
+// summary is the concise text run prints on the terminal.
+func (r *results) summary(dir string, files []string) string {
+	var w strings.Builder
+	d := r.document()
+	res := r.res
+	fmt.Fprintf(&w, "%s\n", d.Title)
+	n := r.l.nom
+	fmt.Fprintf(&w, "  nominal capacity   %.1f kN (%s axis, %s), demand at mean loads %.1f kN, utilisation %.2f\n",
+		n.Capacity/1e3, n.Axis, n.Governs, n.Demand/1e3, n.Utilisation)
+	fmt.Fprintf(&w, "  failure prob. pf   %s   95 %% interval [%s, %s]\n", pfText(res.Pf), pfText(res.PfCI[0]), pfText(res.PfCI[1]))
+	fmt.Fprintf(&w, "  reliability beta   %s   95 %% interval [%s, %s]\n", betaText(res.Beta), betaText(res.BetaCI[0]), betaText(res.BetaCI[1]))
+	if d.TargetBeta != nil {
+		verdict := "met"
+		if !*d.MeetsTarget {
+			verdict = "NOT met"
+		}
+		fmt.Fprintf(&w, "  target beta       %.2f (pf %.2g): %s\n", *d.TargetBeta, sim.PfFromBeta(*d.TargetBeta), verdict)
+	}
+	fmt.Fprintf(&w, "  method            %s, %d evaluations, cov of pf %.3f\n", res.Method, res.Evaluations, res.PfCoV)
+	if res.Reason != "" {
+		fmt.Fprintf(&w, "                    (%s)\n", res.Reason)
+	}
+	if inf := r.influential(); len(inf) > 0 {
+		fmt.Fprintf(&w, "  most influential  %s\n", strings.Join(inf, "\n                    "))
+	}
+	for _, x := range d.Warnings {
+		fmt.Fprintf(&w, "  warning: %s\n", x)
+	}
+	if len(files) > 0 {
+		fmt.Fprintf(&w, "  results in        %s/ (%d files: results.json, samples.csv, summary.txt, ...)\n", dir, len(files))
+	}
+	fmt.Fprintf(&w, "\n%s\n", caution)
+	return w.String()
+}
+
+func pfText(p float64) string {
+	if p == 0 {
+		return "0"
+	}
+	return fmt.Sprintf("%.3g", p)
+}
+
+func betaText(b float64) string {
+	if math.IsInf(b, 1) {
+		return "inf"
+	}
+	if math.IsInf(b, -1) {
+		return "-inf"
+	}
+	return fmt.Sprintf("%.2f", b)
+}

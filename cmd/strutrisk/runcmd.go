@@ -1,0 +1,152 @@
+package main
+
+import (
+	"context"
+	"encoding/json"
+	"flag"
+	"fmt"
+	"io"
+	"os"
+	"os/signal"
+	"path/filepath"
+	"syscall"
+
+	"strutrisk/sim"
+)
+
+const runHelp = `Usage: strutrisk run STUDY.toml [flags]
+
+Estimates the probability that the column of the study fails and the
+reliability index, with 95 % intervals, and the inputs that drive them.
+Prints a short summary and writes results.json, samples.csv, summary.txt
+and the report files into the output folder ([output] dir of the study,
+else out/<study name>). Flags override the study's [analysis] settings and
+may stand before or after the study file. Ctrl-C stops sampling; what
+finished is written, marked incomplete, and the exit status is 130.
+
+Flags:
+`
+
+// runOptions are the flags of run.
+type runOptions struct {
+	out           string
+	seed          uint64
+	samples       int64
+	method        string
+	json          bool
+	requireTarget bool
+	workers       int
+	set           map[string]bool
+}
+
+func runCmd(args []string, stdout, stderr io.Writer) int {
+	var o runOptions
+	fs := flag.NewFlagSet("run", flag.ContinueOnError)
+	fs.StringVar(&o.out, "out", "", "write results into `DIR` (default: [output] dir, else out/<study name>)")
+	fs.Uint64Var(&o.seed, "seed", 0, "seed of every random stream (`N`; default: [analysis] seed)")
+	fs.Int64Var(&o.samples, "samples", 0, "at most `N` model evaluations (default: [analysis] samples)")
+	fs.StringVar(&o.method, "method", "", "estimator `M`: auto, monte-carlo, latin-hypercube, form, importance, subset, conditional-qmc")
+	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
+	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
+	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores); results do not depend on it")
+	pos, help, err := parseArgs(fs, args)
+	if help {
+		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+caution+"\n")
+		return exitOK
+	}
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk run: %v (strutrisk run --help)\n", err)
+		return exitInput
+	}
+	if len(pos) != 1 {
+		fmt.Fprintf(stderr, "strutrisk run: give one study file (strutrisk run --help)\n")
+		return exitInput
+	}
+	o.set = map[string]bool{}
+	fs.Visit(func(f *flag.Flag) { o.set[f.Name] = true })
+	if o.set["method"] && !validMethod(o.method) {
+		fmt.Fprintf(stderr, "strutrisk run: --method %q is not a method: use auto, monte-carlo, latin-hypercube, form, importance, subset or conditional-qmc\n", o.method)
+		return exitInput
+	}
+	if o.set["samples"] && (o.samples < 1 || o.samples > 1e10) {
+		fmt.Fprintf(stderr, "strutrisk run: --samples %d must be between 1 and 1e10\n", o.samples)
+		return exitInput
+	}
+	if o.set["workers"] && o.workers < 1 {
+		fmt.Fprintf(stderr, "strutrisk run: --workers %d must be 1 or more\n", o.workers)
+		return exitInput
+	}
+
+	l, code := load(pos[0], stderr)
+	if code != exitOK {
+		return code
+	}
+	st := l.st
+	settings := sim.Settings{
+		Method:    st.Analysis.Method,
+		Samples:   st.Analysis.Samples,
+		TargetCoV: st.Analysis.TargetCoV,
+		Seed:      st.Analysis.Seed,
+		Workers:   o.workers,
+	}
+	if o.set["method"] {
+		settings.Method = sim.Method(o.method)
+	}
+	if o.set["samples"] {
+		settings.Samples = o.samples
+	}
+	if o.set["seed"] {
+		settings.Seed = o.seed
+	}
+	dir := o.out
+	if dir == "" {
+		dir = st.Output.Dir
+	}
+	if dir == "" {
+		dir = filepath.Join("out", st.Name())
+	}
+
+	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt, syscall.SIGTERM)
+	defer stop()
+	bar := newProgress(stderr, !o.json)
+	settings.Progress = bar.update
+	r, err := analyse(ctx, l, &settings, bar)
+	bar.done()
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", st.File, err)
+		return exitInternal
+	}
+	b := r.bundle()
+	files, err := writeOutputs(dir, b, st.Output.Formats)
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk: writing %s: %v\n", dir, err)
+		return exitInternal
+	}
+	if o.json {
+		out, err := json.MarshalIndent(b.Doc, "", "  ")
+		if err != nil {
+			fmt.Fprintf(stderr, "strutrisk: %v\n", err)
+			return exitInternal
+		}
+		stdout.Write(append(out, '\n'))
+	} else {
+		fmt.Fprint(stdout, r.summary(dir, files))
+	}
+	switch {
+	case r.res.Incomplete:
+		fmt.Fprintf(stderr, "strutrisk: interrupted: the results in %s are from the samples finished and are marked incomplete\n", dir)
+		return exitInterrupted
+	case o.requireTarget && b.Doc.MeetsTarget != nil && !*b.Doc.MeetsTarget:
+		fmt.Fprintf(stderr, "strutrisk: the target reliability index %.2f is not met\n", *b.Doc.TargetBeta)
+		return exitTarget
+	}
+	return exitOK
+}
+
+func validMethod(m string) bool {
+	switch sim.Method(m) {
+	case sim.Auto, sim.MonteCarlo, sim.LatinHypercube, sim.FORMMethod, sim.Importance, sim.Subset, sim.ConditionalQMC:
+		return true
+	}
+	return false
+}

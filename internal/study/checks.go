@@ -1,0 +1,286 @@
+package study
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"gonum.org/v1/gonum/mat"
+
+	"strutrisk/internal/column"
+	"strutrisk/sim"
+)
+
+func shapeOf(i int) column.Shape {
+	return []column.Shape{column.ShapeI, column.ShapeRHS, column.ShapeCHS, column.ShapeRect, column.ShapeRound, column.ShapeCustom}[i]
+}
+
+func methodOf(s string) sim.Method { return sim.Method(s) }
+
+func endsK(name string) (float64, error) { return column.EndsK(name) }
+
+// correlation reads the [[correlation]] tables once every variable is
+// known, and checks the matrix.
+func (p *parser) correlation(top *table) {
+	v, ok := top.get("correlation")
+	if !ok {
+		return
+	}
+	list, ok := v.([]map[string]any)
+	if !ok {
+		p.errorf("correlation", "write correlations as [[correlation]] tables with pair = [\"a\", \"b\"] and rho")
+		return
+	}
+	random := map[string]bool{}
+	var names []string
+	for _, q := range p.st.Quantities {
+		if q.Random() {
+			random[q.Path] = true
+			names = append(names, q.Path)
+		}
+	}
+	seen := map[[2]string]string{}
+	for i, m := range list {
+		t := &table{path: fmt.Sprintf("correlation[%d]", i), m: m, used: map[string]bool{}}
+		var pair [2]string
+		good := true
+		if pv, ok := t.get("pair"); ok {
+			l, isList := pv.([]any)
+			if !isList || len(l) != 2 {
+				p.errorf(t.key("pair"), "pair names two random variables, e.g. pair = [\"material.yield\", \"material.modulus\"]")
+				good = false
+			} else {
+				for j, x := range l {
+					s, _ := x.(string)
+					pair[j] = s
+					key := t.key("pair")
+					switch {
+					case random[s]:
+					case p.byPath[s] != nil:
+						p.errorf(key, "%q is a fixed quantity, not a random variable: a correlation needs two random variables", s)
+						good = false
+					default:
+						if near, ok := nearest(s, names); ok {
+							p.errorf(key, "%q is not a random variable of this study; did you mean %q?", s, near)
+						} else if len(names) > 0 {
+							p.errorf(key, "%q is not a random variable of this study (they are %s)", s, strings.Join(names, ", "))
+						} else {
+							p.errorf(key, "%q is not a random variable: this study has none", s)
+						}
+						good = false
+					}
+				}
+				if good && pair[0] == pair[1] {
+					p.errorf(t.key("pair"), "a variable is not correlated with itself: name two different variables")
+					good = false
+				}
+			}
+		} else {
+			p.required(t, "pair", "pair = [\"a\", \"b\"] naming two random variables")
+			good = false
+		}
+		rho, ok := p.number(t, "rho")
+		if !ok {
+			if _, given := m["rho"]; !given {
+				p.required(t, "rho", "the correlation coefficient, between -1 and 1")
+			}
+			good = false
+		} else if !(rho > -1 && rho < 1) {
+			p.errorf(t.key("rho"), "rho = %g must lie strictly between -1 and 1 (a correlation of ±1 means one variable: write it once)", rho)
+			good = false
+		}
+		p.unknown(t, []string{"pair", "rho"})
+		if !good {
+			continue
+		}
+		k := pair
+		if k[0] > k[1] {
+			k[0], k[1] = k[1], k[0]
+		}
+		if prev, dup := seen[k]; dup {
+			p.errorf(t.path, "the pair %s, %s is already correlated in %s: give it once", pair[0], pair[1], prev)
+			continue
+		}
+		seen[k] = t.path
+		if rho != 0 {
+			p.st.Corr = append(p.st.Corr, sim.Correlation{A: pair[0], B: pair[1], Rho: rho})
+		}
+	}
+	if len(p.st.Corr) == 0 || len(p.probs) > 0 {
+		return
+	}
+	// The matrix of the given coefficients must be positive definite.
+	idx := map[string]int{}
+	for _, c := range p.st.Corr {
+		for _, n := range []string{c.A, c.B} {
+			if _, ok := idx[n]; !ok {
+				idx[n] = len(idx)
+			}
+		}
+	}
+	r := mat.NewSymDense(len(idx), nil)
+	for i := range len(idx) {
+		r.SetSym(i, i, 1)
+	}
+	for _, c := range p.st.Corr {
+		r.SetSym(idx[c.A], idx[c.B], c.Rho)
+	}
+	var ch mat.Cholesky
+	if !ch.Factorize(r) {
+		p.errorf("correlation", "the correlation coefficients do not form a positive definite matrix (they contradict each other): lower the largest ones")
+	}
+}
+
+// checkModel checks what the capacity model needs from the rest of the
+// study.
+func (p *parser) checkModel() {
+	st := p.st
+	switch st.Model {
+	case "perry-robertson":
+		if st.Bow == nil {
+			p.errorf("imperfection.bow", "missing: model perry-robertson needs an initial bow, e.g. [imperfection] bow = \"L/1000\" (or choose another capacity.model)")
+		}
+	case "secant":
+		if st.Ecc == nil {
+			p.errorf("imperfection.eccentricity", "missing: model secant needs a load eccentricity, e.g. [imperfection] eccentricity = \"10 mm\"")
+		}
+	case "curve":
+		if st.Bow != nil || st.Ecc != nil {
+			p.warnf("capacity.model: the buckling curve already contains the imperfections; imperfection.bow and imperfection.eccentricity are ignored")
+		}
+	case "beam-column":
+		if st.Bow == nil && st.Ecc == nil && len(st.Profile) == 0 {
+			p.errorf("imperfection.bow", "missing: model beam-column needs a bow, an eccentricity or capacity.profile")
+		}
+		if len(st.Profile) > 0 && st.Bow != nil {
+			p.warnf("capacity.profile: the measured profile replaces imperfection.bow")
+		}
+	}
+}
+
+// checkSection computes the section at nominal values to catch
+// impossible dimensions before sampling.
+func (p *parser) checkSection() {
+	st := p.st
+	if st.Section.Dims == nil {
+		return
+	}
+	sec := st.Section.at(func(q *Quantity) float64 { return nominalValue(q, 0) })
+	if st.Section.Shape == column.ShapeCustom {
+		imaj, imin := st.Section.Dims["i_major"], st.Section.Dims["i_minor"]
+		if imaj != nil && imin != nil && nominalValue(imin, 0) > nominalValue(imaj, 0) {
+			p.errorf(imin.Path, "i_minor is larger than i_major: the major axis is the stiffer one, swap them (and c_major, c_minor)")
+			return
+		}
+	}
+	if _, err := sec.Properties(); err != nil {
+		p.errorf("member.section", "%v", strings.TrimPrefix(err.Error(), "column: "))
+	}
+	for _, k := range []string{"thickness", "flange", "web", "depth", "width", "diameter"} {
+		q := st.Section.Dims[k]
+		if q == nil || !q.Random() {
+			continue
+		}
+		// A random dimension must keep the section valid over its range.
+		for _, pr := range []float64{1e-6, 1 - 1e-6} {
+			s := st.Section.at(func(x *Quantity) float64 {
+				if x == q {
+					return q.Dist.Quantile(pr)
+				}
+				return nominalValue(x, 0)
+			})
+			if _, err := s.Properties(); err != nil {
+				p.errorf(q.Path, "the section becomes impossible within this distribution (at its %g fractile: %v): narrow it", pr, strings.TrimPrefix(err.Error(), "column: "))
+				break
+			}
+		}
+	}
+	if loss := st.Section.Dims["thickness_loss"]; loss != nil && loss.Random() {
+		s := st.Section.at(func(x *Quantity) float64 {
+			if x == loss {
+				return loss.Dist.Quantile(1 - 1e-6)
+			}
+			return nominalValue(x, 0)
+		})
+		if _, err := s.Properties(); err != nil {
+			p.errorf(loss.Path, "the largest thickness losses of this distribution leave no section (%v): narrow it or add upper", strings.TrimPrefix(err.Error(), "column: "))
+		}
+	}
+}
+
+// at returns the column section with each dimension from value.
+func (s SectionSpec) at(value func(*Quantity) float64) column.Section {
+	sec := column.Section{Shape: s.Shape}
+	for k, q := range s.Dims {
+		*sectionField(&sec, k) = value(q)
+	}
+	return sec
+}
+
+// sectionField returns the field of sec that key sets.
+func sectionField(sec *column.Section, key string) *float64 {
+	switch key {
+	case "depth":
+		return &sec.Depth
+	case "width":
+		return &sec.Width
+	case "flange":
+		return &sec.Flange
+	case "web":
+		return &sec.Web
+	case "root":
+		return &sec.Root
+	case "thickness":
+		return &sec.Thickness
+	case "diameter":
+		return &sec.Diameter
+	case "area":
+		return &sec.Area
+	case "i_major":
+		return &sec.IMajor
+	case "i_minor":
+		return &sec.IMinor
+	case "c_major":
+		return &sec.CMajor
+	case "c_minor":
+		return &sec.CMinor
+	case "thickness_loss":
+		return &sec.ThicknessLoss
+	}
+	panic("study: unknown section key " + key)
+}
+
+// nominalValue is a quantity's value at nominal: the mean of a random
+// one; length scales L/n values (0 when they were already resolved).
+func nominalValue(q *Quantity, length float64) float64 {
+	v := q.Value
+	if q.Random() {
+		v = q.Dist.Mean()
+	}
+	if q.Relative {
+		v *= length
+	}
+	return v
+}
+
+// meanMagnitude returns E|X| of a distribution: its mean when it cannot
+// go negative, else by integration over the standard normal (trapezoid
+// rule on [-9, 9], ample for the smooth integrand).
+func meanMagnitude(d sim.Dist) float64 {
+	if d.CDF(0) == 0 {
+		return d.Mean()
+	}
+	const n = 3600
+	const lo, hi = -9.0, 9.0
+	h := (hi - lo) / n
+	sum := 0.0
+	for i := 0; i <= n; i++ {
+		u := lo + float64(i)*h
+		w := math.Exp(-u*u/2) / math.Sqrt(2*math.Pi)
+		if i == 0 || i == n {
+			w /= 2
+		}
+		sum += w * math.Abs(d.FromStdNormal(u))
+	}
+	return sum * h
+}

@@ -1,0 +1,409 @@
+package study
+
+import (
+	"errors"
+	"math"
+
+	"strutrisk/internal/column"
+	"strutrisk/sim"
+)
+
+// Fields of one evaluation: every input the capacity and the demand read.
+const (
+	fLength = iota
+	fE
+	fFy
+	fBow
+	fEcc
+	fK0 // K major; fK0+1 minor
+	fK1
+	fAlpha0
+	fAlpha1
+	fModel  // model factor
+	fEffect // effect factor
+	fTop0   // end springs, per axis
+	fTop1
+	fBot0
+	fBot1
+	fLoads // sum of the loads
+	fSec0  // section dimensions in the order of secKeys
+)
+
+// secKeys are the section dimensions in field order.
+var secKeys = [...]string{"depth", "width", "flange", "web", "root", "thickness", "diameter", "area", "i_major", "i_minor", "c_major", "c_minor", "thickness_loss"}
+
+const nFields = fSec0 + len(secKeys)
+
+// values holds one evaluation's inputs.
+type values [nFields]float64
+
+// binding places one random variable into the fields it sets.
+type binding struct {
+	fields []int
+	add    bool // loads add up
+}
+
+// Model is the reliability model of a study: the sim.Model whose limit
+// state is g = (model factor x capacity) - (effect factor x sum of loads),
+// with outputs "capacity" (model factor included) and "demand".
+type Model struct {
+	// Sim is the model to hand to the sim package.
+	Sim *sim.Model
+	// Study is the study it was built from.
+	Study *Study
+
+	base      values
+	binds     []binding
+	relBow    bool // bow and eccentricity are fractions of the length
+	relEcc    bool
+	secRandom bool
+	sec       column.Section
+	props     column.Props
+	springs   [2]bool
+	kDynamic  bool // spring K depends on random inputs
+	k         [2]float64
+	model     int
+	beam      beamOpts
+}
+
+// Capacity models.
+const (
+	modelFirstYield = iota
+	modelCurve
+	modelBeam
+)
+
+// Outputs of the model, in the order of Model.Sim.Outputs.
+const (
+	OutCapacity = 0
+	OutDemand   = 1
+)
+
+// targets lists the fields each quantity of st sets.
+func targets(st *Study) map[*Quantity][]int {
+	t := map[*Quantity][]int{}
+	add := func(q *Quantity, f int) {
+		if q != nil {
+			t[q] = append(t[q], f)
+		}
+	}
+	add(st.Length, fLength)
+	add(st.Modulus, fE)
+	add(st.Yield, fFy)
+	add(st.Bow, fBow)
+	add(st.Ecc, fEcc)
+	add(st.ModelFactor, fModel)
+	add(st.EffectFactor, fEffect)
+	for _, q := range st.Loads {
+		add(q, fLoads)
+	}
+	for a := range 2 {
+		e := st.Ends[a]
+		switch e.How {
+		case "springs":
+			add(e.Top, fTop0+a)
+			add(e.Bottom, fBot0+a)
+		default:
+			add(e.K, fK0+a)
+		}
+		add(st.Alpha[a], fAlpha0+a)
+	}
+	for i, k := range secKeys {
+		add(st.Section.Dims[k], fSec0+i)
+	}
+	return t
+}
+
+// Build makes the reliability model of a checked study.
+func Build(st *Study) (*Model, error) {
+	md := &Model{Study: st}
+	md.base[fModel] = 1
+	md.base[fEffect] = 1
+	tg := targets(st)
+	var vars []sim.Variable
+	seen := map[*Quantity]bool{}
+	isLoad := map[*Quantity]bool{}
+	for _, q := range st.Loads {
+		isLoad[q] = true
+	}
+	place := func(q *Quantity) {
+		if seen[q] {
+			return
+		}
+		seen[q] = true
+		fields := tg[q]
+		if q.Random() {
+			vars = append(vars, sim.Variable{Name: q.Path, Dist: q.Dist, Unit: q.Unit()})
+			md.binds = append(md.binds, binding{fields: fields, add: isLoad[q]})
+			return
+		}
+		for _, f := range fields {
+			if isLoad[q] {
+				md.base[f] += q.Value
+			} else {
+				md.base[f] = q.Value
+			}
+		}
+	}
+	// Quantities in file order, then the ones made up (K from ends or
+	// defaults, alpha from a curve name).
+	for _, q := range st.Quantities {
+		if _, ok := tg[q]; ok {
+			place(q)
+		}
+	}
+	for q := range tg {
+		if !seen[q] {
+			if q.Random() {
+				return nil, errors.New("study: internal: unregistered random quantity " + q.Path)
+			}
+			place(q)
+		}
+	}
+	md.relBow = st.Bow != nil && st.Bow.Relative
+	md.relEcc = st.Ecc != nil && st.Ecc.Relative
+	md.sec = column.Section{Shape: st.Section.Shape}
+	for i, k := range secKeys {
+		if q := st.Section.Dims[k]; q != nil {
+			*sectionField(&md.sec, k) = md.base[fSec0+i]
+			if q.Random() {
+				md.secRandom = true
+			}
+		}
+	}
+	if !md.secRandom {
+		p, err := md.sec.Properties()
+		if err != nil {
+			return nil, err
+		}
+		md.props = p
+	}
+	for a := range 2 {
+		md.springs[a] = st.Ends[a].How == "springs"
+	}
+	if md.springs[0] || md.springs[1] {
+		for _, q := range []*Quantity{st.Length, st.Modulus, st.Ends[0].Top, st.Ends[0].Bottom, st.Ends[1].Top, st.Ends[1].Bottom} {
+			if q != nil && q.Random() {
+				md.kDynamic = true
+			}
+		}
+		md.kDynamic = md.kDynamic || md.secRandom
+		if !md.kDynamic {
+			for a := range 2 {
+				if md.springs[a] {
+					k, err := md.springK(&md.base, &md.props, a)
+					if err != nil {
+						return nil, err
+					}
+					md.k[a] = k
+				}
+			}
+		}
+	}
+	switch st.Model {
+	case "curve":
+		md.model = modelCurve
+	case "beam-column":
+		md.model = modelBeam
+		md.beam = beamOptions(st)
+	default:
+		md.model = modelFirstYield
+	}
+	m := &sim.Model{
+		Vars:    vars,
+		Corr:    st.Corr,
+		G:       md.g,
+		Outputs: []string{"capacity", "demand"},
+	}
+	md.Sim = m
+	md.linear()
+	return md, nil
+}
+
+// linear marks the limit state as linear in the random load with the
+// largest spread that is correlated with nothing: g = h - c x_j with c the
+// effect factor.
+func (md *Model) linear() {
+	corr := map[string]bool{}
+	for _, c := range md.Study.Corr {
+		corr[c.A], corr[c.B] = true, true
+	}
+	best, bestSD := -1, 0.0
+	for i, b := range md.binds {
+		v := md.Sim.Vars[i]
+		if b.add && !corr[v.Name] && v.Dist.StdDev() > bestSD {
+			best, bestSD = i, v.Dist.StdDev()
+		}
+	}
+	if best < 0 {
+		return
+	}
+	j := best
+	md.Sim.Linear = &sim.Linear{
+		Index: j,
+		Split: func(x []float64) (h, c float64) {
+			v := md.base
+			for i, b := range md.binds {
+				if i != j {
+					md.set(&v, b, x[i])
+				}
+			}
+			capacity, demand := md.eval(&v)
+			return capacity - demand, v[fEffect]
+		},
+	}
+}
+
+func (md *Model) set(v *values, b binding, x float64) {
+	for _, f := range b.fields {
+		if b.add {
+			v[f] += x
+		} else {
+			v[f] = x
+		}
+	}
+}
+
+// g is the limit state of the sim.Model.
+func (md *Model) g(x, out []float64) float64 {
+	v := md.base
+	for i, b := range md.binds {
+		md.set(&v, b, x[i])
+	}
+	capacity, demand := md.eval(&v)
+	if out != nil {
+		out[OutCapacity] = capacity
+		out[OutDemand] = demand
+	}
+	return capacity - demand
+}
+
+// eval returns the capacity (model factor included) and the demand of one
+// set of inputs. A member the mechanics cannot evaluate (a sample outside
+// the physical range) has no capacity.
+func (md *Model) eval(v *values) (capacity, demand float64) {
+	demand = v[fEffect] * v[fLoads]
+	res, _, err := md.capacity(v, md.Study.Axis)
+	if err != nil || !(res.N >= 0) {
+		return 0, demand
+	}
+	return v[fModel] * res.N, demand
+}
+
+// member assembles the column member of one set of inputs.
+func (md *Model) member(v *values) (column.Member, column.Section, error) {
+	m := column.Member{E: v[fE], Fy: v[fFy], Length: v[fLength], Bow: v[fBow], Ecc: v[fEcc]}
+	if md.relBow {
+		m.Bow *= m.Length
+	}
+	if md.relEcc {
+		m.Ecc *= m.Length
+	}
+	sec := md.sec
+	if md.secRandom {
+		for i := range secKeys {
+			if f := sectionPtr(&sec, i); f != nil {
+				*f = v[fSec0+i]
+			}
+		}
+		p, err := sec.Properties()
+		if err != nil {
+			return m, sec, err
+		}
+		m.Props = p
+	} else {
+		m.Props = md.props
+	}
+	for a := range 2 {
+		switch {
+		case !md.springs[a]:
+			m.K[a] = v[fK0+a]
+		case md.kDynamic:
+			k, err := md.springK(v, &m.Props, a)
+			if err != nil {
+				return m, sec, err
+			}
+			m.K[a] = k
+		default:
+			m.K[a] = md.k[a]
+		}
+	}
+	m.Alpha = [2]float64{v[fAlpha0], v[fAlpha1]}
+	if md.model == modelCurve {
+		m.Bow, m.Ecc = 0, 0
+	}
+	return m, sec, nil
+}
+
+// sectionPtr is sectionField by index, without the string switch.
+func sectionPtr(s *column.Section, i int) *float64 {
+	switch i {
+	case 0:
+		return &s.Depth
+	case 1:
+		return &s.Width
+	case 2:
+		return &s.Flange
+	case 3:
+		return &s.Web
+	case 4:
+		return &s.Root
+	case 5:
+		return &s.Thickness
+	case 6:
+		return &s.Diameter
+	case 7:
+		return &s.Area
+	case 8:
+		return &s.IMajor
+	case 9:
+		return &s.IMinor
+	case 10:
+		return &s.CMajor
+	case 11:
+		return &s.CMinor
+	case 12:
+		return &s.ThicknessLoss
+	}
+	return nil
+}
+
+func (md *Model) springK(v *values, p *column.Props, a int) (float64, error) {
+	return column.SpringKFromStiffness(v[fTop0+a], v[fBot0+a], v[fE], p.I[a], v[fLength])
+}
+
+// capacity evaluates the capacity model (without the model factor).
+func (md *Model) capacity(v *values, axis column.Axis) (column.Result, column.Member, error) {
+	m, sec, err := md.member(v)
+	if err != nil {
+		return column.Result{}, m, err
+	}
+	var res column.Result
+	switch md.model {
+	case modelCurve:
+		res, err = column.Curve(&m, axis)
+	case modelBeam:
+		res, err = md.beamCapacity(&m, sec, v, axis)
+	default:
+		res, err = column.FirstYield(&m, axis)
+	}
+	if err == nil && (math.IsNaN(res.N) || math.IsInf(res.N, 0)) {
+		err = errors.New("study: capacity is not a number")
+	}
+	return res, m, err
+}
+
+// MarginModel returns the model with one output, "margin", equal to the
+// limit state g: the output sensitivity measures look at.
+func (md *Model) MarginModel() *sim.Model {
+	m := *md.Sim
+	m.Outputs = []string{"margin"}
+	m.G = func(x, out []float64) float64 {
+		g := md.g(x, nil)
+		if out != nil {
+			out[0] = g
+		}
+		return g
+	}
+	return &m
+}

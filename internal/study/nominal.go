@@ -1,0 +1,86 @@
+package study
+
+import (
+	"fmt"
+
+	"strutrisk/internal/column"
+)
+
+// Nominal is the deterministic picture of a study at nominal values: every
+// input at its mean, bow and eccentricity at the mean of their magnitude,
+// the model factor at its mean.
+type Nominal struct {
+	// Member is the nominal member (N, mm, MPa), Section its section.
+	Member  column.Member
+	Section column.Section
+	// Per axis (indexed by column.Major, column.Minor): Euler load, K L / r,
+	// relative slenderness and capacity (model factor included; 0 for an
+	// axis that is not checked).
+	Euler, Slenderness, RelSlenderness, AxisCapacity [2]float64
+	// Capacity is the governing capacity, Axis its axis and Governs the
+	// limit that governs it.
+	Capacity float64
+	Axis     column.Axis
+	Governs  string
+	// ModelFactor and EffectFactor are the factors' means; Demand is the
+	// effect factor times the sum of the mean loads.
+	ModelFactor, EffectFactor, Demand float64
+	// Utilisation is Demand / Capacity.
+	Utilisation float64
+}
+
+// Nominal evaluates the model at nominal values.
+func (md *Model) Nominal() (*Nominal, error) {
+	st := md.Study
+	v := md.base
+	for i, b := range md.binds {
+		q := md.quantity(i)
+		x := q.Dist.Mean()
+		if q == st.Bow || q == st.Ecc {
+			x = meanMagnitude(q.Dist)
+		}
+		md.set(&v, b, x)
+	}
+	n := &Nominal{ModelFactor: v[fModel], EffectFactor: v[fEffect]}
+	n.Demand = v[fEffect] * v[fLoads]
+	m, sec, err := md.member(&v)
+	if err != nil {
+		return nil, fmt.Errorf("at nominal values: %v", err)
+	}
+	if err := m.Validate(column.Both); err != nil {
+		return nil, fmt.Errorf("at nominal values: %v", err)
+	}
+	n.Member, n.Section = m, sec
+	for a := column.Major; a <= column.Minor; a++ {
+		n.Euler[a] = column.Euler(&m, a)
+		n.Slenderness[a] = column.Slenderness(&m, a)
+		n.RelSlenderness[a] = column.RelativeSlenderness(&m, a)
+		if st.Axis != column.Both && st.Axis != a {
+			continue
+		}
+		res, _, err := md.capacity(&v, a)
+		if err != nil {
+			return nil, fmt.Errorf("at nominal values, %s axis: %v", a, err)
+		}
+		n.AxisCapacity[a] = v[fModel] * res.N
+		// The weaker axis governs; a tie reports minor.
+		if n.Governs == "" || n.AxisCapacity[a] <= n.Capacity {
+			n.Capacity, n.Axis, n.Governs = n.AxisCapacity[a], a, res.Governs
+		}
+	}
+	if n.Capacity > 0 {
+		n.Utilisation = n.Demand / n.Capacity
+	}
+	return n, nil
+}
+
+// quantity returns the study quantity of the i-th random variable.
+func (md *Model) quantity(i int) *Quantity {
+	name := md.Sim.Vars[i].Name
+	for _, q := range md.Study.Quantities {
+		if q.Path == name {
+			return q
+		}
+	}
+	panic("study: no quantity for variable " + name)
+}

@@ -1,0 +1,948 @@
+package study
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"path/filepath"
+	"sort"
+	"strings"
+
+	"github.com/BurntSushi/toml"
+
+	"strutrisk/internal/column"
+)
+
+// parser walks a decoded study file, collecting problems as it goes.
+type parser struct {
+	file   string
+	data   string
+	sys    System
+	lines  map[string]int
+	probs  []Problem
+	st     *Study
+	opts   map[*Quantity]qopt
+	byPath map[string]*Quantity
+}
+
+func newParser(name string, data []byte) *parser {
+	return &parser{
+		file:   name,
+		data:   string(data),
+		sys:    systems["N-mm"],
+		st:     &Study{},
+		opts:   map[*Quantity]qopt{},
+		byPath: map[string]*Quantity{},
+	}
+}
+
+// errorf records a problem at key.
+func (p *parser) errorf(key, format string, args ...any) {
+	p.probs = append(p.probs, Problem{File: p.file, Line: p.line(key), Key: key, Msg: fmt.Sprintf(format, args...)})
+}
+
+func (p *parser) warnf(format string, args ...any) {
+	p.st.Warnings = append(p.st.Warnings, fmt.Sprintf(format, args...))
+}
+
+func (p *parser) defaultf(format string, args ...any) {
+	p.st.Defaults = append(p.st.Defaults, fmt.Sprintf(format, args...))
+}
+
+// line returns the line of key, or of its nearest parent that has one.
+func (p *parser) line(key string) int {
+	for key != "" {
+		if n, ok := p.lines[key]; ok {
+			return n
+		}
+		i := strings.LastIndexAny(key, ".[")
+		if i < 0 {
+			return 0
+		}
+		key = key[:i]
+	}
+	return 0
+}
+
+// table is one TOML table being read; get marks the keys it reads.
+type table struct {
+	path string
+	m    map[string]any
+	used map[string]bool
+}
+
+func (t *table) get(key string) (any, bool) {
+	if t == nil {
+		return nil, false
+	}
+	v, ok := t.m[key]
+	if ok {
+		t.used[key] = true
+	}
+	return v, ok
+}
+
+func (t *table) key(k string) string {
+	if t.path == "" {
+		return k
+	}
+	return t.path + "." + k
+}
+
+// sub returns the table under key, nil when it is absent (or not a table,
+// which is reported).
+func (p *parser) sub(t *table, key string) *table {
+	v, ok := t.get(key)
+	if !ok {
+		return nil
+	}
+	m, ok := v.(map[string]any)
+	if !ok {
+		p.errorf(t.key(key), "must be a table ([%s]), not %s", t.key(key), tomlType(v))
+		return nil
+	}
+	return &table{path: t.key(key), m: m, used: map[string]bool{}}
+}
+
+// unknown reports every key of t that was not read, suggesting near
+// misses among known.
+func (p *parser) unknown(t *table, known []string) {
+	if t == nil {
+		return
+	}
+	for _, k := range sortedKeys(t.m) {
+		if t.used[k] {
+			continue
+		}
+		where := "in [" + t.path + "]"
+		if t.path == "" {
+			where = "at the top of the file"
+		}
+		if near, ok := nearest(k, known); ok {
+			p.errorf(t.key(k), "unknown key %s; did you mean %s?", where, t.key(near))
+		} else {
+			p.errorf(t.key(k), "unknown key %s (known keys: %s)", where, strings.Join(known, ", "))
+		}
+	}
+}
+
+// str reads a text value.
+func (p *parser) str(t *table, key string) (string, bool) {
+	v, ok := t.get(key)
+	if !ok {
+		return "", false
+	}
+	s, ok := v.(string)
+	if !ok {
+		p.errorf(t.key(key), "must be text in quotes, not %s", tomlType(v))
+		return "", false
+	}
+	return s, true
+}
+
+// choice reads a text value that must be one of options.
+func (p *parser) choice(t *table, key string, options []string) (string, bool) {
+	s, ok := p.str(t, key)
+	if !ok {
+		return "", false
+	}
+	for _, o := range options {
+		if s == o {
+			return s, true
+		}
+	}
+	if near, ok := nearest(s, options); ok {
+		p.errorf(t.key(key), "%q is not a choice; did you mean %q? (one of %s)", s, near, strings.Join(options, ", "))
+	} else {
+		p.errorf(t.key(key), "%q is not a choice: use one of %s", s, strings.Join(options, ", "))
+	}
+	return "", false
+}
+
+// number reads a plain number (not a quantity).
+func (p *parser) number(t *table, key string) (float64, bool) {
+	v, ok := t.get(key)
+	if !ok {
+		return 0, false
+	}
+	switch x := v.(type) {
+	case int64:
+		return float64(x), true
+	case float64:
+		if math.IsNaN(x) || math.IsInf(x, 0) {
+			p.errorf(t.key(key), "%v is not a usable number", x)
+			return 0, false
+		}
+		return x, true
+	}
+	p.errorf(t.key(key), "must be a plain number, not %s", tomlType(v))
+	return 0, false
+}
+
+// q reads the quantity t.key and registers it.
+func (p *parser) q(t *table, key string, o qopt) *Quantity {
+	v, ok := t.get(key)
+	if !ok {
+		return nil
+	}
+	return p.register(p.quantity(t.key(key), v, o), o)
+}
+
+func (p *parser) register(q *Quantity, o qopt) *Quantity {
+	if q == nil {
+		return nil
+	}
+	p.opts[q] = o
+	p.byPath[q.Path] = q
+	p.st.Quantities = append(p.st.Quantities, q)
+	return q
+}
+
+// perAxis reads a value given once for both axes or as { major, minor }.
+func (p *parser) perAxis(t *table, key string, o qopt) (qs [2]*Quantity, given bool) {
+	v, ok := t.get(key)
+	if !ok {
+		return qs, false
+	}
+	m, isMap := v.(map[string]any)
+	if !isMap || m["dist"] != nil {
+		q := p.register(p.quantity(t.key(key), v, o), o)
+		return [2]*Quantity{q, q}, true
+	}
+	at := &table{path: t.key(key), m: m, used: map[string]bool{}}
+	for a, name := range []string{"major", "minor"} {
+		if _, ok := at.m[name]; !ok {
+			p.errorf(at.path, "a per-axis table needs both major and minor (or give one value for both axes)")
+			continue
+		}
+		qs[a] = p.q(at, name, o)
+	}
+	p.unknown(at, []string{"major", "minor"})
+	return qs, true
+}
+
+// parse reads the whole study.
+func (p *parser) parse() *Study {
+	var raw map[string]any
+	if _, err := toml.Decode(p.data, &raw); err != nil {
+		var pe toml.ParseError
+		if errors.As(err, &pe) {
+			msg := pe.Message
+			if pe.Usage != "" {
+				msg += " (" + strings.TrimSpace(strings.SplitN(pe.Usage, "\n", 2)[0]) + ")"
+			}
+			p.probs = append(p.probs, Problem{File: p.file, Line: pe.Position.Line, Key: pe.LastKey, Msg: "not valid TOML: " + msg})
+		} else {
+			p.probs = append(p.probs, Problem{File: p.file, Msg: "not valid TOML: " + err.Error()})
+		}
+		return nil
+	}
+	p.lines = keyLines(p.data)
+	top := &table{m: raw, used: map[string]bool{}}
+	st := p.st
+
+	// Units first: they decide how every bare number reads.
+	if u, ok := p.choice(top, "units", []string{"N-mm", "kN-m", "kip-in"}); ok {
+		p.sys = systems[u]
+	} else if _, given := raw["units"]; !given {
+		p.defaultf("units: not given; bare numbers are read in N, mm and MPa")
+	}
+	st.Units = p.sys
+	if t, ok := p.str(top, "title"); ok {
+		st.Title = t
+	} else if _, given := raw["title"]; !given {
+		st.Title = strings.TrimSuffix(filepath.Base(p.file), filepath.Ext(p.file))
+		p.defaultf("title: not given; the file name %q is used", st.Title)
+	}
+
+	p.member(top)
+	p.material(top)
+	p.imperfection(top)
+	p.loads(top)
+	p.capacity(top)
+	p.target(top)
+	p.analysis(top)
+	p.sensitivity(top)
+	p.output(top)
+	p.sweep(top)
+	p.variants(top)
+	p.unknown(top, []string{"title", "units", "member", "material", "imperfection", "capacity", "loads", "correlation", "target", "analysis", "sensitivity", "sweep", "variant", "output"})
+	if len(p.probs) > 0 {
+		return st
+	}
+
+	// L/n values become millimetres when the length is fixed.
+	length := 0.0
+	if st.Length != nil && !st.Length.Random() {
+		length = st.Length.Value
+	}
+	for _, q := range st.Quantities {
+		p.resolve(q, length)
+	}
+	for _, q := range st.Quantities {
+		if q.spec != nil {
+			p.build(q, p.opts[q])
+		}
+	}
+	if len(p.probs) > 0 {
+		return st
+	}
+	p.correlation(top)
+	p.checkModel()
+	p.checkSection()
+	return st
+}
+
+// required reports a missing key.
+func (p *parser) required(t *table, key, what string) {
+	p.errorf(t.key(key), "missing: %s", what)
+}
+
+func (p *parser) member(top *table) {
+	t := p.sub(top, "member")
+	if t == nil {
+		if _, ok := top.m["member"]; !ok {
+			p.errorf("member", "missing table [member]: add it with length and a [member.section]")
+		}
+		return
+	}
+	st := p.st
+	if st.Length = p.q(t, "length", qopt{dim: Length, need: positive}); st.Length == nil {
+		if _, ok := t.m["length"]; !ok {
+			p.required(t, "length", "the member length, e.g. length = \"5.2 m\"")
+		}
+	}
+	kOpt := qopt{dim: Dimensionless, need: positive}
+	kBoth, hasK := p.perAxis(t, "k", kOpt)
+	kMaj := p.q(t, "k_major", kOpt)
+	kMin := p.q(t, "k_minor", kOpt)
+	ends, hasEnds := p.str(t, "ends")
+	sOpt := qopt{dim: Spring, need: nonNegative, inf: true}
+	top2, hasTop := p.perAxis(t, "spring_top", sOpt)
+	bot, hasBot := p.perAxis(t, "spring_bottom", sOpt)
+
+	endK := 0.0
+	if hasEnds {
+		canon, ok := endNames[ends]
+		if !ok {
+			names := sortedKeys(endNames)
+			if near, ok := nearest(ends, names); ok {
+				p.errorf(t.key("ends"), "%q is not an end condition; did you mean %q?", ends, near)
+			} else {
+				p.errorf(t.key("ends"), "%q is not an end condition: use one of %s", ends, strings.Join(names, ", "))
+			}
+			hasEnds = false
+		} else {
+			k, err := endsK(canon)
+			if err != nil {
+				p.errorf(t.key("ends"), "%v", err)
+				hasEnds = false
+			}
+			endK = k
+		}
+	}
+	for a, axis := range []string{"major", "minor"} {
+		var how []string
+		var spec EndSpec
+		if hasK {
+			how = append(how, t.key("k"))
+			spec = EndSpec{How: "k", K: kBoth[a]}
+		}
+		if own := []*Quantity{kMaj, kMin}[a]; own != nil {
+			how = append(how, own.Path)
+			spec = EndSpec{How: "k", K: own}
+		}
+		if hasEnds {
+			how = append(how, t.key("ends"))
+			spec = EndSpec{How: "ends", Ends: ends, K: &Quantity{Path: t.key("ends"), Value: endK, Line: p.line(t.key("ends"))}}
+		}
+		if hasTop || hasBot {
+			how = append(how, t.key("spring_top/spring_bottom"))
+			spec = EndSpec{How: "springs", Top: top2[a], Bottom: bot[a]}
+			if !hasTop || !hasBot {
+				missing := "spring_bottom"
+				if !hasTop {
+					missing = "spring_top"
+				}
+				p.errorf(t.key(missing), "missing: end springs need both spring_top and spring_bottom (0 for a pinned end, \"rigid\" for a fixed one)")
+			}
+		}
+		switch len(how) {
+		case 0:
+			spec = EndSpec{How: "default", K: &Quantity{Path: "member.k_" + axis, Value: 1}}
+			p.defaultf("member.k_%s: no k, ends or springs for the %s axis; K = 1 (pinned-pinned) is used", axis, axis)
+			p.warnf("member.k_%s: the %s axis has no end conditions given; K = 1 assumed", axis, axis)
+		case 1:
+		default:
+			p.errorf(how[1], "the %s axis has two end specifications (%s): give one", axis, strings.Join(how, " and "))
+		}
+		p.st.Ends[a] = spec
+	}
+	p.section(t)
+	p.unknown(t, []string{"length", "k", "k_major", "k_minor", "ends", "spring_top", "spring_bottom", "section"})
+}
+
+// endNames maps accepted end-condition names to the canonical ones.
+var endNames = map[string]string{
+	"pinned-pinned": "pinned-pinned",
+	"fixed-free":    "fixed-free", "free-fixed": "fixed-free",
+	"fixed-fixed":  "fixed-fixed",
+	"fixed-pinned": "fixed-pinned", "pinned-fixed": "fixed-pinned",
+}
+
+// sectionKeys lists the required and optional keys of each shape.
+var sectionKeys = map[string]struct {
+	shape    int
+	required []string
+	optional []string
+}{
+	"I":      {0, []string{"depth", "width", "flange", "web"}, []string{"root", "thickness_loss"}},
+	"RHS":    {1, []string{"depth", "width", "thickness"}, []string{"thickness_loss"}},
+	"CHS":    {2, []string{"diameter", "thickness"}, []string{"thickness_loss"}},
+	"rect":   {3, []string{"depth", "width"}, []string{"thickness_loss"}},
+	"round":  {4, []string{"diameter"}, []string{"thickness_loss"}},
+	"custom": {5, []string{"area", "i_major", "i_minor", "c_major", "c_minor"}, nil},
+}
+
+var sectionDims = map[string]qopt{
+	"depth": {dim: Length, need: positive}, "width": {dim: Length, need: positive},
+	"flange": {dim: Length, need: positive}, "web": {dim: Length, need: positive},
+	"root": {dim: Length, need: nonNegative}, "thickness": {dim: Length, need: positive},
+	"diameter": {dim: Length, need: positive}, "area": {dim: Area, need: positive},
+	"i_major": {dim: SecondMoment, need: positive}, "i_minor": {dim: SecondMoment, need: positive},
+	"c_major": {dim: Length, need: positive}, "c_minor": {dim: Length, need: positive},
+	"thickness_loss": {dim: Length, need: nonNegative},
+}
+
+func (p *parser) section(member *table) {
+	t := p.sub(member, "section")
+	if t == nil {
+		if _, ok := member.m["section"]; !ok {
+			p.errorf("member.section", "missing table [member.section]: give shape and its dimensions, e.g. shape = \"I\", depth, width, flange, web")
+		}
+		return
+	}
+	shapes := []string{"I", "RHS", "CHS", "rect", "round", "custom"}
+	name, ok := p.str(t, "shape")
+	if !ok {
+		if _, given := t.m["shape"]; !given {
+			p.required(t, "shape", "shape = one of "+strings.Join(shapes, ", "))
+		}
+		p.markAll(t)
+		return
+	}
+	canon := ""
+	for _, s := range shapes {
+		if strings.EqualFold(s, name) {
+			canon = s
+		}
+	}
+	if canon == "" {
+		if near, ok := nearest(name, shapes); ok {
+			p.errorf(t.key("shape"), "%q is not a shape; did you mean %q?", name, near)
+		} else {
+			p.errorf(t.key("shape"), "%q is not a shape: use one of %s", name, strings.Join(shapes, ", "))
+		}
+		p.markAll(t)
+		return
+	}
+	keys := sectionKeys[canon]
+	spec := SectionSpec{Name: canon, Dims: map[string]*Quantity{}}
+	spec.Shape = shapeOf(keys.shape)
+	for _, k := range keys.required {
+		if _, given := t.m[k]; !given {
+			p.required(t, k, fmt.Sprintf("shape %s needs %s", canon, strings.Join(keys.required, ", ")))
+			continue
+		}
+		if q := p.q(t, k, sectionDims[k]); q != nil {
+			spec.Dims[k] = q
+		}
+	}
+	for _, k := range keys.optional {
+		if q := p.q(t, k, sectionDims[k]); q != nil {
+			spec.Dims[k] = q
+		}
+	}
+	if _, given := t.m["thickness_loss"]; given && canon == "custom" {
+		t.used["thickness_loss"] = true
+		p.errorf(t.key("thickness_loss"), "a custom section has no faces to lose thickness from: reduce area, i_major, i_minor instead")
+	}
+	// Keys that belong to another shape get a pointed message.
+	for _, k := range sortedKeys(t.m) {
+		if t.used[k] || k == "shape" {
+			continue
+		}
+		if _, isDim := sectionDims[k]; isDim {
+			t.used[k] = true
+			p.errorf(t.key(k), "shape %s does not take %s (it takes %s)", canon, k, strings.Join(append(append([]string{}, keys.required...), keys.optional...), ", "))
+		}
+	}
+	p.unknown(t, append(append([]string{"shape"}, keys.required...), keys.optional...))
+	p.st.Section = spec
+}
+
+func (p *parser) markAll(t *table) {
+	for k := range t.m {
+		t.used[k] = true
+	}
+}
+
+func (p *parser) material(top *table) {
+	t := p.sub(top, "material")
+	if t == nil {
+		if _, ok := top.m["material"]; !ok {
+			p.errorf("material", "missing table [material]: give modulus and yield")
+		}
+		return
+	}
+	o := qopt{dim: Stress, need: positive}
+	if p.st.Modulus = p.q(t, "modulus", o); p.st.Modulus == nil {
+		if _, ok := t.m["modulus"]; !ok {
+			p.required(t, "modulus", "the elastic modulus, e.g. modulus = \"205 GPa\"")
+		}
+	}
+	if p.st.Yield = p.q(t, "yield", o); p.st.Yield == nil {
+		if _, ok := t.m["yield"]; !ok {
+			p.required(t, "yield", "the yield strength, e.g. yield = \"275 MPa\"")
+		}
+	}
+	p.unknown(t, []string{"modulus", "yield"})
+}
+
+func (p *parser) imperfection(top *table) {
+	t := p.sub(top, "imperfection")
+	if t == nil {
+		return
+	}
+	o := qopt{dim: Length, rel: true}
+	p.st.Bow = p.q(t, "bow", o)
+	p.st.Ecc = p.q(t, "eccentricity", o)
+	p.unknown(t, []string{"bow", "eccentricity"})
+}
+
+func (p *parser) loads(top *table) {
+	t := p.sub(top, "loads")
+	if t == nil {
+		if _, ok := top.m["loads"]; !ok {
+			p.errorf("loads", "missing table [loads]: give at least one axial load, e.g. dead = \"620 kN\"")
+		}
+		return
+	}
+	// Loads keep the order of the file.
+	names := sortedKeys(t.m)
+	sort.SliceStable(names, func(i, j int) bool { return p.line(t.key(names[i])) < p.line(t.key(names[j])) })
+	for _, k := range names {
+		if k == "effect_factor" {
+			p.st.EffectFactor = p.q(t, k, qopt{dim: Dimensionless, need: positive})
+			continue
+		}
+		if near, ok := nearest(k, []string{"effect_factor"}); ok && len(k) > 6 {
+			t.used[k] = true
+			p.errorf(t.key(k), "unknown key in [loads]; did you mean loads.%s? (if it is a load, name it differently)", near)
+			continue
+		}
+		if q := p.q(t, k, qopt{dim: Force}); q != nil {
+			p.st.Loads = append(p.st.Loads, q)
+		}
+	}
+	if len(t.m) == 0 || len(t.m) == 1 && t.m["effect_factor"] != nil {
+		p.errorf("loads", "no loads: give at least one axial load, e.g. dead = \"620 kN\"")
+	}
+}
+
+func (p *parser) capacity(top *table) {
+	t := p.sub(top, "capacity")
+	st := p.st
+	st.Axis = column.Both
+	if t == nil {
+		t = &table{path: "capacity", m: map[string]any{}, used: map[string]bool{}}
+	}
+	models := []string{"perry-robertson", "secant", "curve", "beam-column"}
+	if m, ok := p.choice(t, "model", models); ok {
+		st.Model = m
+	} else if _, given := t.m["model"]; !given {
+		st.Model = "perry-robertson"
+		p.defaultf("capacity.model: not given; perry-robertson is used")
+	}
+	if a, ok := p.choice(t, "axis", []string{"both", "major", "minor"}); ok {
+		st.Axis = map[string]column.Axis{"major": column.Major, "minor": column.Minor, "both": column.Both}[a]
+	} else if _, given := t.m["axis"]; !given {
+		p.defaultf("capacity.axis: not given; both axes are checked and each sample takes the weaker")
+	}
+	st.ModelFactor = p.q(t, "model_factor", qopt{dim: Dimensionless, need: positive})
+
+	// Buckling curve: by name or by alpha, once or per axis.
+	curves, hasCurve := p.curves(t)
+	alphas, hasAlpha := p.perAxis(t, "alpha", qopt{dim: Dimensionless, need: nonNegative})
+	if hasCurve && hasAlpha {
+		p.errorf(t.key("alpha"), "give curve or alpha, not both")
+	}
+	if hasCurve {
+		for a, c := range curves {
+			if c == "" {
+				continue
+			}
+			st.Curve[a] = c
+			st.Alpha[a] = &Quantity{Path: t.key("curve"), Line: p.line(t.key("curve")), Value: curveAlpha[c]}
+		}
+	}
+	if hasAlpha {
+		st.Alpha = alphas
+	}
+	if (hasCurve || hasAlpha) && st.Model != "curve" && st.Model != "" {
+		key := "curve"
+		if hasAlpha {
+			key = "alpha"
+		}
+		p.errorf(t.key(key), "%s applies to model = \"curve\" only (the model is %q)", key, st.Model)
+	}
+	if st.Model == "curve" && !hasCurve && !hasAlpha {
+		p.errorf(t.key("model"), "model \"curve\" needs a buckling curve: add curve = \"b\" (a0, a, b, c, d) or alpha = 0.34")
+	}
+
+	if l, ok := p.choice(t, "limit", []string{"first-yield", "ultimate"}); ok {
+		st.Limit = l
+	}
+	if r, ok := p.choice(t, "residual_stress", []string{"none", "hot-rolled", "welded", "cold-formed"}); ok {
+		st.Residual = r
+	}
+	if v, ok := t.get("profile"); ok {
+		st.Profile = p.profile(t.key("profile"), v)
+	}
+	for _, k := range []string{"limit", "residual_stress", "profile"} {
+		if _, given := t.m[k]; given && st.Model != "beam-column" && st.Model != "" {
+			p.errorf(t.key(k), "%s applies to model = \"beam-column\" only (the model is %q)", k, st.Model)
+		}
+	}
+	if st.Model == "beam-column" && !beamAvailable {
+		p.errorf(t.key("model"), "model \"beam-column\" is not available in this build yet: use perry-robertson, secant or curve")
+	}
+	if st.Model == "beam-column" {
+		if st.Limit == "" {
+			st.Limit = "first-yield"
+			if _, given := t.m["limit"]; !given {
+				p.defaultf("capacity.limit: not given; the beam-column stops at first yield")
+			}
+		}
+		if st.Limit == "first-yield" && st.Residual != "" && st.Residual != "none" {
+			p.errorf(t.key("residual_stress"), "residual stresses act only with limit = \"ultimate\"")
+		}
+		if st.Limit == "ultimate" && st.Residual == "" {
+			st.Residual = "none"
+			p.defaultf("capacity.residual_stress: not given; no residual stresses")
+		}
+	}
+	p.unknown(t, []string{"model", "curve", "alpha", "axis", "limit", "residual_stress", "profile", "model_factor"})
+}
+
+// curveAlpha are the imperfection factors of the buckling curves,
+// EN 1993-1-1:2005 Table 6.1.
+var curveAlpha = map[string]float64{"a0": 0.13, "a": 0.21, "b": 0.34, "c": 0.49, "d": 0.76}
+
+func (p *parser) curves(t *table) (c [2]string, given bool) {
+	v, ok := t.get("curve")
+	if !ok {
+		return c, false
+	}
+	check := func(key string, v any) string {
+		s, ok := v.(string)
+		if !ok {
+			p.errorf(key, "a buckling curve is a name in quotes: \"a0\", \"a\", \"b\", \"c\" or \"d\"")
+			return ""
+		}
+		if _, ok := curveAlpha[s]; !ok {
+			p.errorf(key, "%q is not a buckling curve: use \"a0\", \"a\", \"b\", \"c\" or \"d\"", s)
+			return ""
+		}
+		return s
+	}
+	if m, ok := v.(map[string]any); ok {
+		at := &table{path: t.key("curve"), m: m, used: map[string]bool{}}
+		for a, name := range []string{"major", "minor"} {
+			x, ok := at.get(name)
+			if !ok {
+				p.errorf(at.path, "a per-axis table needs both major and minor (or give one curve for both axes)")
+				continue
+			}
+			c[a] = check(at.key(name), x)
+		}
+		p.unknown(at, []string{"major", "minor"})
+		return c, true
+	}
+	s := check(t.key("curve"), v)
+	return [2]string{s, s}, true
+}
+
+// profile reads measured bow offsets.
+func (p *parser) profile(key string, v any) []float64 {
+	list, ok := v.([]any)
+	if !ok || len(list) < 3 {
+		p.errorf(key, "profile must be a list of at least 3 measured offsets at equal spacing, e.g. [0.0, 1.8, 3.1, 2.6, 0.0]")
+		return nil
+	}
+	out := make([]float64, len(list))
+	for i, x := range list {
+		pv, ok := p.scalar(fmt.Sprintf("%s[%d]", key, i), x, qopt{dim: Length})
+		if !ok {
+			return nil
+		}
+		out[i] = pv.v
+	}
+	return out
+}
+
+func (p *parser) target(top *table) {
+	t := p.sub(top, "target")
+	if t == nil {
+		return
+	}
+	if b, ok := p.number(t, "beta"); ok {
+		if b < 0 || b > 10 {
+			p.errorf(t.key("beta"), "beta = %g is outside 0..10: a target reliability index is usually 2 to 5.5", b)
+		} else {
+			p.st.Target, p.st.HasTarget = b, true
+		}
+	} else if _, given := t.m["beta"]; !given {
+		p.required(t, "beta", "the target reliability index, e.g. beta = 3.8")
+	}
+	p.unknown(t, []string{"beta"})
+}
+
+// MaxSamples bounds analysis.samples.
+const MaxSamples = 1e10
+
+func (p *parser) analysis(top *table) {
+	t := p.sub(top, "analysis")
+	a := &p.st.Analysis
+	if t == nil {
+		t = &table{path: "analysis", m: map[string]any{}, used: map[string]bool{}}
+	}
+	methods := []string{"auto", "monte-carlo", "latin-hypercube", "form", "importance", "subset", "conditional-qmc"}
+	if m, ok := p.choice(t, "method", methods); ok {
+		a.Method = methodOf(m)
+	} else if _, given := t.m["method"]; !given {
+		a.Method = methodOf("auto")
+		p.defaultf("analysis.method: not given; auto picks the estimator")
+	}
+	if n, ok := p.count(t, "samples", MaxSamples); ok {
+		a.Samples = int64(n)
+	} else if _, given := t.m["samples"]; !given {
+		a.Samples = 1_000_000
+		p.defaultf("analysis.samples: not given; at most 1000000 evaluations")
+	}
+	if c, ok := p.number(t, "target_cov"); ok {
+		if !(c > 0 && c < 1) {
+			p.errorf(t.key("target_cov"), "target_cov = %g must be between 0 and 1 (e.g. 0.05)", c)
+		}
+		a.TargetCoV = c
+	} else if _, given := t.m["target_cov"]; !given {
+		a.TargetCoV = 0.05
+		p.defaultf("analysis.target_cov: not given; sampling stops once the cov of pf is 0.05")
+	}
+	if s, ok := p.count(t, "seed", math.MaxInt64); ok {
+		a.Seed = uint64(s)
+	} else if _, given := t.m["seed"]; !given {
+		a.Seed = 1
+		p.defaultf("analysis.seed: not given; seed 1")
+	}
+	p.unknown(t, []string{"method", "samples", "target_cov", "seed"})
+}
+
+// count reads a whole number in [0, max] (1 or more for samples).
+func (p *parser) count(t *table, key string, max float64) (float64, bool) {
+	v, ok := t.get(key)
+	if !ok {
+		return 0, false
+	}
+	var f float64
+	switch x := v.(type) {
+	case int64:
+		f = float64(x)
+	case float64:
+		f = x
+	default:
+		p.errorf(t.key(key), "must be a whole number, not %s", tomlType(v))
+		return 0, false
+	}
+	switch {
+	case math.IsNaN(f) || f != math.Trunc(f):
+		p.errorf(t.key(key), "%v must be a whole number", v)
+	case f < 0 || key == "samples" && f < 1:
+		p.errorf(t.key(key), "%v must be positive", v)
+	case f > max:
+		p.errorf(t.key(key), "%v is more than %g: lower it", v, max)
+	default:
+		return f, true
+	}
+	return 0, false
+}
+
+func (p *parser) sensitivity(top *table) {
+	s := &p.st.Sensitivity
+	s.Tornado, s.TornadoLow, s.High = true, 0.05, 0.95
+	s.Sobol, s.SobolSamples = true, 2048
+	t := p.sub(top, "sensitivity")
+	if t == nil {
+		p.defaultf("sensitivity: not given; tornado between the 5 %% and 95 %% fractiles, Sobol indices from 2048 samples")
+		return
+	}
+	if v, ok := t.get("tornado"); ok {
+		switch x := v.(type) {
+		case bool:
+			s.Tornado = x
+		case map[string]any:
+			tt := &table{path: t.key("tornado"), m: x, used: map[string]bool{}}
+			if lo, ok := p.number(tt, "low"); ok {
+				s.TornadoLow = lo
+			}
+			if hi, ok := p.number(tt, "high"); ok {
+				s.High = hi
+			}
+			if !(s.TornadoLow > 0 && s.TornadoLow < s.High && s.High < 1) {
+				p.errorf(tt.path, "low and high are fractiles with 0 < low < high < 1, e.g. { low = 0.05, high = 0.95 }")
+			}
+			p.unknown(tt, []string{"low", "high"})
+		default:
+			p.errorf(t.key("tornado"), "tornado is true, false or { low = 0.05, high = 0.95 }")
+		}
+	}
+	if v, ok := t.get("sobol"); ok {
+		switch x := v.(type) {
+		case bool:
+			s.Sobol = x
+		case map[string]any:
+			tt := &table{path: t.key("sobol"), m: x, used: map[string]bool{}}
+			if n, ok := p.count(tt, "samples", 1e7); ok {
+				if n < 64 {
+					p.errorf(tt.key("samples"), "%g samples are too few for Sobol indices: give 1000 or more", n)
+				}
+				s.SobolSamples = int(n)
+			}
+			p.unknown(tt, []string{"samples"})
+		default:
+			p.errorf(t.key("sobol"), "sobol is true, false or { samples = 20000 }")
+		}
+	}
+	p.unknown(t, []string{"tornado", "sobol"})
+}
+
+func (p *parser) output(top *table) {
+	t := p.sub(top, "output")
+	o := &p.st.Output
+	if t == nil {
+		return
+	}
+	if d, ok := p.str(t, "dir"); ok {
+		if strings.TrimSpace(d) == "" {
+			p.errorf(t.key("dir"), "dir is empty: give a folder, e.g. \"out/bay3\"")
+		}
+		o.Dir = d
+	}
+	if v, ok := t.get("formats"); ok {
+		known := []string{"html", "json", "csv", "svg", "png", "txt"}
+		list, ok := v.([]any)
+		if !ok {
+			p.errorf(t.key("formats"), "formats is a list, e.g. [\"html\", \"json\", \"csv\"]")
+		}
+		for i, x := range list {
+			s, _ := x.(string)
+			found := false
+			for _, k := range known {
+				found = found || k == s
+			}
+			if !found {
+				p.errorf(fmt.Sprintf("%s[%d]", t.key("formats"), i), "%v is not a format: use %s", x, strings.Join(known, ", "))
+				continue
+			}
+			o.Formats = append(o.Formats, s)
+		}
+	}
+	p.unknown(t, []string{"dir", "formats"})
+}
+
+func (p *parser) sweep(top *table) {
+	t := p.sub(top, "sweep")
+	if t == nil {
+		return
+	}
+	sw := &Sweep{}
+	name, ok := p.str(t, "parameter")
+	if !ok {
+		if _, given := t.m["parameter"]; !given {
+			p.required(t, "parameter", "the quantity to sweep, e.g. parameter = \"member.length\"")
+		}
+	}
+	sw.Parameter = name
+	if v, ok := t.get("values"); ok {
+		list, isList := v.([]any)
+		if !isList || len(list) == 0 {
+			p.errorf(t.key("values"), "values is a non-empty list of quantities, e.g. [\"3 m\", \"4 m\"]")
+		}
+		if q := p.byPath[name]; q != nil || name == "" {
+			o := p.opts[q]
+			for i, x := range list {
+				if qq := p.quantity(fmt.Sprintf("%s[%d]", t.key("values"), i), x, o); qq != nil {
+					sw.Values = append(sw.Values, qq)
+				}
+			}
+		}
+	} else {
+		p.required(t, "values", "the values to sweep, e.g. values = [\"3 m\", \"4 m\"]")
+	}
+	if name != "" && p.byPath[name] == nil {
+		p.unknownPath(t.key("parameter"), name)
+	}
+	p.unknown(t, []string{"parameter", "values"})
+	p.st.Sweep = sw
+	p.warnf("sweep: checked, but this version does not run sweeps yet; only the base study is run")
+}
+
+func (p *parser) variants(top *table) {
+	v, ok := top.get("variant")
+	if !ok {
+		return
+	}
+	list, ok := v.([]map[string]any)
+	if !ok {
+		p.errorf("variant", "write variants as [[variant]] tables with name and set")
+		return
+	}
+	for i, m := range list {
+		t := &table{path: fmt.Sprintf("variant[%d]", i), m: m, used: map[string]bool{}}
+		var va Variant
+		va.Set = map[string]*Quantity{}
+		if name, ok := p.str(t, "name"); ok {
+			va.Name = name
+		} else {
+			p.required(t, "name", "a name for the variant")
+		}
+		if st := p.sub(t, "set"); st != nil {
+			for _, k := range sortedKeys(st.m) {
+				st.used[k] = true
+				q := p.byPath[k]
+				if q == nil {
+					p.unknownPath(st.key(k), k)
+					continue
+				}
+				if qq := p.quantity(st.key(k), st.m[k], p.opts[q]); qq != nil {
+					va.Set[k] = qq
+				}
+			}
+		} else if _, given := m["set"]; !given {
+			p.required(t, "set", "the quantities the variant changes, e.g. set = { \"imperfection.bow\" = \"L/500\" }")
+		}
+		p.unknown(t, []string{"name", "set"})
+		p.st.Variants = append(p.st.Variants, va)
+	}
+	p.warnf("variant: checked, but this version does not run variants yet; only the base study is run")
+}
+
+// unknownPath reports a name that should be a quantity's path.
+func (p *parser) unknownPath(key, name string) {
+	paths := sortedKeys(p.byPath)
+	if near, ok := nearest(name, paths); ok {
+		p.errorf(key, "%q is not a quantity of this study; did you mean %q?", name, near)
+	} else {
+		p.errorf(key, "%q is not a quantity of this study (they are %s)", name, strings.Join(paths, ", "))
+	}
+}

@@ -1,0 +1,147 @@
+package study
+
+import (
+	"crypto/sha256"
+	"encoding/hex"
+	"errors"
+	"os"
+	"path/filepath"
+	"strings"
+
+	"strutrisk/internal/column"
+	"strutrisk/sim"
+)
+
+// Study is a checked study file with every quantity in N, mm and MPa.
+type Study struct {
+	// File is the study's name as given to Load; SHA256 is the hex digest
+	// of its bytes.
+	File, SHA256 string
+	Title        string
+	// Units is the unit system of bare numbers ("N-mm", "kN-m", "kip-in").
+	Units System
+
+	// Quantities lists every numeric input in the order of the file.
+	Quantities []*Quantity
+
+	Length   *Quantity
+	Section  SectionSpec
+	Modulus  *Quantity
+	Yield    *Quantity
+	Ends     [2]EndSpec // indexed by column.Major, column.Minor
+	Bow, Ecc *Quantity  // nil when not given
+	// Capacity model.
+	Model        string // perry-robertson | secant | curve | beam-column
+	Axis         column.Axis
+	Alpha        [2]*Quantity // model "curve"
+	Curve        [2]string    // curve letters when given by name
+	Limit        string       // beam-column: first-yield | ultimate
+	Residual     string       // beam-column: none | hot-rolled | welded | cold-formed
+	Profile      []float64    // beam-column: measured bow offsets (mm)
+	ModelFactor  *Quantity    // nil means 1
+	Loads        []*Quantity
+	EffectFactor *Quantity // nil means 1
+	Corr         []sim.Correlation
+
+	// Target is the target reliability index; HasTarget says whether one
+	// was given.
+	Target    float64
+	HasTarget bool
+
+	Analysis    Analysis
+	Sensitivity Sensitivity
+	Sweep       *Sweep
+	Variants    []Variant
+	Output      Output
+
+	// Defaults lists the defaults that applied, Warnings the things a
+	// reader should know; both are full sentences naming the key.
+	Defaults, Warnings []string
+}
+
+// SectionSpec is the cross-section: its shape and its dimensions.
+type SectionSpec struct {
+	Shape column.Shape
+	Name  string // as written: "I", "RHS", ...
+	// Dims holds the dimension quantities by key ("depth", "flange", ...,
+	// "thickness_loss").
+	Dims map[string]*Quantity
+}
+
+// EndSpec is how the effective length factor of one axis is given.
+type EndSpec struct {
+	// How is "k", "ends", "springs" or "default".
+	How string
+	// K is the factor (How "k" or "default"; for "ends" a fixed value).
+	K *Quantity
+	// Ends is the end-condition name (How "ends").
+	Ends string
+	// Top and Bottom are the rotational end springs (How "springs").
+	Top, Bottom *Quantity
+}
+
+// Analysis are the sampling settings.
+type Analysis struct {
+	Method    sim.Method
+	Samples   int64
+	TargetCoV float64
+	Seed      uint64
+}
+
+// Sensitivity are the sensitivity settings.
+type Sensitivity struct {
+	Tornado          bool
+	TornadoLow, High float64
+	Sobol            bool
+	SobolSamples     int
+}
+
+// Sweep repeats a study over the values of one quantity.
+type Sweep struct {
+	Parameter string
+	Values    []*Quantity
+}
+
+// Variant is a named alternative of a study.
+type Variant struct {
+	Name string
+	Set  map[string]*Quantity
+}
+
+// Output says where results go.
+type Output struct {
+	Dir     string
+	Formats []string
+}
+
+// Load reads and checks the study file at path. A file with problems
+// returns an *Error listing all of them.
+func Load(path string) (*Study, error) {
+	data, err := os.ReadFile(path)
+	if err != nil {
+		if errors.Is(err, os.ErrNotExist) {
+			return nil, &Error{Problems: []Problem{{File: path, Msg: "no such file (give the path of a study; `strutrisk new` prints a starter)"}}}
+		}
+		return nil, &Error{Problems: []Problem{{File: path, Msg: err.Error()}}}
+	}
+	return Parse(path, data)
+}
+
+// Parse checks the study file contents data; name is used in messages and
+// for the default title.
+func Parse(name string, data []byte) (*Study, error) {
+	sum := sha256.Sum256(data)
+	p := newParser(name, data)
+	st := p.parse()
+	if len(p.probs) > 0 {
+		return nil, &Error{Problems: p.probs}
+	}
+	st.File = name
+	st.SHA256 = hex.EncodeToString(sum[:])
+	return st, nil
+}
+
+// Name returns the study's short name: the file name without extension.
+func (s *Study) Name() string {
+	return strings.TrimSuffix(filepath.Base(s.File), filepath.Ext(s.File))
+}
