@@ -2,10 +2,287 @@ package sim
 
 import (
 	"context"
-	"errors"
+	"fmt"
+	"math"
+	"sort"
+
+	"gonum.org/v1/gonum/stat/distuv"
 )
 
+// Subset simulation constants.
+const (
+	// subsetP0 is the conditional probability of each intermediate level
+	// (Au and Beck 2001 used 0.1).
+	subsetP0 = 0.1
+	// subsetMaxLevels bounds the levels: 0.1^30 is far below any useful Pf.
+	subsetMaxLevels = 30
+	// subsetSpread is the half-width of the uniform proposal of the
+	// modified Metropolis algorithm, in standard normal units.
+	subsetSpread = 1.0
+	// subsetBlockSize is the block size of the direct Monte Carlo level.
+	subsetBlockSize = 1000
+)
+
+// subsetLevelSize returns the samples per level for a budget of n
+// evaluations: n/8 (enough for about eight levels, Pf near 1e-8), between
+// 500 and 10000, rounded to a multiple of 1/p0 = 10.
+func subsetLevelSize(n int64) int {
+	v := min(max(n/8, 500), 10000)
+	return int(v/10) * 10
+}
+
 // subsetSimulation estimates Pf by subset simulation (Au and Beck, 2001).
+//
+// The levels are F_1 ⊃ F_2 ⊃ ... ⊃ F, F_i = {g <= b_i}: level 0 is direct
+// Monte Carlo with N samples; each threshold b_i is chosen so that a
+// fraction p0 = 0.1 of the level's samples lies below it, and those
+// samples seed N p0 Markov chains of length 1/p0 that populate the next
+// level conditionally on F_i. The chains use the component-wise modified
+// Metropolis algorithm of Au and Beck (S.-K. Au and J. L. Beck,
+// "Estimation of small failure probabilities in high dimensions by subset
+// simulation", Probabilistic Engineering Mechanics 16(4), 2001, 263-277):
+// in standard normal space each component proposes xi_j = u_j + U(-1, 1),
+// accepted with probability min(1, phi(xi_j)/phi(u_j)); the candidate is
+// kept when g(candidate) <= b_i, else the chain repeats its state. The
+// run stops at the first level where at least N p0 samples fail:
+// Pf = p0^L n_F/N.
+//
+// The CoV is Au and Beck's delta^2 = sum_i (1 - p_i)/(p_i N) (1 + gamma_i),
+// with gamma_i from the correlation of the indicator along the chains
+// (gamma = 0 at level 0); it neglects the correlation between levels, so
+// it is somewhat optimistic (runs of the tests scatter 1.2-1.5 times
+// more). The interval is lognormal: Pf exp(±z s), s^2 = ln(1 + delta^2),
+// with the estimate as median. N is s.Samples/8 clamped to [500, 10000];
+// levels stop when the next would exceed s.Samples evaluations (a warning
+// then says Pf is only bounded). TargetCoV is not used. Every chain and
+// every block of level 0 draws from its own generator seeded from (seed,
+// level, index), so the result does not depend on the number of workers.
+//
+// (The adaptive conditional sampling of Papaioannou et al., Probabilistic
+// Engineering Mechanics 41, 2015, was tried first: on the chi-square
+// benchmark its estimates were biased by -5 % even at N = 10000, the
+// modified Metropolis ones were not.)
 func subsetSimulation(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, error) {
-	return nil, errors.New("sim: subset simulation is not implemented yet")
+	return subsetRun(ctx, modelSpace(m, t), s)
+}
+
+// ssWorker is the scratch memory of one goroutine.
+type ssWorker struct {
+	g   func(u []float64) float64
+	v   []float64
+	rng *blockRNG
+}
+
+// subsetRun is subset simulation in standard normal space.
+func subsetRun(ctx context.Context, sp *uSpace, s *Settings) (*Result, error) {
+	cfg := rareDefaults(s)
+	n := sp.dim
+	N := subsetLevelSize(cfg.Samples)
+	nc := int(float64(N) * subsetP0) // chains (seeds) per level
+	ns := N / nc                     // chain length, seed included
+	z := distuv.UnitNormal.Quantile(0.5 + cfg.Confidence/2)
+
+	// Samples of the current level, in chain order (chain j holds
+	// j*ns .. j*ns+ns-1); at level 0 simply in sample order.
+	U := make([]float64, N*n)
+	G := make([]float64, N)
+	nextU := make([]float64, N*n)
+	nextG := make([]float64, N)
+
+	nw := max(1, cfg.Workers)
+	workers := make([]*ssWorker, nw)
+	getWorker := func(w int) *ssWorker {
+		if workers[w] == nil {
+			workers[w] = &ssWorker{g: sp.newG(), v: make([]float64, n), rng: newBlockRNG()}
+		}
+		return workers[w]
+	}
+
+	res := &Result{Method: Subset, Confidence: cfg.Confidence}
+	// Level 0: direct Monte Carlo in blocks.
+	nb := (N + subsetBlockSize - 1) / subsetBlockSize
+	_, cancelled := rareParallel(ctx, cfg.Workers, nb, func(w, b int) {
+		ws := getWorker(w)
+		ws.rng.seed(cfg.Seed, streamSubset, uint64(b))
+		r := ws.rng.r
+		for i := b * subsetBlockSize; i < min(N, (b+1)*subsetBlockSize); i++ {
+			u := U[i*n : (i+1)*n]
+			for j := range u {
+				u[j] = r.NormFloat64()
+			}
+			G[i] = ws.g(u)
+		}
+	}, func(int) bool { return true })
+	evals := int64(N)
+	if cancelled {
+		res.Incomplete = true
+		res.Evaluations = evals
+		return res, nil
+	}
+
+	idx := make([]int, N)
+	pf := 1.0
+	var delta2 float64
+	prevB := math.Inf(1)
+	upper := 0.0 // upper end of the interval when no sample fails
+	chainEvals := make([]int, N/10)
+	for level := 0; ; level++ {
+		nf := 0
+		for _, g := range G {
+			if g <= 0 {
+				nf++
+			}
+		}
+		budgetLeft := cfg.Samples-evals >= int64(N-nc)
+		if nf >= nc || level+1 >= subsetMaxLevels || !budgetLeft {
+			pl := float64(nf) / float64(N)
+			above := pf // probability of the last intermediate level
+			pf *= pl
+			if level > 0 && nf > 0 {
+				delta2 += (1 - pl) / (pl * float64(N)) * (1 + subsetGamma(G, nc, ns, 0, pl))
+			} else if nf > 0 {
+				delta2 += (1 - pl) / (pl * float64(N))
+			}
+			if nf < nc {
+				why := "the evaluation budget (Samples) ran out"
+				if budgetLeft {
+					why = fmt.Sprintf("the level limit %d was reached", subsetMaxLevels)
+				}
+				res.Warnings = append(res.Warnings, fmt.Sprintf("subset simulation: %s at level %d with %d failed samples of %d; Pf is poorly estimated (below %.3g)", why, level, nf, N, above*subsetP0))
+			}
+			if nf == 0 {
+				// Rule of three: 3/N bounds a conditional probability
+				// with no success in N trials at 95 %.
+				upper = above * 3 / float64(N)
+			}
+			break
+		}
+		// Threshold: between the (nc)th and (nc+1)th smallest g.
+		for i := range idx {
+			idx[i] = i
+		}
+		sort.SliceStable(idx, func(a, b int) bool { return G[idx[a]] < G[idx[b]] })
+		b := 0.5 * (G[idx[nc-1]] + G[idx[nc]])
+		if !(b < prevB) {
+			return nil, fmt.Errorf("sim: subset simulation stalled: the threshold stopped decreasing at level %d (g = %.6g); g may be flat or undefined there", level, b)
+		}
+		prevB = b
+		pf *= subsetP0
+		if level == 0 {
+			delta2 += (1 - subsetP0) / (subsetP0 * float64(N))
+		} else {
+			delta2 += (1 - subsetP0) / (subsetP0 * float64(N)) * (1 + subsetGamma(G, nc, ns, b, subsetP0))
+		}
+		res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: evals, Pf: pf, PfCoV: math.Sqrt(delta2)})
+		if cfg.Progress != nil {
+			cfg.Progress(Progress{Done: evals, Total: cfg.Samples, Pf: pf, CoV: math.Sqrt(delta2)})
+		}
+
+		// Seeds: the nc smallest, shuffled reproducibly so that the
+		// adaptation does not see them in order of g.
+		seeds := idx[:nc]
+		shuf := newBlockRNG()
+		shuf.seed(cfg.Seed, streamSubset, uint64(level+1)<<40)
+		shuf.r.Shuffle(nc, func(a, b int) { seeds[a], seeds[b] = seeds[b], seeds[a] })
+		_, cancelled = rareParallel(ctx, cfg.Workers, nc, func(w, ch int) {
+			ws := getWorker(w)
+			ws.rng.seed(cfg.Seed, streamSubset, uint64(level+1)<<40|uint64(ch+1))
+			seed := seeds[ch]
+			chainEvals[ch] = subsetChain(ws, U[seed*n:(seed+1)*n], G[seed], b,
+				nextU[ch*ns*n:(ch+1)*ns*n], nextG[ch*ns:(ch+1)*ns])
+		}, func(int) bool { return true })
+		if cancelled {
+			res.Incomplete = true
+		}
+		for _, e := range chainEvals {
+			evals += int64(e)
+		}
+		if res.Incomplete {
+			break
+		}
+		U, nextU = nextU, U
+		G, nextG = nextG, G
+	}
+	res.Evaluations = evals
+	res.Pf = pf
+	res.PfCoV = math.Sqrt(delta2)
+	if pf > 0 {
+		sl := math.Sqrt(math.Log(1 + delta2))
+		res.PfCI = [2]float64{pf * math.Exp(-z*sl), math.Min(1, pf*math.Exp(z*sl))}
+	} else {
+		res.PfCoV = math.Inf(1)
+		res.PfCI = [2]float64{0, upper}
+	}
+	res.Beta = BetaFromPf(pf)
+	res.BetaCI = [2]float64{BetaFromPf(res.PfCI[1]), BetaFromPf(res.PfCI[0])}
+	return res, nil
+}
+
+// subsetChain runs one chain of the modified Metropolis algorithm from the
+// seed u0 (with g(u0) = g0 <= b) and stores its ns states, the seed first,
+// in us and gs. It returns the number of evaluations of g (a candidate
+// equal to the current state is not evaluated). It does not allocate.
+func subsetChain(ws *ssWorker, u0 []float64, g0, b float64, us, gs []float64) int {
+	n := len(u0)
+	ns := len(gs)
+	r := ws.rng.r
+	copy(us[:n], u0)
+	gs[0] = g0
+	evals := 0
+	v := ws.v
+	for k := 1; k < ns; k++ {
+		cur := us[(k-1)*n : k*n]
+		moved := false
+		for j, c := range cur {
+			xi := c + subsetSpread*(2*r.Float64()-1)
+			// Accept the component with probability phi(xi)/phi(c).
+			if d := 0.5 * (c*c - xi*xi); d >= 0 || r.Float64() < math.Exp(d) {
+				v[j] = xi
+				moved = true
+			} else {
+				v[j] = c
+			}
+		}
+		next := us[k*n : (k+1)*n]
+		if moved {
+			evals++
+			if gv := ws.g(v); gv <= b {
+				copy(next, v)
+				gs[k] = gv
+				continue
+			}
+		}
+		copy(next, cur)
+		gs[k] = gs[k-1]
+	}
+	return evals
+}
+
+// subsetGamma is the correlation factor gamma of Au and Beck (2001) for
+// the indicator I(g <= b) over nc chains of length ns stored one after the
+// other in G, whose mean is p:
+//
+//	gamma = 2 sum_{k=1}^{ns-1} (1 - k nc/N) rho(k),  rho(k) = R(k)/R(0),
+//	R(k) = 1/(N - k nc) sum_j sum_{l<ns-k} I_jl I_j,l+k - p^2.
+func subsetGamma(G []float64, nc, ns int, b, p float64) float64 {
+	N := nc * ns
+	r0 := p * (1 - p)
+	if r0 <= 0 {
+		return 0
+	}
+	var gamma float64
+	for k := 1; k < ns; k++ {
+		var sum float64
+		for j := 0; j < nc; j++ {
+			c := G[j*ns : (j+1)*ns]
+			for l := 0; l+k < ns; l++ {
+				if c[l] <= b && c[l+k] <= b {
+					sum++
+				}
+			}
+		}
+		rk := sum/float64(N-k*nc) - p*p
+		gamma += (1 - float64(k*nc)/float64(N)) * rk / r0
+	}
+	return 2 * gamma
 }
