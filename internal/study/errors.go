@@ -70,6 +70,13 @@ func editDistance(a, b string) int {
 func nearest(s string, candidates []string) (string, bool) {
 	best, bestD := "", 1<<30
 	ls := strings.ToLower(s)
+	if len(s) >= 3 {
+		for _, c := range candidates {
+			if strings.HasPrefix(strings.ToLower(c), ls) {
+				return c, true
+			}
+		}
+	}
 	for _, c := range candidates {
 		d := editDistance(ls, strings.ToLower(c))
 		if d < bestD {
@@ -80,7 +87,7 @@ func nearest(s string, candidates []string) (string, bool) {
 	if len(s) <= 4 {
 		limit = 1
 	}
-	if bestD <= limit || bestD < len(s) && best != "" && (strings.HasPrefix(ls, strings.ToLower(best)) || strings.HasPrefix(strings.ToLower(best), ls)) {
+	if bestD <= limit {
 		return best, true
 	}
 	return "", false

@@ -266,6 +266,9 @@ func (p *parser) parse() *Study {
 	p.output(top)
 	p.sweep(top)
 	p.variants(top)
+	if _, ok := raw["correlation"]; ok {
+		top.used["correlation"] = true // read once the variables are known
+	}
 	p.unknown(top, []string{"title", "units", "member", "material", "imperfection", "capacity", "loads", "correlation", "target", "analysis", "sensitivity", "sweep", "variant", "output"})
 	if len(p.probs) > 0 {
 		return st
@@ -357,7 +360,11 @@ func (p *parser) member(top *table) {
 			spec = EndSpec{How: "ends", Ends: ends, K: &Quantity{Path: t.key("ends"), Value: endK, Line: p.line(t.key("ends"))}}
 		}
 		if hasTop || hasBot {
-			how = append(how, t.key("spring_top/spring_bottom"))
+			if hasTop {
+				how = append(how, t.key("spring_top"))
+			} else {
+				how = append(how, t.key("spring_bottom"))
+			}
 			spec = EndSpec{How: "springs", Top: top2[a], Bottom: bot[a]}
 			if !hasTop || !hasBot {
 				missing := "spring_bottom"
@@ -374,7 +381,14 @@ func (p *parser) member(top *table) {
 			p.warnf("member.k_%s: the %s axis has no end conditions given; K = 1 assumed", axis, axis)
 		case 1:
 		default:
-			p.errorf(how[1], "the %s axis has two end specifications (%s): give one", axis, strings.Join(how, " and "))
+			// Report at the later of the keys in the file.
+			at := how[0]
+			for _, k := range how {
+				if p.line(k) >= p.line(at) {
+					at = k
+				}
+			}
+			p.errorf(at, "the %s axis has two end specifications (%s): give one", axis, strings.Join(how, " and "))
 		}
 		p.st.Ends[a] = spec
 	}

@@ -1,0 +1,260 @@
+package main
+
+import (
+	"bytes"
+	"encoding/json"
+	"math"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"strutrisk/internal/report"
+)
+
+// invoke runs the command in-process and returns its status and output.
+func invoke(t *testing.T, args ...string) (code int, stdout, stderr string) {
+	t.Helper()
+	var o, e bytes.Buffer
+	code = run(args, &o, &e)
+	return code, o.String(), e.String()
+}
+
+// writeStudy writes a study file into a fresh folder and returns its path.
+func writeStudy(t *testing.T, text string) string {
+	t.Helper()
+	p := filepath.Join(t.TempDir(), "study.toml")
+	if err := os.WriteFile(p, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return p
+}
+
+// good is a valid study; the bad studies below are edits of it. Line
+// numbers matter: keep them in step with the table.
+const good = `title = "test strut"
+[member]
+length = 2000
+ends = "pinned-pinned"
+[member.section]
+shape = "rect"
+depth = 100
+width = 50
+[material]
+modulus = 200000
+yield = { dist = "lognormal", mean = 250, cov = 0.1 }
+[imperfection]
+bow = 2
+[loads]
+dead = { dist = "normal", mean = "100 kN", cov = 0.1 }
+imposed = { dist = "gumbel", mean = "80 kN", cov = 0.3 }
+[target]
+beta = 3.8
+`
+
+// edit replaces line n (1-based) of good by repl (which may hold several
+// lines, or none to delete it).
+func edit(n int, repl string) string {
+	lines := strings.Split(good, "\n")
+	lines[n-1] = repl
+	return strings.Join(lines, "\n")
+}
+
+func TestGoodStudyChecks(t *testing.T) {
+	code, out, errs := invoke(t, "check", writeStudy(t, good))
+	if code != 0 {
+		t.Fatalf("check exit %d, stderr:\n%s", code, errs)
+	}
+	for _, want := range []string{"test strut", "minor axis governs", "utilisation", "Caution"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("check output lacks %q:\n%s", want, out)
+		}
+	}
+}
+
+// TestBadStudies: each broken study exits 2 and names the key and its line.
+func TestBadStudies(t *testing.T) {
+	for _, c := range []struct {
+		name, study string
+		want        []string // fragments of stderr, e.g. "study.toml:11: material.yield:"
+	}{
+		{"typo key", edit(11, `yeild = 250`), []string{"study.toml:11: material.yeild: unknown key", "did you mean material.yield?", "study.toml:9: material.yield: missing"}},
+		{"unknown table", good + "[materail]\nx = 1\n", []string{"study.toml:19: materail: unknown key", "did you mean material?"}},
+		{"negative cov", edit(11, `yield = { dist = "lognormal", mean = 250, cov = -0.1 }`), []string{"study.toml:11: material.yield.cov: cov = -0.1 must be between 0 and 1"}},
+		{"zero sd", edit(15, `dead = { dist = "normal", mean = "100 kN", sd = 0 }`), []string{"study.toml:15: loads.dead.sd: sd = 0 is no spread"}},
+		{"wrong dimension", edit(3, `length = "2 kN"`), []string{"study.toml:3: member.length: \"2 kN\" is a force but this key takes a length"}},
+		{"unknown unit", edit(10, `modulus = "200 GPas"`), []string{"study.toml:10: material.modulus: unknown unit \"GPas\""}},
+		{"missing length", edit(3, ``), []string{"study.toml:2: member.length: missing"}},
+		{"missing table", strings.Replace(good, "[loads]\ndead = { dist = \"normal\", mean = \"100 kN\", cov = 0.1 }\nimposed = { dist = \"gumbel\", mean = \"80 kN\", cov = 0.3 }\n", "", 1), []string{"study.toml: loads: missing table [loads]"}},
+		{"fractile", edit(11, `yield = { dist = "lognormal", characteristic = 235, fractile = 1.5, cov = 0.07 }`), []string{"study.toml:11: material.yield.fractile: fractile = 1.5 must be between 0 and 1"}},
+		{"min above max", edit(4, `k_major = 1.0`+"\n"+`k_minor = { dist = "uniform", min = 1.0, max = 0.7 }`), []string{"study.toml:5: member.k_minor.max: min must be less than max"}},
+		{"two end specs", edit(4, `ends = "pinned-pinned"`+"\n"+`k_minor = 0.7`), []string{"study.toml:5: member.k_minor: the minor axis has two end specifications"}},
+		{"unknown dist", edit(11, `yield = { dist = "lognormel", mean = 250, cov = 0.1 }`), []string{"study.toml:11: material.yield.dist: unknown distribution \"lognormel\"; did you mean \"lognormal\"?"}},
+		{"incomplete set", edit(11, `yield = { dist = "lognormal", mean = 250 }`), []string{"study.toml:11: material.yield: lognormal needs mean + sd or mean + cov"}},
+		{"two sets", edit(11, `yield = { dist = "lognormal", mean = 250, cov = 0.1, sd = 20 }`), []string{"study.toml:11: material.yield: give one set of parameters"}},
+		{"L/n outside imperfection", edit(3, `length = "L/2"`), []string{"study.toml:3: member.length: \"L/2\": the form L/n is only for imperfections"}},
+		{"corr unknown variable", good + "[[correlation]]\npair = [\"material.yeild\", \"loads.dead\"]\nrho = 0.3\n", []string{"study.toml:20: correlation[0].pair: \"material.yeild\" is not a random variable of this study; did you mean \"material.yield\"?"}},
+		{"corr fixed quantity", good + "[[correlation]]\npair = [\"material.modulus\", \"material.yield\"]\nrho = 0.3\n", []string{"study.toml:20: correlation[0].pair: \"material.modulus\" is a fixed quantity"}},
+		{"corr not pd", good + "[[correlation]]\npair = [\"material.yield\", \"loads.dead\"]\nrho = 0.9\n[[correlation]]\npair = [\"loads.dead\", \"loads.imposed\"]\nrho = 0.9\n[[correlation]]\npair = [\"material.yield\", \"loads.imposed\"]\nrho = -0.9\n", []string{"correlation: the correlation coefficients do not form a positive definite matrix"}},
+		{"rho out of range", good + "[[correlation]]\npair = [\"material.yield\", \"loads.dead\"]\nrho = 1.2\n", []string{"study.toml:21: correlation[0].rho: rho = 1.2 must lie strictly between -1 and 1"}},
+		{"huge samples", good + "[analysis]\nsamples = 1e12\n", []string{"study.toml:20: analysis.samples: 1e+12 is more than 1e+10"}},
+		{"nan", edit(10, `modulus = nan`), []string{"study.toml:10: material.modulus: NaN is not a usable number"}},
+		{"negative length", edit(3, `length = -2000`), []string{"study.toml:3: member.length: a length must be positive"}},
+		{"negative lower", edit(13, `bow = 2`+"\n"+`eccentricity = 0`) + "[capacity]\nmodel_factor = { dist = \"normal\", mean = 1, sd = 0.1, lower = -1 }\n", []string{"study.toml:21: capacity.model_factor.lower: lower = -1 lets capacity.model_factor take negative values"}},
+		{"custom i_minor > i_major", strings.Replace(good, "shape = \"rect\"\ndepth = 100\nwidth = 50\n", "shape = \"custom\"\narea = 5000\ni_major = 1e6\ni_minor = 4e6\nc_major = 50\nc_minor = 25\n", 1), []string{"study.toml:9: member.section.i_minor: i_minor is larger than i_major"}},
+		{"thickness loss custom", strings.Replace(good, "shape = \"rect\"\ndepth = 100\nwidth = 50\n", "shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\nthickness_loss = 1\n", 1), []string{"study.toml:12: member.section.thickness_loss: a custom section has no faces"}},
+		{"perry needs bow", edit(13, ``), []string{"imperfection.bow: missing: model perry-robertson needs an initial bow"}},
+		{"unknown model", good + "[capacity]\nmodel = \"perry\"\n", []string{"study.toml:20: capacity.model: \"perry\" is not a choice; did you mean \"perry-robertson\"?"}},
+		{"bad shape key", edit(8, `width = 50`+"\n"+`flange = 8`), []string{"study.toml:9: member.section.flange: shape rect does not take flange"}},
+		{"bad toml", edit(11, `yield = { dist = "lognormal", mean = 250, cov = 0.1`), []string{"study.toml:12:", "not valid TOML"}}, // the parser sees the error on the next line
+		{"bad toml value", edit(3, `length = 2 m`), []string{"study.toml:3:", "not valid TOML"}},
+		{"effect factor typo", edit(16, `imposed = 80000`+"\neffect_facter = 1.1"), []string{"study.toml:17: loads.effect_facter: unknown key in [loads]; did you mean loads.effect_factor?"}},
+		{"units", "units = \"kN-mm\"\n" + good, []string{"study.toml:1: units: \"kN-mm\" is not a choice"}},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			code, out, errs := invoke(t, "check", writeStudy(t, c.study))
+			if code != 2 {
+				t.Errorf("exit %d, want 2; stderr:\n%s", code, errs)
+			}
+			if out != "" {
+				t.Errorf("stdout not empty: %s", out)
+			}
+			for _, w := range c.want {
+				if !strings.Contains(errs, w) {
+					t.Errorf("stderr lacks %q:\n%s", w, errs)
+				}
+			}
+			// run refuses the same file with the same status.
+			if code, _, _ := invoke(t, "run", "--out", t.TempDir(), writeStudy(t, c.study)); code != 2 {
+				t.Errorf("run exit %d, want 2", code)
+			}
+		})
+	}
+}
+
+// TestAllProblemsListed: problems in different tables are all reported.
+func TestAllProblemsListed(t *testing.T) {
+	s := strings.Replace(good, "length = 2000", "length = \"2 kN\"", 1)
+	s = strings.Replace(s, "cov = 0.1 }\n[imperfection]", "cov = -1 }\n[imperfection]", 1)
+	s += "[analysis]\nmethdo = \"auto\"\n"
+	code, _, errs := invoke(t, "check", writeStudy(t, s))
+	if code != 2 {
+		t.Fatalf("exit %d, want 2", code)
+	}
+	for _, w := range []string{"study.toml:3: member.length", "study.toml:11: material.yield.cov", "study.toml:20: analysis.methdo: unknown key", "did you mean analysis.method?", "3 problems"} {
+		if !strings.Contains(errs, w) {
+			t.Errorf("stderr lacks %q:\n%s", w, errs)
+		}
+	}
+}
+
+func TestUsageErrors(t *testing.T) {
+	for _, args := range [][]string{
+		{},
+		{"frobnicate"},
+		{"run"},
+		{"check"},
+		{"run", "--bogus", "x.toml"},
+		{"check", filepath.Join(t.TempDir(), "missing.toml")},
+		{"run", "--method", "magic", "x.toml"},
+		{"new", "a", "b"},
+	} {
+		if code, _, errs := invoke(t, args...); code != 2 || !strings.Contains(errs, "strutrisk") {
+			t.Errorf("%q: exit %d, stderr %q; want 2 and a message", args, code, errs)
+		}
+	}
+}
+
+func TestHelp(t *testing.T) {
+	for _, args := range [][]string{{"--help"}, {"run", "--help"}, {"check", "--help"}, {"new", "--help"}, {"run", "x.toml", "-h"}} {
+		code, out, _ := invoke(t, args...)
+		if code != 0 || !strings.Contains(out, "licensed") || !strings.Contains(out, "engineer") {
+			t.Errorf("%q: exit %d, output lacks the caution:\n%s", args, code, out)
+		}
+	}
+}
+
+// TestNewPassesCheck: the starter study is valid as printed.
+func TestNewPassesCheck(t *testing.T) {
+	code, out, _ := invoke(t, "new", `Bay 7 "A" column`)
+	if code != 0 {
+		t.Fatalf("new exit %d", code)
+	}
+	code, chk, errs := invoke(t, "check", writeStudy(t, out))
+	if code != 0 {
+		t.Fatalf("check of the starter: exit %d\n%s", code, errs)
+	}
+	if !strings.Contains(chk, `Bay 7 "A" column`) {
+		t.Errorf("title not carried:\n%s", chk)
+	}
+}
+
+// TestDemoStudiesCheck: every study in studies/ passes check.
+func TestDemoStudiesCheck(t *testing.T) {
+	files, _ := filepath.Glob(filepath.Join("..", "..", "studies", "*.toml"))
+	if len(files) == 0 {
+		t.Fatal("no demo studies found")
+	}
+	for _, f := range files {
+		if code, _, errs := invoke(t, "check", f); code != 0 {
+			t.Errorf("%s: exit %d\n%s", f, code, errs)
+		}
+	}
+}
+
+// TestCheckJSONHand: check --json against a hand calculation of a pinned
+// solid rectangle 100 x 50 mm, L = 2000 mm, E = 200000 MPa, bow 2 mm.
+// Minor axis: I = 100*50^3/12, r = 50/sqrt(12) = 14.4338 mm,
+// L/r = 138.564, PE = pi^2 E I / L^2 = 514041.9 N (Euler; Timoshenko &
+// Gere, Theory of Elastic Stability, 2nd ed., §2.1), relative slenderness
+// (L/r)/(pi sqrt(E/fy)) = 1.55939 at the yield's mean 250 MPa (EN
+// 1993-1-1:2005 eq. 6.50), and the Perry-Robertson first-yield load: the
+// smaller root of (fy - s)(sE - s) = eta s sE, eta = e0 c / r^2 = 0.24,
+// s = 89.1363 MPa, N = 445681.3 N (Ayrton & Perry 1886; computed by hand
+// from the closed form). The major axis gives 1011222.6 N, so minor
+// governs. The lognormal yield's mean is 250 exactly.
+func TestCheckJSONHand(t *testing.T) {
+	code, out, errs := invoke(t, "check", "--json", writeStudy(t, good))
+	if code != 0 {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	var d report.Document
+	if err := json.Unmarshal([]byte(out), &d); err != nil {
+		t.Fatalf("stdout is not the JSON document: %v\n%s", err, out)
+	}
+	n := d.Nominal
+	if n == nil {
+		t.Fatal("no nominal section")
+	}
+	for _, c := range []struct {
+		name      string
+		got, want float64
+	}{
+		{"capacity", n.Capacity, 445681.2790},
+		{"euler_load", n.EulerLoad, 514041.8959},
+		{"slenderness", n.Slenderness, 138.5640646},
+		{"relative_slenderness", n.RelativeSlenderness, 1.559393602},
+		{"k", n.K, 1},
+	} {
+		if math.Abs(c.got-c.want) > 1e-6*c.want {
+			t.Errorf("%s = %.10g, want %.10g", c.name, c.got, c.want)
+		}
+	}
+	if n.Axis != "minor" || d.GoverningAxis != "minor" {
+		t.Errorf("axis %q / %q, want minor", n.Axis, d.GoverningAxis)
+	}
+	if d.Units != "N-mm-MPa" || d.ToolVersion == "" || len(d.InputSHA256) != 64 || d.Title != "test strut" {
+		t.Errorf("header fields: %+v", d)
+	}
+	if d.TargetBeta == nil || *d.TargetBeta != 3.8 {
+		t.Errorf("target_beta %v, want 3.8", d.TargetBeta)
+	}
+	// Sampling fields are absent, not null or zero.
+	var raw map[string]any
+	json.Unmarshal([]byte(out), &raw)
+	for _, k := range []string{"pf", "pf_ci", "beta", "beta_ci", "method", "seed", "evaluations", "meets_target", "capacity", "demand", "form", "tornado", "sobol"} {
+		if _, ok := raw[k]; ok {
+			t.Errorf("check --json carries sampling field %q", k)
+		}
+	}
+}

@@ -1,0 +1,138 @@
+package main
+
+import (
+	"encoding/json"
+	"math"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"strutrisk/internal/report"
+)
+
+// stocky is a short solid square strut on the buckling-curve model: its
+// relative slenderness (L/r)/(pi sqrt(E/fy)) = 10.39/(pi sqrt(205000/fy))
+// is 0.127 at the mean yield and stays below 0.2 up to fy = 748 MPa (nine
+// standard deviations of the yield's log), so chi = 1 (EN 1993-1-1:2005
+// 6.3.1.2(4)) and the capacity is R = A fy x model factor: a product of
+// lognormals, itself lognormal. Against a lognormal load S the reliability
+// index is exact in closed form (Melchers & Beck, Structural Reliability
+// Analysis and Prediction, 3rd ed., 2018, chapter 3, lognormal R and S;
+// chapter from memory):
+//
+//	beta = ln[(muR/muS) sqrt((1+VS^2)/(1+VR^2))] / sqrt(ln[(1+VR^2)(1+VS^2)])
+//
+// with 1 + VR^2 = (1 + 0.10^2)(1 + 0.05^2), muR = 100 x 100 x 300 x 1 N,
+// muS = 1.5e6 N, VS = 0.20: beta = 3.108297, pf = Phi(-beta) = 9.40844e-4
+// (computed from the formula).
+const stocky = `title = "stocky strut, lognormal R and S"
+[member]
+length = 300
+ends = "pinned-pinned"
+[member.section]
+shape = "rect"
+depth = 100
+width = 100
+[material]
+modulus = 205000
+yield = { dist = "lognormal", mean = 300, cov = 0.10 }
+[capacity]
+model = "curve"
+curve = "b"
+model_factor = { dist = "lognormal", mean = 1.0, cov = 0.05 }
+[loads]
+axial = { dist = "lognormal", mean = "1500 kN", cov = 0.20 }
+[target]
+beta = 3.8
+[analysis]
+samples = 2_000_000
+target_cov = 0.04
+seed = 7
+[sensitivity]
+sobol = { samples = 1000 }
+`
+
+const (
+	stockyBeta = 3.1082970551683173
+	stockyPf   = 9.408441526629896e-4
+)
+
+func TestRunLognormalClosedForm(t *testing.T) {
+	for _, method := range []string{"auto", "monte-carlo", "form"} {
+		t.Run(method, func(t *testing.T) {
+			dir := t.TempDir()
+			code, out, errs := invoke(t, "run", writeStudy(t, stocky), "--json", "--out", dir, "--method", method)
+			if code != 0 {
+				t.Fatalf("exit %d\n%s", code, errs)
+			}
+			var d report.Document
+			if err := json.Unmarshal([]byte(out), &d); err != nil {
+				t.Fatalf("stdout is not the JSON document: %v\n%s", err, out)
+			}
+			if d.Pf == nil || d.Beta == nil || len(d.PfCI) != 2 || len(d.BetaCI) != 2 {
+				t.Fatalf("missing pf/beta: %s", out)
+			}
+			if method == "form" {
+				// FORM is exact here: ln R - ln S is linear in normal space.
+				if math.Abs(*d.Beta-stockyBeta) > 1e-4 {
+					t.Errorf("FORM beta %.6f, want %.6f", *d.Beta, stockyBeta)
+				}
+			} else if !(d.PfCI[0] <= stockyPf && stockyPf <= d.PfCI[1]) {
+				t.Errorf("exact pf %.6g outside the interval [%.6g, %.6g] (pf %.6g, method %s)", stockyPf, d.PfCI[0], d.PfCI[1], *d.Pf, d.Method)
+			}
+			if d.MeetsTarget == nil || *d.MeetsTarget {
+				t.Errorf("meets_target %v, want false (beta 3.11 < 3.8)", d.MeetsTarget)
+			}
+			if d.Nominal == nil || math.Abs(d.Nominal.Capacity-3e6) > 1e-6*3e6 {
+				t.Errorf("nominal capacity %+v, want A fy = 3e6 N", d.Nominal)
+			}
+			if d.Capacity == nil || d.Demand == nil || d.FORM == nil || d.Seed == nil || *d.Seed != 7 || d.Evaluations == nil {
+				t.Errorf("incomplete document: %s", out)
+			}
+			if d.FORM != nil && math.Abs(d.FORM.Beta-stockyBeta) > 1e-3 {
+				t.Errorf("form.beta %.5f, want %.5f", d.FORM.Beta, stockyBeta)
+			}
+			if len(d.Tornado) != 3 {
+				t.Errorf("tornado has %d rows, want 3", len(d.Tornado))
+			}
+			for _, f := range []string{"results.json", "samples.csv", "summary.txt"} {
+				if _, err := os.Stat(filepath.Join(dir, f)); err != nil {
+					t.Errorf("%s not written: %v", f, err)
+				}
+			}
+			// results.json is the document printed.
+			b, _ := os.ReadFile(filepath.Join(dir, "results.json"))
+			var fromFile report.Document
+			if err := json.Unmarshal(b, &fromFile); err != nil || fromFile.InputSHA256 != d.InputSHA256 {
+				t.Errorf("results.json differs from the printed document: %v", err)
+			}
+		})
+	}
+}
+
+func TestRunRequireTarget(t *testing.T) {
+	study := writeStudy(t, stocky)
+	code, out, _ := invoke(t, "run", study, "--out", t.TempDir(), "--method", "form", "--require-target")
+	if code != 1 {
+		t.Errorf("unmet target with --require-target: exit %d, want 1", code)
+	}
+	if !strings.Contains(out, "NOT met") {
+		t.Errorf("summary does not say the target is not met:\n%s", out)
+	}
+	lowered := strings.Replace(stocky, "beta = 3.8", "beta = 2.5", 1)
+	if code, _, errs := invoke(t, "run", writeStudy(t, lowered), "--out", t.TempDir(), "--method", "form", "--require-target"); code != 0 {
+		t.Errorf("met target: exit %d, want 0\n%s", code, errs)
+	}
+}
+
+// TestRunReproducible: the same seed gives the same document; flags after
+// or before the file mean the same.
+func TestRunReproducible(t *testing.T) {
+	study := writeStudy(t, stocky)
+	_, a, _ := invoke(t, "run", study, "--json", "--seed", "11", "--samples", "200000", "--method", "monte-carlo", "--out", t.TempDir())
+	_, b, _ := invoke(t, "run", "--seed", "11", "--json", "--out", t.TempDir(), "--samples", "200000", "--method", "monte-carlo", study, "--workers", "1")
+	if a != b || a == "" {
+		t.Errorf("two runs with seed 11 differ:\n%s\n---\n%s", a, b)
+	}
+}
