@@ -57,17 +57,15 @@ func (f *figure) render(format string) (out []byte, err error) {
 	return buf.Bytes(), nil
 }
 
-// draw lays the panels out in one row on dc.
+// draw lays the panels out in one row on dc, each in its own tile.
 func (f *figure) draw(dc draw.Canvas) {
 	if len(f.Plots) == 1 {
 		f.Plots[0].Draw(dc)
 		return
 	}
-	tiles := draw.Tiles{Rows: 1, Cols: len(f.Plots), PadX: vg.Points(12), PadTop: vg.Points(2), PadBottom: vg.Points(2), PadLeft: vg.Points(2), PadRight: vg.Points(6)}
-	row := [][]*plot.Plot{f.Plots}
-	cs := plot.Align(row, tiles, dc)
+	tiles := draw.Tiles{Rows: 1, Cols: len(f.Plots), PadX: vg.Points(18)}
 	for j, p := range f.Plots {
-		p.Draw(cs[0][j])
+		p.Draw(tiles.At(dc, j, 0))
 	}
 }
 

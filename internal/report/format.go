@@ -32,7 +32,16 @@ func sig(x float64, n int) string {
 		p := math.Pow10(-dec)
 		return strconv.FormatFloat(math.Round(x/p)*p, 'f', 0, 64)
 	}
-	return strconv.FormatFloat(x, 'f', dec, 64)
+	return trimZeros(strconv.FormatFloat(x, 'f', dec, 64))
+}
+
+// trimZeros removes trailing zeros after a decimal point, and the point.
+func trimZeros(s string) string {
+	if !strings.Contains(s, ".") {
+		return s
+	}
+	s = strings.TrimRight(s, "0")
+	return strings.TrimSuffix(s, ".")
 }
 
 // sci formats x in scientific notation with n significant digits and a
@@ -46,6 +55,7 @@ func sci(x float64, n int) string {
 	if !ok {
 		return s
 	}
+	mant = trimZeros(mant)
 	sign := ""
 	if exp[0] == '-' {
 		sign = "-"
@@ -99,9 +109,13 @@ func display(u string) (scale float64, unit string) {
 }
 
 // withUnit formats a value held in internal unit u for reading: converted
-// by display and followed by its unit when there is one.
+// by display (and stresses of 10 000 MPa or more, such as moduli, in GPa)
+// and followed by its unit when there is one.
 func withUnit(x float64, u string) string {
 	s, du := display(u)
+	if u == "MPa" && math.Abs(x) >= 1e4 {
+		s, du = 1e-3, "GPa"
+	}
 	v := sig(x*s, 4)
 	if du == "" || v == notAvailable {
 		return v

@@ -43,23 +43,24 @@ func (decadeTicks) Ticks(min, max float64) []plot.Tick {
 	return ticks
 }
 
-// probTicks marks a logarithmic probability axis with powers of ten
-// written 1e-3 etc.
-type probTicks struct{}
+// exponentTicks mark a linear axis that holds log10 of a probability:
+// major ticks at whole exponents labelled 1e-3 etc., minor ticks at
+// log10(k * 10^e) for k = 2..9. (A linear axis of log10 values is used
+// rather than plot.LogScale, whose axis-label placement leaves a gap.)
+type exponentTicks struct{}
 
-// Ticks implements plot.Ticker. min and max must be positive.
-func (probTicks) Ticks(min, max float64) []plot.Tick {
-	if !(min > 0) || !(max > min) || !finite(min) || !finite(max) {
+// Ticks implements plot.Ticker.
+func (exponentTicks) Ticks(min, max float64) []plot.Tick {
+	if !finite(min) || !finite(max) || !(max > min) || max-min > 300 {
 		return nil
 	}
 	var ticks []plot.Tick
-	for e := int(math.Floor(math.Log10(min))); e <= int(math.Ceil(math.Log10(max))); e++ {
-		v := math.Pow10(e)
-		if v >= min*0.999 && v <= max*1.001 {
-			ticks = append(ticks, plot.Tick{Value: v, Label: sci(v, 1)})
+	for e := math.Floor(min); e <= math.Ceil(max); e++ {
+		if e >= min-1e-9 && e <= max+1e-9 {
+			ticks = append(ticks, plot.Tick{Value: e, Label: sci(math.Pow(10, e), 1)})
 		}
 		for k := 2; k <= 9; k++ {
-			if m := v * float64(k); m >= min && m <= max {
+			if m := e + math.Log10(float64(k)); m >= min && m <= max {
 				ticks = append(ticks, plot.Tick{Value: m})
 			}
 		}
@@ -111,21 +112,6 @@ func convergenceFigure(b *Bundle) *figure {
 	p.X.Scale = plot.LogScale{}
 	p.X.Tick.Marker = decadeTicks{}
 	p.Y.Min = math.Min(p.Y.Min, 0)
-	p.Y.Tick.Marker = probLinearTicks{}
+	p.Y.Tick.Marker = niceTicks{Format: prob}
 	return &figure{Name: "convergence", Caption: "Estimate of the failure probability and its 95% interval as the number of limit-state evaluations grows.", W: 16 * vg.Centimeter, H: 9 * vg.Centimeter, Plots: []*plot.Plot{p}}
-}
-
-// probLinearTicks are the default ticks of a linear axis, labelled in the
-// report's probability format (3.0e-3 rather than 0.0030).
-type probLinearTicks struct{}
-
-// Ticks implements plot.Ticker.
-func (probLinearTicks) Ticks(min, max float64) []plot.Tick {
-	ticks := plot.DefaultTicks{}.Ticks(min, max)
-	for i := range ticks {
-		if ticks[i].Label != "" {
-			ticks[i].Label = prob(ticks[i].Value)
-		}
-	}
-	return ticks
 }

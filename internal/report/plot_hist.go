@@ -158,7 +158,11 @@ func marginFigure(b *Bundle) *figure {
 			shade.Color = faded(colFailure, 0x22)
 			shade.LineStyle.Width = 0
 			p.Add(shade)
-			p.Legend.Add("failure side, g < 0", shade)
+			name := "failure side, g < 0"
+			if d := doc(b); d.Pf != nil && finite(*d.Pf) {
+				name += " (pf = " + prob(*d.Pf) + ")"
+			}
+			p.Legend.Add(name, shade)
 		}
 	}
 	if len(safe) > 0 {

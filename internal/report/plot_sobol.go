@@ -37,6 +37,7 @@ func sobolFigure(b *Bundle) *figure {
 		what = "the output"
 	}
 	p := newPlot("Sobol indices of "+what, "index (share of variance, –)", "")
+	addGridLines(p, false, true)
 	names := make([]string, n)
 	const h = 0.36
 	var first, total *plotter.Polygon
@@ -91,8 +92,7 @@ func sobolFigure(b *Bundle) *figure {
 	p.NominalY(names...)
 	p.X.Min = math.Min(0, xmin)
 	p.X.Max = math.Max(1, xmax)
-	p.Y.Min, p.Y.Max = -0.6, float64(n)-0.4
-	addGrid(p, true)
+	p.Y.Min, p.Y.Max = -1.5, float64(n)-0.4 // room for the legend below
 	if first != nil {
 		p.Legend.Add("first order", first)
 	}
@@ -104,5 +104,5 @@ func sobolFigure(b *Bundle) *figure {
 	if b.SobolNote != "" {
 		caption += " " + b.SobolNote
 	}
-	return &figure{Name: "sobol", Caption: caption, W: 16 * vg.Centimeter, H: 3.5*vg.Centimeter + vg.Length(n)*0.9*vg.Centimeter, Plots: []*plot.Plot{p}}
+	return &figure{Name: "sobol", Caption: caption, W: 16 * vg.Centimeter, H: 4*vg.Centimeter + vg.Length(n)*0.9*vg.Centimeter, Plots: []*plot.Plot{p}}
 }

@@ -40,7 +40,7 @@ func sweepFigure(b *Bundle) *figure {
 				beta = append(beta, plotter.XY{X: pt.Value, Y: pt.Beta})
 			}
 			if pt.Pf > 0 && finite(pt.Pf) {
-				pf = append(pf, plotter.XY{X: pt.Value, Y: pt.Pf})
+				pf = append(pf, plotter.XY{X: pt.Value, Y: math.Log10(pt.Pf)})
 				pfMin, pfMax = math.Min(pfMin, pt.Pf), math.Max(pfMax, pt.Pf)
 			}
 			// beta interval from the pf interval (the upper pf gives the lower beta).
@@ -98,7 +98,7 @@ func sweepFigure(b *Bundle) *figure {
 			pb.Legend.Add("target β = "+fixed(t, 2), ln)
 		}
 		if pt := sim.PfFromBeta(t); pt > 0 && finite(pfMin) {
-			if ln, err := plotter.NewLine(plotter.XYs{{X: xmin, Y: pt}, {X: xmax, Y: pt}}); err == nil {
+			if ln, err := plotter.NewLine(plotter.XYs{{X: xmin, Y: math.Log10(pt)}, {X: xmax, Y: math.Log10(pt)}}); err == nil {
 				ln.LineStyle = lineStyle(colFailure, 1, true)
 				pp.Add(ln)
 				pp.Legend.Add("target pf = "+prob(pt), ln)
@@ -106,16 +106,20 @@ func sweepFigure(b *Bundle) *figure {
 			}
 		}
 	}
+	// Headroom above the curves for the legend.
+	if lo, hi := pb.Y.Min, pb.Y.Max; finite(lo) && finite(hi) {
+		span := math.Max(hi-lo, 0.5)
+		pb.Y.Max = hi + 0.45*span
+	}
 	plots := []*plot.Plot{pb}
 	if finite(pfMin) && pfMin > 0 {
-		pp.Y.Scale = plot.LogScale{}
-		pp.Y.Tick.Marker = probTicks{}
-		pp.Y.Min = math.Pow10(int(math.Floor(math.Log10(pfMin))))
-		pp.Y.Max = math.Pow10(int(math.Ceil(math.Log10(pfMax))))
+		// The axis holds log10(pf); ticks are labelled as probabilities.
+		pp.Y.Tick.Marker = exponentTicks{}
+		pp.Y.Min = math.Floor(math.Log10(pfMin))
+		pp.Y.Max = math.Min(0, math.Ceil(math.Log10(pfMax))+2) // headroom for the legend
 		if pp.Y.Max <= pp.Y.Min {
-			pp.Y.Max = pp.Y.Min * 10
+			pp.Y.Max = pp.Y.Min + 1
 		}
-		pp.Legend.Top = false
 		plots = append(plots, pp)
 	}
 	w := 16 * vg.Centimeter

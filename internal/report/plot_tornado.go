@@ -83,7 +83,8 @@ func tornadoFigure(b *Bundle) *figure {
 		if math.Abs(halves[1].v-base) > math.Abs(halves[0].v-base) {
 			halves[0], halves[1] = halves[1], halves[0]
 		}
-		for _, h := range halves {
+		sameSide := (halves[0].v-base)*(halves[1].v-base) > 0
+		for k, h := range halves {
 			pg, err := plotter.NewPolygon(plotter.XYs{{X: base, Y: y - half}, {X: h.v, Y: y - half}, {X: h.v, Y: y + half}, {X: base, Y: y + half}})
 			if err != nil {
 				return nil
@@ -97,7 +98,16 @@ func tornadoFigure(b *Bundle) *figure {
 				highThumb = pg
 			}
 			p.Add(pg)
+			xmin, xmax = math.Min(xmin, h.v), math.Max(xmax, h.v)
+			if sameSide && k == 1 {
+				continue // labelled together with the longer half
+			}
 			label := withUnit(h.in, unit)
+			if sameSide {
+				// Both settings move the result the same way: one label at the
+				// far end, the nearer setting's value first.
+				label = withUnit(halves[1].in, unit) + ", " + label
+			}
 			st := textStyle(8, colInk)
 			st.YAlign = draw.YCenter
 			if h.v < base || (h.v == base && h.low) {
@@ -111,7 +121,6 @@ func tornadoFigure(b *Bundle) *figure {
 				right.Labels = append(right.Labels, label)
 				rightStyle = append(rightStyle, st)
 			}
-			xmin, xmax = math.Min(xmin, h.v), math.Max(xmax, h.v)
 		}
 	}
 	for _, l := range []struct {
@@ -142,7 +151,8 @@ func tornadoFigure(b *Bundle) *figure {
 		span = math.Max(math.Abs(base), 1)
 	}
 	p.X.Min, p.X.Max = xmin-0.3*span, xmax+0.3*span
-	p.Y.Min, p.Y.Max = -0.6, float64(len(rows))-0.4
+	// An empty band under the bars holds the legend.
+	p.Y.Min, p.Y.Max = -2.3, float64(len(rows))-0.4
 	p.NominalY(names...)
 	p.Y.Tick.Label.Font.Size = 9
 	if lowThumb != nil {
@@ -151,8 +161,12 @@ func tornadoFigure(b *Bundle) *figure {
 	if highThumb != nil {
 		p.Legend.Add("input at its high fractile", highThumb)
 	}
-	p.Legend.Add("all inputs at median: "+sig(base, 4), bl)
+	unit := ""
+	if i := strings.LastIndex(xlabel, "("); i >= 0 && strings.HasSuffix(xlabel, ")") {
+		unit = " " + xlabel[i+1:len(xlabel)-1]
+	}
+	p.Legend.Add("all inputs at their medians: "+sig(base, 4)+unit, bl)
 	p.Legend.Top = false
-	h := 3.5*vg.Centimeter + vg.Length(len(rows))*0.85*vg.Centimeter
+	h := 4.5*vg.Centimeter + vg.Length(len(rows))*0.85*vg.Centimeter
 	return &figure{Name: "tornado", Caption: "Each input in turn at its low and high fractile with the others at their medians; bars are the change of " + xlabel + " from the median result, labelled with the input value.", W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
 }

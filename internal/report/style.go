@@ -67,6 +67,7 @@ func newPlot(title, xlabel, ylabel string) *plot.Plot {
 		a.Tick.LineStyle.Color = colMuted
 		a.Tick.Length = vg.Points(4)
 		a.Padding = vg.Points(3)
+		a.Tick.Marker = niceTicks{}
 	}
 	p.X.Label.Text = xlabel
 	p.Y.Label.Text = ylabel
@@ -78,15 +79,21 @@ func newPlot(title, xlabel, ylabel string) *plot.Plot {
 	return p
 }
 
-// addGrid adds light horizontal (and, if vertical, vertical) grid lines.
+// addGrid adds light grid lines at the major ticks: horizontal ones, and
+// vertical ones when vertical is set.
 func addGrid(p *plot.Plot, vertical bool) {
+	addGridLines(p, true, vertical)
+}
+
+// addGridLines adds light grid lines across either or both axes.
+func addGridLines(p *plot.Plot, horizontal, vertical bool) {
 	g := plotter.NewGrid()
-	g.Horizontal.Color = colGrid
-	g.Horizontal.Width = vg.Points(0.5)
-	if vertical {
-		g.Vertical.Color = colGrid
-		g.Vertical.Width = vg.Points(0.5)
-	} else {
+	g.Horizontal = lineStyle(colGrid, 0.5, false)
+	g.Vertical = lineStyle(colGrid, 0.5, false)
+	if !horizontal {
+		g.Horizontal.Color = nil
+	}
+	if !vertical {
 		g.Vertical.Color = nil
 	}
 	p.Add(g)

@@ -5,12 +5,16 @@ import (
 	"strings"
 )
 
-// SummaryText returns the concise text a person reads in a terminal (and in
-// summary.txt): the failure probability and reliability index with their
-// intervals, the target and whether it is met, the method and its
-// evaluations, the three most influential inputs, the reserve factor when
-// there is one, the warnings and the caution. Numbers that are missing or
-// not finite are written as "n/a".
+// SummaryText returns the concise text a person reads in a terminal (and
+// in summary.txt): the nominal capacity, the failure probability and
+// reliability index with their intervals, the target and whether it is met
+// ("undecided at this sample size" when the interval of beta straddles the
+// target), the reserve factor when there is one, the method and its
+// evaluations, the three most influential inputs, the warnings and the
+// caution. Numbers that are missing or not finite are written as "n/a".
+//
+// (It is not named Summary because Summary is the Document's type for a
+// sampled distribution.)
 func SummaryText(b *Bundle) string {
 	var w strings.Builder
 	d := doc(b)
@@ -19,49 +23,57 @@ func SummaryText(b *Bundle) string {
 		title = "strutrisk study"
 	}
 	fmt.Fprintln(&w, title)
-	if d.Nominal != nil {
-		n := d.Nominal
-		fmt.Fprintf(&w, "  nominal capacity      %s (%s axis, K = %s, relative slenderness %s)\n",
-			kN(n.Capacity), n.Axis, fixed(n.K, 3), fixed(n.RelativeSlenderness, 3))
+	line := func(label, format string, args ...any) {
+		fmt.Fprintf(&w, "  %-24s %s\n", label, fmt.Sprintf(format, args...))
+	}
+	f2 := func(x float64) string { return fixed(x, 2) }
+	if n := d.Nominal; n != nil {
+		line("nominal capacity", "%s (%s axis, K = %s, relative slenderness %s)", kN(n.Capacity), n.Axis, fixed(n.K, 3), fixed(n.RelativeSlenderness, 3))
 	}
 	if d.Pf != nil {
-		conf := "95%"
-		fmt.Fprintf(&w, "  probability of failure %s  (%s interval %s)", prob(*d.Pf), conf, intervalText(d.PfCI, prob))
-		if d.PfCoV != nil {
-			fmt.Fprintf(&w, ", CoV %s", percent(*d.PfCoV))
+		s := prob(*d.Pf)
+		if len(d.PfCI) == 2 {
+			s += "  (95% interval " + intervalText(d.PfCI, prob) + ")"
 		}
-		fmt.Fprintln(&w)
+		if d.PfCoV != nil {
+			s += ", CoV " + percent(*d.PfCoV)
+		}
+		line("probability of failure", "%s", s)
 	}
 	if d.Beta != nil {
-		fmt.Fprintf(&w, "  reliability index      %s  (95%% interval %s)\n", fixed(*d.Beta, 2), intervalText(d.BetaCI, func(x float64) string { return fixed(x, 2) }))
+		s := f2(*d.Beta)
+		if len(d.BetaCI) == 2 {
+			s += "  (95% interval " + intervalText(d.BetaCI, f2) + ")"
+		}
+		line("reliability index beta", "%s", s)
 	}
 	if v := targetVerdict(&d); v != noTarget {
-		fmt.Fprintf(&w, "  target beta %s: %s\n", fixed(*d.TargetBeta, 2), verdictText(v))
+		line("target beta", "%s: %s", f2(*d.TargetBeta), verdictText(v))
 	}
 	if d.ReserveFactor != nil {
-		fmt.Fprintf(&w, "  reserve factor         %s (load factor at which the target is just met)\n", fixed(*d.ReserveFactor, 2))
+		line("reserve factor", "%s (load factor at which the target is just met)", f2(*d.ReserveFactor))
 	}
 	if d.Method != "" {
-		fmt.Fprintf(&w, "  method                 %s", d.Method)
+		s := d.Method
 		if d.Evaluations != nil {
-			fmt.Fprintf(&w, ", %s evaluations", thousands(*d.Evaluations))
+			s += ", " + thousands(*d.Evaluations) + " evaluations"
 		}
 		if d.Seed != nil {
-			fmt.Fprintf(&w, ", seed %d", *d.Seed)
+			s += fmt.Sprintf(", seed %d", *d.Seed)
 		}
-		fmt.Fprintln(&w)
+		line("method", "%s", s)
 	}
 	if measure, top := topInfluences(&d, 3); len(top) > 0 {
 		parts := make([]string, len(top))
 		for i, t := range top {
 			parts[i] = fmt.Sprintf("%s (%s)", t.Name, sig(t.Weight, 2))
 		}
-		fmt.Fprintf(&w, "  most influential       %s  [by %s]\n", strings.Join(parts, ", "), measure)
+		line("most influential", "%s  [by %s]", strings.Join(parts, ", "), measure)
 	}
 	for _, warn := range d.Warnings {
-		fmt.Fprintf(&w, "  warning: %s\n", warn)
+		line("warning", "%s", warn)
 	}
-	fmt.Fprintf(&w, "  caution: %s\n", Caution)
+	line("caution", "%s", Caution)
 	return w.String()
 }
 

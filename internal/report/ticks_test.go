@@ -1,0 +1,34 @@
+package report
+
+import (
+	"strings"
+	"testing"
+)
+
+func TestNiceTicks(t *testing.T) {
+	t.Parallel()
+	for _, c := range []struct {
+		min, max float64
+		want     string // labelled ticks
+	}{
+		{0, 2808, "0 500 1000 1500 2000 2500"},
+		{0, 52, "0 10 20 30 40 50"},
+		{-0.02, 1, "0 0.2 0.4 0.6 0.8 1"},
+		{0, 0.0095, "0 0.002 0.004 0.006 0.008"},
+		{1.9, 5.1, "2 2.5 3 3.5 4 4.5 5"},
+		{200, 600, "200 300 400 500 600"},
+	} {
+		var got []string
+		for _, tk := range (niceTicks{}).Ticks(c.min, c.max) {
+			if tk.Label != "" {
+				got = append(got, tk.Label)
+			}
+		}
+		if g := strings.Join(got, " "); g != c.want {
+			t.Errorf("ticks on [%v, %v]: %q, want %q", c.min, c.max, g, c.want)
+		}
+	}
+	if ticks := (niceTicks{}).Ticks(1, 1); ticks != nil {
+		t.Errorf("empty range gave %v", ticks)
+	}
+}
