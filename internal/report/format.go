@@ -108,14 +108,20 @@ func display(u string) (scale float64, unit string) {
 	return 1, u
 }
 
+// displayFor is display, with stresses of 10 000 MPa or more (moduli)
+// shown in GPa.
+func displayFor(x float64, u string) (scale float64, unit string) {
+	if u == "MPa" && math.Abs(x) >= 1e4 {
+		return 1e-3, "GPa"
+	}
+	return display(u)
+}
+
 // withUnit formats a value held in internal unit u for reading: converted
 // by display (and stresses of 10 000 MPa or more, such as moduli, in GPa)
 // and followed by its unit when there is one.
 func withUnit(x float64, u string) string {
-	s, du := display(u)
-	if u == "MPa" && math.Abs(x) >= 1e4 {
-		s, du = 1e-3, "GPa"
-	}
+	s, du := displayFor(x, u)
 	v := sig(x*s, 4)
 	if du == "" || v == notAvailable {
 		return v

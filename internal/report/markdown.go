@@ -66,7 +66,7 @@ func Markdown(b *Bundle) string {
 		for _, t := range v.Tornado {
 			rows = append(rows, []string{t.Variable, t.LowValue, t.HighValue, t.Low, t.High, t.Swing})
 		}
-		mdTable(&w, []string{"input", "low value", "high value", "result at low", "result at high", "swing"}, rows)
+		mdTable(&w, []string{"input", "low value", "high value", "result at low" + v.TornadoUnit, "result at high" + v.TornadoUnit, "swing" + v.TornadoUnit}, rows)
 	}
 	if len(v.Sobol) > 0 {
 		what := v.SobolOutput
@@ -154,7 +154,7 @@ func Markdown(b *Bundle) string {
 // mdText escapes the characters that would break a Markdown table cell or
 // start unintended formatting.
 func mdText(s string) string {
-	r := strings.NewReplacer("|", `\|`, "\n", " ", "*", `\*`, "_", `\_`)
+	r := strings.NewReplacer("|", `\|`, "\n", " ", "*", `\*`)
 	return r.Replace(s)
 }
 

@@ -4,7 +4,9 @@ import (
 	"fmt"
 	"html/template"
 	"math"
+	"sort"
 	"strconv"
+	"strings"
 )
 
 // view is the report's content formatted for reading, shared by the HTML
@@ -22,6 +24,7 @@ type view struct {
 	Defaults []string
 
 	TornadoOutput, TornadoBase string
+	TornadoUnit                string // " (kN)" or ""; for column heads
 	Tornado                    []tornadoRow
 	SobolOutput, SobolNote     string
 	Sobol                      []sobolRow
@@ -133,7 +136,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		if in.CoV != 0 {
 			cov = fixed(in.CoV, 3)
 		}
-		s, u := display(in.Unit)
+		s, u := displayFor(in.Mean, in.Unit)
 		v.Inputs = append(v.Inputs, inputRow{in.Name, in.Dist, in.Params, sig(in.Mean*s, 4), cov, u})
 	}
 	if n := d.Nominal; n != nil {
@@ -149,8 +152,11 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 
 	scale, out := tornadoScale(b.TornadoOutput)
 	v.TornadoOutput = out
+	if i := strings.LastIndex(out, "("); i >= 0 && strings.HasSuffix(out, ")") {
+		v.TornadoUnit = " " + out[i:]
+	}
 	if len(d.Tornado) > 0 {
-		v.TornadoBase = sig(b.TornadoBase*scale, 4)
+		v.TornadoBase = sig(b.TornadoBase*scale, 4) + strings.TrimSuffix(strings.Replace(v.TornadoUnit, "(", "", 1), ")")
 	}
 	for _, t := range d.Tornado {
 		u := inputUnit(b, t.Variable)
@@ -169,6 +175,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 				names = append(names, k)
 			}
 		}
+		sort.SliceStable(names, func(i, j int) bool { return f.Importance[names[i]] > f.Importance[names[j]] })
 		for _, k := range names {
 			dp, imp := notAvailable, notAvailable
 			if x, ok := f.DesignPoint[k]; ok {
@@ -188,7 +195,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 			}
 			s += fmt.Sprintf("%s (%s)", t.Name, sig(t.Weight, 2))
 		}
-		v.Influence = s + " — by " + measure
+		v.Influence = s + " — by " + strings.Replace(measure, "alpha^2", "α²", 1)
 	}
 
 	for _, p := range d.Sweep {
