@@ -36,38 +36,51 @@ func chiSquareSpace(n int, c float64) *uSpace {
 }
 
 func TestSubsetLognormal45(t *testing.T) {
+	// Subset simulation is random: one run of at most 50000 evaluations
+	// lands within 0.05 of the exact beta about 9 times in 10 (measured
+	// over 200 seeds: rms error 0.031). Ten independent runs must all
+	// stay within the budget, at least 8 within 0.05, and their rms
+	// error below 0.05.
 	m := lognormalRSModel(t, rs45MR, rs45VR, rs45MS, rs45VS)
 	exact := lognormalRSBeta(rs45MR, rs45VR, rs45MS, rs45VS)
 	tr, err := NewTransform(m)
 	if err != nil {
 		t.Fatal(err)
 	}
-	r, err := subsetSimulation(context.Background(), m, tr, &Settings{Samples: 50000, Seed: 1})
-	if err != nil {
-		t.Fatal(err)
+	const runs = 10
+	var within int
+	var sq float64
+	for seed := uint64(1); seed <= runs; seed++ {
+		r, err := subsetSimulation(context.Background(), m, tr, &Settings{Samples: 50000, Seed: seed})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if r.Evaluations > 50000 || r.Method != Subset || len(r.Warnings) != 0 {
+			t.Errorf("seed %d: %d evaluations, method %s, warnings %v", seed, r.Evaluations, r.Method, r.Warnings)
+		}
+		if r.BetaCI[0] > r.Beta || r.BetaCI[1] < r.Beta {
+			t.Errorf("seed %d: beta %v outside its interval %v", seed, r.Beta, r.BetaCI)
+		}
+		d := r.Beta - exact
+		if math.Abs(d) <= 0.05 {
+			within++
+		}
+		sq += d * d
+		t.Logf("seed %d: beta %.4f (exact %.4f), CI %.3f..%.3f, CoV %.3f, %d evaluations", seed, r.Beta, exact, r.BetaCI[0], r.BetaCI[1], r.PfCoV, r.Evaluations)
 	}
-	if r.Evaluations > 50000 {
-		t.Errorf("%d evaluations, more than 50000", r.Evaluations)
+	if rms := math.Sqrt(sq / runs); within < 8 || rms > 0.05 {
+		t.Errorf("%d of %d runs within 0.05, rms error %.4f", within, runs, rms)
 	}
-	// The tolerance is about 2 standard deviations of the estimate here
-	// (CoV about 0.11, d beta = CoV Phi(-beta)/phi(beta) = 0.02).
-	if math.Abs(r.Beta-exact) > 0.05 {
-		t.Errorf("beta %.4f, exact %.4f (CoV %.3f)", r.Beta, exact, r.PfCoV)
-	}
-	if r.Method != Subset || len(r.Warnings) != 0 || r.BetaCI[0] > r.Beta || r.BetaCI[1] < r.Beta {
-		t.Errorf("method %s, warnings %v, beta CI %v", r.Method, r.Warnings, r.BetaCI)
-	}
-	t.Logf("beta %.4f (exact %.4f), CI %.3f..%.3f, pf %.4g, CoV %.3f, %d evaluations", r.Beta, exact, r.BetaCI[0], r.BetaCI[1], r.Pf, r.PfCoV, r.Evaluations)
 }
 
 // subsetStats runs subset simulation with seeds 1..runs and returns the
 // mean estimate, the sample CoV of the estimates and the mean of the CoVs
 // the estimator predicts for itself.
-func subsetStats(t *testing.T, sp *uSpace, runs int, samples int64) (mean, cov, predicted float64) {
+func subsetStats(t *testing.T, sp *uSpace, runs int, levelSize int) (mean, cov, predicted float64) {
 	t.Helper()
 	var s1, s2 float64
 	for seed := 1; seed <= runs; seed++ {
-		r, err := subsetRun(context.Background(), sp, &Settings{Samples: samples, Seed: uint64(seed), Workers: 2})
+		r, err := subsetRun(context.Background(), sp, &Settings{Seed: uint64(seed), Workers: 2}, levelSize)
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -90,22 +103,22 @@ func TestSubsetStatistics(t *testing.T) {
 	// the size of Au and Beck's delta (which neglects the correlation
 	// between levels, so the observed CoV may be somewhat larger).
 	cases := []struct {
-		name    string
-		sp      *uSpace
-		exact   float64
-		runs    int
-		samples int64
+		name      string
+		sp        *uSpace
+		exact     float64
+		runs      int
+		levelSize int
 	}{
 		// Linear case, n = 10, b0 = 4.7: Pf = Phi(-4.7) = 1.30081e-6.
-		{"linear n=10 b0=4.7", linearSpace(10, 4.7), formTail(4.7), 60, 8000},
+		{"linear n=10 b0=4.7", linearSpace(10, 4.7), formTail(4.7), 60, 1000},
 		// Chi-square, n = 10, c = 40: Pf = Q(5, 20) = 1.69447e-5.
-		{"chi-square n=10 c=40", chiSquareSpace(10, 40), mathext.GammaIncRegComp(5, 20), 30, 8000},
+		{"chi-square n=10 c=40", chiSquareSpace(10, 40), mathext.GammaIncRegComp(5, 20), 30, 1000},
 		// Sum of 20 unit exponentials above 40: Pf = Q(20, 40) = 1.76303e-4.
-		{"sum of exponentials n=20 C=40", sumExpSpace(20, 40), sumExpPf(20, 40), 30, 8000},
+		{"sum of exponentials n=20 C=40", sumExpSpace(20, 40), sumExpPf(20, 40), 30, 1000},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			mean, cov, pred := subsetStats(t, c.sp, c.runs, c.samples)
+			mean, cov, pred := subsetStats(t, c.sp, c.runs, c.levelSize)
 			se := mean * cov / math.Sqrt(float64(c.runs))
 			if math.Abs(mean-c.exact) > 3*se {
 				t.Errorf("mean of %d runs %.5g ± %.2g, exact %.5g", c.runs, mean, se, c.exact)
@@ -129,7 +142,7 @@ func TestSubsetChiSquareReference(t *testing.T) {
 
 func TestSubsetVerySmall(t *testing.T) {
 	// Pf = Phi(-5) = 2.86652e-7 (linear case, n = 10), without FORM.
-	r, err := subsetRun(context.Background(), linearSpace(10, 5), &Settings{Samples: 40000, Seed: 2})
+	r, err := subsetRun(context.Background(), linearSpace(10, 5), &Settings{Samples: 100000, Seed: 2}, 0)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -137,8 +150,8 @@ func TestSubsetVerySmall(t *testing.T) {
 	if math.Abs(r.Beta-5) > 0.15 {
 		t.Errorf("beta %.4f, want 5 (pf %.4g, CoV %.3f)", r.Beta, r.Pf, r.PfCoV)
 	}
-	if r.Pf < r.PfCI[0] || r.Pf > r.PfCI[1] || len(r.Convergence) < 6 {
-		t.Errorf("pf %.4g outside its interval %v, or %d levels", r.Pf, r.PfCI, len(r.Convergence))
+	if r.Pf < r.PfCI[0] || r.Pf > r.PfCI[1] || len(r.Convergence) != 6 || len(r.Warnings) > 0 {
+		t.Errorf("pf %.4g outside its interval %v, or %d intermediate levels, warnings %v", r.Pf, r.PfCI, len(r.Convergence), r.Warnings)
 	}
 	t.Logf("beta %.4f, pf %.4g, CoV %.3f, %d evaluations, %d levels", r.Beta, r.Pf, r.PfCoV, r.Evaluations, len(r.Convergence)+1)
 }
@@ -147,7 +160,7 @@ func TestSubsetDeterminism(t *testing.T) {
 	sp := linearSpace(4, 4)
 	var first *Result
 	for _, w := range []int{1, 2, 4} {
-		r, err := subsetRun(context.Background(), sp, &Settings{Samples: 8000, Seed: 9, Workers: w})
+		r, err := subsetRun(context.Background(), sp, &Settings{Samples: 8000, Seed: 9, Workers: w}, 0)
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -159,16 +172,16 @@ func TestSubsetDeterminism(t *testing.T) {
 			t.Errorf("workers %d: pf %v cov %v n %d; workers 1: %v %v %d", w, r.Pf, r.PfCoV, r.Evaluations, first.Pf, first.PfCoV, first.Evaluations)
 		}
 	}
-	r, _ := subsetRun(context.Background(), sp, &Settings{Samples: 8000, Seed: 10})
+	r, _ := subsetRun(context.Background(), sp, &Settings{Samples: 8000, Seed: 10}, 0)
 	if r.Pf == first.Pf {
 		t.Errorf("seeds 9 and 10 gave the same pf %v", r.Pf)
 	}
 }
 
 func TestSubsetBudget(t *testing.T) {
-	// 5000 evaluations (N = 620 per level) cannot reach Phi(-7) = 1.3e-12:
+	// 5000 evaluations (N = 830 per level) cannot reach Phi(-7) = 1.3e-12:
 	// the run stops within the budget and says so.
-	r, err := subsetRun(context.Background(), linearSpace(2, 7), &Settings{Samples: 5000, Seed: 1})
+	r, err := subsetRun(context.Background(), linearSpace(2, 7), &Settings{Samples: 5000, Seed: 1}, 0)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -182,7 +195,7 @@ func TestSubsetBudget(t *testing.T) {
 
 func TestSubsetStalls(t *testing.T) {
 	// A flat limit state never lets the threshold fall.
-	_, err := subsetRun(context.Background(), funcSpace(2, func(u []float64) float64 { return 1 }), &Settings{Samples: 10000})
+	_, err := subsetRun(context.Background(), funcSpace(2, func(u []float64) float64 { return 1 }), &Settings{Samples: 10000}, 0)
 	if err == nil || !strings.Contains(err.Error(), "stalled") {
 		t.Errorf("error %v", err)
 	}
