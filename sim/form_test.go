@@ -276,3 +276,62 @@ func TestFORMSeriesSystem(t *testing.T) {
 		t.Errorf("singular 3-union %.8g, want %.8g", got, want)
 	}
 }
+
+func TestFORMModel(t *testing.T) {
+	// Through the Model and its transformation: references.md cases A and
+	// B, from Cornell's formula and the exact lognormal formula.
+	normal := func(m, s float64) Dist {
+		d, err := NewNormal(m, s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return d
+	}
+	lognormal := func(m, v float64) Dist {
+		d, err := NewLognormal(m, v*m)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return d
+	}
+	cases := []struct {
+		name string
+		r, s Dist
+		beta float64
+	}{
+		// Cornell: (200 - 100)/sqrt(20^2 + 30^2) = 2.773501.
+		{"A normal", normal(200, 20), normal(100, 30), 100 / math.Sqrt(1300)},
+		// Exact lognormal formula: 1.894516.
+		{"B lognormal", lognormal(150, 0.10), lognormal(100, 0.20), lognormalRSBeta(150, 0.10, 100, 0.20)},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			m := &Model{
+				Vars: []Variable{{Name: "R", Dist: c.r}, {Name: "S", Dist: c.s}},
+				G:    func(x, _ []float64) float64 { return x[0] - x[1] },
+			}
+			r, err := FORM(m, nil)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if !r.Converged || len(r.Points) != 1 {
+				t.Fatalf("converged %v, %d points: %s", r.Converged, len(r.Points), r.Status)
+			}
+			if math.Abs(r.Beta-c.beta) > 1e-6 {
+				t.Errorf("beta %.9f, want %.9f", r.Beta, c.beta)
+			}
+			p := r.Points[0]
+			// The design point lies on the limit state: R* = S*.
+			if math.Abs(p.X[0]-p.X[1]) > 1e-6*p.X[0] {
+				t.Errorf("design point %v is not on g = 0", p.X)
+			}
+			// R is a resistance (alpha > 0), S a load (alpha < 0).
+			if p.Alpha[0] <= 0 || p.Alpha[1] >= 0 {
+				t.Errorf("alpha %v", p.Alpha)
+			}
+		})
+	}
+	if _, err := FORM(&Model{Vars: []Variable{{Name: "R", Dist: normal(1, 1)}}}, nil); err == nil {
+		t.Error("no error for a model without G")
+	}
+}

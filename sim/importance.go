@@ -89,35 +89,14 @@ func importanceRun(ctx context.Context, sp *uSpace, points []DesignPoint, s *Set
 	if len(points) == 0 {
 		return nil, errors.New("sim: importance sampling needs at least one design point")
 	}
-	k := len(points)
-	centres := make([][]float64, k)
-	logPi := make([]float64, k) // ln pi_k - |u_k|^2/2
-	cum := make([]float64, k)   // cumulative mixture weights
 	for i, p := range points {
 		if len(p.U) != n {
 			return nil, fmt.Errorf("sim: design point %d has %d coordinates, the model %d", i, len(p.U), n)
 		}
-		centres[i] = p.U
 	}
-	// pi_k proportional to Phi(-beta_k), relative to the most probable
-	// point so that nothing underflows.
-	ref := math.Inf(1)
-	for _, p := range points {
-		ref = math.Min(ref, p.Beta)
-	}
-	var tot float64
-	for i, p := range points {
-		w := distuv.UnitNormal.CDF(-p.Beta) / distuv.UnitNormal.CDF(-ref)
-		cum[i] = w
-		tot += w
-	}
-	var acc float64
-	for i := range cum {
-		acc += cum[i] / tot
-		logPi[i] = math.Log(cum[i]/tot) - 0.5*formDot(centres[i], centres[i])
-		cum[i] = acc
-	}
-	cum[k-1] = 1
+	k := len(points)
+	mix := isSetup(sp, points)
+	centres, logPi, cum := mix.centres, mix.logPi, mix.cum
 
 	nb := int((cfg.Samples + importanceBlockSize - 1) / importanceBlockSize)
 	blocks := make([]isBlock, nb)
@@ -165,6 +144,40 @@ func importanceRun(ctx context.Context, sp *uSpace, points []DesignPoint, s *Set
 	res.Incomplete = cancelled
 	res.Warnings = append(res.Warnings, isDiagnose(&tot2)...)
 	return res, nil
+}
+
+// isMixture is the sampling density of importance sampling.
+type isMixture struct {
+	centres [][]float64 // the design points u_k
+	logPi   []float64   // ln pi_k - |u_k|^2/2
+	cum     []float64   // cumulative mixture weights, the last 1
+}
+
+// isSetup returns the mixture of unit normals centred at the points, with
+// weights pi_k proportional to Phi(-beta_k) (taken relative to the most
+// probable point, so that nothing underflows).
+func isSetup(sp *uSpace, points []DesignPoint) *isMixture {
+	k := len(points)
+	mix := &isMixture{centres: make([][]float64, k), logPi: make([]float64, k), cum: make([]float64, k)}
+	ref := math.Inf(1)
+	for _, p := range points {
+		ref = math.Min(ref, p.Beta)
+	}
+	var tot float64
+	w := make([]float64, k)
+	for i, p := range points {
+		mix.centres[i] = p.U
+		w[i] = distuv.UnitNormal.CDF(-p.Beta) / distuv.UnitNormal.CDF(-ref)
+		tot += w[i]
+	}
+	var acc float64
+	for i := range w {
+		acc += w[i] / tot
+		mix.logPi[i] = math.Log(w[i]/tot) - 0.5*formDot(mix.centres[i], mix.centres[i])
+		mix.cum[i] = acc
+	}
+	mix.cum[k-1] = 1
+	return mix
 }
 
 // importanceBlock draws size samples from the mixture and sums the weights
