@@ -23,7 +23,7 @@ type tails interface {
 const badProb = "sim: probability out of [0, 1]"
 
 // quantile returns the p-quantile of d from its two tail inverses.
-func quantile(d tails, p float64) float64 {
+func quantile[T tails](d T, p float64) float64 {
 	if !(p >= 0 && p <= 1) {
 		panic(badProb)
 	}
@@ -35,7 +35,7 @@ func quantile(d tails, p float64) float64 {
 
 // fromStd returns F^-1(Phi(u)) using the tail of Phi on the side of u, so
 // that u = +8 maps to the upper tail of d without rounding Phi(8) to 1.
-func fromStd(d tails, u float64) float64 {
+func fromStd[T tails](d T, u float64) float64 {
 	if u <= 0 {
 		return d.lowerQ(stdCDF(u))
 	}

@@ -90,7 +90,7 @@ func (d Lognormal) Mean() float64 { return math.Exp(d.mu + 0.5*d.sigma*d.sigma) 
 func (d Lognormal) StdDev() float64 { return d.Mean() * math.Sqrt(math.Expm1(d.sigma*d.sigma)) }
 
 // FromStdNormal returns exp(mu + sigma*u).
-func (d Lognormal) FromStdNormal(u float64) float64 { return math.Exp(d.mu + d.sigma*u) }
+func (d Lognormal) FromStdNormal(u float64) float64 { return fastExp(d.mu + d.sigma*u) }
 
 // ToStdNormal returns (ln x - mu)/sigma.
 func (d Lognormal) ToStdNormal(x float64) float64 {
@@ -105,6 +105,6 @@ func (d Lognormal) String() string {
 	return "lognormal(mean " + fmtNum(d.Mean()) + ", cov " + fmtNum(d.StdDev()/d.Mean()) + ")"
 }
 
-func (d Lognormal) lowerQ(p float64) float64  { return math.Exp(d.mu + d.sigma*stdQuantile(p)) }
-func (d Lognormal) upperQ(q float64) float64  { return math.Exp(d.mu - d.sigma*stdQuantile(q)) }
-func (d Lognormal) draw(r *rand.Rand) float64 { return math.Exp(d.mu + d.sigma*r.NormFloat64()) }
+func (d Lognormal) lowerQ(p float64) float64  { return fastExp(d.mu + d.sigma*stdQuantile(p)) }
+func (d Lognormal) upperQ(q float64) float64  { return fastExp(d.mu - d.sigma*stdQuantile(q)) }
+func (d Lognormal) draw(r *rand.Rand) float64 { return fastExp(d.mu + d.sigma*r.NormFloat64()) }

@@ -19,6 +19,8 @@ type statsLayout struct {
 	shift      float64 // subtracted before summing moments
 	lo, width  float64
 	flo, fwide float64
+	// inverse widths, so that binning multiplies
+	inv, finv float64
 }
 
 // newLayout returns the layout for values seen in a pilot sample.
@@ -48,6 +50,7 @@ func newLayout(vals []float64) statsLayout {
 	l.width = 1.2 * span / histBins
 	l.flo = lo - 0.5*span
 	l.fwide = 2 * span / fineBins
+	l.inv, l.finv = 1/l.width, 1/l.fwide
 	return l
 }
 
@@ -90,14 +93,14 @@ func (s *streamStats) add(l *statsLayout, v float64) {
 	if v > s.max {
 		s.max = v
 	}
-	if i := (v - l.lo) / l.width; i < 0 {
+	if i := (v - l.lo) * l.inv; i < 0 {
 		s.under++
 	} else if i >= histBins {
 		s.ovr++
 	} else {
 		s.hist[int(i)]++
 	}
-	if i := (v - l.flo) / l.fwide; i < 0 {
+	if i := (v - l.flo) * l.finv; i < 0 {
 		s.fUnder++
 	} else if i >= fineBins {
 		s.fOver++
