@@ -121,8 +121,13 @@ func displayFor(x float64, u string) (scale float64, unit string) {
 // by display (and stresses of 10 000 MPa or more, such as moduli, in GPa)
 // and followed by its unit when there is one.
 func withUnit(x float64, u string) string {
+	return withUnitSig(x, u, 4)
+}
+
+// withUnitSig is withUnit with n significant digits.
+func withUnitSig(x float64, u string, n int) string {
 	s, du := displayFor(x, u)
-	v := sig(x*s, 4)
+	v := sig(x*s, n)
 	if du == "" || v == notAvailable {
 		return v
 	}

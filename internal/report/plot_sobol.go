@@ -2,6 +2,7 @@ package report
 
 import (
 	"math"
+	"sort"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
@@ -30,7 +31,8 @@ func sobolFigure(b *Bundle) *figure {
 	if len(rows) == 0 {
 		return nil
 	}
-	// Top to bottom in the given order: index 0 at the top.
+	// Largest total index at the top.
+	sort.SliceStable(rows, func(i, j int) bool { return rows[i].Total > rows[j].Total })
 	n := len(rows)
 	what := b.SobolOutput
 	if what == "" {

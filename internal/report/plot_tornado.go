@@ -102,11 +102,11 @@ func tornadoFigure(b *Bundle) *figure {
 			if sameSide && k == 1 {
 				continue // labelled together with the longer half
 			}
-			label := withUnit(h.in, unit)
+			label := withUnitSig(h.in, unit, 3)
 			if sameSide {
 				// Both settings move the result the same way: one label at the
 				// far end, the nearer setting's value first.
-				label = withUnit(halves[1].in, unit) + ", " + label
+				label = withUnitSig(halves[1].in, unit, 3) + ", " + label
 			}
 			st := textStyle(8, colInk)
 			st.YAlign = draw.YCenter

@@ -164,7 +164,9 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 			sig(t.Low*scale, 4), sig(t.High*scale, 4), sig(math.Abs(t.High-t.Low)*scale, 3)})
 	}
 	ci := func(c [2]float64) string { return fixed(c[0], 3) + " to " + fixed(c[1], 3) }
-	for _, s := range d.Sobol {
+	sobol := append([]Sobol(nil), d.Sobol...)
+	sort.SliceStable(sobol, func(i, j int) bool { return sobol[i].Total > sobol[j].Total })
+	for _, s := range sobol {
 		v.Sobol = append(v.Sobol, sobolRow{s.Variable, fixed(s.First, 3), ci(s.FirstCI), fixed(s.Total, 3), ci(s.TotalCI)})
 	}
 	if f := d.FORM; f != nil {
