@@ -69,6 +69,7 @@ func importanceSampling(ctx context.Context, m *Model, t *Transform, form *FORMR
 // isBlock holds the sums of one block of importance sampling.
 type isBlock struct {
 	n, fails int64
+	nan      int64   // samples where g was NaN (counted as safe)
 	sw, sw2  float64 // sums of the weights of failed samples and of their squares
 	maxw     float64 // largest weight of a failed sample
 }
@@ -120,6 +121,7 @@ func importanceRun(ctx context.Context, sp *uSpace, points []DesignPoint, s *Set
 		blk := blocks[b]
 		tot2.n += blk.n
 		tot2.fails += blk.fails
+		tot2.nan += blk.nan
 		tot2.sw += blk.sw
 		tot2.sw2 += blk.sw2
 		tot2.maxw = math.Max(tot2.maxw, blk.maxw)
@@ -200,6 +202,9 @@ func importanceBlock(ws *isWorker, size int, centres [][]float64, logPi, cum []f
 		}
 		gv := ws.g(u)
 		if !(gv < 0) {
+			if gv != gv {
+				blk.nan++
+			}
 			continue
 		}
 		// w = phi(u)/h(u) = 1 / sum_k pi_k exp(u·u_k - |u_k|^2/2),
@@ -269,6 +274,9 @@ func isDiagnose(t *isBlock) []string {
 		out = append(out, fmt.Sprintf("%s: weights degenerate (effective sample size %.1f of %d failed samples)", ImportancePoorPrefix, t.sw*t.sw/t.sw2, t.fails))
 	case t.fails >= 100 && t.maxw > 0.5*t.sw:
 		out = append(out, fmt.Sprintf("%s: one sample carries %.0f %% of the estimate", ImportancePoorPrefix, 100*t.maxw/t.sw))
+	}
+	if t.nan > 0 {
+		out = append(out, fmt.Sprintf("the limit state was NaN for %d of %d importance samples; they were counted as safe", t.nan, t.n))
 	}
 	return out
 }

@@ -111,6 +111,7 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 	res := &Result{Method: Subset, Confidence: cfg.Confidence}
 	// Level 0: direct Monte Carlo in blocks.
 	nb := (N + subsetBlockSize - 1) / subsetBlockSize
+	nanCount := make([]int, nb)
 	_, cancelled := rareParallel(ctx, cfg.Workers, nb, func(w, b int) {
 		ws := getWorker(w)
 		ws.rng.seed(cfg.Seed, streamSubset, uint64(b))
@@ -120,9 +121,19 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 			for j := range u {
 				u[j] = r.NormFloat64()
 			}
-			G[i] = ws.g(u)
+			if G[i] = ws.g(u); G[i] != G[i] {
+				G[i] = math.Inf(1) // NaN counts as safe
+				nanCount[b]++
+			}
 		}
 	}, func(int) bool { return true })
+	var nans int
+	for _, c := range nanCount {
+		nans += c
+	}
+	if nans > 0 {
+		res.Warnings = append(res.Warnings, fmt.Sprintf("the limit state was NaN for %d of the %d direct samples of subset simulation; they were counted as safe", nans, N))
+	}
 	evals := int64(N)
 	if cancelled {
 		res.Incomplete = true
