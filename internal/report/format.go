@@ -163,3 +163,10 @@ func thousands(n int64) string {
 	}
 	return b.String()
 }
+
+// nonFinite spells the non-finite numbers as fmt writes them.
+var nonFinite = strings.NewReplacer("+Inf", "∞", "-Inf", "−∞", "Inf", "∞", "NaN", notAvailable)
+
+// cleanNumbers rewrites the NaN and infinities that fmt may have put in a
+// description (such as a distribution's String) for a reader.
+func cleanNumbers(s string) string { return nonFinite.Replace(s) }

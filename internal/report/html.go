@@ -154,7 +154,7 @@ code{font-size:.9em}
 <h2>Cautions</h2>
 <p class="caution">{{.Caution}}</p>
 <ul>
-<li>The probability of failure is that of the stated model: the distributions, correlations and capacity model written in the study. Gross errors, deterioration and actions not listed are outside it.</li>
+<li>The probability of failure is that of the stated model: the distributions, correlations and capacity model written in the study. Gross errors, and actions or deterioration not written in the study, are outside it.</li>
 <li>Intervals describe the sampling error of the estimate only, not the uncertainty of the inputs' own parameters.</li>
 <li>Sensitivity measures rank the inputs as modelled; Sobol indices assume independent inputs.</li>
 </ul>

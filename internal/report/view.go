@@ -209,10 +209,10 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	for k, u := range b.Updates {
 		r := updateRow{Variable: u.Variable, N: strconv.Itoa(len(u.Data)), Picture: "update-" + strconv.Itoa(k+1)}
 		if u.Prior != nil {
-			r.Prior = u.Prior.String()
+			r.Prior = cleanNumbers(u.Prior.String())
 		}
 		if u.After != nil {
-			r.After = u.After.String()
+			r.After = cleanNumbers(u.After.String())
 		}
 		v.Updates = append(v.Updates, r)
 	}
