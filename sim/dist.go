@@ -43,7 +43,7 @@ func fromStd[T tails](d T, u float64) float64 {
 }
 
 // toStd returns Phi^-1(F(x)) from whichever of F and 1-F is smaller.
-func toStd(d Dist, x float64) float64 {
+func toStd[T Dist](d T, x float64) float64 {
 	return fromProbs(d.CDF(x), d.Survival(x))
 }
 

@@ -104,3 +104,33 @@ func TestTransformErrors(t *testing.T) {
 		}
 	}
 }
+
+// TestTransformNoAlloc checks that the per-sample paths do not allocate.
+func TestTransformNoAlloc(t *testing.T) {
+	m := columnModel(1.2e6)
+	m.Corr = []Correlation{{A: "E", B: "fy", Rho: 0.3}, {A: "D", B: "Q", Rho: 0.2}}
+	tr, err := NewTransform(m)
+	if err != nil {
+		t.Fatal(err)
+	}
+	n := tr.Dim()
+	x, u, z, p := make([]float64, n), make([]float64, n), make([]float64, n), make([]float64, n)
+	for i := range p {
+		p[i] = 0.3 + 0.05*float64(i)
+		u[i] = 0.5 - 0.2*float64(i)
+	}
+	g := newBlockRNG()
+	g.seed(1, 1, 1)
+	for name, f := range map[string]func(){
+		"ToX":         func() { tr.ToX(x, u) },
+		"ToU":         func() { tr.ToU(u, x) },
+		"drawX":       func() { tr.drawX(x, z, g.r) },
+		"fromUniform": func() { tr.fromUniform(x, p, z) },
+		"G":           func() { m.G(x, z[:2]) },
+		"conditional": func() { conditionalProb(m.Vars[5].Dist, 1e6, 1) },
+	} {
+		if a := testing.AllocsPerRun(100, f); a != 0 {
+			t.Errorf("%s allocates %v times per call", name, a)
+		}
+	}
+}
