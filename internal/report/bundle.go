@@ -46,6 +46,11 @@ type Bundle struct {
 	Updates []Update
 	// Trace is the beam-column load-deflection path at the design point.
 	Trace *Trace
+	// TornadoBeta, when not empty, holds the rows of sim.Tornado run with
+	// FORM set: the reliability index with each input fixed at its low and
+	// high value. It is drawn about Doc.FORM.Beta and tabulated beside the
+	// tornado of TornadoOutput.
+	TornadoBeta []sim.TornadoRow
 }
 
 // Input is one row of the inputs table.

@@ -178,5 +178,13 @@ func demoBundle() *Bundle {
 		tr.Shape = append(tr.Shape, 52*math.Sin(math.Pi*x/5200))
 	}
 	b.Trace = tr
+	// Invented FORM betas with each input fixed (higher load, lower beta).
+	b.TornadoBeta = []sim.TornadoRow{
+		{Variable: "loads.imposed", LowValue: 160e3, HighValue: 290e3, LowBeta: 3.61, HighBeta: 2.21},
+		{Variable: "material.yield", LowValue: 282, HighValue: 345, LowBeta: 2.41, HighBeta: 3.32},
+		{Variable: "imperfection.bow", LowValue: 0.9, HighValue: 9.2, LowBeta: 3.35, HighBeta: 2.62},
+		{Variable: "loads.dead", LowValue: 520e3, HighValue: 720e3, LowBeta: 3.15, HighBeta: 2.71},
+		{Variable: "material.modulus", LowValue: 195000, HighValue: 215000, LowBeta: 2.93, HighBeta: 2.97},
+	}
 	return b
 }

@@ -15,6 +15,7 @@ func figures(b *Bundle) (figs []*figure, skipped []error) {
 		{"margin", func() *figure { return marginFigure(b) }},
 		{"convergence", func() *figure { return convergenceFigure(b) }},
 		{"tornado", func() *figure { return tornadoFigure(b) }},
+		{"tornado-beta", func() *figure { return tornadoBetaFigure(b) }},
 		{"sobol", func() *figure { return sobolFigure(b) }},
 		{"slenderness", func() *figure { return slendernessFigure(b) }},
 		{"sweep", func() *figure { return sweepFigure(b) }},

@@ -84,9 +84,10 @@ code{font-size:.9em}
 {{if .Tornado}}<h3 id="tornado">One at a time (tornado): {{.TornadoOutput}}</h3>
 <p>All inputs at their medians give {{.TornadoBase}}.</p>
 {{with .Picture "tornado"}}{{template "fig" .}}{{end}}
-<table><tr><th>input</th><th>low value</th><th>high value</th><th>result at low{{.TornadoUnit}}</th><th>result at high{{.TornadoUnit}}</th><th>swing{{.TornadoUnit}}</th></tr>
-{{range .Tornado}}<tr><td>{{.Variable}}</td><td class="n">{{.LowValue}}</td><td class="n">{{.HighValue}}</td><td class="n">{{.Low}}</td><td class="n">{{.High}}</td><td class="n">{{.Swing}}</td></tr>
-{{end}}</table>{{end}}
+<table><tr><th>input</th><th>low value</th><th>high value</th><th>result at low{{.TornadoUnit}}</th><th>result at high{{.TornadoUnit}}</th><th>swing{{.TornadoUnit}}</th>{{if .TornadoBeta}}<th>β at low</th><th>β at high</th>{{end}}</tr>
+{{range .Tornado}}<tr><td>{{.Variable}}</td><td class="n">{{.LowValue}}</td><td class="n">{{.HighValue}}</td><td class="n">{{.Low}}</td><td class="n">{{.High}}</td><td class="n">{{.Swing}}</td>{{if $.TornadoBeta}}<td class="n">{{.LowBeta}}</td><td class="n">{{.HighBeta}}</td>{{end}}</tr>
+{{end}}</table>
+{{with .Picture "tornado-beta"}}{{template "fig" .}}{{end}}{{end}}
 {{if .Sobol}}<h3 id="sobol">Variance-based (Sobol) indices of {{if .SobolOutput}}{{.SobolOutput}}{{else}}the output{{end}}</h3>
 {{if .SobolNote}}<p>{{.SobolNote}}</p>{{end}}
 {{with .Picture "sobol"}}{{template "fig" .}}{{end}}

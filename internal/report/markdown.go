@@ -63,10 +63,18 @@ func Markdown(b *Bundle) string {
 	if len(v.Tornado) > 0 {
 		fmt.Fprintf(&w, "### One at a time (tornado): %s\n\nAll inputs at their medians give %s.\n\n", mdText(v.TornadoOutput), v.TornadoBase)
 		rows = rows[:0]
-		for _, t := range v.Tornado {
-			rows = append(rows, []string{t.Variable, t.LowValue, t.HighValue, t.Low, t.High, t.Swing})
+		head := []string{"input", "low value", "high value", "result at low" + v.TornadoUnit, "result at high" + v.TornadoUnit, "swing" + v.TornadoUnit}
+		if v.TornadoBeta {
+			head = append(head, "β at low", "β at high")
 		}
-		mdTable(&w, []string{"input", "low value", "high value", "result at low" + v.TornadoUnit, "result at high" + v.TornadoUnit, "swing" + v.TornadoUnit}, rows)
+		for _, t := range v.Tornado {
+			r := []string{t.Variable, t.LowValue, t.HighValue, t.Low, t.High, t.Swing}
+			if v.TornadoBeta {
+				r = append(r, t.LowBeta, t.HighBeta)
+			}
+			rows = append(rows, r)
+		}
+		mdTable(&w, head, rows)
 	}
 	if len(v.Sobol) > 0 {
 		what := v.SobolOutput

@@ -17,7 +17,7 @@ func TestMarkdownDemo(t *testing.T) {
 		"| 95% interval of β | 2.89 to 2.92 |",
 		"**Target NOT met.**",
 		"| material.yield | lognormal | characteristic 275 MPa, fractile 0.05, cov 0.07 | 310 | 0.070 | MPa |",
-		"| loads.imposed | 160 kN | 290 kN | 520 | 250 | 270 |",
+		"| loads.imposed | 160 kN | 290 kN | 520 | 250 | 270 | 3.61 | 2.21 |",
 		"| loads.imposed | 0.410 | 0.370 to 0.450 | 0.490 | 0.450 to 0.540 |",
 		"| loads.imposed | 402 kN | 0.440 |",
 		"| seed | 20261201 |",

@@ -43,15 +43,48 @@ func inputUnit(b *Bundle, n string) string {
 // labelled with the input value that produced it.
 func tornadoFigure(b *Bundle) *figure {
 	d := doc(b)
-	if len(d.Tornado) == 0 || !finite(b.TornadoBase) {
-		return nil
-	}
 	scale, xlabel := tornadoScale(b.TornadoOutput)
 	if xlabel == "" {
 		xlabel = "output"
 	}
-	rows := make([]Tornado, 0, len(d.Tornado))
-	for _, r := range d.Tornado {
+	f := tornadoChart(b, d.Tornado, b.TornadoBase, scale, xlabel, "One-at-a-time sensitivity (tornado)", "all inputs at their medians: ")
+	if f != nil {
+		f.Name = "tornado"
+		f.Caption = "Each input in turn at its low and high fractile with the others at their medians; bars are the change of " + xlabel + " from the result with every input at its median, labelled with the input value."
+	}
+	return f
+}
+
+// tornadoBetaFigure draws the tornado of the reliability index: FORM with
+// each input in turn fixed at its low and high value, about the FORM index
+// of the whole study.
+func tornadoBetaFigure(b *Bundle) *figure {
+	d := doc(b)
+	if len(b.TornadoBeta) == 0 || d.FORM == nil {
+		return nil
+	}
+	rows := make([]Tornado, len(b.TornadoBeta))
+	for i, r := range b.TornadoBeta {
+		rows[i] = Tornado{Variable: r.Variable, LowValue: r.LowValue, HighValue: r.HighValue, Low: r.LowBeta, High: r.HighBeta}
+	}
+	f := tornadoChart(b, rows, d.FORM.Beta, 1, "reliability index β by FORM (–)", "Reliability index with one input fixed", "all inputs random: β = ")
+	if f != nil {
+		f.Name = "tornado-beta"
+		f.Caption = "FORM reliability index with each input in turn fixed at its low and high fractile (the others random), about the index of the whole study; labelled with the fixed value."
+	}
+	return f
+}
+
+// tornadoChart draws two-sided horizontal bars of rows about base; values
+// are multiplied by scale, xlabel names the axis and baseLegend introduces
+// the base value in the legend. Rows that are not
+// finite are left out; nil when nothing is left.
+func tornadoChart(b *Bundle, all []Tornado, base, scale float64, xlabel, title, baseLegend string) *figure {
+	if len(all) == 0 || !finite(base) {
+		return nil
+	}
+	rows := make([]Tornado, 0, len(all))
+	for _, r := range all {
 		if finite(r.Low) && finite(r.High) {
 			rows = append(rows, r)
 		}
@@ -61,8 +94,8 @@ func tornadoFigure(b *Bundle) *figure {
 	}
 	// Smallest swing at the bottom, largest at the top.
 	sort.SliceStable(rows, func(i, j int) bool { return math.Abs(rows[i].High-rows[i].Low) < math.Abs(rows[j].High-rows[j].Low) })
-	base := b.TornadoBase * scale
-	p := newPlot("One-at-a-time sensitivity (tornado)", xlabel, "")
+	base *= scale
+	p := newPlot(title, xlabel, "")
 	const half = 0.32
 	lowCol, highCol := colCapacity, colDemand
 	var lowThumb, highThumb *plotter.Polygon
@@ -163,10 +196,12 @@ func tornadoFigure(b *Bundle) *figure {
 	}
 	unit := ""
 	if i := strings.LastIndex(xlabel, "("); i >= 0 && strings.HasSuffix(xlabel, ")") {
-		unit = " " + xlabel[i+1:len(xlabel)-1]
+		if u := xlabel[i+1 : len(xlabel)-1]; u != "–" && u != "-" {
+			unit = " " + u
+		}
 	}
-	p.Legend.Add("all inputs at their medians: "+sig(base, 4)+unit, bl)
+	p.Legend.Add(baseLegend+sig(base, 3)+unit, bl)
 	p.Legend.Top = false
 	h := 4.5*vg.Centimeter + vg.Length(len(rows))*0.85*vg.Centimeter
-	return &figure{Name: "tornado", Caption: "Each input in turn at its low and high fractile with the others at their medians; bars are the change of " + xlabel + " from the median result, labelled with the input value.", W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
+	return &figure{W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
 }

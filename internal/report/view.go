@@ -25,6 +25,7 @@ type view struct {
 
 	TornadoOutput, TornadoBase string
 	TornadoUnit                string // " (kN)" or ""; for column heads
+	TornadoBeta                bool   // the rows carry FORM betas
 	Tornado                    []tornadoRow
 	SobolOutput, SobolNote     string
 	Sobol                      []sobolRow
@@ -48,7 +49,7 @@ type view struct {
 
 type inputRow struct{ Name, Dist, Params, Mean, CoV, Unit string }
 
-type tornadoRow struct{ Variable, LowValue, HighValue, Low, High, Swing string }
+type tornadoRow struct{ Variable, LowValue, HighValue, Low, High, Swing, LowBeta, HighBeta string }
 
 type sobolRow struct{ Variable, First, FirstCI, Total, TotalCI string }
 
@@ -158,10 +159,21 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	if len(d.Tornado) > 0 {
 		v.TornadoBase = sig(b.TornadoBase*scale, 4) + strings.TrimSuffix(strings.Replace(v.TornadoUnit, "(", "", 1), ")")
 	}
+	betas := map[string][2]float64{}
+	for _, r := range b.TornadoBeta {
+		if finite(r.LowBeta) || finite(r.HighBeta) {
+			betas[r.Variable] = [2]float64{r.LowBeta, r.HighBeta}
+			v.TornadoBeta = true
+		}
+	}
 	for _, t := range d.Tornado {
 		u := inputUnit(b, t.Variable)
-		v.Tornado = append(v.Tornado, tornadoRow{t.Variable, withUnit(t.LowValue, u), withUnit(t.HighValue, u),
-			sig(t.Low*scale, 4), sig(t.High*scale, 4), sig(math.Abs(t.High-t.Low)*scale, 3)})
+		row := tornadoRow{t.Variable, withUnit(t.LowValue, u), withUnit(t.HighValue, u),
+			sig(t.Low*scale, 4), sig(t.High*scale, 4), sig(math.Abs(t.High-t.Low)*scale, 3), notAvailable, notAvailable}
+		if bt, ok := betas[t.Variable]; ok {
+			row.LowBeta, row.HighBeta = f2(bt[0]), f2(bt[1])
+		}
+		v.Tornado = append(v.Tornado, row)
 	}
 	ci := func(c [2]float64) string { return fixed(c[0], 3) + " to " + fixed(c[1], 3) }
 	sobol := append([]Sobol(nil), d.Sobol...)

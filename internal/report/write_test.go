@@ -11,7 +11,7 @@ import (
 )
 
 // allPictures are the picture names the demo bundle must produce.
-var allPictures = []string{"capacity-demand", "margin", "convergence", "tornado", "sobol", "slenderness", "sweep", "beam-column", "update-1"}
+var allPictures = []string{"capacity-demand", "margin", "convergence", "tornado", "tornado-beta", "sobol", "slenderness", "sweep", "beam-column", "update-1"}
 
 func TestWriteDemo(t *testing.T) {
 	dir := t.TempDir()
