@@ -91,7 +91,7 @@ func (w *bcWork) ultimate(m *Member, sec Section, a Axis, o *BeamOptions, tr *Tr
 	}
 
 	w.plasticInit()
-	n, ok := w.path(wfy, tr)
+	n, ok := w.path(nfy, wfy, tr)
 	if !ok {
 		return 0, "", errBeamNoPeak
 	}
@@ -220,20 +220,27 @@ func (w *bcWork) restore() {
 	pl.p = pl.pA
 }
 
-// increment solves for the trial state with the controlled displacement
-// at target, starting from the committed state. It returns false if
-// Newton's method does not converge, and the number of iterations.
-func (w *bcWork) increment(target float64) (bool, int) {
+// increment solves for the trial state from the committed state, with
+// the load at target (load control) or the controlled displacement at
+// target (displacement control). It returns false if Newton's method does
+// not converge (or, under load control, the tangent stiffness is not
+// positive definite), and the number of iterations.
+func (w *bcWork) increment(target float64, load bool) (bool, int) {
 	pl := &w.pl
 	copy(pl.wt, pl.wc)
 	copy(pl.e0t, pl.e0)
 	pl.pt = pl.p
+	if load {
+		pl.pt = target
+	}
+	stall, damp := 0, 1.0
+	lastP, lastW := math.Inf(1), math.Inf(1)
 	n, h := w.ndof, w.h
 	fix := w.fixed()
 	wh := 0.5 * h // Gauss weight
-	tolP := 1e-10 * pl.ny
-	tolW := 1e-10 * w.l
-	const maxIter = 40
+	tolP := 1e-9 * pl.ny
+	tolW := 1e-9 * w.l
+	const maxIter = 16
 	maxDe := 4 * w.fy / w.e
 	for it := 1; it <= maxIter; it++ {
 		clear(pl.kt)
@@ -291,7 +298,7 @@ func (w *bcWork) increment(target float64) (bool, int) {
 				pl.r[c], pl.gv[c] = 0, 0
 			}
 		}
-		if _, ok := bcFactor(pl.kt, n); !ok {
+		if neg, ok := bcFactor(pl.kt, n); !ok || load && neg > 0 {
 			return false, it
 		}
 		for i := range pl.r {
@@ -301,26 +308,39 @@ func (w *bcWork) increment(target float64) (bool, int) {
 		bcSolve(pl.kt, n, pl.r)  // a
 		bcSolve(pl.kt, n, pl.bv) // b
 		c := pl.ctrl
-		if pl.bv[c] == 0 {
-			return false, it
+		dp := 0.0
+		if !load {
+			if pl.bv[c] == 0 {
+				return false, it
+			}
+			dp = (pl.r[c] - (target - pl.wt[c])) / pl.bv[c]
+			// No state carries more than the squash load or a tension:
+			// a predictor beyond either is cut back half way.
+			if pl.pt+dp > pl.ny {
+				dp = 0.5 * (pl.ny - pl.pt)
+			} else if pl.pt+dp < 0 {
+				dp = -0.5 * pl.pt
+			}
 		}
-		dp := (pl.r[c] - (target - pl.wt[c])) / pl.bv[c]
+		// The step, damped once Newton's method cycles between yield
+		// states, overwrites pl.r.
 		dw := 0.0
 		for i := range pl.wt {
-			d := pl.r[i] - dp*pl.bv[i]
+			d := damp * (pl.r[i] - dp*pl.bv[i])
+			pl.r[i] = d
 			pl.wt[i] += d
 			dw = math.Max(dw, math.Abs(d))
 		}
+		dp *= damp
 		pl.pt += dp
 		rmax := 0.0
 		for el := 0; el < w.nel; el++ {
-			d0 := 2 * el
+			d := pl.r[2*el : 2*el+4]
 			for q, xi := range bcGauss {
 				b := bcB(xi, h)
-				dk := b[0]*(pl.r[d0]-dp*pl.bv[d0]) + b[1]*(pl.r[d0+1]-dp*pl.bv[d0+1]) +
-					b[2]*(pl.r[d0+2]-dp*pl.bv[d0+2]) + b[3]*(pl.r[d0+3]-dp*pl.bv[d0+3])
+				dk := b[0]*d[0] + b[1]*d[1] + b[2]*d[2] + b[3]*d[3]
 				g := 2*el + q
-				de := -(pl.rg[g] + pl.ek[g]*pl.kee[g]*dk + dp) / pl.kee[g]
+				de := -(damp*pl.rg[g] + pl.ek[g]*pl.kee[g]*dk + dp) / pl.kee[g]
 				// A fully yielded trial section has an almost zero tangent;
 				// keep Newton's axial strain step within a few yield strains.
 				de = math.Max(-maxDe, math.Min(maxDe, de))
@@ -334,6 +354,20 @@ func (w *bcWork) increment(target float64) (bool, int) {
 		if math.Abs(dp) <= tolP && dw <= tolW && rmax <= tolP && it > 1 {
 			return true, it
 		}
+		// Newton's method on the piecewise linear fibre law can cycle
+		// between yield states: give up when it stops making progress.
+		if (load || math.Abs(dp) > 0.7*lastP) && dw > 0.7*lastW {
+			stall++
+			switch {
+			case stall >= 6:
+				return false, it
+			case stall >= 3 && it >= 6:
+				damp = 0.5
+			}
+		} else {
+			stall, damp = 0, 1
+		}
+		lastP, lastW = math.Abs(dp), dw
 	}
 	return false, maxIter
 }
@@ -348,14 +382,17 @@ func bcAddLower(a []float64, d0 int, e *[16]float64, s float64) {
 	}
 }
 
-// path follows the equilibrium path by displacement control from the
-// unloaded state, with first step wfy/4, and returns the peak load.
-func (w *bcWork) path(wfy float64, tr *Trace) (float64, bool) {
+// path follows the equilibrium path from the unloaded state and returns
+// the peak load. It starts under load control (first target nfy/2, where
+// nfy is the elastic first-yield load) while Newton's method converges
+// with a positive definite tangent; when load steps fail down to a small
+// fraction of the load it continues under displacement control of the
+// lateral deflection (first step a quarter of the last load step's
+// deflection, or wfy/4) until the load falls, and then refines the peak.
+func (w *bcWork) path(nfy, wfy float64, tr *Trace) (float64, bool) {
 	pl := &w.pl
 	c := pl.ctrl
 	sgn := math.Copysign(1, wfy)
-	step := 0.25 * math.Abs(wfy)
-	minStep := 1e-8 * step
 	limit := 0.1 * w.l // lateral deflection at which the search gives up
 	record := func(p, d float64) {
 		if tr != nil {
@@ -365,37 +402,72 @@ func (w *bcWork) path(wfy float64, tr *Trace) (float64, bool) {
 	}
 	record(0, 0)
 	w.snapshot()
-	var xT, pT float64
+	load := true
+	dP := 0.5 * nfy
+	var step, minStep, xT, pT float64
 	peaked := false
-	for range 200 {
-		x := sgn * pl.wc[c]
-		ok, it := w.increment(sgn * (x + step))
-		if !ok {
-			step /= 2
-			if step < minStep {
+	flat, failed := 0, false
+	for range 120 {
+		var ok bool
+		var it int
+		if load {
+			ok, it = w.increment(math.Min(pl.p+dP, (1-1e-9)*pl.ny), true)
+			if !ok {
+				dP /= 2
+				if dP < 1e-3*pl.p || dP < 1e-6*pl.ny {
+					load = false
+					// Near a bifurcation (a small imperfection) the deflection
+					// grows from almost nothing: start no smaller than L/10^5.
+					step = math.Max(0.25*math.Abs(pl.wc[c]-pl.wA[c]), 0.05*math.Abs(pl.wc[c]))
+					step = math.Max(step, 1e-5*w.l)
+					minStep = 1e-3 * step
+				}
+				continue
+			}
+		} else {
+			x := sgn * pl.wc[c]
+			ok, it = w.increment(sgn*(x+step), false)
+			if !ok {
+				step /= 2
+				failed = true
+				if step < minStep {
+					break
+				}
+				continue
+			}
+			if pl.pt < pl.p {
+				xT, pT = sgn*pl.wt[c], pl.pt
+				peaked = true
 				break
 			}
-			continue
 		}
-		if pl.pt < pl.p {
-			xT, pT = sgn*pl.wt[c], pl.pt
-			peaked = true
-			break
-		}
+		gain := pl.pt - pl.p
 		w.snapshot()
 		w.commit()
 		copy(pl.wBest, pl.wc)
 		pl.pBest = pl.p
 		record(pl.p, pl.wc[c])
-		if sgn*pl.wc[c] > limit {
+		if sgn*pl.wc[c] > limit || pl.p >= (1-1e-7)*pl.ny {
 			break
 		}
+		// A plateau (the squash load of a near-perfect stocky member is
+		// approached from below without a peak) ends the search.
+		if !load && gain <= 1e-8*pl.p {
+			if flat++; flat >= 3 {
+				break
+			}
+		} else {
+			flat = 0
+		}
 		switch {
-		case it <= 4:
+		case load && it <= 4:
+			dP = math.Min(1.5*dP, 0.25*pl.ny)
+		case !load && it <= 8 && !failed:
 			step *= 2
-		case it > 12:
+		case !load && it > 12:
 			step /= 2
 		}
+		failed = false
 	}
 	if pl.pBest == 0 {
 		return 0, false
@@ -411,7 +483,7 @@ func (w *bcWork) path(wfy float64, tr *Trace) (float64, bool) {
 	x3, p3 := xT, pT
 	w.restore()
 	eval := func(x float64) (float64, bool) {
-		ok, _ := w.increment(sgn * x)
+		ok, _ := w.increment(sgn*x, false)
 		if !ok {
 			return 0, false
 		}
@@ -472,7 +544,7 @@ func (w *bcWork) tracePost(sgn, x3 float64, tr *Trace) {
 	x0 := sgn * pl.wA[c]
 	d := math.Max(x3-x0, 1e-9*w.l)
 	for k := 1; k <= 6; k++ {
-		ok, _ := w.increment(sgn * (x0 + d*float64(k)/2))
+		ok, _ := w.increment(sgn*(x0+d*float64(k)/2), false)
 		if !ok {
 			return
 		}
