@@ -45,6 +45,8 @@ func (f *figure) render(format string) (out []byte, err error) {
 		if _, err := c.WriteTo(&buf); err != nil {
 			return nil, err
 		}
+		// Name generic fallbacks for readers without Liberation Sans.
+		return bytes.ReplaceAll(buf.Bytes(), []byte("font-family:Liberation Sans"), []byte("font-family:'Liberation Sans',Arial,Helvetica,sans-serif")), nil
 	case "png":
 		c := vgimg.NewWith(vgimg.UseWH(f.W, f.H), vgimg.UseDPI(pngDPI))
 		f.draw(draw.New(c))
@@ -69,13 +71,12 @@ func (f *figure) draw(dc draw.Canvas) {
 	}
 }
 
-// inlineSVG returns the SVG of a picture ready to be placed inside HTML: the
-// XML declaration removed and the font family given generic fallbacks.
+// inlineSVG returns the SVG of a picture ready to be placed inside HTML:
+// the XML declaration and the generator's comment removed.
 func inlineSVG(svg []byte) string {
 	s := string(svg)
 	if i := strings.Index(s, "<svg"); i > 0 {
 		s = s[i:]
 	}
-	s = strings.ReplaceAll(s, "font-family:Liberation Sans", "font-family:'Liberation Sans',Arial,Helvetica,sans-serif")
 	return s
 }

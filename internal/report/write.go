@@ -29,8 +29,9 @@ var knownFormats = []string{"html", "json", "csv", "svg", "png", "md", "txt"}
 // "json", "csv", "md" and "txt" are accepted and change nothing (those
 // files are always written). nil formats mean DefaultFormats; an unknown
 // format is an error. Pictures are named capacity-demand, margin,
-// convergence, tornado, sobol, slenderness, sweep, beam-column and
-// update-1, update-2...; a picture without data is left out.
+// convergence, tornado, tornado-beta, sobol, slenderness, sweep,
+// beam-column and update-1, update-2...; a picture without data is left
+// out (and one that cannot be drawn is listed in the HTML report).
 //
 // Write is atomic per run: every file is first written under a temporary
 // name in dir, and only when all are complete are they renamed to their
