@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"sort"
 )
 
 // BeamLimit selects the limit state of the numerical beam-column model.
@@ -172,7 +173,7 @@ type Trace struct {
 	// At is the position (mm from end 0) whose deflection Path records.
 	At float64
 	// Load (N) and Deflection (mm, lateral displacement added to the
-	// initial bow) are the points of the path, in the order found. For
+	// initial bow) are the points of the path in order of deflection. For
 	// the ultimate limit they include the refinement of the peak and a few
 	// points after it; for first yield they rise to the capacity.
 	Load, Deflection []float64
@@ -197,7 +198,20 @@ func BeamColumnTrace(m *Member, sec Section, axis Axis, opt *BeamOptions) (*Trac
 		return nil, err
 	}
 	tr.Result = r
+	sort.Sort(bcPath{tr})
 	return tr, nil
+}
+
+// bcPath sorts the points of a trace by the size of the deflection.
+type bcPath struct{ t *Trace }
+
+func (p bcPath) Len() int { return len(p.t.Load) }
+func (p bcPath) Less(i, j int) bool {
+	return math.Abs(p.t.Deflection[i]) < math.Abs(p.t.Deflection[j])
+}
+func (p bcPath) Swap(i, j int) {
+	p.t.Load[i], p.t.Load[j] = p.t.Load[j], p.t.Load[i]
+	p.t.Deflection[i], p.t.Deflection[j] = p.t.Deflection[j], p.t.Deflection[i]
 }
 
 // capacity checks the inputs and evaluates one or both axes; a non-nil tr

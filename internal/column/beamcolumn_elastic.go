@@ -156,6 +156,7 @@ func (w *bcWork) bow(m *Member, o *BeamOptions) float64 {
 			w.y0v[i] = b * s
 			w.y0s[i] = b * math.Pi / w.l * c
 		}
+		w.y0v[w.nel] = 0 // sin(pi) is not exactly zero in floating point
 		return 1
 	}
 	return w.spline(o.Profile)

@@ -278,14 +278,18 @@ func (pl *bcPlastic) chsFibres(s Section, res Residual, nf int, fy float64) (flo
 	ro, t := s.Diameter/2, s.Thickness
 	rm, ri := ro-t/2, ro-t
 	nt := max(4, nf/2)
+	// The inner layer is the smaller: shift the +-sr pair by its mean
+	// so that the two layers balance.
+	ai, ao := math.Pi*(rm*rm-ri*ri), math.Pi*(ro*ro-rm*rm)
+	mean := bcColdFormed * fy / 2 * (ao - ai) / (ao + ai)
 	for layer, rr := range [2][2]float64{{ri, rm}, {rm, ro}} {
 		rg := math.Sqrt((rr[0]*rr[0] + rr[1]*rr[1]) / 2)
 		a := math.Pi * (rr[1]*rr[1] - rr[0]*rr[0]) / float64(nt)
 		sr := 0.0
 		if res == ResidualColdFormed {
-			sr = bcColdFormed * fy / 2
+			sr = bcColdFormed*fy/2 - mean
 			if layer == 0 {
-				sr = -sr
+				sr = -bcColdFormed*fy/2 - mean
 			}
 		}
 		for k := 0; k < nt; k++ {

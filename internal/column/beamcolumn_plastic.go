@@ -78,6 +78,7 @@ func (w *bcWork) ultimate(m *Member, sec Section, a Axis, o *BeamOptions, tr *Tr
 			s, cs := math.Sincos(math.Pi * float64(i) / float64(w.nel))
 			w.y0v[i], w.y0s[i] = b*s, b*math.Pi/w.l*cs
 		}
+		w.y0v[w.nel] = 0
 		w.setupLoad()
 		w.imperfect = true
 	}
