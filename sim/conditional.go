@@ -14,6 +14,9 @@ import (
 // Sobol' net.
 const qmcChunk = 1024
 
+// qmcStart is the number of points per replicate of the first estimate.
+const qmcStart = 256
+
 // linearUsable reports why m.Linear cannot be used, or "" when it can.
 func linearUsable(m *Model, t *Transform) string {
 	l := m.Linear
@@ -69,7 +72,7 @@ func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*
 	// budget is small) up to the largest that fits the budget.
 	maxN := int64(1) << (63 - bits.LeadingZeros64(uint64(perRep)))
 	maxN = min(maxN, 1<<31)
-	n0 := min(int64(qmcChunk), maxN)
+	n0 := min(int64(qmcStart), maxN)
 
 	rest := make([]int, 0, nvar-1)
 	for i := 0; i < nvar; i++ {
@@ -118,6 +121,7 @@ func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*
 			go func() {
 				defer wg.Done()
 				x, p, z := make([]float64, nvar), make([]float64, nvar), make([]float64, nvar)
+				cur := make([]uint32, nsob)
 				rng := newBlockRNG()
 				for {
 					k := int(next.Add(1) - 1)
@@ -128,11 +132,21 @@ func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*
 					rng.seed(s.Seed, streamQMC, uint64(u.r)<<32|uint64(u.start/qmcChunk))
 					sum := 0.0
 					p[idx] = 0.5
+					for j := range cur {
+						cur[j] = sobolAt(&dirs[j], uint32(u.start))
+					}
 					for i := 0; i < u.size; i++ {
-						pt := uint32(u.start) + uint32(i)
+						if i > 0 {
+							// Gray-code order: point i differs from point
+							// i-1 by the direction number of its lowest set bit.
+							c := bits.TrailingZeros32(uint32(u.start) + uint32(i))
+							for j := range cur {
+								cur[j] ^= dirs[j][c]
+							}
+						}
 						for j, dim := range rest {
 							if j < nsob {
-								p[dim] = toUnit(owenScramble(sobolAt(&dirs[j], pt), seeds[u.r][j]))
+								p[dim] = toUnit(owenScramble(cur[j], seeds[u.r][j]))
 							} else {
 								p[dim] = uniformOpen(rng.r)
 							}
