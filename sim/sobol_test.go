@@ -46,9 +46,10 @@ func TestSobolIshigami(t *testing.T) {
 func TestSobolLinearAdditive(t *testing.T) {
 	t.Parallel()
 	// Y = sum a_i X_i with independent normal X_i: variance shares in closed
-	// form, S_i = ST_i = a_i^2 s_i^2 / sum_k a_k^2 s_k^2 (no interactions;
-	// Saltelli et al. 2008, Global Sensitivity Analysis: The Primer, sec. 1.2,
-	// from memory).
+	// form, S_i = ST_i = a_i^2 s_i^2 / sum_k a_k^2 s_k^2, since the variance
+	// of a sum of independent terms is the sum of their variances and an
+	// additive model has no interactions (Sobol 1993, Mathematical Modelling
+	// and Computational Experiments 1, 407-414: ANOVA decomposition).
 	coef := []float64{1, -2, 0.5, 0}
 	sd := []float64{3, 1, 4, 2}
 	m := &Model{Outputs: []string{"y"}}
