@@ -84,8 +84,8 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 	switch {
 	case err != nil:
 		return subset(fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples; importance sampling failed (%v)", formNote, need, err))
-	case !(res.PfCoV <= 2*target) && !res.Incomplete:
-		return subset(fmt.Sprintf("%s: importance sampling did not reach its precision (CoV %.3g), a sign of a poor design point", formNote, res.PfCoV))
+	case importanceDegenerate(res):
+		return subset(fmt.Sprintf("%s: importance sampling flagged a poor design point (degenerate weights)", formNote))
 	}
 	res.Method = Importance
 	if math.IsNaN(res.Pf) {
