@@ -1,7 +1,5 @@
 package sim
 
-import "sync/atomic"
-
 // uSpace is a limit state in independent standard normal space: the form in
 // which FORM, importance sampling and subset simulation see a Model.
 type uSpace struct {
@@ -31,13 +29,4 @@ func modelSpace(m *Model, t *Transform) *uSpace {
 // funcSpace wraps a limit state written directly in standard normal space.
 func funcSpace(dim int, g func(u []float64) float64) *uSpace {
 	return &uSpace{dim: dim, newG: func() func(u []float64) float64 { return g }}
-}
-
-// countingG wraps g so that calls are counted in *n (safe for concurrent
-// counters shared between goroutines).
-func countingG(g func(u []float64) float64, n *atomic.Int64) func(u []float64) float64 {
-	return func(u []float64) float64 {
-		n.Add(1)
-		return g(u)
-	}
 }

@@ -335,3 +335,11 @@ func TestFORMModel(t *testing.T) {
 		t.Error("no error for a model without G")
 	}
 }
+
+// countingG wraps g so that calls are counted in *n.
+func countingG(g func(u []float64) float64, n *atomic.Int64) func(u []float64) float64 {
+	return func(u []float64) float64 {
+		n.Add(1)
+		return g(u)
+	}
+}

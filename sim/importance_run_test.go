@@ -96,3 +96,37 @@ func TestRareNaN(t *testing.T) {
 		t.Errorf("subset: err %v, warnings %v", err, r.Warnings)
 	}
 }
+
+func TestRareColumnModel(t *testing.T) {
+	// Importance sampling and subset simulation against conditional
+	// quasi-Monte Carlo (Run's own, independent estimator, exact in the
+	// imposed load) on the seven-variable column: agreement within three
+	// combined standard errors (subset's CoV taken 1.5 times its own
+	// estimate, which neglects the correlation between levels).
+	for _, dead := range []float64{1.2e6, 0.6e6} { // pf about 9e-3 and 4e-5
+		m := columnModel(dead) // the reference column of run_test.go
+		mc, err := Run(context.Background(), m, &Settings{Method: ConditionalQMC, Samples: 65536, Seed: 1, AuxSamples: -1})
+		if err != nil {
+			t.Fatal(err)
+		}
+		seMC := mc.Pf * mc.PfCoV
+		for _, c := range []struct {
+			method  Method
+			samples int64
+			covMul  float64
+		}{{Importance, 20000, 1}, {Subset, 50000, 1.5}} {
+			r, err := Run(context.Background(), m, &Settings{Method: c.method, Samples: c.samples, Seed: 2, AuxSamples: -1})
+			if err != nil {
+				t.Fatal(err)
+			}
+			se := math.Hypot(seMC, c.covMul*r.Pf*r.PfCoV)
+			if math.Abs(r.Pf-mc.Pf) > 3*se || len(r.Warnings) > 0 {
+				t.Errorf("dead %g, %s: pf %.4g, conditional QMC %.4g (combined se %.2g), warnings %v", dead, c.method, r.Pf, mc.Pf, se, r.Warnings)
+			}
+			t.Logf("dead %g, %s: pf %.4g (CoV %.3f, %d evaluations); conditional QMC %.4g (CoV %.4f)", dead, c.method, r.Pf, r.PfCoV, r.Evaluations, mc.Pf, mc.PfCoV)
+			if r.FORM != nil {
+				t.Logf("FORM: beta %.4f, pf %.4g, %d points, %d evaluations: %s", r.FORM.Beta, r.FORM.Pf, len(r.FORM.Points), r.FORM.Evaluations, r.FORM.Status)
+			}
+		}
+	}
+}
