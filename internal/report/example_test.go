@@ -1,0 +1,30 @@
+package report_test
+
+import (
+	"fmt"
+
+	"strutrisk/internal/report"
+)
+
+func ExampleSummaryText() {
+	pf, beta, target, reserve := 1.3e-4, 3.65, 3.8, 0.93
+	evals, seed := int64(17502), uint64(1)
+	b := &report.Bundle{Doc: &report.Document{
+		Title:  "Column C4",
+		Method: "conditional-qmc", Evaluations: &evals, Seed: &seed,
+		Pf: &pf, PfCI: []float64{1.18e-4, 1.44e-4},
+		Beta: &beta, BetaCI: []float64{3.63, 3.68},
+		TargetBeta: &target, ReserveFactor: &reserve,
+		FORM: &report.FORM{Importance: map[string]float64{"loads.imposed": 0.62, "material.yield": 0.09, "capacity.model_factor": 0.10}},
+	}}
+	fmt.Print(report.SummaryText(b))
+	// Output:
+	// Column C4
+	//   probability of failure   1.3e-4  (95% interval 1.18e-4 to 1.44e-4)
+	//   reliability index beta   3.65  (95% interval 3.63 to 3.68)
+	//   target beta              3.80: NOT met
+	//   reserve factor           0.93 (load factor at which the target is just met)
+	//   method                   conditional-qmc, 17 502 evaluations, seed 1
+	//   most influential         loads.imposed (0.62), capacity.model_factor (0.1), material.yield (0.09)  [by FORM importance alpha^2]
+	//   caution                  These results depend on the stated inputs and models; they support, and never replace, the judgement of a licensed engineer and the local codes.
+}
