@@ -343,3 +343,26 @@ func countingG(g func(u []float64) float64, n *atomic.Int64) func(u []float64) f
 		return g(u)
 	}
 }
+
+func TestFORMFourPoints(t *testing.T) {
+	// g = b - max(|u1|, |u2|): four design points at ±b on both axes;
+	// exact Pf = 1 - (1 - 2 Phi(-b))^2, and the series system of the four
+	// half-planes is exact too (to the accuracy of the Genz integration
+	// of its singular correlation, about 1 %).
+	const b = 3.0
+	sp := funcSpace(2, func(u []float64) float64 { return b - math.Max(math.Abs(u[0]), math.Abs(u[1])) })
+	r := formRun(sp, nil)
+	if !r.Converged || len(r.Points) != 4 {
+		t.Fatalf("converged %v, %d points: %s", r.Converged, len(r.Points), r.Status)
+	}
+	q := 2 * formTail(b)
+	want := 1 - (1-q)*(1-q)
+	if math.Abs(r.Pf-want) > 0.02*want {
+		t.Errorf("pf %.6g, want %.6g", r.Pf, want)
+	}
+	// MaxPoints stops the search.
+	r = formRun(sp, &FORMSettings{MaxPoints: 2})
+	if len(r.Points) != 2 || !strings.Contains(r.Status, "MaxPoints") {
+		t.Errorf("%d points with MaxPoints 2: %s", len(r.Points), r.Status)
+	}
+}
