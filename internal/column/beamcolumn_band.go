@@ -14,25 +14,41 @@ const bcBand = 4
 // bcFactor factorises the band matrix a of order n in place and returns
 // the number of negative pivots; ok is false if a pivot is zero.
 func bcFactor(a []float64, n int) (neg int, ok bool) {
-	for i := 0; i < n; i++ {
+	for i := 0; i < n && i < 3; i++ {
 		ri := a[bcBand*i : bcBand*i+bcBand]
-		m0 := i - 3
-		if m0 < 0 {
-			m0 = 0
-		}
-		for k := m0; k < i; k++ {
+		for k := 0; k < i; k++ {
 			s := ri[i-k]
 			rk := a[bcBand*k : bcBand*k+bcBand]
-			for m := m0; m < k; m++ {
+			for m := 0; m < k; m++ {
 				s -= ri[i-m] * a[bcBand*m] * rk[k-m]
 			}
 			ri[i-k] = s / rk[0]
 		}
 		s := ri[0]
-		for m := m0; m < i; m++ {
+		for m := 0; m < i; m++ {
 			l := ri[i-m]
 			s -= l * l * a[bcBand*m]
 		}
+		if s == 0 || s != s {
+			return neg, false
+		}
+		if s < 0 {
+			neg++
+		}
+		ri[0] = s
+	}
+	// Rows with a full band, unrolled: L[i][i-3], L[i][i-2], L[i][i-1], D[i].
+	for i := 3; i < n; i++ {
+		r3 := a[bcBand*(i-3) : bcBand*(i-3)+bcBand]
+		r2 := a[bcBand*(i-2) : bcBand*(i-2)+bcBand]
+		r1 := a[bcBand*(i-1) : bcBand*(i-1)+bcBand]
+		ri := a[bcBand*i : bcBand*i+bcBand]
+		d3, d2, d1 := r3[0], r2[0], r1[0]
+		l3 := ri[3] / d3
+		l2 := (ri[2] - l3*d3*r2[1]) / d2
+		l1 := (ri[1] - l3*d3*r1[2] - l2*d2*r1[1]) / d1
+		s := ri[0] - l3*l3*d3 - l2*l2*d2 - l1*l1*d1
+		ri[3], ri[2], ri[1] = l3, l2, l1
 		if s == 0 || s != s {
 			return neg, false
 		}

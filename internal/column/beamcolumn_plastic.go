@@ -32,6 +32,8 @@ type bcPlastic struct {
 	r, gv, bv   []float64 // residual, dR/dP, and solve vectors
 	yd          []float64 // initial bow as nodal degrees of freedom
 
+	sa, saz, sazz float64 // sums over the fibres of a, a z, a z^2
+
 	ctrl int     // controlled degree of freedom
 	ny   float64 // squash load of the fibres
 }
@@ -62,11 +64,13 @@ func (w *bcWork) ultimate(m *Member, sec Section, a Axis, o *BeamOptions, tr *Tr
 		return 0, "", err
 	}
 	pl.nf = len(pl.fa)
-	var area, ii float64
+	var area, first, ii float64
 	for k := range pl.fa {
 		area += pl.fa[k]
+		first += pl.fa[k] * pl.fz[k]
 		ii += pl.fa[k] * pl.fz[k] * pl.fz[k]
 	}
+	pl.sa, pl.saz, pl.sazz = area, first, ii
 	pl.ny = area * m.Fy
 
 	// Elastic pre-analysis on the fibre properties: control point and
@@ -150,29 +154,33 @@ func (w *bcWork) plasticInit() {
 }
 
 // section evaluates Gauss point g at axial strain e0 and curvature k from
-// the committed plastic strains: axial force, moment and tangents.
+// the committed plastic strains: axial force, moment and tangents. The
+// tangents start from the elastic section (sums over all fibres) and drop
+// the yielded fibres to the small stiffness that keeps the equations
+// solvable.
 func (w *bcWork) section(g int, e0, k float64) (n, m, kee, kek, kkk float64) {
 	pl := &w.pl
 	ep := pl.ep[g*pl.nf : (g+1)*pl.nf]
 	fa, fz := pl.fa[:len(ep)], pl.fz[:len(ep)]
 	e, fy := w.e, w.fy
-	soft := 1e-6 * e
+	var ya, yaz, yazz float64 // yielded fibres
 	for i := range ep {
 		s := e * (e0 + fz[i]*k - ep[i])
-		et := e
-		if s > fy {
-			s, et = fy, soft
-		} else if s < -fy {
-			s, et = -fy, soft
-		}
 		a := fa[i]
-		az := a * fz[i]
+		if s > fy || s < -fy {
+			s = math.Copysign(fy, s)
+			az := a * fz[i]
+			ya += a
+			yaz += az
+			yazz += az * fz[i]
+		}
 		n += s * a
-		m += s * az
-		kee += et * a
-		kek += et * az
-		kkk += et * az * fz[i]
+		m += s * a * fz[i]
 	}
+	drop := e * (1 - 1e-6)
+	kee = e*pl.sa - drop*ya
+	kek = e*pl.saz - drop*yaz
+	kkk = e*pl.sazz - drop*yazz
 	return
 }
 
