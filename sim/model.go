@@ -48,7 +48,11 @@ type Correlation struct {
 // Linear marks a limit state that is linear and decreasing in one input,
 // g(x) = h - c*x[Index] with c > 0, where h and c do not depend on x[Index].
 // Conditional Monte Carlo integrates that input exactly through its CDF.
-// The input must not be correlated with any other.
+// The input must not be correlated with any other. The gain is largest
+// when it is the input with the largest share of the variance of g (for
+// a column, usually the imposed load): on the reference strut, taking the
+// imposed load cut the variance about 25,000 times at pf 4e-5, the dead
+// load only a few times.
 type Linear struct {
 	// Index is the position of the input in Model.Vars.
 	Index int

@@ -26,7 +26,8 @@ type Result struct {
 	// Failures counts failed samples (crude sampling methods only).
 	Failures int64
 	// Pf is the failure probability, PfCI its interval at Confidence and
-	// PfCoV the coefficient of variation of the estimator.
+	// PfCoV the coefficient of variation of the estimator (+Inf when no
+	// failure was seen; Beta is then +Inf and PfCI[0] = 0).
 	Pf, PfCoV float64
 	PfCI      [2]float64
 	// Beta = -Phi^-1(Pf); BetaCI maps PfCI (BetaCI[0] from PfCI[1]).
