@@ -331,6 +331,21 @@ func TestFORMModel(t *testing.T) {
 			}
 		})
 	}
+	// Correlated normal R and S (rho = 0.5): the Nataf transformation is
+	// exact for normals and beta = (muR - muS)/sqrt(sR^2 + sS^2 -
+	// 2 rho sR sS) (Cornell's index of the normal margin R - S).
+	m := &Model{
+		Vars: []Variable{{Name: "R", Dist: normal(200, 20)}, {Name: "S", Dist: normal(100, 30)}},
+		Corr: []Correlation{{A: "R", B: "S", Rho: 0.5}},
+		G:    func(x, _ []float64) float64 { return x[0] - x[1] },
+	}
+	r, err := FORM(m, nil)
+	if err != nil || !r.Converged {
+		t.Fatalf("correlated: %v %+v", err, r)
+	}
+	if want := 100 / math.Sqrt(400+900-2*0.5*20*30); math.Abs(r.Beta-want) > 1e-6 {
+		t.Errorf("correlated: beta %.8f, want %.8f", r.Beta, want)
+	}
 	if _, err := FORM(&Model{Vars: []Variable{{Name: "R", Dist: normal(1, 1)}}}, nil); err == nil {
 		t.Error("no error for a model without G")
 	}
