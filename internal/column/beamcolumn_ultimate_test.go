@@ -29,32 +29,46 @@ func bcMemberAt(t *testing.T, sec Section, axis Axis, lam float64) *Member {
 	return m
 }
 
-// Pinned hot-rolled I columns, h/b > 1.2, tf <= 40 mm, S235, with a bow of
-// L/1000 and the ECCS residual stresses, against the buckling curve
-// EN 1993-1-1:2005 Table 6.2 assigns to them: curve a (alpha 0.21, Table
-// 6.1) about y-y and curve b (alpha 0.34) about z-z. The curves were
-// fitted to tests and to simulations of this kind, and such simulations
-// scatter about the assigned curve by roughly +-5 % at these slenderness
-// values (from memory, e.g. the background studies of the ECCS curves by
-// Beer & Schulz, 1970, and later GMNIA recalculations): the band tested
-// is -5 % to +5 % of chi.
+// Pinned hot-rolled I columns in S235 with a bow of L/1000 and the ECCS
+// residual stresses, against the buckling curves EN 1993-1-1:2005 Table
+// 6.2 assigns to them (alpha from Table 6.1): rolled I with h/b > 1.2 and
+// tf <= 40 mm, curve a (0.21) about y-y and b (0.34) about z-z; h/b <= 1.2
+// and tf <= 100 mm, curve b about y-y and c (0.49) about z-z. The curves
+// were fitted to tests and to simulations of this kind, which scatter
+// about the assigned curve by roughly +-5 % at these slenderness values,
+// and lie above it (curve b is conservative) for stocky H sections about
+// y-y (from memory, e.g. the background studies of the ECCS curves by
+// Beer & Schulz, 1970, and later GMNIA recalculations). The band tested is
+// -5 % to +5 % of chi, widened to +10 % for h/b <= 1.2 about y-y.
 func TestBeamColumnUltimateBucklingCurves(t *testing.T) {
+	ipe500 := Section{Shape: ShapeI, Depth: 500, Width: 200, Flange: 16, Web: 10.2, Root: 21} // from memory
+	heb300 := Section{Shape: ShapeI, Depth: 300, Width: 300, Flange: 19, Web: 11, Root: 27}   // from memory
 	for _, c := range []struct {
-		axis  Axis
-		alpha float64
-	}{{Major, 0.21}, {Minor, 0.34}} {
+		name   string
+		sec    Section
+		axis   Axis
+		alpha  float64
+		lo, hi float64
+	}{
+		{"IPE 300", bcIPE300, Major, 0.21, -0.05, 0.05},
+		{"IPE 300", bcIPE300, Minor, 0.34, -0.05, 0.05},
+		{"IPE 500", ipe500, Major, 0.21, -0.05, 0.05},
+		{"IPE 500", ipe500, Minor, 0.34, -0.05, 0.05},
+		{"HEB 300", heb300, Major, 0.34, -0.05, 0.10},
+		{"HEB 300", heb300, Minor, 0.49, -0.05, 0.05},
+	} {
 		for _, lam := range []float64{0.5, 1.0, 1.5} {
-			m := bcMemberAt(t, bcIPE300, c.axis, lam)
-			r, err := BeamColumn(m, bcIPE300, c.axis, &BeamOptions{Limit: UltimateLimit, Residual: ResidualHotRolled})
+			m := bcMemberAt(t, c.sec, c.axis, lam)
+			r, err := BeamColumn(m, c.sec, c.axis, &BeamOptions{Limit: UltimateLimit, Residual: ResidualHotRolled})
 			if err != nil {
 				t.Fatal(err)
 			}
 			chi := r.N / (m.Props.A * m.Fy)
 			want := bcChi(lam, c.alpha)
-			if d := chi/want - 1; math.Abs(d) > 0.05 || r.Governs != GovernsUltimate {
-				t.Errorf("%v lam %.1f: chi %.4f (%s), curve %.4f, off by %+.1f %%", c.axis, lam, chi, r.Governs, want, 100*d)
+			if d := chi/want - 1; d < c.lo || d > c.hi || r.Governs != GovernsUltimate {
+				t.Errorf("%s %v lam %.1f: chi %.4f (%s), curve %.4f, off by %+.1f %%", c.name, c.axis, lam, chi, r.Governs, want, 100*d)
 			} else {
-				t.Logf("%v lam %.1f: chi %.4f, curve %.4f (%+.1f %%)", c.axis, lam, chi, want, 100*d)
+				t.Logf("%s %v lam %.1f: chi %.4f, curve %.4f (%+.1f %%)", c.name, c.axis, lam, chi, want, 100*d)
 			}
 		}
 	}
