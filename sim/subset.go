@@ -49,18 +49,18 @@ func subsetLevelSize(n int64) int {
 // spread sigma = sqrt(1 - rho^2) = min(1, lambda) starts at lambda = 0.6
 // and, unlike their within-level adaptation, is adapted once per level:
 // lambda <- lambda exp(a - 0.44) from the acceptance rate a of the level
-// just run (0.44 is their target). Their scaling by the seeds' standard
-// deviation is left out: on the chi-square benchmark it biased the
-// estimate by -5 % even at N = 10000, and so did their within-level
-// adaptation; the component-wise modified Metropolis sampler of Au and
-// Beck was unbiased there but scattered about 1.3 times more on the
-// two-variable lognormal case. The run stops at the first level where at
-// least N p0 samples fail: Pf = p0^L n_F/N.
+// just run (0.44 is their target). Their scaling of the spread by the
+// seeds' standard deviation is left out: with it (adapted within or
+// between levels) the chi-square benchmark came out biased by about -5 %,
+// still at N = 10000. The component-wise modified Metropolis sampler of
+// Au and Beck was unbiased there but scattered about 1.4 times more on
+// the two-variable lognormal case. The run stops at the first level where
+// at least N p0 samples fail: Pf = p0^L n_F/N.
 //
 // The CoV is Au and Beck's delta^2 = sum_i (1 - p_i)/(p_i N) (1 + gamma_i),
 // with gamma_i from the correlation of the indicator along the chains
 // (gamma = 0 at level 0); it neglects the correlation between levels, so
-// it is somewhat optimistic (the tests' runs scatter 1.1-1.3 times more).
+// it is somewhat optimistic (the tests' runs scatter 1.1-1.4 times more).
 // The interval is lognormal: Pf exp(±z s), s^2 = ln(1 + delta^2), with the
 // estimate as median. N is s.Samples/6 clamped to [500, 10000] (a budget
 // of 50000 then reaches about 1e-6 with full levels); levels stop when the
