@@ -183,3 +183,31 @@ func TestBeamColumnUltimateInteraction(t *testing.T) {
 		}
 	}
 }
+
+// The default mesh (40 elements, about 50 fibres) is converged: a four
+// times finer mesh in both directions moves the ultimate load by less than
+// 0.5 % (a convergence check, common practice), here with an end spring
+// and an eccentricity as well as the bow.
+func TestBeamColumnUltimateMesh(t *testing.T) {
+	for _, c := range []struct {
+		axis Axis
+		lam  float64
+	}{{Major, 1.0}, {Minor, 0.5}, {Minor, 1.5}} {
+		m := bcMemberAt(t, bcIPE300, c.axis, c.lam)
+		m.Ecc = 3
+		o := &BeamOptions{Limit: UltimateLimit, Residual: ResidualHotRolled}
+		o.Springs[c.axis] = [2]float64{1e11, 0}
+		coarse, err := BeamColumn(m, bcIPE300, c.axis, o)
+		if err != nil {
+			t.Fatal(err)
+		}
+		o.Elements, o.Fibres = 160, 200
+		fine, err := BeamColumn(m, bcIPE300, c.axis, o)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if d := coarse.N/fine.N - 1; math.Abs(d) > 5e-3 {
+			t.Errorf("%v lam %.1f: default mesh %.6g, fine mesh %.6g (%+.2g)", c.axis, c.lam, coarse.N, fine.N, d)
+		}
+	}
+}
