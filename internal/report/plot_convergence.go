@@ -2,16 +2,16 @@ package report
 
 import (
 	"math"
-	"strconv"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
 	"gonum.org/v1/plot/vg"
 )
 
-// decadeTicks marks powers of ten on a logarithmic axis, labelled in plain
-// digits grouped by thousands up to 10^6 and as 1e7, 1e8... beyond, with
-// unlabelled minor ticks at 2..9 times each power.
+// decadeTicks marks a logarithmic axis of counts: powers of ten labelled in
+// digits grouped by thousands (1e7 and beyond as 1e7, 1e8...), unlabelled
+// minor ticks at 2..9 times each power, and, when the axis spans less than
+// two decades, labels at 2 and 5 times each power as well.
 type decadeTicks struct{}
 
 // Ticks implements plot.Ticker. min and max must be positive.
@@ -19,28 +19,32 @@ func (decadeTicks) Ticks(min, max float64) []plot.Tick {
 	if !(min > 0) || !(max > min) || !finite(min) || !finite(max) {
 		return nil
 	}
+	short := max/min < 100
 	var ticks []plot.Tick
 	for e := int(math.Floor(math.Log10(min))); e <= int(math.Ceil(math.Log10(max))); e++ {
-		v := math.Pow10(e)
-		label := ""
-		switch {
-		case e >= 0 && e <= 6:
-			label = thousands(int64(v))
-		case e > 6:
-			label = "1e" + strconv.Itoa(e)
-		default:
-			label = strconv.FormatFloat(v, 'g', -1, 64)
-		}
-		if v >= min*0.999 && v <= max*1.001 {
-			ticks = append(ticks, plot.Tick{Value: v, Label: label})
-		}
-		for k := 2; k <= 9; k++ {
-			if m := v * float64(k); m >= min && m <= max {
-				ticks = append(ticks, plot.Tick{Value: m})
+		p := math.Pow10(e)
+		for k := 1; k <= 9; k++ {
+			v := p * float64(k)
+			if v < min*0.999 || v > max*1.001 {
+				continue
 			}
+			t := plot.Tick{Value: v}
+			if k == 1 || (short && (k == 2 || k == 5)) {
+				t.Label = countLabel(v)
+			}
+			ticks = append(ticks, t)
 		}
 	}
 	return ticks
+}
+
+// countLabel writes a count for an axis: grouped digits up to ten million,
+// then 1e7, 2e7...
+func countLabel(v float64) string {
+	if v >= 1 && v < 1e7 {
+		return thousands(int64(math.Round(v)))
+	}
+	return sci(v, 1)
 }
 
 // exponentTicks mark a linear axis that holds log10 of a probability:
@@ -109,6 +113,7 @@ func convergenceFigure(b *Bundle) *figure {
 	ln.LineStyle = lineStyle(colCapacity, 1.5, false)
 	p.Add(ln)
 	p.Legend.Add("estimate of pf", ln)
+	p.Legend.Top = false // the estimate settles well above zero at the right
 	p.X.Scale = plot.LogScale{}
 	p.X.Tick.Marker = decadeTicks{}
 	p.Y.Min = math.Min(p.Y.Min, 0)

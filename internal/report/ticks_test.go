@@ -32,3 +32,25 @@ func TestNiceTicks(t *testing.T) {
 		t.Errorf("empty range gave %v", ticks)
 	}
 }
+
+func TestDecadeTicks(t *testing.T) {
+	t.Parallel()
+	for _, c := range []struct {
+		min, max float64
+		want     string
+	}{
+		{100, 1e6, "100 1 000 10 000 100 000 1 000 000"},
+		{3000, 20000, "5 000 10 000 20 000"},
+		{1e6, 1e8, "1 000 000 1e7 1e8"},
+	} {
+		var got []string
+		for _, tk := range (decadeTicks{}).Ticks(c.min, c.max) {
+			if tk.Label != "" {
+				got = append(got, tk.Label)
+			}
+		}
+		if g := strings.Join(got, " "); g != c.want {
+			t.Errorf("ticks on [%v, %v]: %q, want %q", c.min, c.max, g, c.want)
+		}
+	}
+}
