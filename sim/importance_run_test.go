@@ -130,3 +130,33 @@ func TestRareColumnModel(t *testing.T) {
 		}
 	}
 }
+
+func TestRareColumnSymmetricBow(t *testing.T) {
+	// The reference column with a bow of zero mean, acting by |e0|: FORM
+	// finds the two mirrored design points, and importance sampling
+	// around both agrees with conditional quasi-Monte Carlo within three
+	// combined standard errors.
+	m := columnModel(0.6e6)
+	m.Vars[2].Dist = mustDist(NewNormal(0, colLength/1000))
+	f, err := FORM(m, nil)
+	if err != nil || !f.Converged || len(f.Points) != 2 {
+		t.Fatalf("FORM: %v, %+v", err, f)
+	}
+	if p, q := f.Points[0], f.Points[1]; math.Abs(p.Beta-q.Beta) > 1e-4 || math.Abs(p.X[2]+q.X[2]) > 1e-3*math.Abs(p.X[2]) {
+		t.Errorf("points not mirrored in e0: beta %v, %v; e0 %v, %v", p.Beta, q.Beta, p.X[2], q.X[2])
+	}
+	ref, err := Run(context.Background(), m, &Settings{Method: ConditionalQMC, Samples: 65536, Seed: 1, AuxSamples: -1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := Run(context.Background(), m, &Settings{Method: Importance, Samples: 20000, Seed: 1, AuxSamples: -1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	se := math.Hypot(ref.Pf*ref.PfCoV, r.Pf*r.PfCoV)
+	if math.Abs(r.Pf-ref.Pf) > 3*se || importanceDegenerate(r) {
+		t.Errorf("importance pf %.4g, conditional QMC %.4g (combined se %.2g), warnings %v", r.Pf, ref.Pf, se, r.Warnings)
+	}
+	t.Logf("FORM pf %.4g (one point %.4g), importance %.4g ± %.2g, conditional QMC %.4g ± %.2g; FORM %d evaluations",
+		f.Pf, PfFromBeta(f.Points[0].Beta), r.Pf, r.Pf*r.PfCoV, ref.Pf, ref.Pf*ref.PfCoV, f.Evaluations)
+}
