@@ -147,3 +147,65 @@ func TestBeamColumnSpringCritical(t *testing.T) {
 		}
 	}
 }
+
+// bcSpringSecant is the first-yield load of a straight braced member with
+// equal rotational end springs R = k L / (E I) and the load at eccentricity
+// e at both ends. From E I y” = -(P (e + y) + Ms), Ms the (constant)
+// spring moment, with y(0) = y(L) = 0 and Ms = -k y'(0) (the beam-column
+// equation of Timoshenko & Gere, Theory of Elastic Stability, ch. 1,
+// solved here): with u = L sqrt(P/(E I)),
+//
+//	y + e + Ms/P = A cos(u (x/L - 1/2)),  A = e / (cos(u/2) + (R/u) sin(u/2)),
+//
+// M(L/2) = P A and M(0) = P (e - (R/u) A sin(u/2)). Solved for
+// P/Area + max|M|/W = fy by bisection below the critical load.
+func bcSpringSecant(a, w, e, fy, l, i, r, ecc float64) float64 {
+	lo, hi := 0.0, a*fy
+	for range 200 {
+		p := 0.5 * (lo + hi)
+		u := l * math.Sqrt(p/(e*i))
+		s, c := math.Sincos(u / 2)
+		den := c + r/u*s
+		if den <= 0 { // at or beyond buckling
+			hi = p
+			continue
+		}
+		amp := ecc / den
+		m := math.Max(math.Abs(amp), math.Abs(ecc-r/u*amp*s))
+		if p/a+p*m/w > fy {
+			hi = p
+		} else {
+			lo = p
+		}
+	}
+	return 0.5 * (lo + hi)
+}
+
+func TestBeamColumnFirstYieldSprings(t *testing.T) {
+	for _, c := range []struct {
+		length, r, ecc float64
+		axis           Axis
+	}{
+		{5000, 0.5, 20, Minor},
+		{5000, 2, 20, Minor},
+		{8000, 10, 30, Minor},
+		{8000, 1, 5, Major},
+		{3000, 4, 50, Major},
+	} {
+		m := bcTestMember(c.length, 0, c.ecc)
+		ei := m.E * m.Props.I[c.axis]
+		k := c.r * ei / c.length
+		var o BeamOptions
+		o.Springs[c.axis] = [2]float64{k, k}
+		got, err := BeamColumn(m, Section{}, c.axis, &o)
+		if err != nil {
+			t.Fatal(err)
+		}
+		want := bcSpringSecant(m.Props.A, m.Props.W[c.axis], m.E, m.Fy, c.length, m.Props.I[c.axis], c.r, c.ecc)
+		if rel := math.Abs(got.N/want - 1); rel > 1e-4 {
+			t.Errorf("L=%g R=%g e=%g %v: N = %.7g, spring secant %.7g, rel %.2g", c.length, c.r, c.ecc, c.axis, got.N, want, rel)
+		} else {
+			t.Logf("L=%g R=%g e=%g %v: N = %.7g, spring secant %.7g, rel %.2g", c.length, c.r, c.ecc, c.axis, got.N, want, rel)
+		}
+	}
+}
