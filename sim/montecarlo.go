@@ -41,9 +41,14 @@ type crudeWorker struct {
 }
 
 func (e *crudeEngine) newWorker() *crudeWorker {
-	w := &crudeWorker{rng: newBlockRNG(), x: make([]float64, e.nvar), z: make([]float64, e.nvar), p: make([]float64, e.nvar)}
+	// One allocation with room on both sides, so that the buffers of two
+	// workers never share a cache line.
+	const pad = 16
+	n := e.nvar
+	buf := make([]float64, pad+3*n+e.nout+pad)[pad:]
+	w := &crudeWorker{rng: newBlockRNG(), x: buf[:n:n], z: buf[n : 2*n : 2*n], p: buf[2*n : 3*n : 3*n]}
 	if e.nout > 0 {
-		w.out = make([]float64, e.nout)
+		w.out = buf[3*n : 3*n+e.nout : 3*n+e.nout]
 	}
 	if e.lhs {
 		w.perm = make([][]int32, e.nvar)
@@ -77,6 +82,7 @@ func (e *crudeEngine) runBlock(w *crudeWorker, blk *crudeBlock, pilot []float64)
 	}
 	gs := blk.stats[e.nout]
 	gl := &e.layouts[e.nout]
+	var fails int64
 	for i := 0; i < size; i++ {
 		if e.lhs {
 			inv := 1 / float64(size)
@@ -89,7 +95,7 @@ func (e *crudeEngine) runBlock(w *crudeWorker, blk *crudeBlock, pilot []float64)
 		}
 		g := e.m.G(w.x, w.out)
 		if g < 0 {
-			blk.fails++
+			fails++
 		}
 		if pilot != nil {
 			row := pilot[i*(e.nout+1):]
@@ -108,6 +114,7 @@ func (e *crudeEngine) runBlock(w *crudeWorker, blk *crudeBlock, pilot []float64)
 			row[e.nvar+e.nout] = g
 		}
 	}
+	blk.fails = fails
 }
 
 // crudeTotals are the merged results of the first blocks.

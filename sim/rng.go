@@ -29,15 +29,20 @@ func blockSeed(seed, stream, b uint64) (uint64, uint64) {
 	return s, splitmix64(s ^ 0x5851f42d4c957f2d)
 }
 
-// blockRNG is a reseedable generator; reseeding does not allocate.
+// blockRNG is a reseedable generator; reseeding does not allocate. The
+// generator state, written at every draw, is padded so that the
+// generators of two workers never share a cache line.
 type blockRNG struct {
-	pcg *rand.PCG
+	_   [64]byte
+	pcg rand.PCG
+	_   [64]byte
 	r   *rand.Rand
 }
 
 func newBlockRNG() *blockRNG {
-	p := rand.NewPCG(0, 0)
-	return &blockRNG{pcg: p, r: rand.New(p)}
+	g := &blockRNG{}
+	g.r = rand.New(&g.pcg)
+	return g
 }
 
 func (g *blockRNG) seed(seed, stream, b uint64) {

@@ -65,6 +65,9 @@ type streamStats struct {
 	fine       []float64
 	fUnder     float64
 	fOver      float64
+	// pad keeps the hot fields of two workers' accumulators off a shared
+	// cache line.
+	pad [128]byte
 }
 
 func newStreamStats() *streamStats {
@@ -72,7 +75,9 @@ func newStreamStats() *streamStats {
 }
 
 func (s *streamStats) reset() {
-	*s = streamStats{hist: s.hist, fine: s.fine, min: math.Inf(1), max: math.Inf(-1)}
+	hist, fine := s.hist, s.fine
+	*s = streamStats{}
+	s.hist, s.fine, s.min, s.max = hist, fine, math.Inf(1), math.Inf(-1)
 	clear(s.hist)
 	clear(s.fine)
 }
