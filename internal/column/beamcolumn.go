@@ -149,12 +149,19 @@ var (
 //
 // Ultimate uses a fibre section of sec (after its ThicknessLoss) with
 // elastic-perfectly-plastic steel (E, Fy of m) and the residual stress
-// opt.Residual, two Gauss points per element, and follows the equilibrium
-// path by Newton iteration under control of the lateral deflection at the
-// node of largest elastic deflection; the peak is bracketed and refined
-// by successive parabolic interpolation. The axial force is the applied
-// load N at every section (no axial restraint). A straight, concentric
-// member is given a bow of L/10^6 so that the path has a peak.
+// opt.Residual, two Gauss points per element (the spread-of-plasticity
+// beam-column of e.g. Chen & Atsuta, Theory of Beam-Columns, vol. 1, in a
+// displacement-based finite element form). The axial force is the applied
+// load N at every section (no axial restraint), so each section's axial
+// strain is condensed out. The equilibrium path is followed by Newton
+// iteration, first under load control and, near the peak, under control
+// of the lateral deflection at the node of largest elastic deflection;
+// the peak is bracketed and refined by successive parabolic
+// interpolation, to about 1e-5 of the load. A straight, concentric member
+// is given a bow of L/10^6 so that the path has a peak. If the load is
+// still rising when the deflection reaches L/10, or the search runs out of
+// steps (this can happen for nearly perfect members whose path turns
+// sharply at a bifurcation), the largest load found is returned.
 //
 // m.Props is used by the first-yield limit (A, I or R, W or C); the
 // ultimate limit takes its properties from the fibres of sec.
