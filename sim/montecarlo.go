@@ -313,7 +313,7 @@ func (e *crudeEngine) outputs(st []*streamStats) []OutputStats {
 
 // Describe runs a crude Monte Carlo sample of n points of m with the given
 // seed on all cores and returns the statistics of its outputs and of g,
-// with the first keep points. Run uses it for methods whose own samples do
+// with the first keep points (none when keep <= 0). Run uses it for methods whose own samples do
 // not represent the input distribution (FORM, importance sampling, subset
 // simulation, conditional quasi-Monte Carlo).
 func Describe(ctx context.Context, m *Model, n int64, keep int, seed uint64) ([]OutputStats, *Samples, error) {
@@ -327,10 +327,8 @@ func Describe(ctx context.Context, m *Model, n int64, keep int, seed uint64) ([]
 	if n <= 0 {
 		return nil, nil, fmt.Errorf("sim: Describe needs n > 0, got %d", n)
 	}
-	s := (&Settings{Keep: max(keep, -1), Seed: seed}).withDefaults()
-	if keep == 0 {
-		s.Keep = -1
-	}
+	s := (&Settings{Seed: seed}).withDefaults()
+	s.Keep = keep // zero or negative: none
 	e := &crudeEngine{m: m, t: t, seed: seed, stream: streamAux, n: n}
 	r, err := e.run(ctx, &s, MonteCarlo)
 	if err != nil {

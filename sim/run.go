@@ -39,7 +39,8 @@ type Settings struct {
 	// AuxSamples is the size of the crude sample that describes the
 	// outputs when the estimator's own samples cannot (conditional
 	// quasi-Monte Carlo, FORM, importance sampling, subset simulation);
-	// default 20000, negative for none.
+	// default 20000, negative for none. Its evaluations are not counted in
+	// Result.Evaluations.
 	AuxSamples int64
 }
 
