@@ -275,6 +275,9 @@ func TestBeamColumnTrace(t *testing.T) {
 
 // One evaluation allocates nothing once the workspace pool is warm.
 func TestBeamColumnAllocs(t *testing.T) {
+	if bcRace {
+		t.Skip("the race detector makes sync.Pool drop workspaces")
+	}
 	m := bcMemberAt(t, bcIPE300, Minor, 1.0)
 	for _, o := range []*BeamOptions{{}, {Limit: UltimateLimit, Residual: ResidualHotRolled}} {
 		allocs := testing.AllocsPerRun(20, func() {
