@@ -290,3 +290,32 @@ func TestBeamColumnAllocs(t *testing.T) {
 		}
 	}
 }
+
+// Evaluations in parallel goroutines (each takes its own pooled
+// workspace) give the serial results bit for bit.
+func TestBeamColumnConcurrent(t *testing.T) {
+	const n = 8
+	var want [n]float64
+	eval := func(k int) float64 {
+		m := bcMemberAt(t, bcIPE300, Minor, 0.4+0.15*float64(k))
+		r, err := BeamColumn(m, bcIPE300, Both, &BeamOptions{Limit: BeamLimit(k % 2), Residual: ResidualHotRolled})
+		if err != nil {
+			t.Error(err)
+		}
+		return r.N
+	}
+	for k := range want {
+		want[k] = eval(k)
+	}
+	var got [n]float64
+	done := make(chan int)
+	for k := range got {
+		go func() { got[k] = eval(k); done <- k }()
+	}
+	for range got {
+		<-done
+	}
+	if got != want {
+		t.Errorf("parallel %v, serial %v", got, want)
+	}
+}
