@@ -131,7 +131,7 @@ func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*
 					u := units[k]
 					rng.seed(s.Seed, streamQMC, uint64(u.r)<<32|uint64(u.start/qmcChunk))
 					sum := 0.0
-					p[idx] = 0.5
+					p[idx], x[idx] = 0.5, dj.Quantile(0.5) // ignored by Split
 					for j := range cur {
 						cur[j] = sobolAt(&dirs[j], uint32(u.start))
 					}
@@ -151,7 +151,7 @@ func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*
 								p[dim] = uniformOpen(rng.r)
 							}
 						}
-						t.fromUniform(x, p, z)
+						t.fromUniform(x, p, z, idx)
 						h, c := m.Linear.Split(x)
 						sum += conditionalProb(dj, h, c)
 					}

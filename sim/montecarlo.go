@@ -89,7 +89,7 @@ func (e *crudeEngine) runBlock(w *crudeWorker, blk *crudeBlock, pilot []float64)
 			for j := range w.p {
 				w.p[j] = (float64(w.perm[j][i]) + uniformOpen(r)) * inv
 			}
-			e.t.fromUniform(w.x, w.p, w.z)
+			e.t.fromUniform(w.x, w.p, w.z, -1)
 		} else {
 			e.t.drawX(w.x, w.z, r)
 		}

@@ -272,15 +272,21 @@ func (t *Transform) drawX(x, z []float64, r *randRand) {
 }
 
 // fromUniform stores in x the point whose independent uniform coordinates
-// (before the copula) are p, all in (0, 1); z is scratch.
-func (t *Transform) fromUniform(x, p, z []float64) {
+// (before the copula) are p, all in (0, 1); z is scratch. Variable skip
+// (an uncorrelated one, or -1 for none) is left as it is.
+func (t *Transform) fromUniform(x, p, z []float64, skip int) {
 	if t.chol == nil {
 		for i, v := range t.vars {
-			x[i] = v.Dist.Quantile(p[i])
+			if i != skip {
+				x[i] = v.Dist.Quantile(p[i])
+			}
 		}
 		return
 	}
 	for i, v := range t.vars {
+		if i == skip {
+			continue
+		}
 		if t.corr[i] {
 			z[i] = stdQuantile(p[i])
 		} else {

@@ -125,7 +125,7 @@ func TestTransformNoAlloc(t *testing.T) {
 		"ToX":         func() { tr.ToX(x, u) },
 		"ToU":         func() { tr.ToU(u, x) },
 		"drawX":       func() { tr.drawX(x, z, g.r) },
-		"fromUniform": func() { tr.fromUniform(x, p, z) },
+		"fromUniform": func() { tr.fromUniform(x, p, z, -1) },
 		"G":           func() { m.G(x, z[:2]) },
 		"conditional": func() { conditionalProb(m.Vars[5].Dist, 1e6, 1) },
 	} {
