@@ -14,8 +14,10 @@ import "math"
 //
 //	sum_gp w M B  -  P G (y0 + w)  -  P e (d_0 - d_L)  +  springs  =  0,
 //
-// solved by Newton's method with the load P as an unknown and one lateral
-// displacement prescribed (displacement control), which passes the peak.
+// solved by Newton's method, under load control while the tangent
+// stiffness stays positive definite and then with the load P as an
+// unknown and one lateral displacement prescribed (displacement control),
+// which passes the peak.
 type bcPlastic struct {
 	fa, fz, fr []float64 // fibre area, distance from the axis, residual stress
 	nf, ngp    int
