@@ -264,23 +264,34 @@ func nominalValue(q *Quantity, length float64) float64 {
 }
 
 // meanMagnitude returns E|X| of a distribution: its mean when it cannot
-// go negative, else by integration over the standard normal (trapezoid
-// rule on [-9, 9], ample for the smooth integrand).
+// go negative, else the integral of |F^-1(Phi(u))| phi(u) over the
+// standard normal u, by composite Simpson rules on each side of the sign
+// change (the integrand has a kink there), truncated at |u| = 9.
 func meanMagnitude(d sim.Dist) float64 {
 	if d.CDF(0) == 0 {
 		return d.Mean()
 	}
-	const n = 3600
-	const lo, hi = -9.0, 9.0
-	h := (hi - lo) / n
-	sum := 0.0
-	for i := 0; i <= n; i++ {
-		u := lo + float64(i)*h
-		w := math.Exp(-u*u/2) / math.Sqrt(2*math.Pi)
-		if i == 0 || i == n {
-			w /= 2
-		}
-		sum += w * math.Abs(d.FromStdNormal(u))
+	u0 := math.Max(-9, math.Min(9, d.ToStdNormal(0)))
+	f := func(u float64) float64 {
+		return math.Exp(-u*u/2) / math.Sqrt(2*math.Pi) * math.Abs(d.FromStdNormal(u))
 	}
-	return sum * h
+	return simpson(f, -9, u0, 2000) + simpson(f, u0, 9, 2000)
+}
+
+// simpson integrates f over [a, b] by the composite Simpson rule with n
+// (even) intervals.
+func simpson(f func(float64) float64, a, b float64, n int) float64 {
+	if b <= a {
+		return 0
+	}
+	h := (b - a) / float64(n)
+	sum := f(a) + f(b)
+	for i := 1; i < n; i++ {
+		w := 2.0
+		if i%2 == 1 {
+			w = 4
+		}
+		sum += w * f(a+float64(i)*h)
+	}
+	return sum * h / 3
 }

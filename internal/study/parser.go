@@ -274,6 +274,9 @@ func (p *parser) parse() *Study {
 		return st
 	}
 
+	// Quantities in the order of the file.
+	sort.SliceStable(st.Quantities, func(i, j int) bool { return st.Quantities[i].Line < st.Quantities[j].Line })
+
 	// L/n values become millimetres when the length is fixed.
 	length := 0.0
 	if st.Length != nil && !st.Length.Random() {
