@@ -252,3 +252,23 @@ func TestMonteCarloCaseB(t *testing.T) {
 		t.Errorf("exact pf %v outside the 99%% interval %v (pf %v)", want, res.PfCI, res.Pf)
 	}
 }
+
+// foreign hides a distribution's unexported methods, as a Dist written
+// outside the package would; Run must then draw it by inversion.
+type foreign struct{ Dist }
+
+func TestForeignDist(t *testing.T) {
+	t.Parallel()
+	m := caseA()
+	for i := range m.Vars {
+		m.Vars[i].Dist = foreign{m.Vars[i].Dist}
+	}
+	want := PfFromBeta(100 / math.Sqrt(1300))
+	res, err := Run(context.Background(), m, &Settings{Method: MonteCarlo, Samples: 1_000_000, Seed: 3, Confidence: 0.99})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want < res.PfCI[0] || want > res.PfCI[1] {
+		t.Errorf("exact pf %v outside the 99%% interval %v (pf %v)", want, res.PfCI, res.Pf)
+	}
+}
