@@ -417,7 +417,7 @@ func (w *bcWork) path(nfy, wfy float64, tr *Trace) (float64, bool) {
 	dP := 0.5 * nfy
 	var step, minStep, xT, pT float64
 	peaked := false
-	flat, failed := 0, false
+	flat, failed, stuck := 0, false, false
 	for range 120 {
 		var ok bool
 		var it int
@@ -425,7 +425,7 @@ func (w *bcWork) path(nfy, wfy float64, tr *Trace) (float64, bool) {
 			ok, it = w.increment(math.Min(pl.p+dP, (1-1e-9)*pl.ny), true)
 			if !ok {
 				dP /= 2
-				if dP < 1e-3*pl.p || dP < 1e-6*pl.ny {
+				if dP < 0.02*pl.p || dP < 1e-6*pl.ny {
 					load = false
 					// Near a bifurcation (a small imperfection) the deflection
 					// grows from almost nothing: start no smaller than L/10^5.
@@ -442,6 +442,7 @@ func (w *bcWork) path(nfy, wfy float64, tr *Trace) (float64, bool) {
 				step /= 2
 				failed = true
 				if step < minStep {
+					stuck = true
 					break
 				}
 				continue
@@ -482,6 +483,22 @@ func (w *bcWork) path(nfy, wfy float64, tr *Trace) (float64, bool) {
 	}
 	if pl.pBest == 0 {
 		return 0, false
+	}
+	if stuck {
+		// Displacement control cannot follow a path that turns sharply
+		// (a nearly perfect stocky member approaching the squash load):
+		// creep up on the limit under load control instead.
+		top := (1 - 1e-9) * pl.ny
+		for k, dP := 0, 0.01*pl.p; k < 40 && dP > 1e-4*pl.p && pl.p < top; k++ {
+			if ok, _ := w.increment(math.Min(pl.p+dP, top), true); !ok {
+				dP /= 2
+				continue
+			}
+			w.commit()
+			copy(pl.wBest, pl.wc)
+			pl.pBest = pl.p
+			record(pl.p, pl.wc[c])
+		}
 	}
 	if !peaked {
 		return pl.pBest, true
@@ -538,7 +555,7 @@ func (w *bcWork) path(nfy, wfy float64, tr *Trace) (float64, bool) {
 				x1, p1 = x, p
 			}
 		}
-		if k >= 1 && math.Abs(p2-old) <= 1e-7*p2 && (x3-x1) < 0.5*span {
+		if k >= 2 && math.Abs(p2-old) <= 1e-6*p2 {
 			break
 		}
 	}
