@@ -57,6 +57,12 @@ func conditionalProb(d Dist, h, c float64) float64 {
 // error is that of the mean of the replicate estimates, and the interval a
 // Student's t interval on them.
 func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, error) {
+	return conditional(ctx, m, t, s, true)
+}
+
+// conditional is conditionalQMC; with qmc false every input is drawn
+// pseudo-randomly (plain conditional Monte Carlo, for comparison).
+func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc bool) (*Result, error) {
 	if why := linearUsable(m, t); why != "" {
 		return nil, fmt.Errorf("sim: conditional-qmc cannot be used: %s", why)
 	}
@@ -81,6 +87,9 @@ func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*
 		}
 	}
 	nsob := min(len(rest), sobolMaxDim)
+	if !qmc {
+		nsob = 0
+	}
 	dirs := sobolDirections(nsob)
 	// One scrambling seed per replicate and dimension.
 	seeds := make([][]uint32, R)
@@ -212,7 +221,7 @@ func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*
 	res.PfCI = TInterval(pf, se, R-1, s.Confidence)
 	res.Beta = BetaFromPf(pf)
 	res.BetaCI = BetaInterval(res.PfCI)
-	if len(rest) > sobolMaxDim {
+	if qmc && len(rest) > sobolMaxDim {
 		res.Warnings = append(res.Warnings, fmt.Sprintf("conditional-qmc: only the first %d of %d inputs use the Sobol' sequence; the others are pseudo-random", sobolMaxDim, len(rest)))
 	}
 	return res, nil
