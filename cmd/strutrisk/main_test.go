@@ -258,3 +258,27 @@ func TestCheckJSONHand(t *testing.T) {
 		}
 	}
 }
+
+// TestCheckBeamColumnSprings: a beam-column study with end springs
+// checks; a rigid top and pinned bottom give K = 0.699156 (tan u = u,
+// Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., §2.5).
+func TestCheckBeamColumnSprings(t *testing.T) {
+	s := strings.Replace(good, `ends = "pinned-pinned"`, "spring_top = \"rigid\"\nspring_bottom = 0", 1)
+	s += "[capacity]\nmodel = \"beam-column\"\nlimit = \"ultimate\"\nresidual_stress = \"none\"\n"
+	code, out, errs := invoke(t, "check", "--json", writeStudy(t, s))
+	if code != 0 {
+		t.Fatalf("exit %d\n%s", code, errs)
+	}
+	var d report.Document
+	if err := json.Unmarshal([]byte(out), &d); err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(d.Nominal.K-0.6991556596) > 1e-6 {
+		t.Errorf("K %.8f, want 0.69915566", d.Nominal.K)
+	}
+	// The elastic-plastic member cannot carry more than its Euler load
+	// about the weaker axis nor more than the squash load A fy.
+	if c := d.Nominal.Capacity; !(c > 0 && c <= d.Nominal.EulerLoad && c <= 5000*250) {
+		t.Errorf("capacity %g outside (0, min(Euler %g, squash 1.25e6)]", c, d.Nominal.EulerLoad)
+	}
+}

@@ -89,6 +89,11 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		Seed:      st.Analysis.Seed,
 		Workers:   o.workers,
 	}
+	if st.Model == "beam-column" {
+		// Each evaluation is a numerical analysis: describe the capacity
+		// and demand from a smaller auxiliary sample.
+		settings.AuxSamples = 2000
+	}
 	if o.set["method"] {
 		settings.Method = sim.Method(o.method)
 	}

@@ -263,6 +263,12 @@ func (p *parser) parse() *Study {
 	p.target(top)
 	p.analysis(top)
 	p.sensitivity(top)
+	if st.Model == "beam-column" && (top.m["sensitivity"] == nil || !hasKey(top.m["sensitivity"], "sobol")) {
+		// Sobol indices need tens of thousands of evaluations: too slow for
+		// the numerical beam-column unless asked for.
+		st.Sensitivity.Sobol = false
+		p.defaultf("sensitivity.sobol: off for model beam-column unless asked for (each evaluation is a numerical analysis)")
+	}
 	p.output(top)
 	p.sweep(top)
 	p.variants(top)
@@ -297,6 +303,15 @@ func (p *parser) parse() *Study {
 	p.checkModel()
 	p.checkSection()
 	return st
+}
+
+func hasKey(v any, k string) bool {
+	m, ok := v.(map[string]any)
+	if !ok {
+		return false
+	}
+	_, has := m[k]
+	return has
 }
 
 // required reports a missing key.
@@ -631,9 +646,6 @@ func (p *parser) capacity(top *table) {
 			p.errorf(t.key(k), "%s applies to model = \"beam-column\" only (the model is %q)", k, st.Model)
 		}
 	}
-	if st.Model == "beam-column" && !beamAvailable {
-		p.errorf(t.key("model"), "model \"beam-column\" is not available in this build yet: use perry-robertson, secant or curve")
-	}
 	if st.Model == "beam-column" {
 		if st.Limit == "" {
 			st.Limit = "first-yield"
@@ -800,7 +812,10 @@ func (p *parser) sensitivity(top *table) {
 	s.Sobol, s.SobolSamples = true, 2048
 	t := p.sub(top, "sensitivity")
 	if t == nil {
-		p.defaultf("sensitivity: not given; tornado between the 5 %% and 95 %% fractiles, Sobol indices from 2048 samples")
+		p.defaultf("sensitivity: not given; tornado between the 5 %% and 95 %% fractiles")
+		if p.st.Model != "beam-column" {
+			p.defaultf("sensitivity.sobol: not given; Sobol indices from 2048 samples")
+		}
 		return
 	}
 	if v, ok := t.get("tornado"); ok {
