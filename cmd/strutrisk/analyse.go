@@ -115,6 +115,12 @@ func (r *results) document() *report.Document {
 	for _, s := range r.sobol {
 		d.Sobol = append(d.Sobol, report.Sobol{Variable: s.Variable, First: s.First, Total: s.Total, FirstCI: s.FirstCI, TotalCI: s.TotalCI})
 	}
+	if f := r.form; f != nil && f.Converged && len(f.Points) > 0 {
+		// The axis that governs at the most probable failure point.
+		if res, _, _, err := r.l.md.At(f.Points[0].X); err == nil {
+			d.GoverningAxis = res.Axis.String()
+		}
+	}
 	d.Warnings = append(d.Warnings, r.warnings...)
 	if r.sobolMsg != "" {
 		d.Warnings = append(d.Warnings, "sobol: "+r.sobolMsg)
@@ -215,6 +221,7 @@ func (r *results) bundle() *report.Bundle {
 			b.Margin = o
 		}
 	}
+	b.Slenderness = r.slendernessChart()
 	b.Diagnostics = []report.KV{
 		{Key: "method", Value: string(r.res.Method)},
 		{Key: "why", Value: r.res.Reason},
@@ -236,4 +243,45 @@ func (r *results) bundle() *report.Bundle {
 		}
 	}
 	return b
+}
+
+// slendernessChart is the capacity ratio against relative slenderness:
+// the study's model and Euler's curve, the nominal member and a cloud of
+// sampled members.
+func (r *results) slendernessChart() *report.SlendernessChart {
+	md := r.l.md
+	lam, ratio := md.CurveChart(60, 3)
+	if len(lam) == 0 {
+		return nil
+	}
+	c := &report.SlendernessChart{Curves: []report.Curve{{Name: r.l.st.Model, X: lam, Y: ratio}}}
+	var ex, ey []float64
+	for i := 1; i <= 60; i++ {
+		l := 3 * float64(i) / 60
+		ex = append(ex, l)
+		ey = append(ey, math.Min(1, 1/(l*l))) // Euler: N/(A fy) = 1/lam^2, capped by the squash load
+	}
+	c.Curves = append(c.Curves, report.Curve{Name: "Euler", X: ex, Y: ey})
+	n := r.l.nom
+	m := n.Member
+	c.Member = [2]float64{n.RelSlenderness[n.Axis], n.Capacity / n.ModelFactor / (m.Props.A * m.Fy)}
+	kept := r.res.Kept
+	limit := 500
+	if r.l.st.Model == "beam-column" {
+		limit = 0 // each point would be a numerical analysis
+	}
+	if kept != nil {
+		nv := len(md.Sim.Vars)
+		for i, row := range kept.Rows {
+			if i >= limit || len(row) < nv {
+				break
+			}
+			res, mm, l, err := md.At(row[:nv])
+			if err != nil || math.IsNaN(l) {
+				continue
+			}
+			c.Cloud = append(c.Cloud, [2]float64{l, res.N / (mm.Props.A * mm.Fy)})
+		}
+	}
+	return c
 }

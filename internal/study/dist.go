@@ -272,6 +272,7 @@ func (p *parser) resolve(q *Quantity, length float64) {
 		if q.Relative && length > 0 {
 			q.Value *= length
 			q.Relative = false
+			q.perLength = true
 		}
 		return
 	}
@@ -295,6 +296,7 @@ func (p *parser) resolve(q *Quantity, length float64) {
 				q.spec.params[k] = pval{v: v.v * length}
 			}
 		}
+		q.perLength = !abs
 		return
 	}
 	if abs {

@@ -122,3 +122,24 @@ func TestGDoesNotAllocate(t *testing.T) {
 		}
 	}
 }
+
+// TestCurveChart: on the buckling-curve model the chart is chi of
+// EN 1993-1-1:2005 eq. (6.49): curve b at relative slenderness 1, 2, 3
+// gives 0.597023, 0.209461, 0.099432 (computed from the formula).
+func TestCurveChart(t *testing.T) {
+	text := strings.Replace(base, `bow = "L/1000"`, "", 1) + "[capacity]\nmodel = \"curve\"\ncurve = \"b\"\n"
+	md, err := Build(parse(t, text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	lam, ratio := md.CurveChart(3, 3)
+	want := []float64{0.597023, 0.209461, 0.099432}
+	if len(lam) != 3 {
+		t.Fatalf("%d points, want 3", len(lam))
+	}
+	for i := range want {
+		if !near(lam[i], float64(i+1), 1e-9) || math.Abs(ratio[i]-want[i]) > 5e-7 {
+			t.Errorf("point %d: (%.6f, %.6f), want (%d, %.6f)", i, lam[i], ratio[i], i+1, want[i])
+		}
+	}
+}

@@ -32,15 +32,7 @@ type Nominal struct {
 // Nominal evaluates the model at nominal values.
 func (md *Model) Nominal() (*Nominal, error) {
 	st := md.Study
-	v := md.base
-	for i, b := range md.binds {
-		q := md.quantity(i)
-		x := q.Dist.Mean()
-		if q == st.Bow || q == st.Ecc {
-			x = meanMagnitude(q.Dist)
-		}
-		md.set(&v, b, x)
-	}
+	v := md.nominalValues()
 	n := &Nominal{ModelFactor: v[fModel], EffectFactor: v[fEffect]}
 	n.Demand = v[fEffect] * v[fLoads]
 	m, sec, err := md.member(&v)
@@ -72,6 +64,21 @@ func (md *Model) Nominal() (*Nominal, error) {
 		n.Utilisation = n.Demand / n.Capacity
 	}
 	return n, nil
+}
+
+// nominalValues are the inputs at nominal values.
+func (md *Model) nominalValues() values {
+	st := md.Study
+	v := md.base
+	for i, b := range md.binds {
+		q := md.quantity(i)
+		x := q.Dist.Mean()
+		if q == st.Bow || q == st.Ecc {
+			x = meanMagnitude(q.Dist)
+		}
+		md.set(&v, b, x)
+	}
+	return v
 }
 
 // quantity returns the study quantity of the i-th random variable.

@@ -25,6 +25,10 @@ type Quantity struct {
 	// fraction of the member length of the same sample ("L/1000").
 	Relative bool
 
+	// perLength reports that the quantity was written as L/n and turned
+	// into millimetres with the fixed member length.
+	perLength bool
+
 	// spec is the distribution as parsed, before it is built.
 	spec *distSpec
 }
