@@ -1,6 +1,7 @@
 package main
 
 import (
+	"context"
 	"encoding/json"
 	"math"
 	"os"
@@ -134,5 +135,33 @@ func TestRunReproducible(t *testing.T) {
 	_, b, _ := invoke(t, "run", "--seed", "11", "--json", "--out", t.TempDir(), "--samples", "200000", "--method", "monte-carlo", study, "--workers", "1")
 	if a != b || a == "" {
 		t.Errorf("two runs with seed 11 differ:\n%s\n---\n%s", a, b)
+	}
+}
+
+// TestRunInterrupted: a cancelled run writes what it finished, marked
+// incomplete, and exits non-zero.
+func TestRunInterrupted(t *testing.T) {
+	ctx, cancel := context.WithCancel(context.Background())
+	cancel()
+	baseContext = func() context.Context { return ctx }
+	defer func() { baseContext = context.Background }()
+	dir := t.TempDir()
+	code, _, errs := invoke(t, "run", writeStudy(t, stocky), "--out", dir, "--method", "monte-carlo", "--json")
+	if code != exitInterrupted {
+		t.Errorf("exit %d, want %d\n%s", code, exitInterrupted, errs)
+	}
+	b, err := os.ReadFile(filepath.Join(dir, "results.json"))
+	if err != nil {
+		t.Fatalf("no results.json after an interrupted run: %v", err)
+	}
+	if !strings.Contains(string(b), "incomplete") {
+		t.Errorf("results.json not marked incomplete:\n%s", b)
+	}
+	// No temporary files are left behind.
+	entries, _ := os.ReadDir(dir)
+	for _, e := range entries {
+		if strings.Contains(e.Name(), "tmp") {
+			t.Errorf("temporary file left: %s", e.Name())
+		}
 	}
 }

@@ -27,6 +27,9 @@ finished is written, marked incomplete, and the exit status is 130.
 Flags:
 `
 
+// baseContext is the context a run starts from; tests replace it.
+var baseContext = context.Background
+
 // runOptions are the flags of run.
 type runOptions struct {
 	out           string
@@ -111,7 +114,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		dir = filepath.Join("out", st.Name())
 	}
 
-	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt, syscall.SIGTERM)
+	ctx, stop := signal.NotifyContext(baseContext(), os.Interrupt, syscall.SIGTERM)
 	defer stop()
 	bar := newProgress(stderr, !o.json)
 	settings.Progress = bar.update
