@@ -210,6 +210,12 @@ func (p *parser) perAxis(t *table, key string, o qopt) (qs [2]*Quantity, given b
 		return [2]*Quantity{q, q}, true
 	}
 	at := &table{path: t.key(key), m: m, used: map[string]bool{}}
+	if _, maj := m["major"]; !maj {
+		if _, min := m["minor"]; !min {
+			p.errorf(at.path, "a table here is either a distribution (with dist = \"...\") or per-axis values { major = ..., minor = ... }")
+			return qs, false
+		}
+	}
 	for a, name := range []string{"major", "minor"} {
 		if _, ok := at.m[name]; !ok {
 			p.errorf(at.path, "a per-axis table needs both major and minor (or give one value for both axes)")

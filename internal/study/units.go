@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"math"
 	"regexp"
-	"sort"
 	"strconv"
 	"strings"
 	"unicode"
@@ -104,15 +103,25 @@ func init() {
 	}
 }
 
-// unitsOf returns the accepted units of dimension d, sorted, for messages.
+// unitOrder lists the units in the order messages show them.
+var unitOrder = []string{
+	"mm", "cm", "m", "in", "ft",
+	"N", "kN", "MN", "lbf", "kip",
+	"Pa", "kPa", "MPa", "GPa", "psi", "ksi", "N/mm2",
+	"N*mm", "N*m", "kN*mm", "kN*m", "lbf*in", "lbf*ft", "kip*in", "kip*ft",
+	"N*mm/rad", "N*m/rad", "kN*mm/rad", "kN*m/rad", "lbf*in/rad", "lbf*ft/rad", "kip*in/rad", "kip*ft/rad",
+	"mm2", "cm2", "m2", "in2",
+	"mm4", "cm4", "m4", "in4",
+}
+
+// unitsOf returns the accepted units of dimension d for messages.
 func unitsOf(d Dim) string {
 	var names []string
-	for name, u := range units {
-		if u.dim == d && !strings.Contains(name, "^") {
+	for _, name := range unitOrder {
+		if units[name].dim == d {
 			names = append(names, name)
 		}
 	}
-	sort.Strings(names)
 	return strings.Join(names, " ")
 }
 
