@@ -356,3 +356,35 @@ func TestNominalBowMagnitude(t *testing.T) {
 		t.Errorf("nominal bow %.8g, want %.8g", n.Member.Bow, want)
 	}
 }
+
+func TestSweepAndVariants(t *testing.T) {
+	text := base + `[sweep]
+parameter = "member.length"
+values = ["2 m", "3 m", 4000]
+[[variant]]
+name = "bow L/500"
+set = { "imperfection.bow" = "L/500" }
+`
+	st := parse(t, text)
+	if st.Sweep == nil || len(st.Sweep.Values) != 3 || !near(st.Sweep.Values[2].Value, 4000, 0) || !near(st.Sweep.Values[0].Value, 2000, 0) {
+		t.Errorf("sweep %+v", st.Sweep)
+	}
+	if len(st.Variants) != 1 || st.Variants[0].Name != "bow L/500" || st.Variants[0].Set["imperfection.bow"] == nil {
+		t.Errorf("variants %+v", st.Variants)
+	}
+	// Both are checked but not yet run, and the warnings say so.
+	w := strings.Join(st.Warnings, "\n")
+	if !strings.Contains(w, "sweep") || !strings.Contains(w, "variant") {
+		t.Errorf("warnings %q", w)
+	}
+	for _, c := range []struct{ text, want string }{
+		{base + "[sweep]\nparameter = \"member.lenght\"\nvalues = [1]\n", `t.toml:16: sweep.parameter: "member.lenght" is not a quantity of this study; did you mean "member.length"?`},
+		{base + "[sweep]\nparameter = \"member.length\"\nvalues = [\"2 kN\"]\n", `t.toml:17: sweep.values[0]: "2 kN" is a force but this key takes a length`},
+		{base + "[[variant]]\nname = \"x\"\nset = { \"material.yeild\" = 300 }\n", `t.toml:17: variant[0].set.material.yeild: "material.yeild" is not a quantity of this study; did you mean "material.yield"?`},
+	} {
+		_, err := Parse("t.toml", []byte(c.text))
+		if err == nil || !strings.Contains(err.Error(), c.want) {
+			t.Errorf("error %v\nwant %q", err, c.want)
+		}
+	}
+}
