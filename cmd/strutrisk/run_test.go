@@ -165,3 +165,22 @@ func TestRunInterrupted(t *testing.T) {
 		}
 	}
 }
+
+// TestRunSummary: the terminal summary carries pf and beta with their
+// intervals, the target verdict, the method and evaluations, the most
+// influential variables and the caution; standard error stays quiet.
+func TestRunSummary(t *testing.T) {
+	dir := t.TempDir()
+	code, out, errs := invoke(t, "run", writeStudy(t, stocky), "--out", dir)
+	if code != 0 {
+		t.Fatalf("exit %d\n%s", code, errs)
+	}
+	for _, want := range []string{"failure prob. pf", "95 % interval", "reliability beta", "target beta       3.80", "NOT met", "evaluations", "most influential  loads.axial", "results in        " + dir, "licensed"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("summary lacks %q:\n%s", want, out)
+		}
+	}
+	if errs != "" {
+		t.Errorf("standard error not quiet when not a terminal: %q", errs)
+	}
+}
