@@ -2,36 +2,52 @@ package sim
 
 import "math"
 
-// Constants of the exponential's argument reduction and its rational
-// approximation on [-ln2/2, ln2/2], from Sun Microsystems' fdlibm e_exp.c
-// (P. T. P. Tang's method as implemented there); ln2 is split so that
-// k*ln2Hi is exact.
+// Constants of fastExp: x = (64m + j) ln2/64 + r, with ln2/64 split into
+// expL1 (32 significant bits, so that k*expL1 is exact) and expL2.
 const (
-	expLn2Hi = 6.93147180369123816490e-01
-	expLn2Lo = 1.90821492927058770002e-10
-	expLog2e = 1.44269504088896338700e+00
-	expP1    = 1.66666666666666657415e-01
-	expP2    = -2.77777777770155933842e-03
-	expP3    = 6.61375632143793436117e-05
-	expP4    = -1.65339022054652515390e-06
-	expP5    = 4.13813679705723846039e-08
+	expInv   = 92.33248261689366      // 64/ln 2
+	expL1    = 0.01083042469326756    // ln2/64, high part
+	expL2    = 2.9815858269852933e-12 // ln2/64 - expL1
+	expShift = 6755399441055744.0     // 1.5 * 2^52: adding it rounds to an integer
 )
 
-// fastExp returns e^x to within about one unit in the last place. It is
-// the fdlibm algorithm (reduce x = k ln2 + r, approximate e^r by
-// 1 + 2r/(R(r) - r), scale by 2^k), written for the sampling loop, where
-// the assembly math.Exp of some platforms is several times slower.
-// Arguments outside [-700, 700] and NaN go to math.Exp.
+// expTable holds 2^(j/64), j = 0..63, correctly rounded (computed with
+// 60-digit decimal arithmetic).
+var expTable = [64]float64{
+	1.0, 1.0108892860517005, 1.0218971486541166, 1.0330248790212284,
+	1.0442737824274138, 1.0556451783605572, 1.0671404006768237, 1.0787607977571199,
+	1.0905077326652577, 1.102382583307841, 1.1143867425958924, 1.1265216186082418,
+	1.1387886347566916, 1.1511892299529827, 1.1637248587775775, 1.1763969916502812,
+	1.189207115002721, 1.202156731452703, 1.215247359980469, 1.22848053610687,
+	1.241857812073484, 1.255380757024691, 1.2690509571917332, 1.2828700160787783,
+	1.2968395546510096, 1.3109612115247644, 1.3252366431597413, 1.339667524053303,
+	1.3542555469368927, 1.3690024229745905, 1.383909881963832, 1.3989796725383112,
+	1.4142135623730951, 1.42961333839197, 1.4451808069770467, 1.460917794180647,
+	1.4768261459394993, 1.4929077282912648, 1.5091644275934228, 1.5255981507445384,
+	1.5422108254079407, 1.559004400237837, 1.5759808451078865, 1.593142151342267,
+	1.6104903319492543, 1.6280274218573478, 1.645755478153965, 1.6636765803267364,
+	1.681792830507429, 1.7001063537185235, 1.718619298122478, 1.7373338352737062,
+	1.7562521603732995, 1.7753764925265212, 1.7947090750031072, 1.8142521755003989,
+	1.8340080864093424, 1.8539791250833855, 1.8741676341103, 1.8945759815869656,
+	1.9152065613971474, 1.9360617934922943, 1.9571441241754002, 1.978456026387951,
+}
+
+// fastExp returns e^x to within about one unit in the last place, by the
+// table-driven method of Tang (1989), "Table-driven implementation of the
+// exponential function in IEEE floating-point arithmetic", ACM TOMS 15(2):
+// e^x = 2^m 2^(j/64) e^r with |r| <= ln2/128, e^r - 1 by its Taylor
+// polynomial of degree 6. It has no division and no branch in the common
+// case, for the sampling loops. Arguments outside (-700, 700) and NaN go
+// to math.Exp.
 func fastExp(x float64) float64 {
 	if !(x > -700 && x < 700) {
 		return math.Exp(x)
 	}
-	k := math.Floor(x*expLog2e + 0.5)
-	hi := x - k*expLn2Hi
-	lo := k * expLn2Lo
-	r := hi - lo
-	t := r * r
-	c := r - t*(expP1+t*(expP2+t*(expP3+t*(expP4+t*expP5))))
-	y := 1 - ((lo - (r*c)/(2-c)) - hi)
-	return math.Float64frombits(math.Float64bits(y) + uint64(int64(k))<<52)
+	kf := (x*expInv + expShift) - expShift
+	k := int64(kf)
+	r := (x - kf*expL1) - kf*expL2
+	p := r + r*r*(1.0/2+r*(1.0/6+r*(1.0/24+r*(1.0/120+r*(1.0/720)))))
+	t := expTable[k&63]
+	y := t + t*p
+	return math.Float64frombits(math.Float64bits(y) + uint64(k>>6)<<52)
 }

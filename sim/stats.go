@@ -7,20 +7,23 @@ const (
 	// histBins is the number of bins of OutputStats.Hist, spread over the
 	// range of the pilot sample widened by a tenth on each side.
 	histBins = 50
-	// fineBins is the number of bins of the finer histogram used for the
-	// quantiles, over the pilot range widened by half on each side.
-	fineBins = 4096
+	// fineSub fine bins make one bin of OutputStats.Hist; the fine grid,
+	// used for the quantiles, extends fineExt histogram bins beyond it on
+	// each side (about 0.4 of the pilot range).
+	fineSub  = 40
+	fineExt  = 17
+	fineBins = (histBins + 2*fineExt) * fineSub
 )
 
 // statsLayout fixes the bins of one output's histograms. It is set from a
 // pilot sample so that it is the same for every block (deterministic
-// results) and never changes afterwards (constant memory).
+// results) and never changes afterwards (constant memory). Each value is
+// binned once, on the fine grid; the histogram of OutputStats is summed
+// from it.
 type statsLayout struct {
-	shift      float64 // subtracted before summing moments
-	lo, width  float64
-	flo, fwide float64
-	// inverse widths, so that binning multiplies
-	inv, finv float64
+	shift     float64 // subtracted before summing moments
+	lo, width float64 // histogram
+	flo, finv float64 // fine grid: start and inverse width
 }
 
 // newLayout returns the layout for values seen in a pilot sample.
@@ -48,37 +51,33 @@ func newLayout(vals []float64) statsLayout {
 	}
 	l.lo = lo - 0.1*span
 	l.width = 1.2 * span / histBins
-	l.flo = lo - 0.5*span
-	l.fwide = 2 * span / fineBins
-	l.inv, l.finv = 1/l.width, 1/l.fwide
+	l.flo = l.lo - fineExt*l.width
+	l.finv = fineSub / l.width
 	return l
 }
 
 // streamStats accumulates one output over a block in constant memory.
 type streamStats struct {
-	n          int64
-	nan        int64
-	s1, s2     float64 // sums of (v - shift) and its square
-	min, max   float64
-	hist       []float64
-	under, ovr float64
-	fine       []float64
-	fUnder     float64
-	fOver      float64
+	n        int64
+	nan      int64
+	s1, s2   float64 // sums of (v - shift) and its square
+	min, max float64
+	fine     []float64
+	fUnder   float64
+	fOver    float64
 	// pad keeps the hot fields of two workers' accumulators off a shared
 	// cache line.
 	pad [128]byte
 }
 
 func newStreamStats() *streamStats {
-	return &streamStats{hist: make([]float64, histBins), fine: make([]float64, fineBins)}
+	return &streamStats{fine: make([]float64, fineBins)}
 }
 
 func (s *streamStats) reset() {
-	hist, fine := s.hist, s.fine
+	fine := s.fine
 	*s = streamStats{}
-	s.hist, s.fine, s.min, s.max = hist, fine, math.Inf(1), math.Inf(-1)
-	clear(s.hist)
+	s.fine, s.min, s.max = fine, math.Inf(1), math.Inf(-1)
 	clear(s.fine)
 }
 
@@ -98,13 +97,6 @@ func (s *streamStats) add(l *statsLayout, v float64) {
 	if v > s.max {
 		s.max = v
 	}
-	if i := (v - l.lo) * l.inv; i < 0 {
-		s.under++
-	} else if i >= histBins {
-		s.ovr++
-	} else {
-		s.hist[int(i)]++
-	}
 	if i := (v - l.flo) * l.finv; i < 0 {
 		s.fUnder++
 	} else if i >= fineBins {
@@ -123,14 +115,9 @@ func (s *streamStats) merge(o *streamStats) {
 	s.s2 += o.s2
 	s.min = math.Min(s.min, o.min)
 	s.max = math.Max(s.max, o.max)
-	for i, c := range o.hist {
-		s.hist[i] += c
-	}
 	for i, c := range o.fine {
 		s.fine[i] += c
 	}
-	s.under += o.under
-	s.ovr += o.ovr
 	s.fUnder += o.fUnder
 	s.fOver += o.fOver
 }
@@ -145,7 +132,7 @@ func (s *streamStats) quantile(l *statsLayout, p float64) float64 {
 	}
 	for i, k := range s.fine {
 		if c+k >= target && k > 0 {
-			v := l.flo + (float64(i)+(target-c)/k)*l.fwide
+			v := l.flo + (float64(i)+(target-c)/k)/l.finv
 			return math.Min(s.max, math.Max(s.min, v))
 		}
 		c += k
@@ -174,6 +161,16 @@ func (s *streamStats) result(name string, l *statsLayout) OutputStats {
 		}
 		o.Quantiles[i] = s.quantile(l, p)
 	}
-	o.Hist = Histogram{Lo: l.lo, Width: l.width, Counts: append([]float64(nil), s.hist...), Under: s.under, Over: s.ovr}
+	o.Hist = Histogram{Lo: l.lo, Width: l.width, Counts: make([]float64, histBins), Under: s.fUnder, Over: s.fOver}
+	for j, c := range s.fine {
+		switch k := j/fineSub - fineExt; {
+		case k < 0:
+			o.Hist.Under += c
+		case k >= histBins:
+			o.Hist.Over += c
+		default:
+			o.Hist.Counts[k] += c
+		}
+	}
 	return o
 }
