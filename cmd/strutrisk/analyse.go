@@ -53,7 +53,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	margin := l.md.MarginModel()
 	if sens.Tornado && len(m.Vars) > 0 {
 		bar.stage("tornado")
-		base, rows, err := sim.Tornado(margin, &sim.TornadoSettings{Low: sens.TornadoLow, High: sens.High, Output: 0})
+		base, rows, err := sim.Tornado(margin, &sim.TornadoSettings{Low: sens.TornadoLow, High: sens.TornadoHigh, Output: 0})
 		if err != nil {
 			r.warnings = append(r.warnings, "tornado: "+err.Error())
 		} else {

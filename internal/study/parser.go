@@ -814,7 +814,7 @@ func (p *parser) count(t *table, key string, max float64) (float64, bool) {
 
 func (p *parser) sensitivity(top *table) {
 	s := &p.st.Sensitivity
-	s.Tornado, s.TornadoLow, s.High = true, 0.05, 0.95
+	s.Tornado, s.TornadoLow, s.TornadoHigh = true, 0.05, 0.95
 	s.Sobol, s.SobolSamples = true, 2048
 	t := p.sub(top, "sensitivity")
 	if t == nil {
@@ -834,9 +834,9 @@ func (p *parser) sensitivity(top *table) {
 				s.TornadoLow = lo
 			}
 			if hi, ok := p.number(tt, "high"); ok {
-				s.High = hi
+				s.TornadoHigh = hi
 			}
-			if !(s.TornadoLow > 0 && s.TornadoLow < s.High && s.High < 1) {
+			if !(s.TornadoLow > 0 && s.TornadoLow < s.TornadoHigh && s.TornadoHigh < 1) {
 				p.errorf(tt.path, "low and high are fractiles with 0 < low < high < 1, e.g. { low = 0.05, high = 0.95 }")
 			}
 			p.unknown(tt, []string{"low", "high"})

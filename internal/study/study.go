@@ -88,12 +88,13 @@ type Analysis struct {
 	Seed      uint64
 }
 
-// Sensitivity are the sensitivity settings.
+// Sensitivity are the sensitivity settings: a tornado between two
+// fractiles, and Sobol indices from a number of base samples.
 type Sensitivity struct {
-	Tornado          bool
-	TornadoLow, High float64
-	Sobol            bool
-	SobolSamples     int
+	Tornado                 bool
+	TornadoLow, TornadoHigh float64
+	Sobol                   bool
+	SobolSamples            int
 }
 
 // Sweep repeats a study over the values of one quantity.
