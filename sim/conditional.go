@@ -106,6 +106,7 @@ func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc b
 	var pf, se float64
 	for n := n0; n <= maxN; n *= 2 {
 		if ctx.Err() != nil {
+			res.Incomplete = true
 			break
 		}
 		// Work units: the chunks of [prev, n) of every replicate.

@@ -272,3 +272,27 @@ func TestForeignDist(t *testing.T) {
 		t.Errorf("exact pf %v outside the 99%% interval %v (pf %v)", want, res.PfCI, res.Pf)
 	}
 }
+
+// TestCancelMidRun cancels from the progress callback: Run must stop soon,
+// flag the result and report only whole blocks.
+func TestCancelMidRun(t *testing.T) {
+	t.Parallel()
+	for _, method := range []Method{MonteCarlo, ConditionalQMC} {
+		ctx, cancel := context.WithCancel(context.Background())
+		calls := 0
+		res, err := Run(ctx, caseB(), &Settings{Method: method, Samples: 1 << 30, Seed: 1, AuxSamples: -1,
+			Progress: func(p Progress) {
+				calls++
+				if calls == 3 {
+					cancel()
+				}
+			}})
+		cancel()
+		if err != nil {
+			t.Fatal(err)
+		}
+		if !res.Incomplete || res.Evaluations >= 1<<30 || res.Evaluations == 0 || math.IsNaN(res.Pf) {
+			t.Errorf("%s: incomplete %v after %d evaluations, pf %v", method, res.Incomplete, res.Evaluations, res.Pf)
+		}
+	}
+}
