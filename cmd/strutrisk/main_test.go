@@ -80,22 +80,24 @@ func TestBadStudies(t *testing.T) {
 	}{
 		{"typo key", edit(11, `yeild = 250`), []string{"study.toml:11: material.yeild: unknown key", "did you mean material.yield?", "study.toml:9: material.yield: missing"}},
 		{"unknown table", good + "[materail]\nx = 1\n", []string{"study.toml:19: materail: unknown key", "did you mean material?"}},
-		{"negative cov", edit(11, `yield = { dist = "lognormal", mean = 250, cov = -0.1 }`), []string{"study.toml:11: material.yield.cov: cov = -0.1 must be between 0 and 1"}},
-		{"negative sd", edit(15, `dead = { dist = "normal", mean = "100 kN", sd = "-5 kN" }`), []string{"study.toml:15: loads.dead.sd: sd = -5000 N must be positive"}},
-		{"zero cov", edit(11, `yield = { dist = "lognormal", mean = 250, cov = 0 }`), []string{"study.toml:11: material.yield.cov: cov = 0 is no spread"}},
-		{"uniform below zero", edit(4, `k = { dist = "uniform", min = -0.1, max = 1.0 }`), []string{"study.toml:4: member.k.min: min = -0.1 lets member.k take values that are not positive"}},
+		{"negative cov", edit(11, `yield = { dist = "lognormal", mean = 250, cov = -0.1 }`), []string{"study.toml:11: material.yield: cov = -0.1 must be between 0 and 1"}},
+		{"negative sd", edit(15, `dead = { dist = "normal", mean = "100 kN", sd = "-5 kN" }`), []string{"study.toml:15: loads.dead: sd = -5000 N must be positive"}},
+		{"zero cov", edit(11, `yield = { dist = "lognormal", mean = 250, cov = 0 }`), []string{"study.toml:11: material.yield: cov = 0 is no spread"}},
+		{"uniform below zero", edit(4, `k = { dist = "uniform", min = -0.1, max = 1.0 }`), []string{"study.toml:4: member.k: min = -0.1 lets member.k take values that are not positive"}},
 		{"gumbel below zero", edit(10, `modulus = { dist = "gumbel", mean = 200000, cov = 0.6 }`), []string{"study.toml:10: material.modulus: this gumbel distribution goes negative"}},
-		{"wrong unit in a distribution", edit(11, `yield = { dist = "lognormal", mean = "250 kN", cov = 0.1 }`), []string{"study.toml:11: material.yield.mean: \"250 kN\" is a force but this key takes a stress"}},
-		{"zero sd", edit(15, `dead = { dist = "normal", mean = "100 kN", sd = 0 }`), []string{"study.toml:15: loads.dead.sd: sd = 0 is no spread"}},
+		{"wrong unit in a distribution", edit(11, `yield = { dist = "lognormal", mean = "250 kN", cov = 0.1 }`), []string{"study.toml:11: material.yield: mean: \"250 kN\" is a force but this key takes a stress"}},
+		{"zero sd", edit(15, `dead = { dist = "normal", mean = "100 kN", sd = 0 }`), []string{"study.toml:15: loads.dead: sd = 0 is no spread"}},
 		{"wrong dimension", edit(3, `length = "2 kN"`), []string{"study.toml:3: member.length: \"2 kN\" is a force but this key takes a length"}},
 		{"unknown unit", edit(10, `modulus = "200 GPas"`), []string{"study.toml:10: material.modulus: unknown unit \"GPas\""}},
 		{"missing length", edit(3, ``), []string{"study.toml:2: member.length: missing"}},
 		{"missing table", strings.Replace(good, "[loads]\ndead = { dist = \"normal\", mean = \"100 kN\", cov = 0.1 }\nimposed = { dist = \"gumbel\", mean = \"80 kN\", cov = 0.3 }\n", "", 1), []string{"study.toml: loads: missing table [loads]"}},
-		{"fractile", edit(11, `yield = { dist = "lognormal", characteristic = 235, fractile = 1.5, cov = 0.07 }`), []string{"study.toml:11: material.yield.fractile: fractile = 1.5 must be between 0 and 1"}},
-		{"min above max", edit(4, `k_major = 1.0`+"\n"+`k_minor = { dist = "uniform", min = 1.0, max = 0.7 }`), []string{"study.toml:5: member.k_minor.max: min must be less than max"}},
+		{"fractile", edit(11, `yield = { dist = "lognormal", characteristic = 235, fractile = 1.5, cov = 0.07 }`), []string{"study.toml:11: material.yield: fractile = 1.5 must be between 0 and 1"}},
+		{"min above max", edit(4, `k_major = 1.0`+"\n"+`k_minor = { dist = "uniform", min = 1.0, max = 0.7 }`), []string{"study.toml:5: member.k_minor: min = 1 must be less than max = 0.7"}},
 		{"two end specs", edit(4, `ends = "pinned-pinned"`+"\n"+`k_minor = 0.7`), []string{"study.toml:5: member.k_minor: the minor axis has two end specifications"}},
-		{"unknown dist", edit(11, `yield = { dist = "lognormel", mean = 250, cov = 0.1 }`), []string{"study.toml:11: material.yield.dist: unknown distribution \"lognormel\"; did you mean \"lognormal\"?"}},
+		{"unknown dist", edit(11, `yield = { dist = "lognormel", mean = 250, cov = 0.1 }`), []string{"study.toml:11: material.yield: dist: unknown distribution \"lognormel\"; did you mean \"lognormal\"?"}},
 		{"incomplete set", edit(11, `yield = { dist = "lognormal", mean = 250 }`), []string{"study.toml:11: material.yield: lognormal needs mean + sd or mean + cov"}},
+		{"unknown parameter", edit(11, `yield = { dist = "lognormal", mean = 250, sdd = 20 }`), []string{"study.toml:11: material.yield: sdd: unknown parameter; did you mean \"sd\"?"}},
+		{"sub-table form", edit(11, "[material.yield]\ndist = \"lognormal\"\nmean = 250\ncov = 1.5"), []string{"study.toml:14: material.yield: cov = 1.5 must be between 0 and 1"}},
 		{"two sets", edit(11, `yield = { dist = "lognormal", mean = 250, cov = 0.1, sd = 20 }`), []string{"study.toml:11: material.yield: give one set of parameters"}},
 		{"L/n outside imperfection", edit(3, `length = "L/2"`), []string{"study.toml:3: member.length: \"L/2\": the form L/n is only for imperfections"}},
 		{"corr unknown variable", good + "[[correlation]]\npair = [\"material.yeild\", \"loads.dead\"]\nrho = 0.3\n", []string{"study.toml:20: correlation[0].pair: \"material.yeild\" is not a random variable of this study; did you mean \"material.yield\"?"}},
@@ -105,7 +107,7 @@ func TestBadStudies(t *testing.T) {
 		{"huge samples", good + "[analysis]\nsamples = 1e12\n", []string{"study.toml:20: analysis.samples: 1e+12 is more than 1e+10"}},
 		{"nan", edit(10, `modulus = nan`), []string{"study.toml:10: material.modulus: NaN is not a usable number"}},
 		{"negative length", edit(3, `length = -2000`), []string{"study.toml:3: member.length: a length must be positive"}},
-		{"negative lower", edit(13, `bow = 2`+"\n"+`eccentricity = 0`) + "[capacity]\nmodel_factor = { dist = \"normal\", mean = 1, sd = 0.1, lower = -1 }\n", []string{"study.toml:21: capacity.model_factor.lower: lower = -1 lets capacity.model_factor take negative values"}},
+		{"negative lower", edit(13, `bow = 2`+"\n"+`eccentricity = 0`) + "[capacity]\nmodel_factor = { dist = \"normal\", mean = 1, sd = 0.1, lower = -1 }\n", []string{"study.toml:21: capacity.model_factor: lower = -1 lets capacity.model_factor take negative values"}},
 		{"custom i_minor > i_major", strings.Replace(good, "shape = \"rect\"\ndepth = 100\nwidth = 50\n", "shape = \"custom\"\narea = 5000\ni_major = 1e6\ni_minor = 4e6\nc_major = 50\nc_minor = 25\n", 1), []string{"study.toml:9: member.section.i_minor: i_minor is larger than i_major"}},
 		{"thickness loss custom", strings.Replace(good, "shape = \"rect\"\ndepth = 100\nwidth = 50\n", "shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\nthickness_loss = 1\n", 1), []string{"study.toml:12: member.section.thickness_loss: a custom section has no faces"}},
 		{"perry needs bow", edit(13, ``), []string{"imperfection.bow: missing: model perry-robertson needs an initial bow"}},
@@ -146,7 +148,7 @@ func TestAllProblemsListed(t *testing.T) {
 	if code != 2 {
 		t.Fatalf("exit %d, want 2", code)
 	}
-	for _, w := range []string{"study.toml:3: member.length", "study.toml:11: material.yield.cov", "study.toml:20: analysis.methdo: unknown key", "did you mean analysis.method?", "3 problems"} {
+	for _, w := range []string{"study.toml:3: member.length", "study.toml:11: material.yield: cov = -1", "study.toml:20: analysis.methdo: unknown key", "did you mean analysis.method?", "3 problems"} {
 		if !strings.Contains(errs, w) {
 			t.Errorf("stderr lacks %q:\n%s", w, errs)
 		}

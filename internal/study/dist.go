@@ -45,6 +45,7 @@ func setString(set []string) string { return strings.Join(set, " + ") }
 
 // distTable reads a table with a "dist" key.
 func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
+	p.dists[path] = true
 	dv, ok := m["dist"]
 	if !ok {
 		keys := sortedKeys(m)
@@ -85,9 +86,9 @@ func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
 		if !allowed[k] {
 			msg := fmt.Sprintf("%s takes %s", name, allowedList(sets, distOptional[name]))
 			if near, ok := nearest(k, sortedKeys(allowed)); ok {
-				msg = fmt.Sprintf("unknown parameter %q; did you mean %q? (%s)", k, near, msg)
+				msg = fmt.Sprintf("unknown parameter; did you mean %q? (%s)", near, msg)
 			} else {
-				msg = fmt.Sprintf("unknown parameter %q (%s)", k, msg)
+				msg = fmt.Sprintf("unknown parameter (%s)", msg)
 			}
 			p.errorf(kp, "%s", msg)
 			bad = true
@@ -224,13 +225,13 @@ func (p *parser) checkParams(path string, s *distSpec, o qopt) bool {
 		}
 	}
 	if v, has := get("characteristic"); has && !(v > 0) {
-		fail("characteristic", "a lognormal characteristic value must be positive")
+		fail("characteristic", "characteristic = %s must be positive (a lognormal variable is positive)", p.show(v, o.dim))
 	}
 	if v, has := get("mean"); has {
 		switch s.name {
 		case "lognormal", "weibull", "gamma":
 			if !(v > 0) {
-				fail("mean", "a %s variable is positive: its mean must be positive", s.name)
+				fail("mean", "mean = %s must be positive (a %s variable is positive)", p.show(v, o.dim), s.name)
 			}
 		default:
 			if _, cov := get("cov"); cov && v == 0 {
@@ -242,18 +243,18 @@ func (p *parser) checkParams(path string, s *distSpec, o qopt) bool {
 		hi, _ := get("max")
 		switch {
 		case lo == hi:
-			fail("max", "min = max is no spread: write a plain quantity instead of a distribution")
+			fail("min", "min = max = %s is no spread: write a plain quantity instead of a distribution", p.show(lo, o.dim))
 		case lo > hi:
-			fail("max", "min must be less than max")
+			fail("min", "min = %s must be less than max = %s", p.show(lo, o.dim), p.show(hi, o.dim))
 		case s.name == "triangular":
 			if md, _ := get("mode"); md < lo || md > hi {
-				fail("mode", "mode must lie between min and max")
+				fail("mode", "mode = %s must lie between min and max", p.show(md, o.dim))
 			}
 		}
 	}
 	if lo, has := get("lower"); has {
 		if hi, has := get("upper"); has && !(lo < hi) {
-			fail("upper", "lower must be less than upper")
+			fail("lower", "lower = %s must be less than upper = %s", p.show(lo, o.dim), p.show(hi, o.dim))
 		}
 	}
 	// Values written relative to L and absolute values mix only when the

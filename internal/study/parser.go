@@ -23,6 +23,7 @@ type parser struct {
 	st     *Study
 	opts   map[*Quantity]qopt
 	byPath map[string]*Quantity
+	dists  map[string]bool // paths of distribution tables
 }
 
 func newParser(name string, data []byte) *parser {
@@ -33,12 +34,33 @@ func newParser(name string, data []byte) *parser {
 		st:     &Study{},
 		opts:   map[*Quantity]qopt{},
 		byPath: map[string]*Quantity{},
+		dists:  map[string]bool{},
 	}
 }
 
-// errorf records a problem at key.
+// errorf records a problem at key. A problem with a parameter of a
+// distribution is reported under the variable's name, at the parameter's
+// line, with the parameter named in the message.
 func (p *parser) errorf(key, format string, args ...any) {
-	p.probs = append(p.probs, Problem{File: p.file, Line: p.line(key), Key: key, Msg: fmt.Sprintf(format, args...)})
+	msg := fmt.Sprintf(format, args...)
+	line := p.line(key)
+	if v, param, ok := p.param(key); ok {
+		if !strings.HasPrefix(msg, param+" ") {
+			msg = param + ": " + msg
+		}
+		key = v
+	}
+	p.probs = append(p.probs, Problem{File: p.file, Line: line, Key: key, Msg: msg})
+}
+
+// param splits the path of a distribution parameter into the variable's
+// path and the parameter's name.
+func (p *parser) param(key string) (variable, param string, ok bool) {
+	i := strings.LastIndexByte(key, '.')
+	if i < 0 || !p.dists[key[:i]] {
+		return "", "", false
+	}
+	return key[:i], key[i+1:], true
 }
 
 func (p *parser) warnf(format string, args ...any) {
