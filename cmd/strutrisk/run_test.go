@@ -184,3 +184,19 @@ func TestRunSummary(t *testing.T) {
 		t.Errorf("standard error not quiet when not a terminal: %q", errs)
 	}
 }
+
+// TestRunNothingUncertain: a study without random quantities is refused
+// by run (exit 2) but checks.
+func TestRunNothingUncertain(t *testing.T) {
+	s := strings.Replace(good, `yield = { dist = "lognormal", mean = 250, cov = 0.1 }`, "yield = 250", 1)
+	s = strings.Replace(s, `dead = { dist = "normal", mean = "100 kN", cov = 0.1 }`, `dead = "100 kN"`, 1)
+	s = strings.Replace(s, `imposed = { dist = "gumbel", mean = "80 kN", cov = 0.3 }`, `imposed = "80 kN"`, 1)
+	study := writeStudy(t, s)
+	if code, _, errs := invoke(t, "check", study); code != 0 {
+		t.Errorf("check exit %d\n%s", code, errs)
+	}
+	code, _, errs := invoke(t, "run", study, "--out", t.TempDir())
+	if code != 2 || !strings.Contains(errs, "nothing in the study is uncertain") {
+		t.Errorf("run exit %d, stderr %q", code, errs)
+	}
+}

@@ -85,6 +85,14 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		return code
 	}
 	st := l.st
+	if len(l.md.Sim.Vars) == 0 {
+		fmt.Fprintf(stderr, "strutrisk: %s: nothing in the study is uncertain: give at least one quantity a distribution, or use `strutrisk check` for the deterministic picture\n", st.File)
+		return exitInput
+	}
+	if o.requireTarget && !st.HasTarget {
+		fmt.Fprintf(stderr, "strutrisk: %s: --require-target given but the study has no [target] beta\n", st.File)
+		return exitInput
+	}
 	settings := sim.Settings{
 		Method:    st.Analysis.Method,
 		Samples:   st.Analysis.Samples,
