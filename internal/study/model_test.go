@@ -113,6 +113,19 @@ func BenchmarkG(b *testing.B) {
 
 // TestGDoesNotAllocate: one evaluation allocates nothing.
 func TestGDoesNotAllocate(t *testing.T) {
+	// Random end springs (K solved per sample) on a secant-model RHS.
+	springs := strings.Replace(base, `ends = "pinned-pinned"`, "spring_top = { dist = \"lognormal\", mean = \"2000 kN*m\", cov = 0.3 }\nspring_bottom = { major = \"rigid\", minor = 0 }", 1)
+	springs = strings.Replace(springs, "shape = \"CHS\"\ndiameter = 168.3\nthickness = 8", "shape = \"RHS\"\ndepth = 200\nwidth = 100\nthickness = { dist = \"normal\", mean = 8, sd = 0.3 }", 1)
+	springs = strings.Replace(springs, `bow = "L/1000"`, `bow = "L/1000"`+"\neccentricity = \"5 mm\"", 1) + "[capacity]\nmodel = \"secant\"\n"
+	md, err := Build(parse(t, springs))
+	if err != nil {
+		t.Fatal(err)
+	}
+	x := medians(md)
+	out := make([]float64, 2)
+	if n := testing.AllocsPerRun(100, func() { md.Sim.G(x, out) }); n != 0 {
+		t.Errorf("springs: %v allocations per evaluation", n)
+	}
 	for _, name := range []string{"retrofit-column.toml", "eccentric-strut.toml", "rare-event.toml"} {
 		md := loadDemo(t, name)
 		x := medians(md)
