@@ -43,10 +43,10 @@ func NewGumbelLoc(location, scale float64) (Dist, error) {
 }
 
 // CDF returns P(X <= x).
-func (d Gumbel) CDF(x float64) float64 { return math.Exp(-math.Exp(-(x - d.loc) / d.scale)) }
+func (d Gumbel) CDF(x float64) float64 { return fastExp(-fastExp(-(x - d.loc) / d.scale)) }
 
 // Survival returns P(X > x) = 1 - exp(-exp(-z)), computed with Expm1.
-func (d Gumbel) Survival(x float64) float64 { return -math.Expm1(-math.Exp(-(x - d.loc) / d.scale)) }
+func (d Gumbel) Survival(x float64) float64 { return -math.Expm1(-fastExp(-(x - d.loc) / d.scale)) }
 
 // Quantile returns the p-quantile.
 func (d Gumbel) Quantile(p float64) float64 { return quantile(d, p) }
