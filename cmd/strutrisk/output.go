@@ -30,20 +30,20 @@ func (r *results) summary(dir string, files []string) string {
 		if !*d.MeetsTarget {
 			verdict = "NOT met"
 		}
-		fmt.Fprintf(&w, "  target beta       %.2f (pf %.2g): %s\n", *d.TargetBeta, sim.PfFromBeta(*d.TargetBeta), verdict)
+		fmt.Fprintf(&w, "  target beta        %.2f (pf %.2g): %s\n", *d.TargetBeta, sim.PfFromBeta(*d.TargetBeta), verdict)
 	}
-	fmt.Fprintf(&w, "  method            %s, %d evaluations, cov of pf %.3f\n", res.Method, res.Evaluations, res.PfCoV)
+	fmt.Fprintf(&w, "  method             %s, %d evaluations, cov of pf %.3f\n", res.Method, res.Evaluations, res.PfCoV)
 	if res.Reason != "" {
-		fmt.Fprintf(&w, "                    (%s)\n", res.Reason)
+		fmt.Fprintf(&w, "                     (%s)\n", res.Reason)
 	}
 	if inf := r.influential(); len(inf) > 0 {
-		fmt.Fprintf(&w, "  most influential  %s\n", strings.Join(inf, "\n                    "))
+		fmt.Fprintf(&w, "  most influential   %s\n", strings.Join(inf, "\n                     "))
 	}
 	for _, x := range d.Warnings {
-		fmt.Fprintf(&w, "  warning: %s\n", x)
+		fmt.Fprintf(&w, "  warning            %s\n", x)
 	}
 	if len(files) > 0 {
-		fmt.Fprintf(&w, "  results in        %s/ (%d files: results.json, samples.csv, summary.txt, ...)\n", dir, len(files))
+		fmt.Fprintf(&w, "  results in         %s/ (%d files: results.json, samples.csv, summary.txt, ...)\n", dir, len(files))
 	}
 	fmt.Fprintf(&w, "\n%s\n", caution)
 	return w.String()

@@ -175,7 +175,7 @@ func TestRunSummary(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("exit %d\n%s", code, errs)
 	}
-	for _, want := range []string{"failure prob. pf", "95 % interval", "reliability beta", "target beta       3.80", "NOT met", "evaluations", "most influential  loads.axial", "results in        " + dir, "licensed"} {
+	for _, want := range []string{"failure prob. pf", "95 % interval", "reliability beta", "target beta        3.80", "NOT met", "evaluations", "most influential   loads.axial", "results in         " + dir, "licensed"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("summary lacks %q:\n%s", want, out)
 		}
