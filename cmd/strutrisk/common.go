@@ -174,6 +174,9 @@ func (l *loaded) checkText() string {
 		fmt.Fprintf(&b, " (effect factor %.3g included)", n.EffectFactor)
 	}
 	fmt.Fprintf(&b, "; utilisation %.3f\n", n.Utilisation)
+	if st.HasTarget {
+		fmt.Fprintf(&b, "Target reliability index %.2f: `strutrisk run` estimates whether it is met\n", st.Target)
+	}
 	if len(st.Defaults) > 0 {
 		fmt.Fprintf(&b, "\nDefaults that apply:\n")
 		for _, d := range st.Defaults {
