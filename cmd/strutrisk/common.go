@@ -94,7 +94,7 @@ func (l *loaded) checkRows() []report.CheckRow {
 		row("second moment of area I", "mm4", func(a column.Axis) string { return g(m.Props.I[a]) }),
 		row("radius of gyration r", "mm", func(a column.Axis) string { return fmt.Sprintf("%.1f", m.Props.R[a]) }),
 		row("elastic modulus W", "mm3", func(a column.Axis) string { return g(m.Props.W[a]) }),
-		row("effective length factor K ("+kHow(l.st, 0)+" / "+kHow(l.st, 1)+")", "", func(a column.Axis) string { return fmt.Sprintf("%.3f", m.K[a]) }),
+		row("effective length factor K ("+kLabel(l.st)+")", "", func(a column.Axis) string { return fmt.Sprintf("%.3f", m.K[a]) }),
 		row("slenderness K L / r", "", func(a column.Axis) string { return fmt.Sprintf("%.1f", n.Slenderness[a]) }),
 		row("relative slenderness", "", func(a column.Axis) string { return fmt.Sprintf("%.3f", n.RelSlenderness[a]) }),
 		row("Euler load", "kN", func(a column.Axis) string { return fmt.Sprintf("%.1f", n.Euler[a]/1e3) }),
@@ -106,6 +106,15 @@ func (l *loaded) checkRows() []report.CheckRow {
 		}),
 	}
 	return rows
+}
+
+// kLabel says how K was found, once when both axes agree.
+func kLabel(st *study.Study) string {
+	a, b := kHow(st, 0), kHow(st, 1)
+	if a == b {
+		return a
+	}
+	return a + " / " + b
 }
 
 func kHow(st *study.Study, a int) string {

@@ -289,3 +289,48 @@ func TestCheckBeamColumnSprings(t *testing.T) {
 		t.Errorf("capacity %g outside (0, min(Euler %g, squash 1.25e6)]", c, d.Nominal.EulerLoad)
 	}
 }
+
+// TestCheckKipInchSecant: a W12x87 pinned column, L = 216 in, P at
+// e = 1.471 in, E = 29000 ksi, yield 36 ksi, entered in kip-in units: the
+// secant formula's first-yield load is 664.7 kips (Gere, Mechanics of
+// Materials, solution to Problem 11.6-11: A = 25.6 in2, I = 740 in4,
+// c = 6.265 in; published P_Y = 664.7 k).
+func TestCheckKipInchSecant(t *testing.T) {
+	s := `units = "kip-in"
+[member]
+length = 216
+ends = "pinned-pinned"
+[member.section]
+shape = "custom"
+area = 25.6
+i_major = 740
+i_minor = 241
+c_major = 6.265
+c_minor = 6.155
+[material]
+modulus = 29000
+yield = 36
+[imperfection]
+eccentricity = 1.471
+[capacity]
+model = "secant"
+axis = "major"
+[loads]
+p = { dist = "normal", mean = 255, cov = 0.1 }
+`
+	code, out, errs := invoke(t, "check", "--json", writeStudy(t, s))
+	if code != 0 {
+		t.Fatalf("exit %d\n%s", code, errs)
+	}
+	var d report.Document
+	if err := json.Unmarshal([]byte(out), &d); err != nil {
+		t.Fatal(err)
+	}
+	const kip = 4448.2216152605 // N, exact (NIST SP 811, Appendix B)
+	if got := d.Nominal.Capacity / kip; math.Abs(got-664.7) > 0.05 {
+		t.Errorf("P_Y = %.2f kip, want 664.7", got)
+	}
+	if d.Nominal.Axis != "major" {
+		t.Errorf("axis %q, want major (asked for)", d.Nominal.Axis)
+	}
+}
