@@ -52,7 +52,7 @@ func Curve(m *Member, axis Axis) (Result, error) {
 			return Result{}, ErrAlpha
 		}
 	}
-	return weaker(m, axis, curve, GovernsCurve), nil
+	return weaker(m, axis, GovernsCurve), nil
 }
 
 // curve is Curve about one axis of a validated member.

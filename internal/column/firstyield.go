@@ -35,7 +35,7 @@ func FirstYield(m *Member, axis Axis) (Result, error) {
 	if err := m.Validate(axis); err != nil {
 		return Result{}, err
 	}
-	return weaker(m, axis, firstYield, GovernsFirstYield), nil
+	return weaker(m, axis, GovernsFirstYield), nil
 }
 
 // PerryRobertson is the "perry-robertson" model: FirstYield for a member

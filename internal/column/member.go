@@ -69,16 +69,27 @@ func (m *Member) Validate(axis Axis) error {
 	return nil
 }
 
-// weaker runs eval on the requested axis, or on both axes keeping the
-// smaller resistance (a tie reports Minor).
-func weaker(m *Member, axis Axis, eval func(m *Member, a Axis) float64, governs string) Result {
+// weaker evaluates the closed-form model on the requested axis, or on both
+// axes keeping the smaller resistance (a tie reports Minor). The model is
+// chosen by governs rather than passed as a function value so that the
+// member does not escape to the heap: a capacity evaluation stays free of
+// allocation for callers too.
+func weaker(m *Member, axis Axis, governs string) Result {
 	if axis != Both {
-		return Result{N: eval(m, axis), Axis: axis, Governs: governs}
+		return Result{N: evalAxis(m, axis, governs), Axis: axis, Governs: governs}
 	}
-	nMaj := eval(m, Major)
-	nMin := eval(m, Minor)
+	nMaj := evalAxis(m, Major, governs)
+	nMin := evalAxis(m, Minor, governs)
 	if nMaj < nMin {
 		return Result{N: nMaj, Axis: Major, Governs: governs}
 	}
 	return Result{N: nMin, Axis: Minor, Governs: governs}
+}
+
+// evalAxis runs the closed-form model named by governs about one axis.
+func evalAxis(m *Member, a Axis, governs string) float64 {
+	if governs == GovernsCurve {
+		return curve(m, a)
+	}
+	return firstYield(m, a)
 }
