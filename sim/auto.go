@@ -53,7 +53,21 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 		if err != nil {
 			return nil, err
 		}
-		return finish(res, fmt.Sprintf("the limit state is linear in %q, which is integrated exactly; the other inputs are drawn by randomised quasi-Monte Carlo (%s)", m.Vars[m.Linear.Index].Name, formNote)), nil
+		reason := fmt.Sprintf("the limit state is linear in %q, which is integrated exactly; the other inputs are drawn by randomised quasi-Monte Carlo (%s)", m.Vars[m.Linear.Index].Name, formNote)
+		if res.Incomplete || !formOK || !(res.PfCoV > 2*target) {
+			return finish(res, reason), nil
+		}
+		// Far in the tail the conditional integrand is a narrow spike that
+		// the quasi-random points rarely hit: try importance sampling and
+		// keep whichever estimate is the more precise.
+		alt, aerr := importanceSampling(ctx, m, t, f, s)
+		if aerr == nil && !importanceDegenerate(alt) && !math.IsNaN(alt.Pf) && alt.PfCoV < res.PfCoV {
+			alt.Method = Importance
+			alt.Evaluations += res.Evaluations
+			return finish(alt, fmt.Sprintf("%s: conditional quasi-Monte Carlo reached only CoV %.2g within the budget, so importance sampling around the design point was used", formNote, res.PfCoV)), nil
+		}
+		res.Warnings = append(res.Warnings, fmt.Sprintf("conditional quasi-Monte Carlo reached CoV %.2g, above the target %.2g, and importance sampling did no better; treat pf as an order of magnitude", res.PfCoV, target))
+		return finish(res, reason), nil
 	}
 
 	mc := func(why string) (*Result, error) {

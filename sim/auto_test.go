@@ -2,6 +2,7 @@ package sim
 
 import (
 	"context"
+	"fmt"
 	"math"
 	"strings"
 	"testing"
@@ -52,5 +53,52 @@ func TestAutoChoosesMethod(t *testing.T) {
 			t.Errorf("exact beta %v: auto used %v (%s) and found beta %v", c.beta, res.Method, res.Reason, res.Beta)
 		}
 		t.Logf("exact beta %.4f: %v, beta %.4f, %d evaluations; %s", c.beta, res.Method, res.Beta, res.Evaluations, res.Reason)
+	}
+}
+
+// TestAutoLeavesImpreciseConditionalQMC checks that auto does not settle
+// for a conditional quasi-Monte Carlo estimate far short of its target CoV:
+// far in the tail, with several inputs beside the linear one, it tries
+// importance sampling and keeps the more precise estimate. R is a product of
+// lognormals, so ln R - ln S is normal and beta is exact (the lognormal
+// closed form of the R-S benchmark family).
+func TestAutoLeavesImpreciseConditionalQMC(t *testing.T) {
+	t.Parallel()
+	const k = 8
+	m := &Model{}
+	meanLog, varLog := 0.0, 0.0
+	add := func(name string, mean, cov float64) {
+		m.Vars = append(m.Vars, Variable{Name: name, Dist: mustDist(NewLognormal(mean, cov*mean))})
+		s2 := math.Log1p(cov * cov)
+		meanLog += math.Log(mean) - s2/2
+		varLog += s2
+	}
+	add("r", 500, 0.08)
+	for i := range k {
+		add(fmt.Sprintf("theta%d", i), 1, 0.08)
+	}
+	lnR, vR := meanLog, varLog
+	meanLog, varLog = 0, 0
+	add("S", 100, 0.15)
+	beta := (lnR - meanLog) / math.Sqrt(vR+varLog)
+	r := func(x []float64) float64 {
+		p := x[0]
+		for _, v := range x[1 : k+1] {
+			p *= v
+		}
+		return p
+	}
+	m.G = func(x, out []float64) float64 { return r(x) - x[k+1] }
+	m.Linear = &Linear{Index: k + 1, Split: func(x []float64) (float64, float64) { return r(x), 1 }}
+	res, err := Run(context.Background(), m, &Settings{Samples: 100_000, Seed: 3, TargetCoV: 0.05})
+	if err != nil {
+		t.Fatal(err)
+	}
+	t.Logf("exact beta %.4f: %v, beta %.4f, CoV %.3g; %s", beta, res.Method, res.Beta, res.PfCoV, res.Reason)
+	if res.PfCoV > 0.1 {
+		t.Errorf("auto returned CoV %.3g, target 0.05 (method %v)", res.PfCoV, res.Method)
+	}
+	if math.Abs(res.Beta-beta) > 0.05 {
+		t.Errorf("beta %v, exact %v", res.Beta, beta)
 	}
 }
