@@ -22,6 +22,7 @@ type results struct {
 	sobol    []sim.SobolIndex
 	sobolMsg string
 	warnings []string
+	target   *targetRun // reserve factor and its confirmation (reserve.go)
 }
 
 // analyse runs the estimate and the sensitivity measures.
@@ -53,7 +54,9 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	margin := l.md.MarginModel()
 	if sens.Tornado && len(m.Vars) > 0 {
 		bar.stage("tornado")
-		base, rows, err := sim.Tornado(margin, &sim.TornadoSettings{Low: sens.TornadoLow, High: sens.TornadoHigh, Output: 0})
+		// FORM betas per bar, unless each evaluation is a numerical analysis.
+		withFORM := l.st.Model != "beam-column"
+		base, rows, err := sim.Tornado(margin, &sim.TornadoSettings{Low: sens.TornadoLow, High: sens.TornadoHigh, Output: 0, FORM: withFORM})
 		if err != nil {
 			r.warnings = append(r.warnings, "tornado: "+err.Error())
 		} else {
@@ -69,6 +72,9 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 			r.sobol = idx
 			r.sobolMsg = sim.SobolIndependenceWarning(margin)
 		}
+	}
+	if ctx.Err() == nil {
+		r.target = runTarget(ctx, l, s, bar)
 	}
 	return r, nil
 }
@@ -86,12 +92,7 @@ func (r *results) document() *report.Document {
 	d.Pf, d.PfCoV, d.Beta = &pf, finitePtr(cov), finitePtr(beta)
 	d.PfCI = []float64{res.PfCI[0], res.PfCI[1]}
 	d.BetaCI = []float64{finite(res.BetaCI[0]), finite(res.BetaCI[1])}
-	if d.TargetBeta != nil {
-		// The target is met when the estimated pf does not exceed the
-		// target's Phi(-beta_t).
-		meets := res.Pf <= sim.PfFromBeta(*d.TargetBeta)
-		d.MeetsTarget = &meets
-	}
+	r.fillTarget(d) // verdict (absent when undecided) and reserve
 	for _, o := range res.Outputs {
 		switch o.Name {
 		case "capacity":
@@ -209,6 +210,10 @@ func (r *results) bundle() *report.Bundle {
 		TornadoBase:     r.base,
 		SobolOutput:     "margin g = capacity - demand",
 		SobolNote:       r.sobolMsg,
+		Updates:         updates(l.st),
+	}
+	if l.st.Model != "beam-column" {
+		b.TornadoBeta = r.tornado
 	}
 	for i := range r.res.Outputs {
 		o := &r.res.Outputs[i]

@@ -79,6 +79,8 @@ func (l *loaded) baseDocument() *report.Document {
 		t := st.Target
 		d.TargetBeta = &t
 	}
+	d.Target = baseTarget(st)            // reserve.go
+	d.Measurements = measurementsDoc(st) // measure.go
 	return d
 }
 
@@ -140,9 +142,12 @@ func (l *loaded) inputs() []report.Input {
 		r := report.Input{Name: q.Path, Unit: q.Unit()}
 		if q.Random() {
 			r.Dist, r.Params = q.DistName, q.Params
-			r.Mean = q.Dist.Mean()
+			r.Mean = q.MeanValue()
 			if r.Mean != 0 {
 				r.CoV = q.Dist.StdDev() / math.Abs(r.Mean)
+			}
+			if u := q.Updated(); u != nil {
+				r.CoV = u.UpdatedSummary().CoV // the predictive may have no finite moments
 			}
 		} else {
 			r.Dist, r.Mean = "fixed", q.Value
@@ -186,6 +191,7 @@ func (l *loaded) checkText() string {
 	if st.HasTarget {
 		fmt.Fprintf(&b, "Target reliability index %.2f: `strutrisk run` estimates whether it is met\n", st.Target)
 	}
+	b.WriteString(targetCheckText(st) + measureText(st)) // reserve.go, measure.go
 	if len(st.Defaults) > 0 {
 		fmt.Fprintf(&b, "\nDefaults that apply:\n")
 		for _, d := range st.Defaults {

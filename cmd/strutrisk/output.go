@@ -6,7 +6,6 @@ import (
 	"strings"
 
 	"strutrisk/internal/report"
-	"strutrisk/sim"
 )
 
 // writeOutputs writes the report files of b into dir, atomically.
@@ -25,13 +24,7 @@ func (r *results) summary(dir string, files []string) string {
 		n.Capacity/1e3, n.Axis, n.Governs, n.Demand/1e3, n.Utilisation)
 	fmt.Fprintf(&w, "  failure prob. pf   %s   95 %% interval [%s, %s]\n", pfText(res.Pf), pfText(res.PfCI[0]), pfText(res.PfCI[1]))
 	fmt.Fprintf(&w, "  reliability beta   %s   95 %% interval [%s, %s]\n", betaText(res.Beta), betaText(res.BetaCI[0]), betaText(res.BetaCI[1]))
-	if d.TargetBeta != nil {
-		verdict := "met"
-		if !*d.MeetsTarget {
-			verdict = "NOT met"
-		}
-		fmt.Fprintf(&w, "  target beta        %.2f (pf %.2g): %s\n", *d.TargetBeta, sim.PfFromBeta(*d.TargetBeta), verdict)
-	}
+	w.WriteString(r.targetSummary(d))
 	fmt.Fprintf(&w, "  method             %s, %d evaluations, cov of pf %.3f\n", res.Method, res.Evaluations, res.PfCoV)
 	if res.Reason != "" {
 		fmt.Fprintf(&w, "                     (%s)\n", res.Reason)

@@ -21,6 +21,10 @@ type Document struct {
 	TargetBeta    *float64 `json:"target_beta,omitempty"`
 	MeetsTarget   *bool    `json:"meets_target,omitempty"`
 	ReserveFactor *float64 `json:"reserve_factor,omitempty"`
+	// Target details the comparison with the target (see target.go).
+	Target *TargetCheck `json:"target,omitempty"`
+	// Measurements are the updates of inputs from test results.
+	Measurements []Measurement `json:"measurements,omitempty"`
 
 	GoverningAxis string `json:"governing_axis,omitempty"`
 

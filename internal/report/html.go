@@ -55,6 +55,8 @@ code{font-size:.9em}
 {{if .Verdict}}<p class="verdict {{.VerdictClass}}">{{.Verdict}}</p>{{end}}
 {{if .Result}}<table>{{range .Result}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{else}}<p>No sampling result: deterministic check only.</p>{{end}}
 {{if .Influence}}<p>Most influential inputs: {{.Influence}}.</p>{{end}}
+{{if .Target}}<h3 id="target">Margin against the target</h3>
+<table>{{range .Target}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{end}}
 {{with .Picture "capacity-demand"}}{{template "fig" .}}{{end}}
 {{with .Picture "margin"}}{{template "fig" .}}{{end}}
 {{if .Warnings}}<h3>Warnings</h3><ul>{{range .Warnings}}<li>{{.}}</li>{{end}}</ul>{{end}}
@@ -124,6 +126,10 @@ code{font-size:.9em}
 <table><tr><th>input</th><th>prior</th><th>updated</th><th>measurements</th></tr>
 {{range .Updates}}<tr><td>{{.Variable}}</td><td>{{.Prior}}</td><td>{{.After}}</td><td class="n">{{.N}}</td></tr>
 {{end}}</table>
+{{if .Measured}}<table><tr><th>input</th><th>n</th><th>spread</th><th>prior mean</th><th>prior CoV</th><th>prior 5% fractile</th><th>updated mean</th><th>updated CoV</th><th>updated 5% fractile</th></tr>
+{{range .Measured}}<tr><td>{{.Variable}}</td><td class="n">{{.N}}</td><td>{{.Variance}}</td><td class="n">{{.PriorMean}}</td><td class="n">{{.PriorCoV}}</td><td class="n">{{.PriorP05}}</td><td class="n">{{.Mean}}</td><td class="n">{{.CoV}}</td><td class="n">{{.P05}}</td></tr>
+{{end}}</table>
+<p class="muted">The updated 5% fractile is that of the predictive distribution, the characteristic value of EN 1990 Annex D (D.7). With an unknown variance the predictive is a log-Student-t, which has no finite mean: its mean and CoV here are those of the lognormal with the updated estimates.</p>{{end}}
 {{range .Updates}}{{with $.Picture .Picture}}{{template "fig" .}}{{end}}{{end}}
 </section>{{end}}
 

@@ -29,6 +29,10 @@ func Markdown(b *Bundle) string {
 	if v.Influence != "" {
 		fmt.Fprintf(&w, "Most influential inputs: %s.\n\n", mdText(v.Influence))
 	}
+	if len(v.Target) > 0 {
+		w.WriteString("### Margin against the target\n\n")
+		mdKV(&w, v.Target)
+	}
 	if len(v.Warnings) > 0 {
 		w.WriteString("Warnings:\n\n")
 		for _, s := range v.Warnings {
@@ -135,6 +139,13 @@ func Markdown(b *Bundle) string {
 			rows = append(rows, []string{u.Variable, u.Prior, u.After, u.N})
 		}
 		mdTable(&w, []string{"input", "prior", "updated", "measurements"}, rows)
+		rows = rows[:0]
+		for _, m := range v.Measured {
+			rows = append(rows, []string{m.Variable, m.N, m.Variance, m.PriorMean, m.PriorCoV, m.PriorP05, m.Mean, m.CoV, m.P05})
+		}
+		if len(rows) > 0 {
+			mdTable(&w, []string{"input", "n", "spread", "prior mean", "prior CoV", "prior 5%", "updated mean", "updated CoV", "updated 5%"}, rows)
+		}
 	}
 
 	w.WriteString("## Method and diagnostics\n\n")

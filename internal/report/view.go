@@ -39,6 +39,8 @@ type view struct {
 	Variants   []pointRow
 
 	Updates     []updateRow
+	Measured    []measuredRow // see target.go
+	Target      []KV          // the target check and the reserve
 	Diagnostics []KV
 	Warnings    []string
 	Notes       []string
@@ -218,6 +220,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	for _, p := range d.Variants {
 		v.Variants = append(v.Variants, pointRow{p.Name, prob(p.Pf), intervalText(p.PfCI[:], prob), f2(p.Beta)})
 	}
+	v.Target, v.Measured = targetRows(&d), measuredRows(&d)
 	for k, u := range b.Updates {
 		r := updateRow{Variable: u.Variable, N: strconv.Itoa(len(u.Data)), Picture: "update-" + strconv.Itoa(k+1)}
 		if u.Prior != nil {

@@ -255,7 +255,7 @@ func sectionField(sec *column.Section, key string) *float64 {
 func nominalValue(q *Quantity, length float64) float64 {
 	v := q.Value
 	if q.Random() {
-		v = q.Dist.Mean()
+		v = q.MeanValue() // finite for an updated quantity too
 	}
 	if q.Relative {
 		v *= length

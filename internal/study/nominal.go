@@ -76,6 +76,9 @@ func (md *Model) nominalValues() values {
 		if q == st.Bow || q == st.Ecc {
 			x = meanMagnitude(q.Dist)
 		}
+		if q.update != nil {
+			x = q.MeanValue() // the predictive may have no finite mean
+		}
 		md.set(&v, b, x)
 	}
 	return v

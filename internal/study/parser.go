@@ -303,7 +303,10 @@ func (p *parser) parse() *Study {
 	if _, ok := raw["correlation"]; ok {
 		top.used["correlation"] = true // read once the variables are known
 	}
-	p.unknown(top, []string{"title", "units", "member", "material", "imperfection", "capacity", "loads", "correlation", "target", "analysis", "sensitivity", "sweep", "variant", "output"})
+	if _, ok := raw["measurements"]; ok {
+		top.used["measurements"] = true // read once the distributions are built
+	}
+	p.unknown(top, []string{"title", "units", "member", "material", "imperfection", "capacity", "loads", "correlation", "target", "analysis", "sensitivity", "sweep", "variant", "output", "measurements"})
 	if len(p.probs) > 0 {
 		return st
 	}
@@ -327,6 +330,7 @@ func (p *parser) parse() *Study {
 	if len(p.probs) > 0 {
 		return st
 	}
+	p.measurements(top)
 	p.correlation(top)
 	p.checkModel()
 	p.checkSection()
@@ -762,7 +766,8 @@ func (p *parser) target(top *table) {
 	} else if _, given := t.m["beta"]; !given {
 		p.required(t, "beta", "the target reliability index, e.g. beta = 3.8")
 	}
-	p.unknown(t, []string{"beta"})
+	p.reserve(t)
+	p.unknown(t, []string{"beta", "reference_period", "reserve_on", "permanent"})
 }
 
 // MaxSamples bounds analysis.samples.

@@ -29,6 +29,9 @@ type Quantity struct {
 	// into millimetres with the fixed member length.
 	perLength bool
 
+	// update is the measurement that updated the distribution, if any.
+	update *Measurement
+
 	// spec is the distribution as parsed, before it is built.
 	spec *distSpec
 }

@@ -47,6 +47,17 @@ type Study struct {
 	// was given.
 	Target    float64
 	HasTarget bool
+	// ReferencePeriod is the target's reference period as written (a
+	// note for the report, e.g. "50 years"); ReserveOn is "variable" or
+	// "all": the loads the reserve factor multiplies; PermanentLoads are
+	// the paths of the loads taken as permanent (see target.go).
+	ReferencePeriod string
+	ReserveOn       string
+	PermanentLoads  []string
+
+	// Measurements are the test results that updated quantities of the
+	// study (see measure.go).
+	Measurements []*Measurement
 
 	Analysis    Analysis
 	Sensitivity Sensitivity

@@ -1,0 +1,257 @@
+package main
+
+import (
+	"context"
+	"fmt"
+	"math"
+	"strings"
+
+	"strutrisk/internal/report"
+	"strutrisk/internal/study"
+	"strutrisk/sim"
+)
+
+// targetRun is the margin of a study against its target: the reserve
+// factor found by FORM, corrected and confirmed by sampling runs.
+type targetRun struct {
+	reserve *study.Reserve // FORM alone
+	// factor is the reserve factor after correction, formBeta the FORM
+	// index there and confirm the sampling run there.
+	factor, formBeta float64
+	confirm          *sim.Result
+	// added is the largest added load after correction (NaN: none).
+	added float64
+	notes []string
+}
+
+// maxConfirm bounds the sampling runs that correct the reserve factor.
+const maxConfirm = 3
+
+// runTarget finds the reserve factor and the largest added load by FORM,
+// then confirms the factor by a sampling run of the study's method with
+// the reserve loads multiplied by it. When the sampled beta there misses
+// the target (its interval does not hold it), FORM is taken to be off by
+// the same amount d = beta_FORM - beta_sampled near the factor, the factor
+// is found again for the FORM index target + d and confirmed again, at
+// most maxConfirm runs in all. The largest added load is the FORM root
+// for target + d of the last run. It returns nil without a target.
+func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *targetRun {
+	st := l.st
+	if !st.HasTarget || len(l.md.Sim.Vars) == 0 {
+		return nil
+	}
+	t := &targetRun{added: math.NaN()}
+	bar.stage("reserve factor (FORM)")
+	rv, err := l.md.Reserve(st.Target, nil)
+	if err != nil {
+		t.notes = append(t.notes, "no reserve factor: "+err.Error())
+		return t
+	}
+	t.reserve = rv
+	t.factor, t.formBeta, t.added = rv.Factor, rv.FactorBeta, rv.Added
+	if rv.AddedErr != nil {
+		t.notes = append(t.notes, "no "+rv.AddedErr.Error())
+	}
+	d := 0.0
+	for k := range maxConfirm {
+		if ctx.Err() != nil {
+			return t
+		}
+		bar.stage(fmt.Sprintf("reserve factor (sampling run %d)", k+1))
+		cs := *s
+		res, err := sim.Run(ctx, l.md.Loaded(t.factor, 0), &cs)
+		if err != nil || res.Incomplete {
+			t.notes = append(t.notes, "the reserve factor was not confirmed by sampling")
+			return t
+		}
+		t.confirm = res
+		if math.IsInf(res.Beta, 0) || math.IsNaN(res.Beta) ||
+			(res.BetaCI[0] <= st.Target && st.Target <= res.BetaCI[1]) || math.Abs(res.Beta-st.Target) < 0.005 {
+			break
+		}
+		d = t.formBeta - res.Beta
+		if k == maxConfirm-1 {
+			t.notes = append(t.notes, fmt.Sprintf("after %d sampling runs the sampled beta at the reserve factor is %.3f, not the target: the factor is approximate", maxConfirm, res.Beta))
+			break
+		}
+		f, b, _, err := l.md.FactorFor(st.Target+d, nil)
+		if err != nil {
+			t.notes = append(t.notes, "the reserve factor could not be corrected for the offset of FORM: "+err.Error())
+			break
+		}
+		t.factor, t.formBeta = f, b
+	}
+	if c := t.confirm; c != nil && !math.IsInf(c.Beta, 0) {
+		d = t.formBeta - c.Beta
+	}
+	if d != 0 && rv.AddedErr == nil {
+		if a, _, err := l.md.AddedFor(st.Target+d, nil); err == nil {
+			t.added = a
+		} else {
+			t.notes = append(t.notes, "no largest added load after the correction: "+err.Error())
+			t.added = math.NaN()
+		}
+	}
+	if math.Abs(d) > 0.05 {
+		t.notes = append(t.notes, fmt.Sprintf("FORM and sampling differ by %.2f in beta here; the reserve factor and the added load are corrected for it (FORM alone gives a factor of %.3f)", d, rv.Factor))
+	}
+	return t
+}
+
+// verdictOf compares the estimate of res with the target beta: "met" or
+// "not met" only when the whole interval of beta lies on one side of the
+// target, else "undecided" (at this sample size).
+func verdictOf(res *sim.Result, target float64) string {
+	lo, hi := res.BetaCI[0], res.BetaCI[1]
+	switch {
+	case lo < target && target < hi:
+		return "undecided"
+	case res.Beta >= target:
+		return "met"
+	}
+	return "not met"
+}
+
+// samplesToDecide estimates the evaluations after which the interval of
+// pf would clear the target's pf, if the estimate stayed where it is: the
+// CoV of the estimate falls as 1/sqrt(n), so n_needed = n (CoV /
+// CoV_needed)^2, with CoV_needed = |pt - pf| / (z pf) the CoV at which
+// the half-width z CoV pf of the interval equals the distance to the
+// target (z = 1.96 at 95 %, normal approximation of the interval). With
+// no failure seen, the rule of three (an upper 95 % bound of about 3/n
+// on pf when no failure is seen in n samples; common practice) gives
+// n = 3 / pt.
+func samplesToDecide(res *sim.Result, target float64) float64 {
+	pt := sim.PfFromBeta(target)
+	if res.Pf == 0 || math.IsInf(res.PfCoV, 1) {
+		return math.Ceil(3 / pt)
+	}
+	need := math.Abs(pt-res.Pf) / (1.96 * res.Pf)
+	if need == 0 {
+		return math.Inf(1)
+	}
+	n := float64(res.Evaluations) * (res.PfCoV / need) * (res.PfCoV / need)
+	return math.Ceil(n)
+}
+
+// baseTarget is the target part of the document before sampling.
+func baseTarget(st *study.Study) *report.TargetCheck {
+	if !st.HasTarget {
+		return nil
+	}
+	t := &report.TargetCheck{Beta: st.Target, Pf: sim.PfFromBeta(st.Target), ReferencePeriod: st.ReferencePeriod, ReserveOn: st.ReserveOn}
+	for _, q := range st.ReserveLoads() {
+		t.ReserveLoads = append(t.ReserveLoads, q.Path)
+	}
+	return t
+}
+
+// fillTarget writes the verdict and the margin into d. MeetsTarget stays
+// absent when the verdict is undecided.
+func (r *results) fillTarget(d *report.Document) {
+	st := r.l.st
+	if !st.HasTarget || d.TargetBeta == nil {
+		return
+	}
+	t := baseTarget(st)
+	d.Target = t
+	v := verdictOf(r.res, st.Target)
+	t.Verdict = v
+	if v == "undecided" {
+		n := samplesToDecide(r.res, st.Target)
+		if !math.IsInf(n, 0) {
+			t.SamplesToDecide = &n
+		}
+	} else {
+		meets := v == "met"
+		d.MeetsTarget = &meets
+	}
+	tr := r.target
+	if tr == nil {
+		return
+	}
+	t.Notes = append(t.Notes, tr.notes...)
+	if rv := tr.reserve; rv != nil {
+		f, b, ff := tr.factor, tr.formBeta, rv.Factor
+		d.ReserveFactor, t.ReserveFORMBeta, t.ReserveFORMFactor = &f, &b, &ff
+		if !math.IsNaN(tr.added) {
+			a := tr.added
+			t.LargestAddedLoad = &a
+		}
+	}
+	if c := tr.confirm; c != nil {
+		t.Confirmation = &report.Confirmation{
+			Method: string(c.Method), Evaluations: c.Evaluations,
+			Pf: c.Pf, PfCI: c.PfCI, Beta: finite(c.Beta),
+			BetaCI: [2]float64{finite(c.BetaCI[0]), finite(c.BetaCI[1])},
+		}
+	}
+}
+
+// targetSummary is the target's part of the terminal summary.
+func (r *results) targetSummary(d *report.Document) string {
+	t := d.Target
+	if t == nil {
+		return ""
+	}
+	s := fmt.Sprintf("  target beta        %.2f (pf %.2g", t.Beta, t.Pf)
+	if t.ReferencePeriod != "" {
+		s += ", " + t.ReferencePeriod
+	}
+	s += "): "
+	switch t.Verdict {
+	case "met":
+		s += "met"
+	case "not met":
+		s += "NOT met"
+	case "undecided":
+		s += "undecided at this sample size (the interval of beta straddles the target)"
+		if t.SamplesToDecide != nil {
+			s += fmt.Sprintf(";\n                     about %.3g evaluations would decide it", *t.SamplesToDecide)
+		}
+	}
+	s += "\n"
+	if d.ReserveFactor != nil {
+		on := "variable loads"
+		if t.ReserveOn == "all" {
+			on = "all loads"
+		}
+		s += fmt.Sprintf("  reserve factor     %.3f on the %s (FORM beta %.2f there)\n", *d.ReserveFactor, on, *t.ReserveFORMBeta)
+		if c := t.Confirmation; c != nil {
+			s += fmt.Sprintf("                     confirmed by %s: beta %s, 95 %% interval [%s, %s], %d evaluations\n",
+				c.Method, betaText(c.Beta), betaText(c.BetaCI[0]), betaText(c.BetaCI[1]), c.Evaluations)
+		}
+	}
+	if a := t.LargestAddedLoad; a != nil {
+		if *a >= 0 {
+			s += fmt.Sprintf("  largest added load %.1f kN (a deterministic load added to the others that brings beta to the target)\n", *a/1e3)
+		} else {
+			s += fmt.Sprintf("  load to take away  %.1f kN (brings beta to the target)\n", -*a/1e3)
+		}
+	}
+	for _, n := range t.Notes {
+		s += "  note               " + n + "\n"
+	}
+	return s
+}
+
+// targetCheckText says, in check, what the reserve factor will multiply.
+func targetCheckText(st *study.Study) string {
+	if !st.HasTarget {
+		return ""
+	}
+	var names []string
+	for _, q := range st.ReserveLoads() {
+		names = append(names, q.Path)
+	}
+	s := ""
+	if st.ReferencePeriod != "" {
+		s += fmt.Sprintf("  reference period %s\n", st.ReferencePeriod)
+	}
+	on := "the variable loads"
+	if st.ReserveOn == "all" {
+		on = "all loads"
+	}
+	s += fmt.Sprintf("  the reserve factor multiplies %s: %s\n", on, strings.Join(names, ", "))
+	return s
+}

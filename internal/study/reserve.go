@@ -1,0 +1,194 @@
+package study
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"strutrisk/sim"
+)
+
+// Reserve is the margin of a study against a target reliability index,
+// found by FORM.
+type Reserve struct {
+	// Target is the target reliability index.
+	Target float64
+	// On is "variable" or "all"; Loads are the paths of the loads the
+	// factor multiplies.
+	On    string
+	Loads []string
+	// Factor is the reserve factor: the factor on Loads at which the FORM
+	// reliability index equals Target (above 1: the target is met with
+	// room to spare). FactorBeta is the FORM index found there.
+	Factor, FactorBeta float64
+	// Added is the largest added load (N): the deterministic axial load
+	// that, added to the study's loads (and multiplied by the effect
+	// factor as they are), brings the FORM index down to Target. It is
+	// negative when the target is missed: the load to take away.
+	// AddedErr says why it was not found (then Added is NaN).
+	Added    float64
+	AddedErr error
+	// FORMCalls counts the FORM analyses of the search.
+	FORMCalls int
+}
+
+// ReserveTol is the tolerance on the reliability index of the searches.
+const ReserveTol = 1e-4
+
+// Reserve finds the reserve factor and the largest added load of the
+// study for the target reliability index target, by root finding on the
+// FORM index: beta(factor) and beta(added load) both fall as the load
+// grows. fs are passed to sim.FORM (nil: its defaults).
+func (md *Model) Reserve(target float64, fs *sim.FORMSettings) (*Reserve, error) {
+	st := md.Study
+	r := &Reserve{Target: target, On: st.ReserveOn, Added: math.NaN()}
+	if r.On == "" {
+		r.On = "variable"
+	}
+	for _, q := range st.ReserveLoads() {
+		r.Loads = append(r.Loads, q.Path)
+	}
+	if len(r.Loads) == 0 {
+		return nil, errors.New("no load to multiply: every load is permanent")
+	}
+	calls := 0
+	var err error
+	r.Factor, r.FactorBeta, calls, err = md.FactorFor(target, fs)
+	r.FORMCalls += calls
+	if err != nil {
+		return nil, fmt.Errorf("reserve factor: %v", err)
+	}
+	r.Added, calls, err = md.AddedFor(target, fs)
+	r.FORMCalls += calls
+	if err != nil {
+		r.Added, r.AddedErr = math.NaN(), fmt.Errorf("largest added load: %v", err)
+	}
+	return r, nil
+}
+
+// formBeta is the FORM index of the study with the reserve loads
+// multiplied by factor and the load added.
+func (md *Model) formBeta(factor, added float64, fs *sim.FORMSettings) (float64, error) {
+	f, err := sim.FORM(md.Loaded(factor, added), fs)
+	if err != nil {
+		return math.NaN(), err
+	}
+	if !f.Converged {
+		return math.NaN(), fmt.Errorf("FORM did not converge (%s)", f.Status)
+	}
+	return f.Beta, nil
+}
+
+// FactorFor returns the factor on the reserve loads at which the FORM
+// reliability index equals beta, the index found there and the number of
+// FORM analyses used. The search is on the logarithm of the factor,
+// between 1e-3 and 1e3.
+func (md *Model) FactorFor(beta float64, fs *sim.FORMSettings) (factor, found float64, calls int, err error) {
+	f := func(t float64) (float64, error) {
+		calls++
+		b, err := md.formBeta(math.Exp(t), 0, fs)
+		return b - beta, err
+	}
+	t, err := fallingRoot(f, 0, math.Ln2, math.Log(1e-3), math.Log(1e3))
+	if err != nil {
+		return math.NaN(), math.NaN(), calls, err
+	}
+	factor = math.Exp(t)
+	calls++
+	found, err = md.formBeta(factor, 0, fs)
+	return factor, found, calls, err
+}
+
+// AddedFor returns the deterministic axial load (N) that, added to the
+// study's loads, brings the FORM reliability index to beta (negative: the
+// load to take away), and the number of FORM analyses used. The search
+// runs from taking away the whole mean load to adding a thousand times it.
+func (md *Model) AddedFor(beta float64, fs *sim.FORMSettings) (added float64, calls int, err error) {
+	nv := md.nominalValues()
+	unit := math.Abs(nv[fLoads])
+	if unit == 0 {
+		unit = 1e3
+	}
+	f := func(a float64) (float64, error) {
+		calls++
+		b, err := md.formBeta(1, a*unit, fs)
+		return b - beta, err
+	}
+	a, err := fallingRoot(f, 0, 0.25, -1, 1e3)
+	if err != nil {
+		return math.NaN(), calls, err
+	}
+	return a * unit, calls, nil
+}
+
+// fallingRoot finds the root of a decreasing function f between lo and hi,
+// starting at x0 and stepping by step (doubled each time) towards the
+// sign change, then closing in by the Illinois variant of regula falsi
+// (Dowell and Jarratt, BIT 11 (1971) 168-174), with a bisection step when
+// the bracket shrinks slowly.
+func fallingRoot(f func(float64) (float64, error), x0, step, lo, hi float64) (float64, error) {
+	f0, err := f(x0)
+	if err != nil {
+		return 0, err
+	}
+	if f0 == 0 {
+		return x0, nil
+	}
+	a, fa := x0, f0
+	b, fb := x0, f0
+	dir := 1.0
+	if f0 < 0 {
+		dir = -1
+	}
+	for {
+		b = a + dir*step
+		if b > hi || b < lo {
+			b = math.Max(lo, math.Min(hi, b))
+		}
+		if fb, err = f(b); err != nil {
+			return 0, err
+		}
+		if fb == 0 || math.Signbit(fb) != math.Signbit(fa) {
+			break
+		}
+		if b == lo || b == hi {
+			if dir > 0 {
+				return 0, fmt.Errorf("the target is still met at the bound of the search (%.4g); the reliability index hardly falls with the load", b)
+			}
+			return 0, fmt.Errorf("the target is missed even at the bound of the search (%.4g)", b)
+		}
+		a, fa = b, fb
+		step *= 2
+	}
+	if fb == 0 {
+		return b, nil
+	}
+	side := 0
+	for range 100 {
+		x := (a*fb - b*fa) / (fb - fa)
+		if !(x > math.Min(a, b) && x < math.Max(a, b)) {
+			x = (a + b) / 2
+		}
+		fx, err := f(x)
+		if err != nil {
+			return 0, err
+		}
+		if math.Abs(fx) < ReserveTol || math.Abs(b-a) < 1e-9*(1+math.Abs(x)) {
+			return x, nil
+		}
+		if math.Signbit(fx) == math.Signbit(fb) {
+			b, fb = x, fx
+			if side == -1 {
+				fa /= 2
+			}
+			side = -1
+		} else {
+			a, fa = x, fx
+			if side == +1 {
+				fb /= 2
+			}
+			side = +1
+		}
+	}
+	return 0, errors.New("the search did not converge in 100 steps")
+}
