@@ -1,0 +1,173 @@
+package study
+
+import (
+	"errors"
+	"math"
+	"strings"
+	"testing"
+)
+
+// lognormalRS is a stocky solid square strut on the buckling-curve model
+// whose relative slenderness stays below 0.2, so chi = 1 (EN 1993-1-1:2005
+// 6.3.1.2(4)) and the capacity is R = A fy x model factor, a lognormal,
+// against a lognormal load S. The reliability index is then exact in
+// closed form (Melchers and Beck, Structural Reliability Analysis and
+// Prediction, 3rd ed., 2018, chapter 3, lognormal R and S; from memory):
+//
+//	beta(lambda) = [ln(muR / (lambda muS)) + ln sqrt((1+VS^2)/(1+VR^2))] / D,
+//	D = sqrt(ln[(1+VR^2)(1+VS^2)])
+//
+// with S multiplied by lambda, so the factor at which beta equals a target
+// is lambda = exp((beta(1) - target) D). FORM is exact here: ln R - ln S
+// is linear in standard normal space.
+const lognormalRS = `[member]
+length = 300
+ends = "pinned-pinned"
+[member.section]
+shape = "rect"
+depth = 100
+width = 100
+[material]
+modulus = 205000
+yield = { dist = "lognormal", mean = 300, cov = 0.10 }
+[capacity]
+model = "curve"
+curve = "b"
+model_factor = { dist = "lognormal", mean = 1.0, cov = 0.05 }
+[loads]
+axial = { dist = "lognormal", mean = "1500 kN", cov = 0.20 }
+[target]
+beta = 3.8
+reference_period = "50 years"
+`
+
+func TestReserveFactorClosedForm(t *testing.T) {
+	st := parse(t, lognormalRS)
+	md, err := Build(st)
+	if err != nil {
+		t.Fatal(err)
+	}
+	vr2 := (1+0.10*0.10)*(1+0.05*0.05) - 1
+	vs2 := 0.20 * 0.20
+	d := math.Sqrt(math.Log((1 + vr2) * (1 + vs2)))
+	beta1 := (math.Log(3e6/1.5e6) + 0.5*math.Log((1+vs2)/(1+vr2))) / d
+	for _, target := range []float64{2.5, 3.1, 3.8, 4.7} {
+		r, err := md.Reserve(target, nil)
+		if err != nil {
+			t.Fatalf("target %g: %v", target, err)
+		}
+		want := math.Exp((beta1 - target) * d)
+		if !near(r.Factor, want, 1e-4) || math.Abs(r.FactorBeta-target) > ReserveTol {
+			t.Errorf("target %g: factor %.6f (FORM beta %.5f), want %.6f", target, r.Factor, r.FactorBeta, want)
+		}
+		if len(r.Loads) != 1 || r.Loads[0] != "loads.axial" || r.On != "variable" {
+			t.Errorf("reserve on %s %v, want the variable load loads.axial", r.On, r.Loads)
+		}
+		// The added load brings FORM beta to the target; it is negative
+		// exactly when the target is missed.
+		if r.AddedErr != nil {
+			t.Fatalf("target %g: %v", target, r.AddedErr)
+		}
+		if (r.Added < 0) != (target > beta1) {
+			t.Errorf("target %g (beta %.3f): added load %g N has the wrong sign", target, beta1, r.Added)
+		}
+		if b, err := md.formBeta(1, r.Added, nil); err != nil || math.Abs(b-target) > 10*ReserveTol {
+			t.Errorf("target %g: FORM beta %.5f with the added load %g N (%v)", target, b, r.Added, err)
+		}
+	}
+	if st.ReferencePeriod != "50 years" {
+		t.Errorf("reference period %q", st.ReferencePeriod)
+	}
+}
+
+// TestLoadedScales: the factor multiplies the variable loads (or all), the
+// added load joins the sum, and Loaded(1, 0) is the study's model; the
+// linear split of the loaded model reproduces its g.
+func TestLoadedScales(t *testing.T) {
+	text := strings.Replace(base, "dead = 300000\n", "dead = 300000\nimposed = { dist = \"gumbel\", mean = 80000, cov = 0.3 }\nwind = 20000\n", 1)
+	for _, c := range []struct {
+		target string
+		want   func(imposed float64) float64 // demand at factor 2, 5 kN added
+	}{
+		{"[target]\nbeta = 3.8\n", func(x float64) float64 { return 300000 + 2*x + 2*20000 + 5000 }},
+		{"[target]\nbeta = 3.8\nreserve_on = \"all\"\n", func(x float64) float64 { return 2*(300000+x+20000) + 5000 }},
+		{"[target]\nbeta = 3.8\npermanent = [\"dead\", \"wind\"]\n", func(x float64) float64 { return 300000 + 2*x + 20000 + 5000 }},
+		{"[target]\nbeta = 3.8\npermanent = []\n", func(x float64) float64 { return 2*(300000+x+20000) + 5000 }},
+	} {
+		st := parse(t, text+c.target)
+		md, err := Build(st)
+		if err != nil {
+			t.Fatal(err)
+		}
+		x := medians(md)
+		out0, out1 := make([]float64, 2), make([]float64, 2)
+		same := md.Loaded(1, 0)
+		if g0, g1 := md.Sim.G(x, out0), same.G(x, out1); g0 != g1 || out0 != nil && out0[1] != out1[1] {
+			t.Errorf("Loaded(1, 0) gives g %g, the study %g", g1, g0)
+		}
+		m := md.Loaded(2, 5000)
+		g := m.G(x, out1)
+		if want := c.want(x[0]); !near(out1[OutDemand], want, 1e-12) {
+			t.Errorf("%q: demand %g, want %g", c.target, out1[OutDemand], want)
+		}
+		if m.Linear == nil {
+			t.Fatal("the loaded model lost the linear split")
+		}
+		h, cc := m.Linear.Split(x)
+		if !near(h-cc*x[m.Linear.Index], g, 1e-9) {
+			t.Errorf("%q: split h - c x = %g, g = %g", c.target, h-cc*x[m.Linear.Index], g)
+		}
+	}
+}
+
+// TestLoadedNoAllocation: the loaded model's limit state does not
+// allocate, as the study's.
+func TestLoadedNoAllocation(t *testing.T) {
+	md := loadDemo(t, "retrofit-column.toml")
+	m := md.Loaded(1.3, 2000)
+	x := medians(md)
+	out := make([]float64, 2)
+	if a := testing.AllocsPerRun(100, func() { m.G(x, out) }); a != 0 {
+		t.Errorf("%g allocations per evaluation", a)
+	}
+}
+
+// TestTargetKeys: defaults are listed; problems name the key and line.
+func TestTargetKeys(t *testing.T) {
+	text := strings.Replace(base, "dead = 300000\n", "dead = 300000\nimposed = 50000\n", 1)
+	st := parse(t, text+"[target]\nbeta = 3.8\n")
+	d := strings.Join(st.Defaults, "\n")
+	if !strings.Contains(d, "target.permanent: not given; loads.dead taken as permanent") || !strings.Contains(d, "target.reserve_on: not given") {
+		t.Errorf("defaults do not list the reserve rule:\n%s", d)
+	}
+	if l := st.ReserveLoads(); len(l) != 1 || l[0].Path != "loads.imposed" {
+		t.Errorf("reserve loads %v, want loads.imposed", l)
+	}
+	line := strings.Count(text, "\n") + 3
+	for _, c := range []struct{ extra, key, msg string }{
+		{"reserve_on = \"imposed\"", "target.reserve_on", "not a choice"},
+		{"permanent = [\"deed\"]", "target.permanent[0]", "did you mean \"dead\""},
+		{"permanent = \"dead\"", "target.permanent", "list of load names"},
+		{"permanent = [\"dead\", \"imposed\"]", "target.reserve_on", "every load is permanent"},
+		{"reference_period = 50", "target.reference_period", "text in quotes"},
+	} {
+		_, err := Parse("t.toml", []byte(text+"[target]\nbeta = 3.8\n"+c.extra+"\n"))
+		var se *Error
+		if !errors.As(err, &se) {
+			t.Errorf("%s: no error", c.extra)
+			continue
+		}
+		found := false
+		for _, p := range se.Problems {
+			if p.Key == c.key && strings.Contains(p.Msg, c.msg) {
+				found = true
+				if p.Line != line && c.key != "target.reserve_on" {
+					t.Errorf("%s: line %d, want %d", c.extra, p.Line, line)
+				}
+			}
+		}
+		if !found {
+			t.Errorf("%s: want %s with %q, got\n%v", c.extra, c.key, c.msg, err)
+		}
+	}
+}
