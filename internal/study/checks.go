@@ -103,7 +103,12 @@ func (p *parser) correlation(top *table) {
 		}
 		seen[k] = t.path
 		if rho != 0 {
-			p.st.Corr = append(p.st.Corr, sim.Correlation{A: pair[0], B: pair[1], Rho: rho})
+			c := sim.Correlation{A: pair[0], B: pair[1], Rho: rho}
+			if err := p.reachable(c); err != nil {
+				p.errorf(t.key("rho"), "%v", err)
+				continue
+			}
+			p.st.Corr = append(p.st.Corr, c)
 		}
 	}
 	if len(p.st.Corr) == 0 || len(p.probs) > 0 {
@@ -128,7 +133,54 @@ func (p *parser) correlation(top *table) {
 	var ch mat.Cholesky
 	if !ch.Factorize(r) {
 		p.errorf("correlation", "the correlation coefficients do not form a positive definite matrix (they contradict each other): lower the largest ones")
+		return
 	}
+	// The coefficients are of the variables themselves: in normal space
+	// (Nataf) they change, and that matrix must be positive definite too.
+	m := &sim.Model{Corr: p.st.Corr}
+	for _, q := range p.st.Quantities {
+		if q.Random() && isCorrelated(q.Path, p.st.Corr) {
+			m.Vars = append(m.Vars, sim.Variable{Name: q.Path, Dist: q.Dist})
+		}
+	}
+	if _, err := sim.NewTransform(m); err != nil {
+		p.errorf("correlation", "%s: lower the largest coefficients", strings.TrimPrefix(err.Error(), "sim: "))
+	}
+}
+
+// reachable reports whether the correlation c can be reached by its two
+// variables with their marginal distributions (through the Gaussian copula
+// the attainable range of a correlation is narrower than (-1, 1), e.g. for
+// two skewed lognormals).
+func (p *parser) reachable(c sim.Correlation) error {
+	m := &sim.Model{Corr: []sim.Correlation{c}}
+	for _, q := range p.st.Quantities {
+		if q.Random() && (q.Path == c.A || q.Path == c.B) {
+			m.Vars = append(m.Vars, sim.Variable{Name: q.Path, Dist: q.Dist})
+		}
+	}
+	if len(m.Vars) != 2 {
+		return nil
+	}
+	_, err := sim.NewTransform(m)
+	if err == nil {
+		return nil
+	}
+	msg := err.Error()
+	if i := strings.LastIndex(msg, ": "); i >= 0 {
+		msg = msg[i+2:]
+	}
+	return fmt.Errorf("%s: rho is the correlation of the variables themselves, and their distributions bound it", msg)
+}
+
+// isCorrelated reports whether the variable named path is in a correlation.
+func isCorrelated(path string, corr []sim.Correlation) bool {
+	for _, c := range corr {
+		if c.A == path || c.B == path {
+			return true
+		}
+	}
+	return false
 }
 
 // checkModel checks what the capacity model needs from the rest of the
