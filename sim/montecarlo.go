@@ -210,6 +210,10 @@ func (e *crudeEngine) run(ctx context.Context, s *Settings, method Method) (*Res
 		res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: tot.n, Pf: res.Pf, PfCI: res.PfCI, PfCoV: res.PfCoV})
 	}
 	res.Outputs = e.outputs(tot.stats)
+	if tot.fails == 0 && !res.Incomplete {
+		// A point estimate of zero says little: state what the samples do show.
+		res.Warnings = append(res.Warnings, fmt.Sprintf("no failure in %d samples: pf is only known to be below %.3g and beta above %.3g (the ends of their intervals); beta itself is unbounded; give more samples, or use importance or subset simulation", tot.n, res.PfCI[1], res.BetaCI[0]))
+	}
 	if nan := tot.stats[e.nout].nan; nan > 0 {
 		res.Warnings = append(res.Warnings, fmt.Sprintf("the limit state was NaN for %d of %d samples; they were counted as safe", nan, tot.n))
 	}
