@@ -372,10 +372,9 @@ set = { "imperfection.bow" = "L/500" }
 	if len(st.Variants) != 1 || st.Variants[0].Name != "bow L/500" || st.Variants[0].Set["imperfection.bow"] == nil {
 		t.Errorf("variants %+v", st.Variants)
 	}
-	// Both are checked but not yet run, and the warnings say so.
-	w := strings.Join(st.Warnings, "\n")
-	if !strings.Contains(w, "sweep") || !strings.Contains(w, "variant") {
-		t.Errorf("warnings %q", w)
+	// Each case reads as a study of its own (see sweep_test.go).
+	if d, err := st.Derive(0, 1); err != nil || d.Length.Value != 3000 || d.Bow.Value != 3000.0/500 {
+		t.Errorf("Derive(0, 1) = %+v, %v", d, err)
 	}
 	for _, c := range []struct{ text, want string }{
 		{base + "[sweep]\nparameter = \"member.lenght\"\nvalues = [1]\n", `t.toml:16: sweep.parameter: "member.lenght" is not a quantity of this study; did you mean "member.length"?`},

@@ -24,6 +24,11 @@ type parser struct {
 	opts   map[*Quantity]qopt
 	byPath map[string]*Quantity
 	dists  map[string]bool // paths of distribution tables
+
+	// edit, if set, changes the decoded document before it is read, and
+	// relines the key lines (overrides: see override.go).
+	edit    func(raw map[string]any)
+	relines func(lines map[string]int)
 }
 
 func newParser(name string, data []byte) *parser {
@@ -266,6 +271,10 @@ func (p *parser) parse() *Study {
 		return nil
 	}
 	p.lines = keyLines(p.data)
+	if p.edit != nil {
+		p.edit(raw)
+		p.relines(p.lines)
+	}
 	top := &table{m: raw, used: map[string]bool{}}
 	st := p.st
 
@@ -923,91 +932,4 @@ func (p *parser) output(top *table) {
 		}
 	}
 	p.unknown(t, []string{"dir", "formats"})
-}
-
-func (p *parser) sweep(top *table) {
-	t := p.sub(top, "sweep")
-	if t == nil {
-		return
-	}
-	sw := &Sweep{}
-	name, ok := p.str(t, "parameter")
-	if !ok {
-		if _, given := t.m["parameter"]; !given {
-			p.required(t, "parameter", "the quantity to sweep, e.g. parameter = \"member.length\"")
-		}
-	}
-	sw.Parameter = name
-	if v, ok := t.get("values"); ok {
-		list, isList := v.([]any)
-		if !isList || len(list) == 0 {
-			p.errorf(t.key("values"), "values is a non-empty list of quantities, e.g. [\"3 m\", \"4 m\"]")
-		}
-		if q := p.byPath[name]; q != nil || name == "" {
-			o := p.opts[q]
-			for i, x := range list {
-				if qq := p.quantity(fmt.Sprintf("%s[%d]", t.key("values"), i), x, o); qq != nil {
-					sw.Values = append(sw.Values, qq)
-				}
-			}
-		}
-	} else {
-		p.required(t, "values", "the values to sweep, e.g. values = [\"3 m\", \"4 m\"]")
-	}
-	if name != "" && p.byPath[name] == nil {
-		p.unknownPath(t.key("parameter"), name)
-	}
-	p.unknown(t, []string{"parameter", "values"})
-	p.st.Sweep = sw
-	p.warnf("sweep: checked, but this version does not run sweeps yet; only the base study is run")
-}
-
-func (p *parser) variants(top *table) {
-	v, ok := top.get("variant")
-	if !ok {
-		return
-	}
-	list, ok := v.([]map[string]any)
-	if !ok {
-		p.errorf("variant", "write variants as [[variant]] tables with name and set")
-		return
-	}
-	for i, m := range list {
-		t := &table{path: fmt.Sprintf("variant[%d]", i), m: m, used: map[string]bool{}}
-		var va Variant
-		va.Set = map[string]*Quantity{}
-		if name, ok := p.str(t, "name"); ok {
-			va.Name = name
-		} else {
-			p.required(t, "name", "a name for the variant")
-		}
-		if st := p.sub(t, "set"); st != nil {
-			for _, k := range sortedKeys(st.m) {
-				st.used[k] = true
-				q := p.byPath[k]
-				if q == nil {
-					p.unknownPath(st.key(k), k)
-					continue
-				}
-				if qq := p.quantity(st.key(k), st.m[k], p.opts[q]); qq != nil {
-					va.Set[k] = qq
-				}
-			}
-		} else if _, given := m["set"]; !given {
-			p.required(t, "set", "the quantities the variant changes, e.g. set = { \"imperfection.bow\" = \"L/500\" }")
-		}
-		p.unknown(t, []string{"name", "set"})
-		p.st.Variants = append(p.st.Variants, va)
-	}
-	p.warnf("variant: checked, but this version does not run variants yet; only the base study is run")
-}
-
-// unknownPath reports a name that should be a quantity's path.
-func (p *parser) unknownPath(key, name string) {
-	paths := sortedKeys(p.byPath)
-	if near, ok := nearest(name, paths); ok {
-		p.errorf(key, "%q is not a quantity of this study; did you mean %q?", name, near)
-	} else {
-		p.errorf(key, "%q is not a quantity of this study (they are %s)", name, strings.Join(paths, ", "))
-	}
 }

@@ -68,6 +68,9 @@ type Study struct {
 	// Defaults lists the defaults that applied, Warnings the things a
 	// reader should know; both are full sentences naming the key.
 	Defaults, Warnings []string
+
+	// data is the file's contents, read again by Derive.
+	data []byte
 }
 
 // SectionSpec is the cross-section: its shape and its dimensions.
@@ -108,18 +111,6 @@ type Sensitivity struct {
 	SobolSamples            int
 }
 
-// Sweep repeats a study over the values of one quantity.
-type Sweep struct {
-	Parameter string
-	Values    []*Quantity
-}
-
-// Variant is a named alternative of a study.
-type Variant struct {
-	Name string
-	Set  map[string]*Quantity
-}
-
 // Output says where results go.
 type Output struct {
 	Dir     string
@@ -150,6 +141,12 @@ func Parse(name string, data []byte) (*Study, error) {
 	}
 	st.File = name
 	st.SHA256 = hex.EncodeToString(sum[:])
+	st.data = data
+	// Every variant at every swept value is checked now, so a run does
+	// not stop half way (see sweep.go).
+	if probs := st.checkCases(); len(probs) > 0 {
+		return nil, &Error{Problems: probs}
+	}
 	return st, nil
 }
 
