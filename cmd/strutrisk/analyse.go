@@ -23,6 +23,7 @@ type results struct {
 	sobolMsg string
 	warnings []string
 	target   *targetRun // reserve factor and its confirmation (reserve.go)
+	cases    *cases     // sweep and variants (sweep.go)
 }
 
 // analyse runs the estimate and the sensitivity measures.
@@ -227,6 +228,8 @@ func (r *results) bundle() *report.Bundle {
 		}
 	}
 	b.Slenderness = r.slendernessChart()
+	r.cases.fill(b)
+	b.Trace = r.trace()
 	b.Diagnostics = []report.KV{
 		{Key: "method", Value: string(r.res.Method)},
 		{Key: "why", Value: r.res.Reason},

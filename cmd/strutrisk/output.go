@@ -32,6 +32,7 @@ func (r *results) summary(dir string, files []string) string {
 	if inf := r.influential(); len(inf) > 0 {
 		fmt.Fprintf(&w, "  most influential   %s\n", strings.Join(inf, "\n                     "))
 	}
+	w.WriteString(r.cases.summary(r.l.st, res))
 	for _, x := range d.Warnings {
 		fmt.Fprintf(&w, "  warning            %s\n", x)
 	}

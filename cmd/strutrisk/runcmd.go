@@ -114,6 +114,9 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	if o.set["seed"] {
 		settings.Seed = o.seed
 	}
+	if note := beamTimeNote(l, &settings); note != "" {
+		fmt.Fprintf(stderr, "strutrisk: %s: %s\n", st.File, note)
+	}
 	dir := o.out
 	if dir == "" {
 		dir = st.Output.Dir
@@ -127,6 +130,13 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	bar := newProgress(stderr, !o.json)
 	settings.Progress = bar.update
 	r, err := analyse(ctx, l, &settings, bar)
+	if err == nil && !r.res.Incomplete {
+		// The main result stays the study itself; sweep and variants
+		// follow with the same settings (sweep.go).
+		if r.cases = runCases(ctx, l, &settings, bar); r.cases != nil {
+			r.warnings = append(r.warnings, r.cases.warnings...)
+		}
+	}
 	bar.done()
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", st.File, err)

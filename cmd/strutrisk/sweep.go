@@ -1,0 +1,245 @@
+package main
+
+import (
+	"context"
+	"fmt"
+	"strings"
+
+	"strutrisk/internal/report"
+	"strutrisk/internal/study"
+	"strutrisk/sim"
+)
+
+// cases are the runs of a study's [sweep] and [[variant]] tables. Every
+// run uses the settings of the main run (the same method, seed and
+// blocks), so differences between cases are not sampling noise.
+type cases struct {
+	label    string
+	params   string         // the swept parameter
+	values   []float64      // swept values, internal units
+	sweep    []report.Point // the study itself at each swept value
+	variants []report.Variant
+	series   []report.Series
+	// grid[v+1][i] is variant v (-1: the study) at value i.
+	grid     [][]*report.Point
+	warnings []string
+}
+
+// caseSettings are the settings of a case run: the main run's, without
+// the kept samples and the auxiliary sample (a case only reports pf and
+// beta).
+func caseSettings(s *sim.Settings) sim.Settings {
+	c := *s
+	c.Keep = -1
+	c.AuxSamples = -1
+	c.Progress = nil
+	return c
+}
+
+// runCases runs every variant at the study's values and at every swept
+// value. It returns nil when the study has neither.
+func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *cases {
+	st := l.st
+	if st.Sweep == nil && len(st.Variants) == 0 {
+		return nil
+	}
+	c := &cases{}
+	n := 0
+	if sw := st.Sweep; sw != nil {
+		n = len(sw.Values)
+		c.label, c.params = sw.Label(), sw.Parameter
+		for _, q := range sw.Values {
+			c.values = append(c.values, q.Value)
+		}
+	}
+	total := len(st.Variants) + (len(st.Variants)+1)*n
+	done := 0
+	settings := caseSettings(s)
+	c.grid = make([][]*report.Point, len(st.Variants)+1)
+	for v := -1; v < len(st.Variants); v++ {
+		c.grid[v+1] = make([]*report.Point, n)
+		for i := -1; i < n; i++ {
+			if v < 0 && i < 0 {
+				continue // the main run
+			}
+			if ctx.Err() != nil {
+				c.warnings = append(c.warnings, "sweep and variants: interrupted; the cases not run are missing")
+				return c
+			}
+			done++
+			name := caseName(st, v, i)
+			bar.stage(fmt.Sprintf("case %d/%d: %s", done, total, name))
+			pt, err := runCase(ctx, st, v, i, &settings)
+			if err != nil {
+				c.warnings = append(c.warnings, fmt.Sprintf("%s: not run: %v", name, err))
+				continue
+			}
+			switch {
+			case i < 0:
+				c.variants = append(c.variants, report.Variant{Name: st.Variants[v].Name, Pf: pt.Pf, Beta: pt.Beta, PfCI: pt.PfCI})
+			case v < 0:
+				c.sweep = append(c.sweep, *pt)
+			}
+			if i >= 0 {
+				c.grid[v+1][i] = pt
+			}
+		}
+	}
+	if n > 0 {
+		for v := -1; v < len(st.Variants); v++ {
+			s := report.Series{Name: "study"}
+			if v >= 0 {
+				s.Name = st.Variants[v].Name
+			} else if len(st.Variants) > 0 {
+				s.Name = "study (" + baseName(st) + ")"
+			}
+			for _, pt := range c.grid[v+1] {
+				// A case without failures has no finite beta to draw.
+				if pt != nil && pt.Pf > 0 {
+					s.Points = append(s.Points, *pt)
+				}
+			}
+			c.series = append(c.series, s)
+		}
+	}
+	return c
+}
+
+// baseName says briefly what the study itself assumes, to tell it from
+// its variants.
+func baseName(st *study.Study) string {
+	switch st.Model {
+	case "curve":
+		return "curve " + st.Curve[0]
+	case "beam-column":
+		return "beam-column " + st.Limit
+	}
+	return st.Model
+}
+
+// caseName names a case for progress lines and warnings.
+func caseName(st *study.Study, v, i int) string {
+	var parts []string
+	if v >= 0 {
+		parts = append(parts, fmt.Sprintf("variant %q", st.Variants[v].Name))
+	}
+	if i >= 0 {
+		parts = append(parts, fmt.Sprintf("%s = %.4g", st.Sweep.Parameter, st.Sweep.Values[i].Value))
+	}
+	return strings.Join(parts, " at ")
+}
+
+// runCase builds and runs one case.
+func runCase(ctx context.Context, st *study.Study, v, i int, s *sim.Settings) (*report.Point, error) {
+	cs, err := st.Derive(v, i)
+	if err != nil {
+		return nil, err
+	}
+	md, err := study.Build(cs)
+	if err != nil {
+		return nil, err
+	}
+	if len(md.Sim.Vars) == 0 {
+		return nil, fmt.Errorf("nothing in it is uncertain")
+	}
+	// A variant may set its own [analysis] keys (a cheaper method for an
+	// expensive model); the rest is the main run's.
+	settings := *s
+	a, b := cs.Analysis, st.Analysis
+	if a.Method != b.Method {
+		settings.Method = a.Method
+	}
+	if a.Samples != b.Samples {
+		settings.Samples = a.Samples
+	}
+	if a.TargetCoV != b.TargetCoV {
+		settings.TargetCoV = a.TargetCoV
+	}
+	if a.Seed != b.Seed {
+		settings.Seed = a.Seed
+	}
+	res, err := sim.Run(ctx, md.Sim, &settings)
+	if err != nil {
+		return nil, err
+	}
+	pt := &report.Point{Pf: res.Pf, Beta: finite(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]}}
+	if i >= 0 {
+		pt.Value = st.Sweep.Values[i].Value
+	}
+	return pt, nil
+}
+
+// fill puts the cases into the bundle and its document.
+func (c *cases) fill(b *report.Bundle) {
+	if c == nil {
+		return
+	}
+	b.Doc.Sweep = c.sweep
+	b.Doc.Variants = c.variants
+	b.Series = c.series
+	b.SweepLabel = c.label
+}
+
+// summary is the compact table of the cases for the terminal.
+func (c *cases) summary(st *study.Study, main *sim.Result) string {
+	if c == nil {
+		return ""
+	}
+	var w strings.Builder
+	row := func(name string, pf float64, ci [2]float64, beta float64) {
+		pt := &report.Point{Pf: pf, Beta: beta}
+		fmt.Fprintf(&w, "    %-28s %10s  [%9s, %9s]  %6s\n", name, pfText(pf), pfText(ci[0]), pfText(ci[1]), caseBeta(pt))
+	}
+	head := func(first string) {
+		fmt.Fprintf(&w, "    %-28s %10s  %-22s  %6s\n", first, "pf", "95 % interval", "beta")
+	}
+	if len(c.variants) > 0 {
+		fmt.Fprintf(&w, "  variants           (same seed and blocks as the main run)\n")
+		head("variant")
+		row("study ("+baseName(st)+")", main.Pf, [2]float64{main.PfCI[0], main.PfCI[1]}, main.Beta)
+		for _, v := range c.variants {
+			row(v.Name, v.Pf, v.PfCI, v.Beta)
+		}
+	}
+	if len(c.values) > 0 {
+		fmt.Fprintf(&w, "  sweep              beta against %s\n", c.label)
+		if len(c.series) > 1 {
+			for k, s := range c.series {
+				fmt.Fprintf(&w, "    (%d) %s\n", k+1, s.Name)
+			}
+		}
+		fmt.Fprintf(&w, "    %-12s", "value")
+		for k := range c.grid {
+			if len(c.grid) > 1 {
+				fmt.Fprintf(&w, " %7s", fmt.Sprintf("(%d)", k+1))
+			} else {
+				fmt.Fprintf(&w, " %7s %10s", "beta", "pf")
+			}
+		}
+		w.WriteString("\n")
+		for i, x := range c.values {
+			fmt.Fprintf(&w, "    %-12.5g", x)
+			for v := range c.grid {
+				pt := c.grid[v][i]
+				switch {
+				case pt == nil:
+					fmt.Fprintf(&w, " %7s", "-")
+				case len(c.grid) > 1:
+					fmt.Fprintf(&w, " %7s", caseBeta(pt))
+				default:
+					fmt.Fprintf(&w, " %7s %10s", caseBeta(pt), pfText(pt.Pf))
+				}
+			}
+			w.WriteString("\n")
+		}
+	}
+	return w.String()
+}
+
+// caseBeta is a case's beta as text ("inf" when no sample failed).
+func caseBeta(pt *report.Point) string {
+	if pt.Pf == 0 {
+		return "inf"
+	}
+	return betaText(pt.Beta)
+}
