@@ -521,7 +521,7 @@ func ctRoot(f func(float64) float64, a, b float64) float64 {
 // ctSpringK is K = pi/u of a braced member with rotational end springs
 // R = kL/EI at both ends (tan(u/2) = -u/R) or one spring and a pin
 // (u^2 + R (1 - u cot u) = 0): the stability equations of the member
-// EI v”” + P v” = 0 with these ends (Timoshenko & Gere, Theory of
+// EI d4v/dx4 + P d2v/dx2 = 0 with these ends (Timoshenko & Gere, Theory of
 // Elastic Stability, 2nd ed., 1961, ch. 2; from memory).
 func ctSpringK(R float64, pinned bool) float64 {
 	if pinned {
