@@ -38,9 +38,9 @@ func (t niceTicks) Ticks(min, max float64) []plot.Tick {
 	dec := 0
 	if step < 1 {
 		dec = int(math.Ceil(-math.Log10(step) - 1e-9))
-		if math.Abs(step*math.Pow(10, float64(dec))-math.Round(step*math.Pow(10, float64(dec)))) > 1e-6 {
-			dec++ // 0.25 and the like
-		}
+	}
+	if math.Abs(step*math.Pow(10, float64(dec))-math.Round(step*math.Pow(10, float64(dec)))) > 1e-6 {
+		dec++ // 0.25, 2.5 and the like
 	}
 	var ticks []plot.Tick
 	minor := step / minorDiv

@@ -17,6 +17,7 @@ func TestNiceTicks(t *testing.T) {
 		{0, 0.0095, "0 0.002 0.004 0.006 0.008"},
 		{1.9, 5.1, "2 2.5 3 3.5 4 4.5 5"},
 		{200, 600, "200 300 400 500 600"},
+		{0.6, 12.2, "2.5 5 7.5 10"},
 	} {
 		var got []string
 		for _, tk := range (niceTicks{}).Ticks(c.min, c.max) {
