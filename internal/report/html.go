@@ -129,7 +129,7 @@ code{font-size:.9em}
 {{if .Measured}}<table><tr><th>input</th><th>n</th><th>spread</th><th>prior mean</th><th>prior CoV</th><th>prior 5% fractile</th><th>updated mean</th><th>updated CoV</th><th>updated 5% fractile</th></tr>
 {{range .Measured}}<tr><td>{{.Variable}}</td><td class="n">{{.N}}</td><td>{{.Variance}}</td><td class="n">{{.PriorMean}}</td><td class="n">{{.PriorCoV}}</td><td class="n">{{.PriorP05}}</td><td class="n">{{.Mean}}</td><td class="n">{{.CoV}}</td><td class="n">{{.P05}}</td></tr>
 {{end}}</table>
-<p class="muted">The updated 5% fractile is that of the predictive distribution, the characteristic value of EN 1990 Annex D (D.7). With an unknown variance the predictive is a log-Student-t, which has no finite mean: its mean and CoV here are those of the lognormal with the updated estimates.</p>{{end}}
+<p class="muted">The updated 5% fractile is that of the predictive distribution, the characteristic value of EN 1990 Annex D (D.7). With an unknown variance the predictive is a log-Student-t, which has no finite mean: its mean and CoV here are those of the lognormal with the same log-mean and log-scale.</p>{{end}}
 {{range .Updates}}{{with $.Picture .Picture}}{{template "fig" .}}{{end}}{{end}}
 </section>{{end}}
 

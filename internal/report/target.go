@@ -72,8 +72,9 @@ type Measurement struct {
 // Described is a distribution by its mean, coefficient of variation and
 // 5 % fractile. For an updated distribution with unknown variance (a
 // log-Student-t, which has no finite moments) Mean and CoV are those of
-// the lognormal with the updated estimates; P05 is the predictive
-// fractile, the characteristic value of EN 1990:2002 Annex D, D.7.
+// the lognormal with the same log-mean and log-scale; P05 is the
+// predictive fractile, the characteristic value of EN 1990:2002 Annex D,
+// D.7.
 type Described struct {
 	Dist string  `json:"dist"`
 	Mean float64 `json:"mean"`

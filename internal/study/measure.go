@@ -240,8 +240,11 @@ func (p *parser) measurement(t *table, path string) *Measurement {
 	} else {
 		q.DistName = "log-Student-t (updated)"
 	}
-	q.Params = fmt.Sprintf("from %d measurements; %s", len(ms.Values), q.Params)
-	q.Params = strings.TrimSuffix(q.Params, "; ")
+	if q.Params != "" {
+		q.Params = fmt.Sprintf("from %d measurements (prior: %s)", len(ms.Values), q.Params)
+	} else {
+		q.Params = fmt.Sprintf("from %d measurements (no prior)", len(ms.Values))
+	}
 	return ms
 }
 
@@ -254,15 +257,16 @@ func stdNormalQuantile(p float64) float64 {
 // MeanValue returns the quantity's mean as the nominal picture uses it:
 // the mean of its distribution, or, for a quantity updated from
 // measurements whose predictive distribution has no finite mean (the
-// log-Student-t), the mean of the lognormal with the updated estimates
-// (sim.Posterior.MeanEstimate). A fixed quantity returns its value.
+// log-Student-t), the mean of the lognormal with the predictive's log-mean
+// and log-scale (see Measurement.UpdatedSummary). A fixed quantity
+// returns its value.
 func (q *Quantity) MeanValue() float64 {
 	if !q.Random() {
 		return q.Value
 	}
 	m := q.Dist.Mean()
 	if q.update != nil && math.IsInf(m, 0) {
-		return q.update.Posterior.MeanEstimate()
+		return q.update.UpdatedSummary().Mean
 	}
 	return m
 }
@@ -271,10 +275,7 @@ func (q *Quantity) MeanValue() float64 {
 func (q *Quantity) Updated() *Measurement { return q.update }
 
 // Summary describes a distribution for the check table: its mean, its
-// coefficient of variation and its 5 % fractile. For the log-Student-t of
-// an update with unknown variance, mean and cov are those of the lognormal
-// with the updated estimates (the predictive has no finite moments), and
-// the fractile is the predictive one.
+// coefficient of variation and its 5 % fractile.
 type Summary struct {
 	Mean, CoV, P05 float64
 }
@@ -289,14 +290,20 @@ func (ms *Measurement) PriorSummary() Summary {
 	return Summary{Mean: d.Mean(), CoV: d.StdDev() / d.Mean(), P05: d.Quantile(0.05)}
 }
 
-// UpdatedSummary describes the updated distribution.
+// UpdatedSummary describes the updated (predictive) distribution: its 5 %
+// fractile, and the mean and cov of the lognormal with its log-mean m''
+// and log-scale s'' sqrt(1 + 1/n'') (sigma in place of s'' when known).
+// With a known variance that lognormal is the predictive distribution;
+// with an unknown one the predictive is a log-Student-t, which has no
+// finite moments, and the lognormal is its normal-tailed counterpart.
 func (ms *Measurement) UpdatedSummary() Summary {
 	po := ms.Posterior
 	s := po.S
 	if po.Sigma > 0 {
 		s = po.Sigma
 	}
-	return Summary{Mean: po.MeanEstimate(), CoV: math.Sqrt(math.Expm1(s * s)), P05: po.Fractile(0.05)}
+	s2 := s * s * (1 + 1/po.N)
+	return Summary{Mean: math.Exp(po.M + s2/2), CoV: math.Sqrt(math.Expm1(s2)), P05: po.Fractile(0.05)}
 }
 
 // Variance says how the spread was treated: "known" or "unknown".

@@ -105,8 +105,9 @@ func TestMeasureUnknownVariancePrior(t *testing.T) {
 	if ms.Posterior.Nu != nu || ms.Variance() != "unknown" {
 		t.Errorf("nu'' = %g, variance %s; want %g, unknown", ms.Posterior.Nu, ms.Variance(), nu)
 	}
-	// The nominal picture uses the finite mean estimate, not the
-	// log-Student-t's infinite mean.
+	// The nominal picture uses the mean of the lognormal with the
+	// predictive's log-mean and log-scale, not the log-Student-t's
+	// infinite mean.
 	md, err := Build(st)
 	if err != nil {
 		t.Fatal(err)
@@ -115,7 +116,7 @@ func TestMeasureUnknownVariancePrior(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if want := math.Exp(m + s2/2); !near(nom.Member.Fy, want, 1e-9) {
+	if want := math.Exp(m + s2*(1+1/nn)/2); !near(nom.Member.Fy, want, 1e-9) {
 		t.Errorf("nominal fy %.4f, want the mean estimate %.4f", nom.Member.Fy, want)
 	}
 }

@@ -25,11 +25,11 @@ func (p *parser) reserve(t *table) {
 	if s, ok := p.str(t, "reference_period"); ok {
 		st.ReferencePeriod = strings.TrimSpace(s)
 	}
+	defaulted := false
 	if on, ok := p.choice(t, "reserve_on", []string{"variable", "all"}); ok {
 		st.ReserveOn = on
 	} else if _, given := t.m["reserve_on"]; !given {
-		st.ReserveOn = "variable"
-		p.defaultf("target.reserve_on: not given; the reserve factor multiplies the variable loads (every load but the permanent ones)")
+		st.ReserveOn, defaulted = "variable", true
 	} else {
 		return
 	}
@@ -86,8 +86,18 @@ func (p *parser) reserve(t *table) {
 			st.PermanentLoads = append(st.PermanentLoads, "loads."+n)
 		}
 	}
-	if st.ReserveOn == "variable" && len(names) > 0 && len(st.PermanentLoads) == len(names) {
+	allPermanent := len(names) > 0 && len(st.PermanentLoads) == len(names)
+	_, listed := t.m["permanent"]
+	switch {
+	case defaulted && allPermanent && !listed:
+		// A study whose loads all carry permanent names (a lone "dead"
+		// load) is valid as it stands: the factor multiplies them all.
+		st.ReserveOn = "all"
+		p.defaultf("target.reserve_on: not given; every load is permanent, so the reserve factor multiplies all of them")
+	case st.ReserveOn == "variable" && allPermanent:
 		p.errorf(t.key("reserve_on"), "every load is permanent, so a factor on the variable loads has nothing to multiply: set reserve_on = \"all\" or list fewer permanent loads")
+	case defaulted:
+		p.defaultf("target.reserve_on: not given; the reserve factor multiplies the variable loads (every load but the permanent ones)")
 	}
 }
 
