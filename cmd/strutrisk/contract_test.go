@@ -1041,3 +1041,48 @@ func TestContractNoFailure(t *testing.T) {
 		t.Errorf("no warning that no failure was seen: %q", d.Warnings)
 	}
 }
+
+// TestContractLoadNames: load names are the user's own; a lone "dead"
+// load with a target is a valid study (the reserve factor then multiplies
+// it), and the method may be chosen in the file.
+func TestContractLoadNames(t *testing.T) {
+	s := fmt.Sprintf(ctRS, `{ dist = "lognormal", mean = 150, cov = 0.10 }`, `{ dist = "lognormal", mean = "100 kN", cov = 0.20 }`)
+	s = strings.Replace(s, "axial = ", "dead = ", 1)
+	s = strings.Replace(s, "samples = 200000", "samples = 200000\nmethod = \"form\"", 1)
+	d, _, _ := ctRunJSON(t, s)
+	if d.Method != "form" {
+		t.Errorf("method %q, want form as the file asks", d.Method)
+	}
+	// Case B of TestContractReliabilityCases: beta = 1.894516.
+	if d.Beta == nil || math.Abs(*d.Beta-1.894516) > 1e-5 {
+		t.Errorf("beta %v, want 1.894516", d.Beta)
+	}
+	if d.ReserveFactor == nil || !(*d.ReserveFactor > 0 && *d.ReserveFactor < 1) {
+		t.Errorf("reserve_factor %v: want a factor below 1 (beta 1.89 < target 3.8)", d.ReserveFactor)
+	}
+}
+
+// TestContractOutput: [output] dir and formats are honoured; the nominal
+// length of a random length is its mean (Perry's load, ctPerry, at L =
+// 3000 mm with the bow L/500 of that length).
+func TestContractOutput(t *testing.T) {
+	dir := filepath.Join(t.TempDir(), "out")
+	s := fmt.Sprintf(ctStrut, "", `{ dist = "uniform", min = 2000, max = 4000 }`, "100", "50", "200000", "250", `"L/500"`, "100000") +
+		fmt.Sprintf("[analysis]\nsamples = 3000\n[sensitivity]\nsobol = false\n[output]\ndir = %q\nformats = [\"json\", \"csv\"]\n", dir)
+	code, _, errs := invoke(t, "run", writeStudy(t, s))
+	if code != 0 {
+		t.Fatalf("exit %d\n%s", code, errs)
+	}
+	b, err := os.ReadFile(filepath.Join(dir, "results.json"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var d report.Document
+	if err := json.Unmarshal(b, &d); err != nil {
+		t.Fatal(err)
+	}
+	ctClose(t, "nominal capacity at the mean length", d.Nominal.Capacity, ctPerry(5000, 100*50*50*50/12.0, 25, 3000, 200000, 250, 6), 1e-9)
+	if _, err := os.Stat(filepath.Join(dir, "report.html")); err == nil {
+		t.Errorf("report.html written though formats lists only json and csv")
+	}
+}
