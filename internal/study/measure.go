@@ -291,8 +291,8 @@ func (ms *Measurement) PriorSummary() Summary {
 }
 
 // UpdatedSummary describes the updated (predictive) distribution: its 5 %
-// fractile, and the mean and cov of the lognormal with its log-mean m''
-// and log-scale s'' sqrt(1 + 1/n'') (sigma in place of s'' when known).
+// fractile, and the mean and cov of the lognormal with its log-mean m″
+// and log-scale s″ sqrt(1 + 1/n″) (sigma in place of s″ when known).
 // With a known variance that lognormal is the predictive distribution;
 // with an unknown one the predictive is a log-Student-t, which has no
 // finite moments, and the lognormal is its normal-tailed counterpart.
