@@ -785,6 +785,18 @@ func TestContractReliabilityCases(t *testing.T) {
 					// FORM is exact for a limit state linear in normal
 					// space (A) or in the logs of lognormals (B).
 					ctClose(t, "FORM beta", b, c.beta, 1e-5)
+					if c.name == "A" {
+						// The reserve factor k on S that just meets beta_t =
+						// 3.8: (200 - 100 k)/sqrt(20^2 + (30 k)^2) = 3.8
+						// (Cornell's index again), the positive root of
+						// 2996 k^2 + 40000 k - 34224 = 0.
+						k := (-40000 + math.Sqrt(40000*40000+4*2996*34224)) / (2 * 2996)
+						if d.ReserveFactor == nil {
+							t.Errorf("no reserve_factor")
+						} else {
+							ctClose(t, "reserve_factor", *d.ReserveFactor, k, 1e-5)
+						}
+					}
 					return
 				}
 				// A 95 % interval misses 1 time in 20: widen it by half its
