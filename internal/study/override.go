@@ -65,7 +65,7 @@ func setPath(doc map[string]any, path string, value any) error {
 		t, ok := next.(map[string]any)
 		if !ok {
 			at := strings.Join(parts[:i+1], ".")
-			return fmt.Errorf("%s is %s, not a table, so %q cannot be set (set %s itself)", at, tomlType(next), path, at)
+			return fmt.Errorf("%s holds a value (%s), not a table, so %q cannot be set (set %s itself)", at, tomlType(next), path, at)
 		}
 		m = t
 	}
