@@ -841,6 +841,21 @@ func TestContractCorrelation(t *testing.T) {
 		t.Fatalf("lower bound %g", low)
 	}
 	ctBad(t, fmt.Sprintf(s, "rho = -0.95"), "study.toml:30: correlation[0].rho")
+	// Coefficients that form a positive definite matrix of the variables
+	// but not in normal space: for lognormals with cov 0.9 the normal
+	// correlation of 0.7 is ln(1 + 0.7 x 0.81)/ln(1.81) = 0.77, and
+	// [[1, .77, 0], [.77, 1, .77], [0, .77, 1]] has a negative determinant.
+	three := strings.Replace(fmt.Sprintf(ctStrut, "", "3000", "100", "50",
+		`{ dist = "lognormal", mean = 200000, cov = 0.9 }`, `{ dist = "lognormal", mean = 250, cov = 0.9 }`, "3", "100000"),
+		"cov = 0.1 }", "cov = 0.9, dist = \"lognormal\" }", 1)
+	three = strings.Replace(three, `{ dist = "normal", mean = 100000`, `{ mean = 100000`, 1)
+	three += "[[correlation]]\npair = [\"material.modulus\", \"material.yield\"]\nrho = 0.7\n" +
+		"[[correlation]]\npair = [\"material.yield\", \"loads.dead\"]\nrho = 0.7\n"
+	if ln := math.Log1p(0.7*0.81) / math.Log(1.81); 1-2*ln*ln >= 0 {
+		t.Fatalf("normal-space determinant %g", 1-2*ln*ln)
+	}
+	ctBad(t, three, "correlation")
+	ctBad(t, three, "normal space")
 	dir := t.TempDir()
 	if code, _, errs := invoke(t, "run", writeStudy(t, fmt.Sprintf(s, "rho = -0.95")), "--out", dir); code != 2 {
 		t.Errorf("run with an unreachable rho: exit %d, want 2 (bad input)\n%s", code, errs)
