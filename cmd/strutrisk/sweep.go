@@ -3,6 +3,7 @@ package main
 import (
 	"context"
 	"fmt"
+	"math"
 	"strings"
 
 	"strutrisk/internal/report"
@@ -17,6 +18,7 @@ type cases struct {
 	label    string
 	params   string         // the swept parameter
 	values   []float64      // swept values, internal units
+	lam      []float64      // nominal relative slenderness of the study at each value
 	sweep    []report.Point // the study itself at each swept value
 	variants []report.Variant
 	series   []report.Series
@@ -48,8 +50,9 @@ func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *c
 	if sw := st.Sweep; sw != nil {
 		n = len(sw.Values)
 		c.label, c.params = sw.Label(), sw.Parameter
-		for _, q := range sw.Values {
+		for i, q := range sw.Values {
 			c.values = append(c.values, q.Value)
+			c.lam = append(c.lam, relSlenderness(st, i))
 		}
 	}
 	total := len(st.Variants) + (len(st.Variants)+1)*n
@@ -208,7 +211,14 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 				fmt.Fprintf(&w, "    (%d) %s\n", k+1, s.Name)
 			}
 		}
+		showLam := false
+		for _, l := range c.lam {
+			showLam = showLam || math.Abs(l-c.lam[0]) > 1e-3
+		}
 		fmt.Fprintf(&w, "    %-12s", "value")
+		if showLam {
+			fmt.Fprintf(&w, " %8s", "rel.sl.")
+		}
 		for k := range c.grid {
 			if len(c.grid) > 1 {
 				fmt.Fprintf(&w, " %7s", fmt.Sprintf("(%d)", k+1))
@@ -219,6 +229,9 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 		w.WriteString("\n")
 		for i, x := range c.values {
 			fmt.Fprintf(&w, "    %-12.5g", x)
+			if showLam {
+				fmt.Fprintf(&w, " %8.3f", c.lam[i])
+			}
 			for v := range c.grid {
 				pt := c.grid[v][i]
 				switch {
@@ -242,4 +255,22 @@ func caseBeta(pt *report.Point) string {
 		return "inf"
 	}
 	return betaText(pt.Beta)
+}
+
+// relSlenderness is the nominal relative slenderness of the study at
+// swept value i about its governing axis (NaN if it cannot be found).
+func relSlenderness(st *study.Study, i int) float64 {
+	cs, err := st.Derive(-1, i)
+	if err != nil {
+		return math.NaN()
+	}
+	md, err := study.Build(cs)
+	if err != nil {
+		return math.NaN()
+	}
+	n, err := md.Nominal()
+	if err != nil {
+		return math.NaN()
+	}
+	return n.RelSlenderness[n.Axis]
 }

@@ -19,6 +19,7 @@ func figures(b *Bundle) (figs []*figure, skipped []error) {
 		{"sobol", func() *figure { return sobolFigure(b) }},
 		{"slenderness", func() *figure { return slendernessFigure(b) }},
 		{"sweep", func() *figure { return sweepFigure(b) }},
+		{"variants", func() *figure { return variantsFigure(b) }},
 		{"beam-column", func() *figure { return traceFigure(b) }},
 	}
 	for k, u := range b.Updates {

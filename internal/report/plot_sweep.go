@@ -76,6 +76,10 @@ func sweepFigure(b *Bundle) *figure {
 				drawn++
 			}
 		}
+		if len(pf) > 1 && pf[len(pf)-1].Y > pf[0].Y {
+			// pf rises to the right: the legend goes where it is small.
+			pp.Legend.Left = true
+		}
 		if len(pf) > 0 {
 			ln, sc, err := plotter.NewLinePoints(pf)
 			if err == nil {
