@@ -60,7 +60,7 @@ func measureText(st *study.Study) string {
 	}
 	var b strings.Builder
 	fmt.Fprintf(&b, "\nUpdated from measurements (Bayes, normal model of ln X; 5%% = predictive fractile, EN 1990 D.7):\n")
-	fmt.Fprintf(&b, "  %-30s %4s  %-26s %-26s %s\n", "", "n", "prior mean / cov / 5%", "updated mean / cov / 5%", "spread")
+	fmt.Fprintf(&b, "  %-36s %4s  %-26s %-26s %s\n", "", "n", "prior mean / cov / 5%", "updated mean / cov / 5%", "spread")
 	for _, m := range st.Measurements {
 		p, u := m.PriorSummary(), m.UpdatedSummary()
 		f := func(s study.Summary) string {
@@ -73,7 +73,7 @@ func measureText(st *study.Study) string {
 		if m.Variance() == "unknown" {
 			spread = fmt.Sprintf("unknown: log-Student-t, %g dof", m.Posterior.Nu)
 		}
-		fmt.Fprintf(&b, "  %-30s %4d  %-26s %-26s %s\n", m.Path+" ("+m.Unit+")", len(m.Values), f(p), f(u), spread)
+		fmt.Fprintf(&b, "  %-36s %4d  %-26s %-26s %s\n", m.Path+" ("+m.Unit+")", len(m.Values), f(p), f(u), spread)
 	}
 	return b.String()
 }

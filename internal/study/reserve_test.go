@@ -171,3 +171,16 @@ func TestTargetKeys(t *testing.T) {
 		}
 	}
 }
+
+// BenchmarkLoaded is one evaluation of the loaded model's limit state: it
+// must not allocate (compare BenchmarkG of the study's own model).
+func BenchmarkLoaded(b *testing.B) {
+	md := loadDemo(b, "retrofit-column.toml")
+	m := md.Loaded(1.3, 2000)
+	x := medians(md)
+	out := make([]float64, 2)
+	b.ReportAllocs()
+	for b.Loop() {
+		m.G(x, out)
+	}
+}
