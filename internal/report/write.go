@@ -19,7 +19,8 @@ var knownFormats = []string{"html", "json", "csv", "svg", "png", "md", "txt"}
 // Write writes the report of b into dir (created if needed) and returns the
 // paths written, in order. Whatever the formats, it writes results.json
 // (the Document, indented), summary.txt (SummaryText), summary.md
-// (Markdown) and, when the bundle holds sample points, samples.csv. The
+// (Markdown), when the bundle holds sample points, samples.csv, and when
+// it holds sweep curves, sweep.csv (one row per series and value). The
 // formats add:
 //
 //	"html"  report.html, one self-contained file with inline SVG pictures
@@ -30,7 +31,7 @@ var knownFormats = []string{"html", "json", "csv", "svg", "png", "md", "txt"}
 // files are always written). nil formats mean DefaultFormats; an unknown
 // format is an error. Pictures are named capacity-demand, margin,
 // convergence, tornado, tornado-beta, sobol, slenderness, sweep,
-// beam-column and update-1, update-2...; a picture without data is left
+// variants, beam-column and update-1, update-2...; a picture without data is left
 // out (and one that cannot be drawn is listed in the HTML report).
 //
 // Write is atomic per run: every file is first written under a temporary
@@ -66,6 +67,13 @@ func Write(dir string, b *Bundle, formats []string) ([]string, error) {
 			return nil, err
 		}
 		files = append(files, outFile{"samples.csv", csv})
+	}
+	if len(b.Series) > 0 {
+		csv, err := seriesCSV(b)
+		if err != nil {
+			return nil, err
+		}
+		files = append(files, outFile{"sweep.csv", csv})
 	}
 	files = append(files, outFile{"summary.txt", []byte(SummaryText(b))})
 	files = append(files, outFile{"summary.md", []byte(Markdown(b))})

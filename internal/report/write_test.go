@@ -26,7 +26,7 @@ func TestWriteDemo(t *testing.T) {
 			t.Fatal(err)
 		}
 	}
-	want := []string{"results.json", "samples.csv", "summary.txt", "summary.md", "report.html"}
+	want := []string{"results.json", "samples.csv", "sweep.csv", "summary.txt", "summary.md", "report.html"}
 	for _, p := range allPictures {
 		want = append(want, p+".svg", p+".png")
 	}
