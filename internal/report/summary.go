@@ -49,6 +49,9 @@ func SummaryText(b *Bundle) string {
 	}
 	if v := targetVerdict(&d); v != noTarget {
 		line("target beta", "%s: %s", f2(*d.TargetBeta), verdictText(v))
+		if t := d.Target; v == undecided && t != nil && t.SamplesToDecide != nil {
+			line("", "about %s evaluations would decide it", thousands(int64(*t.SamplesToDecide)))
+		}
 	}
 	if d.ReserveFactor != nil {
 		line("reserve factor", "%s (load factor at which the target is just met)", f2(*d.ReserveFactor))

@@ -255,7 +255,11 @@ func (p *parser) checkSection() {
 			return nominalValue(x, 0)
 		})
 		if _, err := s.Properties(); err != nil {
-			p.errorf(loss.Path, "the largest thickness losses of this distribution leave no section (%v): narrow it or add upper", strings.TrimPrefix(err.Error(), "column: "))
+			what := "narrow it or add upper"
+			if loss.update != nil {
+				what = "the update from measurements.thickness_loss has too wide an upper tail: give a smaller known cov, or weigh a narrower prior with prior_tests and prior_dof"
+			}
+			p.errorf(loss.Path, "the largest thickness losses of this distribution leave no section (%v): %s", strings.TrimPrefix(err.Error(), "column: "), what)
 		}
 	}
 }

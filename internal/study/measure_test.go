@@ -209,3 +209,13 @@ func TestMeasureHeavyTailWarning(t *testing.T) {
 		t.Errorf("heavy-tail warning despite a prior on the spread:\n%s", w)
 	}
 }
+
+// TestMeasureThicknessTail: an update whose upper tail would consume the
+// web says how to narrow it.
+func TestMeasureThicknessTail(t *testing.T) {
+	text := strings.Replace(measured, "thickness = 8\n", "thickness = 3\n", 1)
+	_, err := Parse("t.toml", []byte(text+`thickness_loss = { values = ["0.8 mm", "1.3 mm", "1.1 mm"], cov = 0.4 }`+"\n"))
+	if err == nil || !strings.Contains(err.Error(), "give a smaller known cov") {
+		t.Errorf("want the advice on the update's tail, got %v", err)
+	}
+}
