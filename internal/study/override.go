@@ -122,6 +122,10 @@ func derive(name string, data []byte, ovs []override) (*Study, []Problem) {
 		}
 		if !mapped && len(ovs) > 0 {
 			pr.Msg = "with the values of " + ovs[0].label + ": " + pr.Msg
+			if pr.Line == 0 {
+				// A key the file does not have: point at the case.
+				pr.Line = p.line(ovs[0].at)
+			}
 		}
 	}
 	return nil, probs
