@@ -138,6 +138,12 @@ func importanceRun(ctx context.Context, sp *uSpace, points []DesignPoint, s *Set
 	_, cancelled := rareParallel(ctx, cfg.Workers, nb, work, merge)
 
 	pf, cov := isEstimate(&tot2)
+	if pf > 1 {
+		// Weights above 1 can carry the estimate past certainty: the
+		// design point does not describe a failure domain this large.
+		res.Warnings = append(res.Warnings, fmt.Sprintf("%s: the estimate %.3g exceeds 1 (failure is likely; use monte-carlo)", ImportancePoorPrefix, pf))
+		pf = 1
+	}
 	lo, hi := isInterval(pf, cov, z)
 	res.Evaluations = tot2.n
 	res.Pf, res.PfCoV, res.PfCI = pf, cov, [2]float64{lo, hi}

@@ -11,8 +11,19 @@ import (
 func PfFromBeta(beta float64) float64 { return distuv.UnitNormal.CDF(-beta) }
 
 // BetaFromPf returns the reliability index -Phi^-1(pf): +Inf for pf = 0 and
-// -Inf for pf = 1.
-func BetaFromPf(pf float64) float64 { return -distuv.UnitNormal.Quantile(pf) }
+// -Inf for pf = 1. An estimate outside [0, 1] (a weighted estimator can
+// overshoot) is taken at the nearer end; NaN stays NaN.
+func BetaFromPf(pf float64) float64 {
+	switch {
+	case math.IsNaN(pf):
+		return math.NaN()
+	case pf <= 0:
+		return math.Inf(1)
+	case pf >= 1:
+		return math.Inf(-1)
+	}
+	return -distuv.UnitNormal.Quantile(pf)
+}
 
 // phi is the standard normal density.
 func phi(u float64) float64 { return math.Exp(-0.5*u*u) / math.Sqrt(2*math.Pi) }
