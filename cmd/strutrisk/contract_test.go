@@ -1113,3 +1113,20 @@ func TestContractOutput(t *testing.T) {
 		t.Errorf("report.html written though formats lists only json and csv")
 	}
 }
+
+// ctPanicWriter fails every write by panicking.
+type ctPanicWriter struct{}
+
+func (ctPanicWriter) Write([]byte) (int, error) { panic("writer failed") }
+
+// TestContractInternalFailure: a failure inside the tool exits with 3,
+// not with the runtime's 2, which means bad input.
+func TestContractInternalFailure(t *testing.T) {
+	var errs strings.Builder
+	if code := run([]string{"new"}, ctPanicWriter{}, &errs); code != 3 {
+		t.Errorf("exit %d, want 3", code)
+	}
+	if !strings.Contains(errs.String(), "internal failure") {
+		t.Errorf("stderr does not say internal failure:\n%s", errs.String())
+	}
+}

@@ -27,6 +27,7 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"runtime/debug"
 )
 
 // version is the tool version written into every result document.
@@ -64,8 +65,15 @@ func main() {
 }
 
 // run is the whole command: it reads args (without the program name),
-// writes to stdout and stderr, and returns the exit status.
-func run(args []string, stdout, stderr io.Writer) int {
+// writes to stdout and stderr, and returns the exit status. A panic is an
+// internal failure (status 3), not the runtime's status 2 of bad input.
+func run(args []string, stdout, stderr io.Writer) (code int) {
+	defer func() {
+		if e := recover(); e != nil {
+			fmt.Fprintf(stderr, "strutrisk: internal failure: %v\n%s", e, debug.Stack())
+			code = exitInternal
+		}
+	}()
 	if len(args) == 0 {
 		fmt.Fprint(stderr, usage)
 		return exitInput
