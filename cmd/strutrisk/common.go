@@ -192,6 +192,7 @@ func (l *loaded) checkText() string {
 		fmt.Fprintf(&b, "Target reliability index %.2f: `strutrisk run` estimates whether it is met\n", st.Target)
 	}
 	b.WriteString(targetCheckText(st) + measureText(st)) // reserve.go, measure.go
+	b.WriteString(casesCheckText(st))                    // sweep.go
 	if len(st.Defaults) > 0 {
 		fmt.Fprintf(&b, "\nDefaults that apply:\n")
 		for _, d := range st.Defaults {

@@ -165,6 +165,9 @@ func runCase(ctx context.Context, st *study.Study, v, i int, s *sim.Settings) (*
 	if err != nil {
 		return nil, err
 	}
+	if res.Incomplete {
+		return nil, fmt.Errorf("interrupted")
+	}
 	pt := &report.Point{Pf: res.Pf, Beta: finite(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]}}
 	if i >= 0 {
 		pt.Value = st.Sweep.Values[i].Value
@@ -273,4 +276,34 @@ func relSlenderness(st *study.Study, i int) float64 {
 		return math.NaN()
 	}
 	return n.RelSlenderness[n.Axis]
+}
+
+// casesCheckText lists the sweep and the variants for check, with the
+// nominal capacity of each variant at the study's values.
+func casesCheckText(st *study.Study) string {
+	var b strings.Builder
+	if sw := st.Sweep; sw != nil && len(sw.Values) > 0 {
+		first, last := sw.Values[0].Value, sw.Values[len(sw.Values)-1].Value
+		fmt.Fprintf(&b, "\nSweep of %s over %d values, %.5g to %.5g", sw.Label(), len(sw.Values), first, last)
+		l0, l1 := relSlenderness(st, 0), relSlenderness(st, len(sw.Values)-1)
+		if math.Abs(l1-l0) > 1e-3 {
+			fmt.Fprintf(&b, " (nominal relative slenderness %.3f to %.3f)", l0, l1)
+		}
+		b.WriteString("\n")
+	}
+	if len(st.Variants) > 0 {
+		fmt.Fprintf(&b, "\nVariants (run with the study's seed), nominal capacity at the study's values:\n")
+		for v, va := range st.Variants {
+			capText := "?"
+			if cs, err := st.Derive(v, -1); err == nil {
+				if md, err := study.Build(cs); err == nil {
+					if n, err := md.Nominal(); err == nil {
+						capText = fmt.Sprintf("%.1f kN", n.Capacity/1e3)
+					}
+				}
+			}
+			fmt.Fprintf(&b, "  - %-26s %12s  sets %s\n", va.Name, capText, strings.Join(va.Keys, ", "))
+		}
+	}
+	return b.String()
 }

@@ -194,3 +194,21 @@ func TestSweepVariantErrors(t *testing.T) {
 		}
 	}
 }
+
+// TestCheckListsCases checks that check describes the demo's sweep (its
+// lengths give relative slenderness 0.2 to 2.0, as its comments say) and
+// its variants.
+func TestCheckListsCases(t *testing.T) {
+	code, out, errs := invoke(t, "check", "../../studies/imperfection-comparison.toml")
+	if code != 0 {
+		t.Fatalf("exit %d\n%s", code, errs)
+	}
+	for _, want := range []string{
+		"Sweep of member.length (mm) over 10 values, 1229.8 to 12298 (nominal relative slenderness 0.200 to 2.000)",
+		"bow L/500", "secant, e = L/1000", "EN 1993-1-1 curve b", "beam-column ultimate",
+	} {
+		if !strings.Contains(out, want) {
+			t.Errorf("check output lacks %q:\n%s", want, out)
+		}
+	}
+}
