@@ -106,13 +106,20 @@ func (r *results) document() *report.Document {
 		p := f.Points[0]
 		ff := &report.FORM{Beta: f.Beta, Pf: f.Pf, DesignPoint: map[string]float64{}, Importance: map[string]float64{}}
 		for i, v := range r.l.md.Sim.Vars {
-			ff.DesignPoint[v.Name] = p.X[i]
+			ff.DesignPoint[v.Name] = r.l.md.InUnits(i, p.X[i], p.X) // L/n in mm
 			ff.Importance[v.Name] = p.Importance[i]
 		}
 		d.FORM = ff
 	}
+	med := r.l.md.Medians()
 	for _, t := range r.tornado {
-		d.Tornado = append(d.Tornado, report.Tornado{Variable: t.Variable, LowValue: t.LowValue, HighValue: t.HighValue, Low: t.Low, High: t.High})
+		lo, hi := t.LowValue, t.HighValue
+		for i, v := range r.l.md.Sim.Vars {
+			if v.Name == t.Variable { // the others at their medians; L/n in mm
+				lo, hi = r.l.md.InUnits(i, lo, med), r.l.md.InUnits(i, hi, med)
+			}
+		}
+		d.Tornado = append(d.Tornado, report.Tornado{Variable: t.Variable, LowValue: lo, HighValue: hi, Low: t.Low, High: t.High})
 	}
 	for _, s := range r.sobol {
 		d.Sobol = append(d.Sobol, report.Sobol{Variable: s.Variable, First: s.First, Total: s.Total, FirstCI: s.FirstCI, TotalCI: s.TotalCI})
@@ -229,7 +236,7 @@ func (r *results) bundle() *report.Bundle {
 	}
 	b.Slenderness = r.slendernessChart()
 	r.cases.fill(b)
-	b.Trace = r.trace()
+	r.addTrace(b)
 	b.Diagnostics = []report.KV{
 		{Key: "method", Value: string(r.res.Method)},
 		{Key: "why", Value: r.res.Reason},

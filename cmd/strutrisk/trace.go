@@ -2,12 +2,13 @@ package main
 
 import "strutrisk/internal/report"
 
-// trace is the numerical beam-column's load-deflection path and deflected
-// shape at the FORM design point (the most probable failing member), or at
-// the nominal member when FORM found none; nil for other models.
-func (r *results) trace() *report.Trace {
+// addTrace puts the numerical beam-column's load-deflection path and
+// deflected shape into b: at the FORM design point (the most probable
+// failing member), or at the nominal member when FORM found none. Other
+// models have no trace.
+func (r *results) addTrace(b *report.Bundle) {
 	if r.l.st.Model != "beam-column" {
-		return nil
+		return
 	}
 	var x []float64
 	if f := r.form; f != nil && len(f.Points) > 0 {
@@ -15,8 +16,8 @@ func (r *results) trace() *report.Trace {
 	}
 	tr, err := r.l.md.TraceAt(x)
 	if err != nil {
-		r.warnings = append(r.warnings, "beam-column picture: "+err.Error())
-		return nil
+		b.Doc.Warnings = append(b.Doc.Warnings, "beam-column picture: "+err.Error())
+		return
 	}
-	return &report.Trace{Deflection: tr.Deflection, Load: tr.Load, Position: tr.X, Shape: tr.Shape}
+	b.Trace = &report.Trace{Deflection: tr.Deflection, Load: tr.Load, Position: tr.X, Shape: tr.Shape}
 }
