@@ -1130,3 +1130,26 @@ func TestContractInternalFailure(t *testing.T) {
 		t.Errorf("stderr does not say internal failure:\n%s", errs.String())
 	}
 }
+
+// TestContractRelativeInMM: a bow written as L/n with a random length is
+// reported in mm: the FORM design point lies on the limit state Perry's
+// load = load (ctPerry), and the tornado swings the bow between the 5 %
+// and 95 % fractiles of N(0, L/1000) at the median length, -+1.6449 x 3 mm
+// (standard normal tables).
+func TestContractRelativeInMM(t *testing.T) {
+	s := fmt.Sprintf(ctStrut, "", `{ dist = "normal", mean = 3000, sd = 30 }`, "100", "50", "200000", "250",
+		`{ dist = "normal", mean = 0, sd = "L/1000" }`, "150000") + "[sensitivity]\nsobol = false\n"
+	d, _, _ := ctRunJSON(t, s, "--method", "form")
+	x := d.FORM.DesignPoint
+	L, bow, load := x["member.length"], x["imperfection.bow"], x["loads.dead"]
+	if math.Abs(bow) < 0.5 {
+		t.Fatalf("design point bow %g: not in mm", bow)
+	}
+	ctClose(t, "capacity at the design point", ctPerry(5000, 100*50*50*50/12.0, 25, L, 200000, 250, bow), load, 1e-4)
+	for _, r := range d.Tornado {
+		if r.Variable == "imperfection.bow" {
+			ctClose(t, "tornado high_value (mm)", r.HighValue, 1.6448536269514722*3, 1e-6)
+			ctClose(t, "tornado low_value (mm)", r.LowValue, -1.6448536269514722*3, 1e-6)
+		}
+	}
+}
