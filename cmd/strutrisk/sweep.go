@@ -59,6 +59,11 @@ func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *c
 	done := 0
 	settings := caseSettings(s)
 	c.grid = make([][]*report.Point, len(st.Variants)+1)
+	// A case's own warnings are told once, those of the study not again.
+	seen := map[string]bool{}
+	for _, x := range st.Warnings {
+		seen[x] = true
+	}
 	for v := -1; v < len(st.Variants); v++ {
 		c.grid[v+1] = make([]*report.Point, n)
 		for i := -1; i < n; i++ {
@@ -72,7 +77,13 @@ func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *c
 			done++
 			name := caseName(st, v, i)
 			bar.stage(fmt.Sprintf("case %d/%d: %s", done, total, name))
-			pt, err := runCase(ctx, st, v, i, &settings)
+			pt, warns, err := runCase(ctx, st, v, i, &settings)
+			for _, x := range warns {
+				if !seen[x] {
+					seen[x] = true
+					c.warnings = append(c.warnings, name+": "+x)
+				}
+			}
 			if err != nil {
 				c.warnings = append(c.warnings, fmt.Sprintf("%s: not run: %v", name, err))
 				continue
@@ -132,12 +143,18 @@ func caseName(st *study.Study, v, i int) string {
 	return strings.Join(parts, " at ")
 }
 
-// runCase builds and runs one case.
-func runCase(ctx context.Context, st *study.Study, v, i int, s *sim.Settings) (*report.Point, error) {
+// runCase builds and runs one case; it also returns the case's warnings.
+func runCase(ctx context.Context, st *study.Study, v, i int, s *sim.Settings) (*report.Point, []string, error) {
 	cs, err := st.Derive(v, i)
 	if err != nil {
-		return nil, err
+		return nil, nil, err
 	}
+	pt, err := runDerived(ctx, st, cs, i, s)
+	return pt, cs.Warnings, err
+}
+
+// runDerived runs the derived study cs of st at swept value i.
+func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings) (*report.Point, error) {
 	md, err := study.Build(cs)
 	if err != nil {
 		return nil, err
