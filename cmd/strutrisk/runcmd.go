@@ -23,6 +23,9 @@ and the report files into the output folder ([output] dir of the study,
 else out/<study name>). Flags override the study's [analysis] settings and
 may stand before or after the study file. Ctrl-C stops sampling; what
 finished is written, marked incomplete, and the exit status is 130.
+A study with [sweep] or [[variant]] tables runs each case after the study
+itself, with the same seed; the summary ends with their tables and the
+report draws them (sweep.csv holds every curve).
 
 Flags:
 `
