@@ -5,7 +5,9 @@ package main
 // published formula, table or worked example named beside it.
 
 import (
+	"crypto/sha256"
 	"encoding/csv"
+	"encoding/hex"
 	"encoding/json"
 	"fmt"
 	"math"
@@ -879,6 +881,10 @@ func TestContractCommands(t *testing.T) {
 	}
 	var d report.Document
 	json.Unmarshal([]byte(a), &d)
+	// input_sha256 is the SHA-256 of the study file's bytes (FIPS 180-4).
+	if sum := sha256.Sum256([]byte(s)); d.InputSHA256 != hex.EncodeToString(sum[:]) {
+		t.Errorf("input_sha256 %s, want %x", d.InputSHA256, sum)
+	}
 	if d.Method != "monte-carlo" || *d.Seed != 5 || *d.Evaluations > 4000 {
 		t.Errorf("flags not applied: method %s, seed %d, evaluations %d", d.Method, *d.Seed, *d.Evaluations)
 	}
@@ -1013,6 +1019,10 @@ sobol = { samples = 256 }
 		t.Errorf("warnings is not an array: %v", raw["warnings"])
 	} else if len(w) != len(d.Warnings) {
 		t.Errorf("warnings differ")
+	}
+	// A CHS is alike about both axes: the tie reports minor.
+	if d.GoverningAxis != "minor" || d.Nominal.Axis != "minor" {
+		t.Errorf("CHS: governing axis %q, nominal axis %q, want minor", d.GoverningAxis, d.Nominal.Axis)
 	}
 	if d.Units != "N-mm-MPa" || len(d.InputSHA256) != 64 || d.Title != "kip-inch column" {
 		t.Errorf("header: units %q, sha %q, title %q", d.Units, d.InputSHA256, d.Title)
