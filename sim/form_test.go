@@ -381,3 +381,26 @@ func TestFORMFourPoints(t *testing.T) {
 		t.Errorf("%d points with MaxPoints 2: %s", len(r.Points), r.Status)
 	}
 }
+
+// TestFORMNoisyLimitState checks FORM on a limit state with rounding noise,
+// as an iterative capacity model has: g = 1e6 (3 - u1) plus a deterministic
+// noise of a few units (a few parts in 1e6 of g0). The exact design point of
+// the noise-free plane is beta = 3 (a linear limit state in standard normal
+// space: beta is its distance from the origin, Hasofer and Lind 1974).
+func TestFORMNoisyLimitState(t *testing.T) {
+	noise := func(u []float64) float64 {
+		h := math.Float64bits(u[0])*0x9e3779b97f4a7c15 ^ math.Float64bits(u[1])*0xbf58476d1ce4e5b9
+		h ^= h >> 31
+		return 5 * (float64(h>>11)/(1<<53) - 0.5)
+	}
+	r := formRun(funcSpace(2, func(u []float64) float64 {
+		return 1e6*(3-u[0]) + noise(u)
+	}), nil)
+	t.Logf("status: %s; beta %.6f", r.Status, r.Beta)
+	if !r.Converged {
+		t.Fatalf("not converged on a noisy plane: %s", r.Status)
+	}
+	if math.Abs(r.Beta-3) > 1e-3 {
+		t.Errorf("beta %v, want 3", r.Beta)
+	}
+}
