@@ -93,6 +93,9 @@ func (d logStudentsT) String() string {
 // lowerT returns the p-quantile of the standard Student-t for p <= 1/2,
 // accurate for tiny p: F(-y) = I_x(nu/2, 1/2)/2 with x = nu/(nu + y²).
 func (d logStudentsT) lowerT(p float64) float64 {
+	if math.IsNaN(p) {
+		return p // the inverse incomplete beta would not return
+	}
 	if p <= 0 {
 		return math.Inf(-1)
 	}

@@ -78,6 +78,9 @@ func (p *parser) measurements(top *table) {
 		mtab := &table{path: t.key(mt.key), m: m, used: map[string]bool{}}
 		if ms := p.measurement(mtab, mt.path); ms != nil {
 			p.st.Measurements = append(p.st.Measurements, ms)
+			if ms.Variance() == "unknown" {
+				p.uncorrelated(top, ms.Path, mtab.path)
+			}
 		}
 		for _, k := range known {
 			if _, ok := m[k]; ok {
@@ -312,4 +315,19 @@ func (ms *Measurement) Variance() string {
 		return "known"
 	}
 	return "unknown"
+}
+
+// uncorrelated reports a correlation with the quantity at path, whose
+// update with unknown variance has a log-Student-t predictive: it has no
+// finite variance, so a correlation coefficient with it is not defined.
+func (p *parser) uncorrelated(top *table, path, key string) {
+	list, _ := top.m["correlation"].([]map[string]any)
+	for i, m := range list {
+		pair, _ := m["pair"].([]any)
+		for _, x := range pair {
+			if s, _ := x.(string); s == path {
+				p.errorf(fmt.Sprintf("correlation[%d].pair", i), "%s is updated by %s with an unknown spread: its predictive distribution (log-Student-t) has no finite variance, so it cannot be correlated; give %s a known cov, or drop this correlation", path, key, key)
+			}
+		}
+	}
 }

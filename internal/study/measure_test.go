@@ -219,3 +219,19 @@ func TestMeasureThicknessTail(t *testing.T) {
 		t.Errorf("want the advice on the update's tail, got %v", err)
 	}
 }
+
+// TestMeasureCorrelated: a quantity updated with an unknown spread has a
+// log-Student-t predictive without finite variance: a correlation with it
+// is an error; with a known cov it stays valid.
+func TestMeasureCorrelated(t *testing.T) {
+	corr := "[[correlation]]\npair = [\"material.yield\", \"imperfection.bow\"]\nrho = 0.3\n"
+	text := strings.Replace(measured, "[measurements]\n", corr+"[measurements]\n", 1)
+	_, err := Parse("t.toml", []byte(text+`yield = { values = ["287 MPa", "301 MPa", "279 MPa"] }`+"\n"))
+	if err == nil || !strings.Contains(err.Error(), "correlation[0].pair: material.yield is updated by measurements.yield with an unknown spread") {
+		t.Errorf("want the correlation refused, got %v", err)
+	}
+	st := parse(t, text+`yield = { values = ["287 MPa", "301 MPa", "279 MPa"], cov = 0.07 }`+"\n")
+	if len(st.Corr) != 1 {
+		t.Errorf("correlations %v, want the one given", st.Corr)
+	}
+}

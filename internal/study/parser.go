@@ -340,6 +340,9 @@ func (p *parser) parse() *Study {
 		return st
 	}
 	p.measurements(top)
+	if len(p.probs) > 0 {
+		return st
+	}
 	p.correlation(top)
 	p.checkModel()
 	p.checkSection()
