@@ -114,7 +114,7 @@ func targetRows(d *Document) []KV {
 		if len(t.ReserveLoads) > 0 {
 			s += " (" + strings.Join(t.ReserveLoads, ", ") + ")"
 		}
-		rows = append(rows, KV{"reserve factor (sampled β = target)", s})
+		rows = append(rows, KV{"reserve factor (β = target)", s})
 		if t.ReserveFORMFactor != nil {
 			rows = append(rows, KV{"reserve factor by FORM alone", f2(*t.ReserveFORMFactor)})
 		}
