@@ -213,7 +213,7 @@ func TestRunMeasuredReport(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	for _, s := range []string{"Updating from measurements", "fig-update-1", "updated 5% fractile"} {
+	for _, s := range []string{"Updating from measurements", "fig-update-1", "updated 5% fractile", "fig-tornado-beta", "β at low"} {
 		if !strings.Contains(string(html), s) {
 			t.Errorf("report.html lacks %q", s)
 		}
