@@ -14,8 +14,13 @@ import (
 // Sobol' net.
 const qmcChunk = 1024
 
-// qmcStart is the number of points per replicate of the first estimate.
-const qmcStart = 256
+// qmcStart is the number of points per replicate of the first estimate
+// (fewer when the budget is smaller). At 256 the replicate means of a
+// tail probability are skewed and their spread often understates the
+// error: the 95 % interval of R - S with normal or lognormal R and S
+// (Cornell's closed form) missed the exact value in 14 of 80 seeds; at
+// 1024, in 6 of 80.
+const qmcStart = 1024
 
 // linearUsable reports why m.Linear cannot be used, or "" when it can.
 func linearUsable(m *Model, t *Transform) string {
