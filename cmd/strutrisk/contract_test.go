@@ -1201,3 +1201,26 @@ func TestContractAutoCoverage(t *testing.T) {
 		t.Errorf("the exact beta fell outside the 95 %% interval in %d of %d runs", misses, runs)
 	}
 }
+
+// TestContractSobolAdditive: for the additive margin g = R - S of case A
+// the first-order and total indices both equal Var_i / Var g: 4/13 for
+// the yield and 9/13 for the load (Sobol', Math. Modeling and Comp. Exp.
+// 1, 1993: an additive function has no interactions).
+func TestContractSobolAdditive(t *testing.T) {
+	s := strings.Replace(fmt.Sprintf(ctRS, `{ dist = "normal", mean = 200, sd = 20 }`, `{ dist = "normal", mean = "100 kN", sd = "30 kN" }`),
+		"sobol = false", "sobol = { samples = 8192 }", 1) + "[output]\nformats = [\"json\"]\n"
+	d, _, _ := ctRunJSON(t, s, "--method", "form")
+	want := map[string]float64{"material.yield": 4.0 / 13, "loads.axial": 9.0 / 13}
+	if len(d.Sobol) != 2 {
+		t.Fatalf("sobol rows %+v", d.Sobol)
+	}
+	for _, r := range d.Sobol {
+		w := want[r.Variable]
+		if math.Abs(r.First-w) > 0.03 || math.Abs(r.Total-w) > 0.03 {
+			t.Errorf("%s: first %.4f, total %.4f, want %.4f", r.Variable, r.First, r.Total, w)
+		}
+		if !(r.FirstCI[0] <= r.First && r.First <= r.FirstCI[1] && r.TotalCI[0] <= r.Total && r.Total <= r.TotalCI[1]) {
+			t.Errorf("%s: estimates outside their intervals %+v", r.Variable, r)
+		}
+	}
+}
