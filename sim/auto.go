@@ -48,7 +48,9 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 		formNote = fmt.Sprintf("FORM beta = %.3f, pf = %.3g", f.Beta, f.Pf)
 	}
 
-	if why := linearUsable(m, t); why == "" {
+	// Conditional QMC needs one point per replicate at least; a smaller
+	// budget goes to the other estimators.
+	if why := linearUsable(m, t); why == "" && s.Samples >= int64(s.Replicates) {
 		res, err := conditionalQMC(ctx, m, t, s)
 		if err != nil {
 			return nil, err
