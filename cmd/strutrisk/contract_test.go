@@ -1224,3 +1224,15 @@ func TestContractSobolAdditive(t *testing.T) {
 		}
 	}
 }
+
+// TestContractSmallBudget: a tiny --samples is a valid request for the
+// default method: it completes (exit 0) with an estimate.
+func TestContractSmallBudget(t *testing.T) {
+	s := fmt.Sprintf(ctRS, `{ dist = "normal", mean = 200, sd = 20 }`, `{ dist = "normal", mean = "100 kN", sd = "30 kN" }`) + "[output]\nformats = [\"json\"]\n"
+	for _, n := range []string{"1", "10"} {
+		d, _, _ := ctRunJSON(t, s, "--samples", n)
+		if d.Pf == nil || *d.Pf < 0 || *d.Pf > 1 {
+			t.Errorf("--samples %s: pf %v", n, d.Pf)
+		}
+	}
+}
