@@ -92,8 +92,11 @@ func ctChi(lam, alpha float64) float64 {
 	return math.Min(1, 1/(phi+math.Sqrt(phi*phi-lam*lam)))
 }
 
-// ctNorm are the standard normal density and distribution function.
+// ctPhi is the standard normal density.
 func ctPhi(x float64) float64 { return math.Exp(-x*x/2) / math.Sqrt(2*math.Pi) }
+
+// ctCDF is the standard normal distribution function, through erfc
+// (Abramowitz & Stegun, Handbook of Mathematical Functions, 1964, 26.2.29).
 func ctCDF(x float64) float64 { return 0.5 * math.Erfc(-x/math.Sqrt2) }
 
 // ctCheckJSON runs check --json on a study text.
