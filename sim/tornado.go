@@ -38,10 +38,19 @@ type TornadoRow struct {
 	// variable fixed at LowValue and HighValue and the others random.
 	// They are NaN when FORM was not requested or did not succeed.
 	LowBeta, HighBeta float64
+	// Base is the output with every variable at its median.
+	Base float64
 }
 
-// Swing returns |High - Low|, the length of the bar.
-func (r TornadoRow) Swing() float64 { return math.Abs(r.High - r.Low) }
+// Swing returns the length of the bar: the range spanned by Low, High and
+// Base. For an output monotone in the variable it is |High - Low|; for a
+// variable that acts by its magnitude (a bow as likely on either side of the
+// member, median zero) both ends move the output the same way and the bar
+// runs from Base to the farther end, so such a variable is not ranked as
+// unimportant.
+func (r TornadoRow) Swing() float64 {
+	return math.Max(math.Max(r.High, r.Low), r.Base) - math.Min(math.Min(r.High, r.Low), r.Base)
+}
 
 // Tornado computes a one-at-a-time sensitivity ("tornado") of m: each random
 // variable in turn is set to its Low and its High fractile while every other
@@ -100,6 +109,7 @@ func Tornado(m *Model, s *TornadoSettings) (base float64, rows []TornadoRow, err
 			HighValue: v.Dist.Quantile(st.High),
 			LowBeta:   math.NaN(),
 			HighBeta:  math.NaN(),
+			Base:      base,
 		}
 		copy(x, median)
 		x[i] = r.LowValue

@@ -162,3 +162,33 @@ func TestFixVariable(t *testing.T) {
 		t.Errorf("reduced G allocates %v times per call", allocs)
 	}
 }
+
+// TestTornadoMagnitude checks the bar of a variable that acts by its
+// magnitude, e = N(0, 1) in g = 10 - |e| - S: both fractiles lower g by the
+// same amount, so |High - Low| is 0, yet the bar must run from the base
+// to that value. The 95 % fractile of the standard normal is 1.6448536
+// (any normal table), and S = N(0, 0.4) swings by 2 x 0.4 x 1.6448536.
+func TestTornadoMagnitude(t *testing.T) {
+	t.Parallel()
+	m := &Model{
+		Vars: []Variable{
+			{Name: "S", Dist: mustDist(NewNormal(0, 0.4))},
+			{Name: "e", Dist: mustDist(NewNormal(0, 1))},
+		},
+		G: func(x, out []float64) float64 { return 10 - math.Abs(x[1]) - x[0] },
+	}
+	base, rows, err := Tornado(m, &TornadoSettings{Low: 0.05, High: 0.95, Output: -1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	const z95 = 1.6448536
+	if math.Abs(base-10) > 1e-9 {
+		t.Errorf("base %v, want 10", base)
+	}
+	if rows[0].Variable != "e" || math.Abs(rows[0].Swing()-z95) > 1e-6 {
+		t.Errorf("first row %+v (swing %v), want e with swing %v", rows[0], rows[0].Swing(), z95)
+	}
+	if rows[1].Variable != "S" || math.Abs(rows[1].Swing()-0.8*z95) > 1e-6 {
+		t.Errorf("second row %+v (swing %v), want S with swing %v", rows[1], rows[1].Swing(), 0.8*z95)
+	}
+}
