@@ -3,7 +3,6 @@ package study
 import (
 	"errors"
 	"math"
-	"sync"
 
 	"strutrisk/internal/column"
 	"strutrisk/sim"
@@ -66,8 +65,6 @@ type Model struct {
 	model     int
 	beam      beamOpts
 }
-
-var memberPool = sync.Pool{New: func() any { return new(column.Member) }}
 
 // Capacity models.
 const (
@@ -381,21 +378,15 @@ func (md *Model) capacity(v *values, axis column.Axis) (column.Result, column.Me
 	if err != nil {
 		return column.Result{}, m, err
 	}
-	// The column functions keep their *Member argument on the heap (it
-	// reaches a function value); a pooled copy keeps an evaluation free of
-	// allocation.
-	mp := memberPool.Get().(*column.Member)
-	*mp = m
 	var res column.Result
 	switch md.model {
 	case modelCurve:
-		res, err = column.Curve(mp, axis)
+		res, err = column.Curve(&m, axis)
 	case modelBeam:
-		res, err = md.beamCapacity(mp, sec, v, axis)
+		res, err = md.beamCapacity(&m, sec, v, axis)
 	default:
-		res, err = column.FirstYield(mp, axis)
+		res, err = column.FirstYield(&m, axis)
 	}
-	memberPool.Put(mp)
 	if err == nil && (math.IsNaN(res.N) || math.IsInf(res.N, 0)) {
 		err = errors.New("study: capacity is not a number")
 	}
