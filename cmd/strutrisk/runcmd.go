@@ -165,6 +165,10 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	case r.res.Incomplete:
 		fmt.Fprintf(stderr, "strutrisk: interrupted: the results in %s are from the samples finished and are marked incomplete\n", dir)
 		return exitInterrupted
+	case ctx.Err() != nil:
+		// Interrupted after the main run, during the sweep or variants.
+		fmt.Fprintf(stderr, "strutrisk: interrupted: the main result in %s is complete; the sweep and variant cases not run are missing\n", dir)
+		return exitInterrupted
 	case o.requireTarget && b.Doc.MeetsTarget == nil:
 		// Undecided counts as not met: the target must be shown to be met.
 		fmt.Fprintf(stderr, "strutrisk: the target reliability index %.2f is not shown to be met: undecided at this sample size (give more samples or a smaller target_cov)\n", *b.Doc.TargetBeta)
