@@ -212,7 +212,7 @@ func (r *results) bundle() *report.Bundle {
 		Check:           l.checkRows(),
 		Defaults:        l.st.Defaults,
 		Convergence:     r.res.Convergence,
-		Samples:         r.res.Kept,
+		Samples:         r.samplesInUnits(),
 		NominalCapacity: l.nom.Capacity,
 		TornadoOutput:   "margin g = capacity - demand (N)",
 		TornadoBase:     r.base,

@@ -371,7 +371,8 @@ sobol = false
 	}
 }
 
-// ctReadCSV reads samples.csv as rows keyed by column name.
+// ctReadCSV reads samples.csv as rows keyed by column name, the unit
+// that follows each name in the header left out.
 func ctReadCSV(t *testing.T, path string) []map[string]float64 {
 	t.Helper()
 	f, err := os.Open(path)
@@ -388,6 +389,9 @@ func ctReadCSV(t *testing.T, path string) []map[string]float64 {
 		m := map[string]float64{}
 		for i, name := range recs[0] {
 			v, _ := strconv.ParseFloat(rec[i], 64)
+			if k := strings.LastIndex(name, " ("); k > 0 && strings.HasSuffix(name, ")") {
+				name = name[:k] // the unit
+			}
 			m[name] = v
 		}
 		out = append(out, m)
@@ -1152,7 +1156,7 @@ func TestContractInternalFailure(t *testing.T) {
 func TestContractRelativeInMM(t *testing.T) {
 	s := fmt.Sprintf(ctStrut, "", `{ dist = "normal", mean = 3000, sd = 30 }`, "100", "50", "200000", "250",
 		`{ dist = "normal", mean = 0, sd = "L/1000" }`, "150000") + "[sensitivity]\nsobol = false\n"
-	d, _, _ := ctRunJSON(t, s, "--method", "form")
+	d, _, dir := ctRunJSON(t, s, "--method", "form")
 	x := d.FORM.DesignPoint
 	L, bow, load := x["member.length"], x["imperfection.bow"], x["loads.dead"]
 	if math.Abs(bow) < 0.5 {
@@ -1165,6 +1169,36 @@ func TestContractRelativeInMM(t *testing.T) {
 			ctClose(t, "tornado low_value (mm)", r.LowValue, -1.6448536269514722*3, 1e-6)
 		}
 	}
+	// samples.csv holds the bow in mm too, and says so in its header:
+	// each sampled member's capacity is Perry's load at its bow in mm.
+	header := ctCSVHeader(t, filepath.Join(dir, "samples.csv"))
+	for _, h := range []string{"member.length (mm)", "imperfection.bow (mm)", "loads.dead (N)", "capacity (N)"} {
+		if !strings.Contains(header, h) {
+			t.Errorf("samples.csv header %q lacks %q", header, h)
+		}
+	}
+	rows := ctReadCSV(t, filepath.Join(dir, "samples.csv"))
+	big := 0
+	for _, r := range rows {
+		if math.Abs(r["imperfection.bow"]) > 0.5 {
+			big++
+		}
+		ctClose(t, "sampled capacity", r["capacity"], ctPerry(5000, 100*50*50*50/12.0, 25, r["member.length"], 200000, 250, r["imperfection.bow"]), 1e-7)
+	}
+	if len(rows) == 0 || big == 0 {
+		t.Errorf("samples.csv: no bow above 0.5 mm among %d rows: not in mm", len(rows))
+	}
+}
+
+// ctCSVHeader returns the first line of the CSV file at path.
+func ctCSVHeader(t *testing.T, path string) string {
+	t.Helper()
+	b, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	h, _, _ := strings.Cut(string(b), "\n")
+	return h
 }
 
 // TestContractAutoCoverage: the 95 % interval of the default method
