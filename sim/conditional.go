@@ -69,7 +69,7 @@ func conditionalQMC(ctx context.Context, m *Model, t *Transform, s *Settings) (*
 // pseudo-randomly (plain conditional Monte Carlo, for comparison).
 func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc bool) (*Result, error) {
 	if why := linearUsable(m, t); why != "" {
-		return nil, fmt.Errorf("sim: conditional-qmc cannot be used: %s", why)
+		return nil, unsuitedf("sim: conditional-qmc cannot be used: %s", why)
 	}
 	idx := m.Linear.Index
 	dj := m.Vars[idx].Dist
@@ -77,7 +77,7 @@ func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc b
 	R := s.Replicates
 	perRep := s.Samples / int64(R)
 	if perRep < 1 {
-		return nil, fmt.Errorf("sim: conditional-qmc needs at least %d samples (one per replicate), got %d", R, s.Samples)
+		return nil, unsuitedf("sim: conditional-qmc needs at least %d samples (one per replicate), got %d", R, s.Samples)
 	}
 	// Points per replicate: powers of two, from qmcChunk (or less when the
 	// budget is small) up to the largest that fits the budget.

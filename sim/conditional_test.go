@@ -2,6 +2,7 @@ package sim
 
 import (
 	"context"
+	"errors"
 	"math"
 	"testing"
 )
@@ -115,17 +116,35 @@ func TestConditionalQMCTargetCoV(t *testing.T) {
 	}
 }
 
+// TestConditionalQMCRefuses: a model or budget that conditional QMC
+// cannot serve is refused with an error matching ErrUnsuited, so that a
+// caller can tell the user to choose another method.
 func TestConditionalQMCRefuses(t *testing.T) {
 	t.Parallel()
-	m := caseB()
-	m.Corr = []Correlation{{A: "R", B: "S", Rho: 0.2}}
-	if _, err := Run(context.Background(), m, &Settings{Method: ConditionalQMC}); err == nil {
-		t.Error("correlated linear input accepted")
+	correlated := caseB()
+	correlated.Corr = []Correlation{{A: "R", B: "S", Rho: 0.2}}
+	noLinear := caseB()
+	noLinear.Linear = nil
+	for _, c := range []struct {
+		name    string
+		m       *Model
+		samples int64
+	}{
+		{"correlated linear input", correlated, 0},
+		{"model without Linear", noLinear, 0},
+		{"fewer samples than the 16 replicates", caseB(), 15},
+	} {
+		_, err := Run(context.Background(), c.m, &Settings{Method: ConditionalQMC, Samples: c.samples})
+		if err == nil {
+			t.Errorf("%s: accepted", c.name)
+			continue
+		}
+		if !errors.Is(err, ErrUnsuited) {
+			t.Errorf("%s: error %q does not match ErrUnsuited", c.name, err)
+		}
 	}
-	m = caseB()
-	m.Linear = nil
-	if _, err := Run(context.Background(), m, &Settings{Method: ConditionalQMC}); err == nil {
-		t.Error("model without Linear accepted")
+	if _, err := Run(context.Background(), caseB(), &Settings{Method: ConditionalQMC, Samples: 16, AuxSamples: -1}); err != nil {
+		t.Errorf("16 samples, one per replicate: %v", err)
 	}
 }
 

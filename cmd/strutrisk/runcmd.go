@@ -3,6 +3,7 @@ package main
 import (
 	"context"
 	"encoding/json"
+	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -141,6 +142,10 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		}
 	}
 	bar.done()
+	if errors.Is(err, sim.ErrUnsuited) {
+		fmt.Fprintf(stderr, "strutrisk: %s: %v: choose another --method (auto picks one that fits)\n", st.File, err)
+		return exitInput
+	}
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", st.File, err)
 		return exitInternal
