@@ -261,8 +261,9 @@ func (r *results) bundle() *report.Bundle {
 }
 
 // slendernessChart is the capacity ratio against relative slenderness:
-// the study's model and Euler's curve, the nominal member and a cloud of
-// sampled members.
+// the study's model, the closed-form models it is compared with (see
+// study.ReferenceCurves) and Euler's curve, the nominal member and a cloud
+// of sampled members.
 func (r *results) slendernessChart() *report.SlendernessChart {
 	md := r.l.md
 	lam, ratio := md.CurveChart(60, 3)
@@ -275,6 +276,9 @@ func (r *results) slendernessChart() *report.SlendernessChart {
 		l := 3 * float64(i) / 60
 		ex = append(ex, l)
 		ey = append(ey, math.Min(1, 1/(l*l))) // Euler: N/(A fy) = 1/lam^2, capped by the squash load
+	}
+	for _, rc := range md.ReferenceCurves(60, 3) {
+		c.Curves = append(c.Curves, report.Curve{Name: rc.Name, X: rc.X, Y: rc.Y})
 	}
 	c.Curves = append(c.Curves, report.Curve{Name: "Euler", X: ex, Y: ey})
 	n := r.l.nom
