@@ -59,8 +59,14 @@ func (f *figure) render(format string) (out []byte, err error) {
 	return buf.Bytes(), nil
 }
 
-// draw lays the panels out in one row on dc, each in its own tile.
+// figureMargin is the white border kept round every picture, so that no
+// label or legend touches the edge of the image.
+const figureMargin = 4 * vg.Millimeter / 2
+
+// draw lays the panels out in one row on dc, each in its own tile, inside
+// a small white margin.
 func (f *figure) draw(dc draw.Canvas) {
+	dc = draw.Crop(dc, figureMargin, -figureMargin, figureMargin, -figureMargin)
 	if len(f.Plots) == 1 {
 		f.Plots[0].Draw(dc)
 		return

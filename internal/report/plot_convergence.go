@@ -11,7 +11,9 @@ import (
 // decadeTicks marks a logarithmic axis of counts: powers of ten labelled in
 // digits grouped by thousands (1e7 and beyond as 1e7, 1e8...), unlabelled
 // minor ticks at 2..9 times each power, and, when the axis spans less than
-// two decades, labels at 2 and 5 times each power as well.
+// two decades, labels at 2 and 5 times each power as well (at every
+// multiple when it spans less than a factor of 5, so that a short run
+// still has more than one label).
 type decadeTicks struct{}
 
 // Ticks implements plot.Ticker. min and max must be positive.
@@ -19,7 +21,7 @@ func (decadeTicks) Ticks(min, max float64) []plot.Tick {
 	if !(min > 0) || !(max > min) || !finite(min) || !finite(max) {
 		return nil
 	}
-	short := max/min < 100
+	short, narrow := max/min < 100, max/min < 5
 	var ticks []plot.Tick
 	for e := int(math.Floor(math.Log10(min))); e <= int(math.Ceil(math.Log10(max))); e++ {
 		p := math.Pow10(e)
@@ -29,7 +31,7 @@ func (decadeTicks) Ticks(min, max float64) []plot.Tick {
 				continue
 			}
 			t := plot.Tick{Value: v}
-			if k == 1 || (short && (k == 2 || k == 5)) {
+			if k == 1 || (short && (k == 2 || k == 5)) || narrow {
 				t.Label = countLabel(v)
 			}
 			ticks = append(ticks, t)

@@ -111,6 +111,7 @@ func capacityDemandFigure(b *Bundle) *figure {
 	if drawn == 0 {
 		return nil
 	}
+	p.Y.Max *= 1.05 // headroom: the tallest bar does not touch the title
 	if nc := b.NominalCapacity * 1e-3; nc > 0 && finite(nc) {
 		ln, err := plotter.NewLine(plotter.XYs{{X: nc, Y: 0}, {X: nc, Y: p.Y.Max}})
 		if err == nil {

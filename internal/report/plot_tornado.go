@@ -200,7 +200,12 @@ func tornadoChart(b *Bundle, all []Tornado, base, scale float64, xlabel, title, 
 			unit = " " + u
 		}
 	}
-	p.Legend.Add(baseLegend+sig(base, 3)+unit, bl)
+	// Three significant digits, but whole units kept: 1047 kN, not 1050.
+	digits := 3
+	if a := math.Abs(base); a >= 1000 && a < 1e7 {
+		digits = int(math.Floor(math.Log10(a))) + 1
+	}
+	p.Legend.Add(baseLegend+sig(base, digits)+unit, bl)
 	p.Legend.Top = false
 	h := 4.5*vg.Centimeter + vg.Length(len(rows))*0.85*vg.Centimeter
 	return &figure{W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}

@@ -43,6 +43,7 @@ func TestDecadeTicks(t *testing.T) {
 		{100, 1e6, "100 1 000 10 000 100 000 1 000 000"},
 		{3000, 20000, "5 000 10 000 20 000"},
 		{1e6, 1e8, "1 000 000 1e7 1e8"},
+		{13000, 34000, "20 000 30 000"}, // a short run: every multiple
 	} {
 		var got []string
 		for _, tk := range (decadeTicks{}).Ticks(c.min, c.max) {
