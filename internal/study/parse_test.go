@@ -306,6 +306,20 @@ formats = [
 	}
 }
 
+// TestMisspeltKeyOneProblem: a misspelt required key is one problem, the
+// unknown key with its suggestion, not also the missing one.
+func TestMisspeltKeyOneProblem(t *testing.T) {
+	_, err := Parse("t.toml", []byte(strings.Replace(base, "yield = 355", "yeild = 355", 1)))
+	e, ok := err.(*Error)
+	if !ok || len(e.Problems) != 1 {
+		t.Fatalf("Parse: %v; want one problem", err)
+	}
+	want := "t.toml:10: material.yeild: unknown key in [material]; did you mean material.yield?"
+	if got := e.Problems[0].String(); got != want {
+		t.Errorf("problem %q, want %q", got, want)
+	}
+}
+
 func TestNearest(t *testing.T) {
 	for _, c := range []struct {
 		s    string

@@ -137,7 +137,7 @@ func Parse(name string, data []byte) (*Study, error) {
 	p := newParser(name, data)
 	st := p.parse()
 	if len(p.probs) > 0 {
-		return nil, &Error{Problems: p.probs}
+		return nil, &Error{Problems: withoutMissingMisspelt(p.probs)}
 	}
 	st.File = name
 	st.SHA256 = hex.EncodeToString(sum[:])
