@@ -340,7 +340,7 @@ func (w *bcWork) firstYield() (float64, string) {
 		}
 		return w.wel*(w.fy-n/w.area)/q - n
 	}
-	n := bcBrent(u, 0, ny, u(0), -ny, 1e-13*ny)
+	n := brent(u, 0, ny, u(0), -ny, 1e-13*ny)
 	return n, GovernsFirstYield
 }
 
@@ -403,71 +403,4 @@ func (w *bcWork) widest() int {
 		}
 	}
 	return at
-}
-
-// bcBrent finds a root of f in [a, b] with f(a) = fa and f(b) = fb of
-// opposite signs, to the absolute tolerance tol (Brent, Algorithms for
-// Minimization without Derivatives, 1973, ch. 4, procedure zero).
-func bcBrent(f func(float64) float64, a, b, fa, fb, tol float64) float64 {
-	if fa == 0 {
-		return a
-	}
-	if fb == 0 {
-		return b
-	}
-	c, fc := a, fa
-	d := b - a
-	e := d
-	for range 200 {
-		if (fb > 0) == (fc > 0) {
-			c, fc = a, fa
-			d = b - a
-			e = d
-		}
-		if math.Abs(fc) < math.Abs(fb) {
-			a, b, c = b, c, b
-			fa, fb, fc = fb, fc, fb
-		}
-		t := 2*2.220446049250313e-16*math.Abs(b) + 0.5*tol
-		mid := 0.5 * (c - b)
-		if math.Abs(mid) <= t || fb == 0 {
-			return b
-		}
-		if math.Abs(e) >= t && math.Abs(fa) > math.Abs(fb) {
-			s := fb / fa
-			var p, q float64
-			if a == c {
-				p = 2 * mid * s
-				q = 1 - s
-			} else {
-				q0 := fa / fc
-				r := fb / fc
-				p = s * (2*mid*q0*(q0-r) - (b-a)*(r-1))
-				q = (q0 - 1) * (r - 1) * (s - 1)
-			}
-			if p > 0 {
-				q = -q
-			} else {
-				p = -p
-			}
-			if 2*p < math.Min(3*mid*q-math.Abs(t*q), math.Abs(e*q)) {
-				e = d
-				d = p / q
-			} else {
-				d = mid
-				e = d
-			}
-		} else {
-			d = mid
-			e = d
-		}
-		a, fa = b, fb
-		if math.Abs(d) > t {
-			b += d
-		} else {
-			b += math.Copysign(t, mid)
-		}
-		fb = f(b)
-	}
-	return b
 }
