@@ -78,13 +78,13 @@ func rareDefaults(s *Settings) Settings {
 		c = *s
 	}
 	if c.Samples <= 0 {
-		c.Samples = 1_000_000
+		c.Samples = DefaultSamples
 	}
 	if c.Workers <= 0 {
 		c.Workers = runtime.NumCPU()
 	}
 	if c.Confidence <= 0 || c.Confidence >= 1 {
-		c.Confidence = 0.95
+		c.Confidence = DefaultConfidence
 	}
 	return c
 }
