@@ -56,7 +56,7 @@ func (md *Model) Reserve(target float64, fs *sim.FORMSettings) (*Reserve, error)
 	r.Factor, r.FactorBeta, calls, err = md.FactorFor(target, fs)
 	r.FORMCalls += calls
 	if err != nil {
-		return nil, fmt.Errorf("reserve factor: %v", err)
+		return nil, err // the caller says it is the reserve factor that failed
 	}
 	r.Added, calls, err = md.AddedFor(target, fs)
 	r.FORMCalls += calls
