@@ -6,6 +6,7 @@ import (
 	"strings"
 
 	"strutrisk/internal/report"
+	"strutrisk/sim"
 )
 
 // writeOutputs writes the report files of b into dir, atomically.
@@ -22,10 +23,20 @@ func (r *results) summary(dir string, files []string) string {
 	n := r.l.nom
 	fmt.Fprintf(&w, "  nominal capacity   %.1f kN (%s axis, %s), demand at mean loads %.1f kN, utilisation %.2f\n",
 		n.Capacity/1e3, n.Axis, n.Governs, n.Demand/1e3, n.Utilisation)
-	fmt.Fprintf(&w, "  failure prob. pf   %s   95 %% interval [%s, %s]\n", pfText(res.Pf), pfText(res.PfCI[0]), pfText(res.PfCI[1]))
-	fmt.Fprintf(&w, "  reliability beta   %s   95 %% interval [%s, %s]\n", betaText(res.Beta), betaText(res.BetaCI[0]), betaText(res.BetaCI[1]))
+	if res.Method == sim.FORMMethod {
+		// A first-order approximation: no sampling, so no interval.
+		fmt.Fprintf(&w, "  failure prob. pf   %s   (first-order approximation: no sampling interval)\n", pfText(res.Pf))
+		fmt.Fprintf(&w, "  reliability beta   %s\n", betaText(res.Beta))
+	} else {
+		fmt.Fprintf(&w, "  failure prob. pf   %s   95 %% interval [%s, %s]\n", pfText(res.Pf), pfText(res.PfCI[0]), pfText(res.PfCI[1]))
+		fmt.Fprintf(&w, "  reliability beta   %s   95 %% interval [%s, %s]\n", betaText(res.Beta), betaText(res.BetaCI[0]), betaText(res.BetaCI[1]))
+	}
 	w.WriteString(r.targetSummary(d))
-	fmt.Fprintf(&w, "  method             %s, %d evaluations, cov of pf %.3f\n", res.Method, res.Evaluations, res.PfCoV)
+	if res.Method == sim.FORMMethod {
+		fmt.Fprintf(&w, "  method             %s, %d evaluations\n", res.Method, res.Evaluations)
+	} else {
+		fmt.Fprintf(&w, "  method             %s, %d evaluations, cov of pf %.3f\n", res.Method, res.Evaluations, res.PfCoV)
+	}
 	if res.Reason != "" {
 		fmt.Fprintf(&w, "                     (%s)\n", res.Reason)
 	}

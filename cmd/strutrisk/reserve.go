@@ -217,7 +217,7 @@ func (r *results) targetSummary(d *report.Document) string {
 			on = "all loads"
 		}
 		s += fmt.Sprintf("  reserve factor     %.3f on the %s (FORM beta %.2f there)\n", *d.ReserveFactor, on, *t.ReserveFORMBeta)
-		if c := t.Confirmation; c != nil {
+		if c := t.Confirmation; c != nil && c.Method != string(sim.FORMMethod) {
 			s += fmt.Sprintf("                     confirmed by %s: beta %s, 95 %% interval [%s, %s], %d evaluations\n",
 				c.Method, betaText(c.Beta), betaText(c.BetaCI[0]), betaText(c.BetaCI[1]), c.Evaluations)
 		}
