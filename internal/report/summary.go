@@ -32,17 +32,17 @@ func SummaryText(b *Bundle) string {
 	}
 	if d.Pf != nil {
 		s := prob(*d.Pf)
-		if len(d.PfCI) == 2 {
+		if len(d.PfCI) == 2 && sampled(&d) {
 			s += "  (95% interval " + intervalText(d.PfCI, prob) + ")"
 		}
-		if d.PfCoV != nil {
+		if d.PfCoV != nil && sampled(&d) {
 			s += ", CoV " + percent(*d.PfCoV)
 		}
 		line("probability of failure", "%s", s)
 	}
 	if d.Beta != nil {
 		s := f2(*d.Beta)
-		if len(d.BetaCI) == 2 {
+		if len(d.BetaCI) == 2 && sampled(&d) {
 			s += "  (95% interval " + intervalText(d.BetaCI, f2) + ")"
 		}
 		line("reliability index beta", "%s", s)

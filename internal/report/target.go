@@ -118,7 +118,7 @@ func targetRows(d *Document) []KV {
 		if t.ReserveFORMFactor != nil {
 			rows = append(rows, KV{"reserve factor by FORM alone", f2(*t.ReserveFORMFactor)})
 		}
-		if c := t.Confirmation; c != nil {
+		if c := t.Confirmation; c != nil && c.Method != "form" {
 			rows = append(rows, KV{"confirmed by " + c.Method, "β " + f2(c.Beta) + " (95% interval " + intervalText(c.BetaCI[:], f2) + "), " + thousands(c.Evaluations) + " evaluations"})
 		}
 	}

@@ -97,16 +97,19 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	f2 := func(x float64) string { return fixed(x, 2) }
 	if d.Pf != nil {
 		v.Result = append(v.Result, KV{"probability of failure pf", prob(*d.Pf)})
-		if len(d.PfCI) == 2 {
+		if !sampled(&d) {
+			v.Result = append(v.Result, KV{"95% interval of pf", "none: FORM is a first-order approximation, not a sample"})
+		}
+		if len(d.PfCI) == 2 && sampled(&d) {
 			v.Result = append(v.Result, KV{"95% interval of pf", intervalText(d.PfCI, prob)})
 		}
-		if d.PfCoV != nil {
+		if d.PfCoV != nil && sampled(&d) {
 			v.Result = append(v.Result, KV{"coefficient of variation of the estimate", percent(*d.PfCoV)})
 		}
 	}
 	if d.Beta != nil {
 		v.Result = append(v.Result, KV{"reliability index β", f2(*d.Beta)})
-		if len(d.BetaCI) == 2 {
+		if len(d.BetaCI) == 2 && sampled(&d) {
 			v.Result = append(v.Result, KV{"95% interval of β", intervalText(d.BetaCI, f2)})
 		}
 	}
