@@ -235,7 +235,8 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 		for _, l := range c.lam {
 			showLam = showLam || math.Abs(l-c.lam[0]) > 1e-3
 		}
-		fmt.Fprintf(&w, "    %-12s", "value")
+		fmt.Fprintf(&w, "    %12s", "value")
+		dec := sweepDecimals(c.values)
 		if showLam {
 			fmt.Fprintf(&w, " %8s", "rel.sl.")
 		}
@@ -248,7 +249,7 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 		}
 		w.WriteString("\n")
 		for i, x := range c.values {
-			fmt.Fprintf(&w, "    %-12.5g", x)
+			fmt.Fprintf(&w, "    %12.*f", dec, x)
 			if showLam {
 				fmt.Fprintf(&w, " %8.3f", c.lam[i])
 			}
@@ -323,4 +324,16 @@ func casesCheckText(st *study.Study) string {
 		}
 	}
 	return b.String()
+}
+
+// sweepDecimals is the number of decimals that gives every swept value at
+// least five significant digits, at most six, so the column lines up.
+func sweepDecimals(values []float64) int {
+	dec := 0
+	for _, x := range values {
+		if a := math.Abs(x); a > 0 && !math.IsInf(a, 0) {
+			dec = max(dec, 4-int(math.Floor(math.Log10(a))))
+		}
+	}
+	return min(dec, 6)
 }
