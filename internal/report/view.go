@@ -79,7 +79,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		Check:       b.Check,
 		Defaults:    b.Defaults,
 		Diagnostics: b.Diagnostics,
-		Spearman:    b.Spearman,
+		Spearman:    byRankCorrelation(b.Spearman),
 		Warnings:    d.Warnings,
 		Notes:       notes,
 		Pictures:    map[string]pictureView{},
