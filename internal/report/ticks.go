@@ -3,12 +3,14 @@ package report
 import (
 	"math"
 	"strconv"
+	"strings"
 
 	"gonum.org/v1/plot"
 )
 
 // niceTicks marks a linear axis with about five major ticks at round steps
-// (1, 2, 2.5 or 5 times a power of ten), labelled without trailing zeros,
+// (1, 2, 2.5 or 5 times a power of ten), labelled without trailing zeros
+// and with the digits grouped by thousands as on the count axes (12 000),
 // and unlabelled minor ticks between them.
 type niceTicks struct {
 	// Format, if not nil, writes the label of a major tick.
@@ -59,7 +61,7 @@ func (t niceTicks) Ticks(min, max float64) []plot.Tick {
 			if math.Abs(v) < step*1e-9 {
 				v = 0
 			}
-			label := trimZeros(strconv.FormatFloat(v, 'f', dec, 64))
+			label := groupThousands(trimZeros(strconv.FormatFloat(v, 'f', dec, 64)))
 			if t.Format != nil {
 				label = t.Format(v)
 			}
@@ -69,4 +71,24 @@ func (t niceTicks) Ticks(min, max float64) []plot.Tick {
 		}
 	}
 	return ticks
+}
+
+// groupThousands puts a space between groups of three digits in the whole
+// part of a decimal number written by strconv, as thousands does for an
+// integer: "12000" becomes "12 000", "-1500.5" becomes "-1 500.5".
+func groupThousands(s string) string {
+	whole, frac, hasFrac := strings.Cut(s, ".")
+	sign := ""
+	if strings.HasPrefix(whole, "-") {
+		sign, whole = "-", whole[1:]
+	}
+	n, err := strconv.ParseInt(whole, 10, 64)
+	if err != nil {
+		return s
+	}
+	out := sign + thousands(n)
+	if hasFrac {
+		out += "." + frac
+	}
+	return out
 }
