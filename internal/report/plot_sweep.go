@@ -11,6 +11,10 @@ import (
 	"strutrisk/sim"
 )
 
+// bandLegend names the interval bands of the sweep picture.
+// The second line has no swatch: gonum's legend writes one line an entry.
+var bandLegend = [2]string{"95% interval band", "(narrower than the line where not visible)"}
+
 // sweepFigure draws, for each series (variant), the reliability index
 // against the swept parameter with its interval as a band, and next to it
 // the failure probability on a logarithmic axis.
@@ -26,7 +30,14 @@ func sweepFigure(b *Bundle) *figure {
 	pp := newPlot("Probability of failure", xlabel, "probability of failure pf (log scale)")
 	addGrid(pb, false)
 	addGrid(pp, false)
-	drawn := 0
+	drawn, bands := 0, 0
+	// The β panel's legend entries, added at the end: the curves are named
+	// there only when the pf panel, in the same colours, is not drawn.
+	type entry struct {
+		name   string
+		thumbs []plot.Thumbnailer
+	}
+	var curves, marks []entry
 	pfMin, pfMax := math.Inf(1), math.Inf(-1)
 	xmin, xmax := math.Inf(1), math.Inf(-1)
 	for i, s := range b.Series {
@@ -64,6 +75,7 @@ func sweepFigure(b *Bundle) *figure {
 				pg.Color = faded(c, 0x30)
 				pg.LineStyle.Width = 0
 				pb.Add(pg)
+				bands++
 			}
 		}
 		if len(beta) > 0 {
@@ -72,7 +84,7 @@ func sweepFigure(b *Bundle) *figure {
 				ln.LineStyle = lineStyle(c, 1.5, false)
 				sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: vg.Points(2.2), Shape: draw.CircleGlyph{}}
 				pb.Add(ln, sc)
-				pb.Legend.Add(name, ln, sc)
+				curves = append(curves, entry{name, []plot.Thumbnailer{ln, sc}})
 				drawn++
 			}
 		}
@@ -99,7 +111,7 @@ func sweepFigure(b *Bundle) *figure {
 		if ln, err := plotter.NewLine(plotter.XYs{{X: xmin, Y: t}, {X: xmax, Y: t}}); err == nil {
 			ln.LineStyle = lineStyle(colFailure, 1, true)
 			pb.Add(ln)
-			pb.Legend.Add("target β = "+fixed(t, 2), ln)
+			marks = append(marks, entry{"target β = " + fixed(t, 2), []plot.Thumbnailer{ln}})
 		}
 		if pt := sim.PfFromBeta(t); pt > 0 && finite(pfMin) {
 			if ln, err := plotter.NewLine(plotter.XYs{{X: xmin, Y: math.Log10(pt)}, {X: xmax, Y: math.Log10(pt)}}); err == nil {
@@ -110,10 +122,25 @@ func sweepFigure(b *Bundle) *figure {
 			}
 		}
 	}
-	// Headroom above the curves for the legend.
+	if bands > 0 {
+		// One entry for every band: a band of a precise estimate is
+		// narrower than its line, and no wider than it is drawn.
+		sw, err := plotter.NewPolygon(plotter.XYs{{X: 0, Y: 0}, {X: 1, Y: 0}, {X: 1, Y: 1}})
+		if err == nil {
+			sw.Color = faded(colSafe, 0x50)
+			sw.LineStyle.Width = 0
+			marks = append(marks, entry{bandLegend[0], []plot.Thumbnailer{sw}}, entry{bandLegend[1], nil})
+		}
+	}
+	// Headroom above the curves for the legend: less when the curves are
+	// named in the pf panel and the β legend is short.
 	if lo, hi := pb.Y.Min, pb.Y.Max; finite(lo) && finite(hi) {
 		span := math.Max(hi-lo, 0.5)
-		pb.Y.Max = hi + 0.45*span
+		room := 0.45
+		if finite(pfMin) && pfMin > 0 && len(marks) <= 3 {
+			room = 0.3
+		}
+		pb.Y.Max = hi + room*span
 	}
 	plots := []*plot.Plot{pb}
 	if finite(pfMin) && pfMin > 0 {
@@ -126,9 +153,19 @@ func sweepFigure(b *Bundle) *figure {
 		}
 		plots = append(plots, pp)
 	}
+	if len(plots) == 1 {
+		marks = append(curves, marks...)
+	}
+	for _, e := range marks {
+		pb.Legend.Add(e.name, e.thumbs...)
+	}
 	w := 16 * vg.Centimeter
 	if len(plots) == 2 {
 		w = 24 * vg.Centimeter
 	}
-	return &figure{Name: "sweep", Caption: "Reliability index (band: its 95% interval) and probability of failure against " + xlabel + ", one curve per variant; dashed: the target.", W: w, H: 9 * vg.Centimeter, Plots: plots}
+	caption := "Reliability index β (dimensionless) and probability of failure pf (dimensionless, log scale) against " + xlabel + ", one curve per variant (named in the legend of the pf panel when both are drawn); dashed: the target."
+	if bands > 0 {
+		caption += " The shaded band round each β curve is its 95% interval, drawn to scale: where it is narrower than the line it is hidden behind it."
+	}
+	return &figure{Name: "sweep", Caption: caption, W: w, H: 9 * vg.Centimeter, Plots: plots}
 }
