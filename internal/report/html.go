@@ -65,7 +65,7 @@ code{font-size:.9em}
 <section id="inputs">
 <h2>Inputs</h2>
 {{if .Inputs}}<table>
-<tr><th>input</th><th>distribution</th><th>parameters</th><th>mean</th><th>CoV</th><th>unit</th></tr>
+<tr><th>input</th><th>distribution</th><th>parameters</th><th>mean</th><th>CoV (–)</th><th>unit of the mean</th></tr>
 {{range .Inputs}}<tr><td>{{.Name}}</td><td>{{.Dist}}</td><td>{{.Params}}</td><td class="n">{{.Mean}}</td><td class="n">{{.CoV}}</td><td>{{.Unit}}</td></tr>
 {{end}}</table>{{else}}<p>The inputs were not given to the report.</p>{{end}}
 {{if .Defaults}}<h3>Defaults that applied</h3><ul>{{range .Defaults}}<li>{{.}}</li>{{end}}</ul>{{end}}
@@ -86,24 +86,24 @@ code{font-size:.9em}
 {{if .Tornado}}<h3 id="tornado">One at a time (tornado): {{.TornadoOutput}}</h3>
 <p>All inputs at their medians give {{.TornadoBase}}.</p>
 {{with .Picture "tornado"}}{{template "fig" .}}{{end}}
-<table><tr><th>input</th><th>low value</th><th>high value</th><th>result at low{{.TornadoUnit}}</th><th>result at high{{.TornadoUnit}}</th><th>swing{{.TornadoUnit}}</th>{{if .TornadoBeta}}<th>β at low</th><th>β at high</th>{{end}}</tr>
+<table><tr><th>input</th><th>low value</th><th>high value</th><th>result at low{{.TornadoUnit}}</th><th>result at high{{.TornadoUnit}}</th><th>swing{{.TornadoUnit}}</th>{{if .TornadoBeta}}<th>β at low (–)</th><th>β at high (–)</th>{{end}}</tr>
 {{range .Tornado}}<tr><td>{{.Variable}}</td><td class="n">{{.LowValue}}</td><td class="n">{{.HighValue}}</td><td class="n">{{.Low}}</td><td class="n">{{.High}}</td><td class="n">{{.Swing}}</td>{{if $.TornadoBeta}}<td class="n">{{.LowBeta}}</td><td class="n">{{.HighBeta}}</td>{{end}}</tr>
 {{end}}</table>
 {{with .Picture "tornado-beta"}}{{template "fig" .}}{{end}}{{end}}
 {{if .Sobol}}<h3 id="sobol">Variance-based (Sobol) indices of {{if .SobolOutput}}{{.SobolOutput}}{{else}}the output{{end}}</h3>
 {{if .SobolNote}}<p>{{.SobolNote}}</p>{{end}}
 {{with .Picture "sobol"}}{{template "fig" .}}{{end}}
-<table><tr><th>input</th><th>first order</th><th>95% interval</th><th>total</th><th>95% interval</th></tr>
+<table><tr><th>input</th><th>first order (–)</th><th>95% interval (–)</th><th>total (–)</th><th>95% interval (–)</th></tr>
 {{range .Sobol}}<tr><td>{{.Variable}}</td><td class="n">{{.First}}</td><td class="n">{{.FirstCI}}</td><td class="n">{{.Total}}</td><td class="n">{{.TotalCI}}</td></tr>
 {{end}}</table>{{end}}
 <div class="side">
 {{if .FORM}}<div id="form"><h3>FORM design point and importance</h3>
 <p>β = {{.FORMBeta}}, pf = {{.FORMPf}}</p>
-<table><tr><th>input</th><th>design point</th><th>importance α²</th></tr>
+<table><tr><th>input</th><th>design point</th><th>importance α² (–)</th></tr>
 {{range .FORM}}<tr><td>{{.Variable}}</td><td class="n">{{.DesignPoint}}</td><td class="n">{{.Importance}}</td></tr>
 {{end}}</table></div>{{end}}
 {{if .Spearman}}<div id="spearman"><h3>Rank correlation with the margin</h3>
-<table><tr><th>input</th><th>Spearman ρ</th></tr>
+<table><tr><th>input</th><th>Spearman ρ (–)</th></tr>
 {{range .Spearman}}<tr><td>{{.Key}}</td><td class="n">{{.Value}}</td></tr>
 {{end}}</table></div>{{end}}
 </div>
@@ -113,20 +113,21 @@ code{font-size:.9em}
 {{if or .Sweep .Variants (.Picture "sweep")}}<section id="sweep">
 <h2>Sweep and variants</h2>
 {{with .Picture "sweep"}}{{template "fig" .}}{{end}}
-{{if .Sweep}}<table><tr><th>{{if .SweepLabel}}{{.SweepLabel}}{{else}}value{{end}}</th><th>pf</th><th>95% interval</th><th>β</th></tr>
+{{with .Picture "variants"}}{{template "fig" .}}{{end}}
+{{if .Sweep}}<table><tr><th>{{if .SweepLabel}}{{.SweepLabel}}{{else}}value{{end}}</th><th>pf (–)</th><th>95% interval of pf (–)</th><th>β (–)</th></tr>
 {{range .Sweep}}<tr><td class="n">{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td></tr>
 {{end}}</table>{{end}}
-{{if .Variants}}<table><tr><th>variant</th><th>pf</th><th>95% interval</th><th>β</th></tr>
+{{if .Variants}}<table><tr><th>variant</th><th>pf (–)</th><th>95% interval of pf (–)</th><th>β (–)</th></tr>
 {{range .Variants}}<tr><td>{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td></tr>
 {{end}}</table>{{end}}
 </section>{{end}}
 
 {{if .Updates}}<section id="updates">
 <h2>Updating from measurements</h2>
-<table><tr><th>input</th><th>prior</th><th>updated</th><th>measurements</th></tr>
+<table><tr><th>input</th><th>prior</th><th>updated</th><th>number of measurements</th></tr>
 {{range .Updates}}<tr><td>{{.Variable}}</td><td>{{.Prior}}</td><td>{{.After}}</td><td class="n">{{.N}}</td></tr>
 {{end}}</table>
-{{if .Measured}}<table><tr><th>input</th><th>n</th><th>spread</th><th>prior mean</th><th>prior CoV</th><th>prior 5% fractile</th><th>updated mean</th><th>updated CoV</th><th>updated 5% fractile</th></tr>
+{{if .Measured}}<table><tr><th>input</th><th>n</th><th>spread</th><th>prior mean</th><th>prior CoV (–)</th><th>prior 5% fractile</th><th>updated mean</th><th>updated CoV (–)</th><th>updated 5% fractile</th></tr>
 {{range .Measured}}<tr><td>{{.Variable}}</td><td class="n">{{.N}}</td><td>{{.Variance}}</td><td class="n">{{.PriorMean}}</td><td class="n">{{.PriorCoV}}</td><td class="n">{{.PriorP05}}</td><td class="n">{{.Mean}}</td><td class="n">{{.CoV}}</td><td class="n">{{.P05}}</td></tr>
 {{end}}</table>
 <p class="muted">The updated 5% fractile is that of the predictive distribution, the characteristic value of EN 1990 Annex D (D.7). With an unknown variance the predictive is a log-Student-t, which has no finite mean: its mean and CoV here are those of the lognormal with the same log-mean and log-scale.</p>{{end}}

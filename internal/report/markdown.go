@@ -46,7 +46,7 @@ func Markdown(b *Bundle) string {
 	for i, in := range v.Inputs {
 		rows[i] = []string{in.Name, in.Dist, in.Params, in.Mean, in.CoV, in.Unit}
 	}
-	mdTable(&w, []string{"input", "distribution", "parameters", "mean", "CoV", "unit"}, rows)
+	mdTable(&w, []string{"input", "distribution", "parameters", "mean", "CoV (–)", "unit of the mean"}, rows)
 	if len(v.Defaults) > 0 {
 		w.WriteString("Defaults that applied:\n\n")
 		for _, s := range v.Defaults {
@@ -69,7 +69,7 @@ func Markdown(b *Bundle) string {
 		rows = rows[:0]
 		head := []string{"input", "low value", "high value", "result at low" + v.TornadoUnit, "result at high" + v.TornadoUnit, "swing" + v.TornadoUnit}
 		if v.TornadoBeta {
-			head = append(head, "β at low", "β at high")
+			head = append(head, "β at low (–)", "β at high (–)")
 		}
 		for _, t := range v.Tornado {
 			r := []string{t.Variable, t.LowValue, t.HighValue, t.Low, t.High, t.Swing}
@@ -93,7 +93,7 @@ func Markdown(b *Bundle) string {
 		for _, s := range v.Sobol {
 			rows = append(rows, []string{s.Variable, s.First, s.FirstCI, s.Total, s.TotalCI})
 		}
-		mdTable(&w, []string{"input", "first order", "95% interval", "total", "95% interval"}, rows)
+		mdTable(&w, []string{"input", "first order (–)", "95% interval (–)", "total (–)", "95% interval (–)"}, rows)
 	}
 	if len(v.FORM) > 0 {
 		fmt.Fprintf(&w, "### FORM design point and importance\n\nβ = %s, pf = %s\n\n", v.FORMBeta, v.FORMPf)
@@ -101,7 +101,7 @@ func Markdown(b *Bundle) string {
 		for _, f := range v.FORM {
 			rows = append(rows, []string{f.Variable, f.DesignPoint, f.Importance})
 		}
-		mdTable(&w, []string{"input", "design point", "importance α²"}, rows)
+		mdTable(&w, []string{"input", "design point", "importance α² (–)"}, rows)
 	}
 	if len(v.Spearman) > 0 {
 		w.WriteString("### Rank correlation with the margin\n\n")
@@ -109,7 +109,7 @@ func Markdown(b *Bundle) string {
 		for _, s := range v.Spearman {
 			rows = append(rows, []string{s.Key, s.Value})
 		}
-		mdTable(&w, []string{"input", "Spearman ρ"}, rows)
+		mdTable(&w, []string{"input", "Spearman ρ (–)"}, rows)
 	}
 
 	if len(v.Sweep) > 0 || len(v.Variants) > 0 {
@@ -129,7 +129,7 @@ func Markdown(b *Bundle) string {
 			for _, p := range t.pts {
 				rows = append(rows, []string{p.Name, p.Pf, p.PfCI, p.Beta})
 			}
-			mdTable(&w, []string{t.head, "pf", "95% interval", "β"}, rows)
+			mdTable(&w, []string{t.head, "pf (–)", "95% interval of pf (–)", "β (–)"}, rows)
 		}
 	}
 	if len(v.Updates) > 0 {
@@ -138,13 +138,13 @@ func Markdown(b *Bundle) string {
 		for _, u := range v.Updates {
 			rows = append(rows, []string{u.Variable, u.Prior, u.After, u.N})
 		}
-		mdTable(&w, []string{"input", "prior", "updated", "measurements"}, rows)
+		mdTable(&w, []string{"input", "prior", "updated", "number of measurements"}, rows)
 		rows = rows[:0]
 		for _, m := range v.Measured {
 			rows = append(rows, []string{m.Variable, m.N, m.Variance, m.PriorMean, m.PriorCoV, m.PriorP05, m.Mean, m.CoV, m.P05})
 		}
 		if len(rows) > 0 {
-			mdTable(&w, []string{"input", "n", "spread", "prior mean", "prior CoV", "prior 5%", "updated mean", "updated CoV", "updated 5%"}, rows)
+			mdTable(&w, []string{"input", "n", "spread", "prior mean", "prior CoV (–)", "prior 5%", "updated mean", "updated CoV (–)", "updated 5%"}, rows)
 		}
 	}
 

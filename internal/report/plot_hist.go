@@ -121,7 +121,7 @@ func capacityDemandFigure(b *Bundle) *figure {
 		}
 	}
 	p.Y.Min = 0
-	return &figure{Name: "capacity-demand", Caption: "Sampled capacity and demand (density histograms) with lognormal densities fitted by moments; the dashed line marks the nominal capacity.", W: 16 * vg.Centimeter, H: 9.5 * vg.Centimeter, Plots: []*plot.Plot{p}}
+	return &figure{Name: "capacity-demand", Caption: "Sampled capacity and demand as axial force in kN (density histograms, probability density in 1/kN) with lognormal densities fitted by moments; the dashed line marks the nominal capacity.", W: 16 * vg.Centimeter, H: 9.5 * vg.Centimeter, Plots: []*plot.Plot{p}}
 }
 
 // marginFigure draws the sampled margin g as a density histogram with the
@@ -184,5 +184,5 @@ func marginFigure(b *Bundle) *figure {
 		}
 	}
 	p.Y.Min = 0
-	return &figure{Name: "margin", Caption: "Sampled safety margin g = capacity − demand; failure is g < 0 (shaded). Values outside the histogram range are counted but not drawn.", W: 16 * vg.Centimeter, H: 9 * vg.Centimeter, Plots: []*plot.Plot{p}}
+	return &figure{Name: "margin", Caption: "Sampled safety margin g = capacity − demand in kN (probability density in 1/kN); failure is g < 0 (shaded). Values outside the histogram range are counted but not drawn.", W: 16 * vg.Centimeter, H: 9 * vg.Centimeter, Plots: []*plot.Plot{p}}
 }

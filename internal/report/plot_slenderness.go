@@ -79,5 +79,5 @@ func slendernessFigure(b *Bundle) *figure {
 		return nil
 	}
 	p.X.Min, p.Y.Min = 0, 0
-	return &figure{Name: "slenderness", Caption: "Capacity as a fraction of the squash load against relative slenderness: the deterministic curve of each capacity model, the sampled members (cloud) and the nominal member (cross).", W: 16 * vg.Centimeter, H: 10 * vg.Centimeter, Plots: []*plot.Plot{p}}
+	return &figure{Name: "slenderness", Caption: "Capacity as a fraction of the squash load, N/Ny, against relative slenderness λ (both dimensionless): the deterministic curve of each capacity model, the sampled members (cloud) and the nominal member (cross).", W: 16 * vg.Centimeter, H: 10 * vg.Centimeter, Plots: []*plot.Plot{p}}
 }

@@ -102,7 +102,7 @@ func sobolFigure(b *Bundle) *figure {
 		p.Legend.Add("total", total)
 	}
 	p.Legend.Top = false
-	caption := "First-order (own effect) and total (with interactions) Sobol indices of " + what + ", with bootstrap intervals as whiskers."
+	caption := "First-order (own effect) and total (with interactions) Sobol indices of " + what + " (shares of its variance, dimensionless), with bootstrap 95% intervals as whiskers."
 	if b.SobolNote != "" {
 		caption += " " + b.SobolNote
 	}

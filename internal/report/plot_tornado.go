@@ -50,7 +50,7 @@ func tornadoFigure(b *Bundle) *figure {
 	f := tornadoChart(b, d.Tornado, b.TornadoBase, scale, xlabel, "One-at-a-time sensitivity (tornado)", "all inputs at their medians: ")
 	if f != nil {
 		f.Name = "tornado"
-		f.Caption = "Each input in turn at its low and high fractile with the others at their medians; bars are the change of " + xlabel + " from the result with every input at its median, labelled with the input value."
+		f.Caption = "Each input in turn at its low and high fractile with the others at their medians; bars are the change of " + xlabel + " from the result with every input at its median, labelled with the input value in its unit."
 	}
 	return f
 }
@@ -70,7 +70,7 @@ func tornadoBetaFigure(b *Bundle) *figure {
 	f := tornadoChart(b, rows, d.FORM.Beta, 1, "reliability index β by FORM (–)", "Reliability index with one input fixed", "all inputs random: β = ")
 	if f != nil {
 		f.Name = "tornado-beta"
-		f.Caption = "FORM reliability index with each input in turn fixed at its low and high fractile (the others random), about the index of the whole study; labelled with the fixed value."
+		f.Caption = "FORM reliability index β (dimensionless) with each input in turn fixed at its low and high fractile (the others random), about the index of the whole study; labelled with the fixed value in its unit."
 	}
 	return f
 }

@@ -76,7 +76,7 @@ func updateFigure(u Update, k int) *figure {
 		}
 	}
 	p.Y.Min = 0
-	return &figure{Name: "update-" + strconv.Itoa(k+1), Caption: "Prior and updated (predictive) density of " + u.Variable + "; triangles mark the measurements.", W: 14 * vg.Centimeter, H: 8.5 * vg.Centimeter, Plots: []*plot.Plot{p}}
+	return &figure{Name: "update-" + strconv.Itoa(k+1), Caption: updateCaption(u.Variable, unit), W: 14 * vg.Centimeter, H: 8.5 * vg.Centimeter, Plots: []*plot.Plot{p}}
 }
 
 // traceFigure draws the beam-column load-deflection path and the deflected
@@ -130,5 +130,13 @@ func traceFigure(b *Bundle) *figure {
 	if len(plots) == 2 {
 		w = 22 * vg.Centimeter
 	}
-	return &figure{Name: "beam-column", Caption: "Numerical beam-column: axial load against lateral deflection up to the limit, and the deflected shape there (dashed: the straight axis).", W: w, H: 9 * vg.Centimeter, Plots: plots}
+	return &figure{Name: "beam-column", Caption: "Numerical beam-column: axial load in kN against lateral deflection at mid-height in mm up to the limit, and the deflected shape there, deflection in mm along the member in m (dashed: the straight axis).", W: w, H: 9 * vg.Centimeter, Plots: plots}
+}
+
+// updateCaption says what an updating picture shows, in which unit.
+func updateCaption(variable, unit string) string {
+	if unit == "" {
+		return "Prior and updated (predictive) probability density of " + variable + " (dimensionless); triangles mark the measurements."
+	}
+	return "Prior and updated (predictive) probability density of " + variable + " in " + unit + " (density in 1/" + unit + "); triangles mark the measurements."
 }

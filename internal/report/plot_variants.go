@@ -82,5 +82,5 @@ func variantsFigure(b *Bundle) *figure {
 	p.NominalY(names...)
 	p.Y.Tick.Label.Font.Size = 9
 	h := vg.Length(3.5+0.9*float64(n)) * vg.Centimeter
-	return &figure{Name: "variants", Caption: "Reliability index of the study and of each variant (bar: its 95% interval), all from the same random numbers; dashed: the target.", W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
+	return &figure{Name: "variants", Caption: "Reliability index β (dimensionless) of the study and of each variant (bar: its 95% interval), all from the same random numbers; dashed: the target.", W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
 }
