@@ -21,6 +21,13 @@ func TestVariantsFigure(t *testing.T) {
 	if _, err := f.render("svg"); err != nil {
 		t.Fatal(err)
 	}
+	html, err := HTML(b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(string(html), `<figure id="fig-variants">`) {
+		t.Error("the HTML does not show the variants picture")
+	}
 	b.Series = []Series{{Name: "study", Points: []Point{{Value: 1, Pf: 1e-3, Beta: 3.1, PfCI: [2]float64{9e-4, 1.1e-3}}}}}
 	if variantsFigure(b) != nil {
 		t.Error("variants drawn although the sweep draws them as curves")
