@@ -34,7 +34,7 @@ const reportHTML = `<!DOCTYPE html>
 body{font-family:"Liberation Sans",Arial,Helvetica,sans-serif;color:#222;max-width:60rem;margin:2rem auto;padding:0 1rem;line-height:1.45}
 h1{font-size:1.6rem;margin-bottom:.2rem}h2{font-size:1.25rem;border-bottom:1px solid #ccc;padding-bottom:.2rem;margin-top:2.2rem}h3{font-size:1.05rem;margin-top:1.5rem}
 table{border-collapse:collapse;margin:.6rem 0;font-size:.92rem}th,td{padding:.25rem .7rem;border-bottom:1px solid #e2e2e2;text-align:left;vertical-align:top}th{background:#f4f4f4}
-td.n{text-align:right;font-variant-numeric:tabular-nums}
+td.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}
 figure{margin:1.2rem 0}figure svg{width:100%;max-width:48rem;height:auto}#fig-sweep svg,#fig-beam-column svg{max-width:100%}figcaption{font-size:.88rem;color:#555}
 .verdict{font-weight:bold;padding:.4rem .7rem;display:inline-block;border-radius:3px}
 .met{background:#e3f1e7}.not-met{background:#f7e1de}.undecided{background:#fbf0d9}

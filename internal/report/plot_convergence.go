@@ -104,7 +104,8 @@ func convergenceFigure(b *Bundle) *figure {
 		lower, upper = nil, nil
 	}
 	last, final, finalBar := finalInterval(b, last, lower)
-	if last != pts[len(pts)-1] {
+	appended := last != pts[len(pts)-1]
+	if appended {
 		pts = append(pts, last) // the final estimate after the last level
 	}
 	if !finalBar && len(lower) > 0 && lower[len(lower)-1].X == last.X {
@@ -236,7 +237,7 @@ func convergenceFigure(b *Bundle) *figure {
 		p.X.Max = last.X * 1.06 // room for the bar's caps
 	}
 	p.X.Tick.Marker = decadeTicks{}
-	caption := "Estimate of the failure probability pf (dimensionless) and its 95% interval as the number of limit-state evaluations grows (log scale). "
+	caption := "Estimate of the failure probability pf (dimensionless) and its 95% interval as the number of limit-state evaluations (log axis) grows. "
 	if logAxis {
 		caption += "The pf axis is logarithmic because the values span more than a decade"
 		if vmin <= 0 {
@@ -246,7 +247,10 @@ func convergenceFigure(b *Bundle) *figure {
 	} else {
 		caption += "The pf axis spans the estimate and its interval, not from zero."
 	}
-	if finalBar {
+	switch {
+	case finalBar && appended:
+		caption += " The trace gives no interval along the way and ends before the final estimate (a method working in steps, such as subset simulation, traces its intermediate levels): the dot and bar at the right are the final estimate and its 95% interval."
+	case finalBar:
 		caption += " The trace gives no interval along the way: the dot and bar at the right are the final estimate and its 95% interval."
 	}
 	return &figure{Name: "convergence", Caption: caption, W: 16 * vg.Centimeter, H: 9 * vg.Centimeter, Plots: []*plot.Plot{p}}
