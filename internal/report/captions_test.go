@@ -32,7 +32,7 @@ func TestCaptionsAndHeadsGiveUnits(t *testing.T) {
 	for _, head := range []string{
 		"<th>CoV (–)</th>", "<th>β at low (–)</th>", "<th>first order (–)</th>", "<th>total (–)</th>",
 		"<th>importance α² (–)</th>", "<th>Spearman ρ (–)</th>", "<th>pf (–)</th>", "<th>β (–)</th>",
-		"<th>95% interval of pf (–)</th>", "<th>member length (mm)</th>",
+		"<th>95% interval of pf (–)</th>", "<th>member length (mm)</th>", "<th>unit of the mean or median</th>",
 	} {
 		if !strings.Contains(html, head) {
 			t.Errorf("the HTML lacks the column head %s", head)

@@ -124,8 +124,8 @@ code{font-size:.9em}
 
 {{if .Updates}}<section id="updates">
 <h2>Updating from measurements</h2>
-<table><tr><th>input</th><th>prior</th><th>updated</th><th>number of measurements</th></tr>
-{{range .Updates}}<tr><td>{{.Variable}}</td><td>{{.Prior}}</td><td>{{.After}}</td><td class="n">{{.N}}</td></tr>
+<table><tr><th>input</th><th>prior</th><th>updated</th><th>unit of the mean or median</th><th>number of measurements</th></tr>
+{{range .Updates}}<tr><td>{{.Variable}}</td><td>{{.Prior}}</td><td>{{.After}}</td><td>{{if .Unit}}{{.Unit}}{{else}}–{{end}}</td><td class="n">{{.N}}</td></tr>
 {{end}}</table>
 {{if .Measured}}<table><tr><th>input</th><th>n</th><th>spread</th><th>prior mean</th><th>prior CoV (–)</th><th>prior 5% fractile</th><th>updated mean</th><th>updated CoV (–)</th><th>updated 5% fractile</th></tr>
 {{range .Measured}}<tr><td>{{.Variable}}</td><td class="n">{{.N}}</td><td>{{.Variance}}</td><td class="n">{{.PriorMean}}</td><td class="n">{{.PriorCoV}}</td><td class="n">{{.PriorP05}}</td><td class="n">{{.Mean}}</td><td class="n">{{.CoV}}</td><td class="n">{{.P05}}</td></tr>

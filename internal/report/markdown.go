@@ -136,9 +136,13 @@ func Markdown(b *Bundle) string {
 		w.WriteString("## Updating from measurements\n\n")
 		rows = rows[:0]
 		for _, u := range v.Updates {
-			rows = append(rows, []string{u.Variable, u.Prior, u.After, u.N})
+			unit := u.Unit
+			if unit == "" {
+				unit = "–"
+			}
+			rows = append(rows, []string{u.Variable, u.Prior, u.After, unit, u.N})
 		}
-		mdTable(&w, []string{"input", "prior", "updated", "number of measurements"}, rows)
+		mdTable(&w, []string{"input", "prior", "updated", "unit of the mean or median", "number of measurements"}, rows)
 		rows = rows[:0]
 		for _, m := range v.Measured {
 			rows = append(rows, []string{m.Variable, m.N, m.Variance, m.PriorMean, m.PriorCoV, m.PriorP05, m.Mean, m.CoV, m.P05})

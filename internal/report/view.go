@@ -59,7 +59,7 @@ type formRow struct{ Variable, DesignPoint, Importance string }
 
 type pointRow struct{ Name, Pf, PfCI, Beta string }
 
-type updateRow struct{ Variable, Prior, After, N, Picture string }
+type updateRow struct{ Variable, Prior, After, Unit, N, Picture string }
 
 // pictureView is a rendered picture ready for the HTML.
 type pictureView struct {
@@ -225,7 +225,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	}
 	v.Target, v.Measured = targetRows(&d), measuredRows(&d)
 	for k, u := range b.Updates {
-		r := updateRow{Variable: u.Variable, N: strconv.Itoa(len(u.Data)), Picture: "update-" + strconv.Itoa(k+1)}
+		r := updateRow{Variable: u.Variable, Unit: u.Unit, N: strconv.Itoa(len(u.Data)), Picture: "update-" + strconv.Itoa(k+1)}
 		if u.Prior != nil {
 			r.Prior = cleanNumbers(u.Prior.String())
 		}
