@@ -45,3 +45,14 @@ func TestCaptionsAndHeadsGiveUnits(t *testing.T) {
 		}
 	}
 }
+
+func TestUnitText(t *testing.T) {
+	t.Parallel()
+	for _, c := range []struct{ in, want string }{
+		{"", "–"}, {"mm", "mm"}, {"mm4", "mm⁴"}, {"mm3", "mm³"}, {"mm^2", "mm²"}, {"kN", "kN"}, {"MPa", "MPa"},
+	} {
+		if got := unitText(c.in); got != c.want {
+			t.Errorf("unitText(%q) = %q, want %q", c.in, got, c.want)
+		}
+	}
+}

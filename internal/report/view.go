@@ -76,7 +76,6 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		ToolVersion: d.ToolVersion,
 		InputSHA:    d.InputSHA256,
 		Units:       d.Units,
-		Check:       b.Check,
 		Defaults:    b.Defaults,
 		Diagnostics: b.Diagnostics,
 		Spearman:    byRankCorrelation(b.Spearman),
@@ -137,13 +136,17 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		v.Result = append(v.Result, KV{"demand: mean, sd, 95% fractile", kN(d.Demand.Mean) + ", " + kN(d.Demand.SD) + ", " + kN(d.Demand.P95)})
 	}
 
+	for _, c := range b.Check {
+		c.Unit = unitText(c.Unit)
+		v.Check = append(v.Check, c)
+	}
 	for _, in := range b.Inputs {
 		cov := ""
 		if in.CoV != 0 {
 			cov = fixed(in.CoV, 3)
 		}
 		s, u := displayFor(in.Mean, in.Unit)
-		v.Inputs = append(v.Inputs, inputRow{in.Name, in.Dist, in.Params, sig(in.Mean*s, 4), cov, u})
+		v.Inputs = append(v.Inputs, inputRow{in.Name, in.Dist, in.Params, sig(in.Mean*s, 4), cov, unitText(u)})
 	}
 	if n := d.Nominal; n != nil {
 		v.Nominal = []KV{
@@ -241,6 +244,17 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	}
 	return v
 }
+
+// unitText writes a unit for a table's unit column: powers as superscripts
+// (mm4 as mm⁴) and a dash for a dimensionless quantity.
+func unitText(u string) string {
+	if u == "" {
+		return "–"
+	}
+	return unitPowers.Replace(u)
+}
+
+var unitPowers = strings.NewReplacer("mm4", "mm⁴", "mm3", "mm³", "mm2", "mm²", "m4", "m⁴", "m3", "m³", "m2", "m²", "^4", "⁴", "^3", "³", "^2", "²")
 
 // Picture returns the named picture, so templates can ask for it.
 func (v *view) Picture(name string) *pictureView {
