@@ -196,7 +196,7 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 		} else {
 			delta2 += (1 - subsetP0) / (subsetP0 * float64(N)) * (1 + subsetGamma(G, nc, ns, b, subsetP0))
 		}
-		res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: evals, Pf: pf, PfCoV: math.Sqrt(delta2)})
+		res.Convergence = append(res.Convergence, subsetPoint(evals, pf, delta2, z))
 		if cfg.Progress != nil {
 			cfg.Progress(Progress{Done: evals, Total: cfg.Samples, Pf: pf, CoV: math.Sqrt(delta2)})
 		}
@@ -237,7 +237,17 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 	}
 	res.Beta = BetaFromPf(pf)
 	res.BetaCI = [2]float64{BetaFromPf(res.PfCI[1]), BetaFromPf(res.PfCI[0])}
+	res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: evals, Pf: pf, PfCI: res.PfCI, PfCoV: res.PfCoV})
 	return res, nil
+}
+
+// subsetPoint is a convergence point of subset simulation: the product of
+// the level probabilities so far, with the lognormal interval of its CoV
+// estimate, as for the final estimate.
+func subsetPoint(evals int64, pf, delta2, z float64) ConvergencePoint {
+	sl := math.Sqrt(math.Log(1 + delta2))
+	return ConvergencePoint{Evaluations: evals, Pf: pf, PfCoV: math.Sqrt(delta2),
+		PfCI: [2]float64{pf * math.Exp(-z*sl), math.Min(1, pf*math.Exp(z*sl))}}
 }
 
 // subsetChain runs one chain of conditional sampling with spread

@@ -150,10 +150,19 @@ func TestSubsetVerySmall(t *testing.T) {
 	if math.Abs(r.Beta-5) > 0.15 {
 		t.Errorf("beta %.4f, want 5 (pf %.4g, CoV %.3f)", r.Beta, r.Pf, r.PfCoV)
 	}
-	if r.Pf < r.PfCI[0] || r.Pf > r.PfCI[1] || len(r.Convergence) != 6 || len(r.Warnings) > 0 {
-		t.Errorf("pf %.4g outside its interval %v, or %d intermediate levels, warnings %v", r.Pf, r.PfCI, len(r.Convergence), r.Warnings)
+	// Six intermediate levels and the final estimate, which ends the trace.
+	if r.Pf < r.PfCI[0] || r.Pf > r.PfCI[1] || len(r.Convergence) != 7 || len(r.Warnings) > 0 {
+		t.Errorf("pf %.4g outside its interval %v, or %d convergence points, warnings %v", r.Pf, r.PfCI, len(r.Convergence), r.Warnings)
 	}
-	t.Logf("beta %.4f, pf %.4g, CoV %.3f, %d evaluations, %d levels", r.Beta, r.Pf, r.PfCoV, r.Evaluations, len(r.Convergence)+1)
+	if last := r.Convergence[len(r.Convergence)-1]; last.Pf != r.Pf || last.PfCI != r.PfCI || last.Evaluations != r.Evaluations {
+		t.Errorf("last convergence point %+v, want the final estimate %.4g %v after %d evaluations", last, r.Pf, r.PfCI, r.Evaluations)
+	}
+	for _, c := range r.Convergence {
+		if !(c.PfCI[0] <= c.Pf && c.Pf <= c.PfCI[1]) {
+			t.Errorf("convergence point %+v outside its own interval", c)
+		}
+	}
+	t.Logf("beta %.4f, pf %.4g, CoV %.3f, %d evaluations, %d levels", r.Beta, r.Pf, r.PfCoV, r.Evaluations, len(r.Convergence))
 }
 
 func TestSubsetDeterminism(t *testing.T) {
