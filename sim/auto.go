@@ -11,12 +11,17 @@ import (
 //   - conditional quasi-Monte Carlo when the model states a usable linear
 //     input, since it is exact in that input and smooth in the others;
 //   - plain Monte Carlo when FORM's pf is large enough for the budget to
-//     reach the target CoV, n >= (1 - pf)/(pf CoV^2);
+//     reach the target CoV, n >= (1 - pf)/(pf CoV^2), and that n is at most
+//     autoCrudeLimit (beyond it importance sampling is far quicker);
 //   - importance sampling around the design points otherwise;
 //   - subset simulation when FORM fails or importance sampling fails or
 //     flags its own result.
 //
 // Result.Reason says which was used and why.
+// autoCrudeLimit is the largest number of samples auto spends on plain
+// Monte Carlo; a target that needs more goes to importance sampling.
+const autoCrudeLimit = 5e6
+
 func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, error) {
 	target := s.TargetCoV
 	if target == 0 {
@@ -93,7 +98,7 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 		return subset(formNote)
 	}
 	need := (1 - f.Pf) / (f.Pf * target * target)
-	if f.Pf > 0 && need <= float64(s.Samples) {
+	if f.Pf > 0 && need <= float64(s.Samples) && need <= autoCrudeLimit {
 		return mc(fmt.Sprintf("%s: plain Monte Carlo reaches CoV %.3g within about %.3g of the %d samples allowed", formNote, target, need, s.Samples))
 	}
 	res, err := importanceSampling(ctx, m, t, f, s)
@@ -107,5 +112,5 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 	if math.IsNaN(res.Pf) {
 		return subset(formNote + ": importance sampling returned no estimate")
 	}
-	return finish(res, fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples, more than the %d allowed; importance sampling around the design point", formNote, need, s.Samples)), nil
+	return finish(res, fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples (budget %d, and auto spends at most %.0g on it); importance sampling around the design point", formNote, need, s.Samples, autoCrudeLimit)), nil
 }

@@ -102,3 +102,24 @@ func TestAutoLeavesImpreciseConditionalQMC(t *testing.T) {
 		t.Errorf("beta %v, exact %v", res.Beta, beta)
 	}
 }
+
+// TestAutoPrefersImportanceForLongCrudeRuns checks that auto does not spend
+// millions of plain Monte Carlo samples when importance sampling gets there
+// in thousands: lognormal R/S with beta about 3.5 (pf about 2e-4, exact by
+// the lognormal closed form) at CoV 0.025 needs about 7e6 crude samples,
+// within the budget of 1e7 but above auto's limit for plain sampling.
+func TestAutoPrefersImportanceForLongCrudeRuns(t *testing.T) {
+	t.Parallel()
+	m, beta := lnRS(214, 0.10, 100, 0.20)
+	res, err := Run(context.Background(), m, &Settings{Samples: 10_000_000, Seed: 4, TargetCoV: 0.025})
+	if err != nil {
+		t.Fatal(err)
+	}
+	t.Logf("exact beta %.4f: %v, beta %.4f, %d evaluations; %s", beta, res.Method, res.Beta, res.Evaluations, res.Reason)
+	if res.Method != Importance || res.Evaluations > 1_000_000 {
+		t.Errorf("auto used %v with %d evaluations, want importance sampling", res.Method, res.Evaluations)
+	}
+	if math.Abs(res.Beta-beta) > 0.05 {
+		t.Errorf("beta %v, exact %v", res.Beta, beta)
+	}
+}
