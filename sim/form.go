@@ -16,6 +16,13 @@ type FORMSettings struct {
 	Tol float64
 	// MaxPoints bounds the number of design points searched; default 4.
 	MaxPoints int
+	// Step is the relative step of the central finite differences of the
+	// gradient in standard normal space, h_i = Step max(1, |u_i|);
+	// default 1e-4, right for a smooth limit state. A limit state computed
+	// numerically carries noise (an iterative capacity model, about 1e-5 of
+	// g): give it a larger step, 1e-3 to 1e-2. Whatever the start, FORM
+	// enlarges the step itself when a line search fails to noise.
+	Step float64
 }
 
 // FORM runs a first-order reliability analysis of m: the improved HL-RF
@@ -69,6 +76,9 @@ func formSettings(s *FORMSettings) FORMSettings {
 	if c.MaxPoints <= 0 {
 		c.MaxPoints = 4
 	}
+	if c.Step <= 0 {
+		c.Step = formDefaultStep
+	}
 	return c
 }
 
@@ -76,7 +86,7 @@ func formSettings(s *FORMSettings) FORMSettings {
 func formRun(sp *uSpace, s *FORMSettings) *FORMResult {
 	set := formSettings(s)
 	n := sp.dim
-	f := &formSolver{dim: n, g: sp.newG(), maxIter: set.MaxIter, tol: set.Tol, gScale: 1}
+	f := &formSolver{dim: n, g: sp.newG(), maxIter: set.MaxIter, tol: set.Tol, gScale: 1, step: set.Step}
 	origin := make([]float64, n)
 	g0 := f.eval(origin)
 	if math.IsNaN(g0) || math.IsInf(g0, 0) {
@@ -268,9 +278,9 @@ func formRestarts(r formSearch, rng *rand.Rand) [][]float64 {
 
 // kinks returns the inputs along which g falls on both sides of the point
 // r (one-sided slopes both below -1e-3 |grad|, or -1e-3 |g(0)| where the
-// gradient is zero): the point is then a ridge of the safe set, not a most
-// probable failure point. Only inputs with a negligible gradient component
-// are checked.
+// gradient is zero, and a drop beyond twice the noise of g): the point is
+// then a ridge of the safe set, not a most probable failure point. Only
+// inputs with a negligible gradient component are checked.
 func (f *formSolver) kinks(r *formSearch) []int {
 	gn := formNorm(r.grad)
 	if gn == 0 {
@@ -288,7 +298,7 @@ func (f *formSolver) kinks(r *formSearch) []int {
 		w[i] = r.u[i] - h
 		gm := f.eval(w)
 		w[i] = r.u[i]
-		drop := 1e-3 * gn * h
+		drop := math.Max(1e-3*gn*h, 2*f.noise) // a drop within noise is no kink
 		if gp < r.g-drop && gm < r.g-drop {
 			out = append(out, i)
 		}

@@ -404,3 +404,56 @@ func TestFORMNoisyLimitState(t *testing.T) {
 		t.Errorf("beta %v, want 3", r.Beta)
 	}
 }
+
+// TestFORMNoisyLognormalRS checks FORM on g = R - S with lognormal R and S
+// and a deterministic pseudo-noise of relative size 1e-5 on g, as a
+// numerical capacity model has. Without the noise the exact index is
+//
+//	beta = ln[(muR/muS) sqrt((1+VS^2)/(1+VR^2))] / sqrt(ln[(1+VR^2)(1+VS^2)])
+//
+// (Melchers and Beck, Structural Reliability Analysis and Prediction, 3rd
+// ed., 2018, chapter 3, lognormal R and S; from memory), and FORM finds it
+// exactly: ln R - ln S is linear in standard normal space.
+func TestFORMNoisyLognormalRS(t *testing.T) {
+	noise := func(x []float64) float64 {
+		h := math.Float64bits(x[0])*0x9e3779b97f4a7c15 ^ math.Float64bits(x[1])*0xbf58476d1ce4e5b9
+		h ^= h >> 29
+		h *= 0x94d049bb133111eb
+		h ^= h >> 32
+		return 2 * (float64(h>>11)/(1<<53) - 0.5) // in [-1, 1)
+	}
+	for _, c := range []struct {
+		muR, vR, muS, vS float64
+	}{
+		{3000, 0.10, 1500, 0.20},
+		{2500, 0.07, 1000, 0.30},
+		{1800, 0.15, 1000, 0.10},
+	} {
+		r, err := NewLognormal(c.muR, c.vR*c.muR)
+		if err != nil {
+			t.Fatal(err)
+		}
+		s, err := NewLognormal(c.muS, c.vS*c.muS)
+		if err != nil {
+			t.Fatal(err)
+		}
+		m := &Model{
+			Vars: []Variable{{Name: "R", Dist: r}, {Name: "S", Dist: s}},
+			G: func(x, _ []float64) float64 {
+				return (x[0] - x[1]) + 1e-5*c.muR*noise(x)
+			},
+		}
+		want := math.Log(c.muR/c.muS*math.Sqrt((1+c.vS*c.vS)/(1+c.vR*c.vR))) /
+			math.Sqrt(math.Log((1+c.vR*c.vR)*(1+c.vS*c.vS)))
+		for _, step := range []float64{0, 1e-2} {
+			f, err := FORM(m, &FORMSettings{Step: step})
+			if err != nil {
+				t.Fatal(err)
+			}
+			if !f.Converged || math.Abs(f.Beta-want) > 1e-3 {
+				t.Errorf("%+v, step %g: beta %.6f (converged %v: %s), exact %.6f", c, step, f.Beta, f.Converged, f.Status, want)
+			}
+			t.Logf("%+v, step %g: beta %.6f exact %.6f, %d evaluations: %s", c, step, f.Beta, want, f.Evaluations, f.Status)
+		}
+	}
+}
