@@ -38,7 +38,7 @@ const ReserveTol = 1e-4
 // Reserve finds the reserve factor and the largest added load of the
 // study for the target reliability index target, by root finding on the
 // FORM index: beta(factor) and beta(added load) both fall as the load
-// grows. fs are passed to sim.FORM (nil: its defaults).
+// grows. fs are passed to sim.FORM (nil: those of Model.FORMSettings).
 func (md *Model) Reserve(target float64, fs *sim.FORMSettings) (*Reserve, error) {
 	st := md.Study
 	r := &Reserve{Target: target, On: st.ReserveOn, Added: math.NaN()}
@@ -67,14 +67,35 @@ func (md *Model) Reserve(target float64, fs *sim.FORMSettings) (*Reserve, error)
 }
 
 // formBeta is the FORM index of the study with the reserve loads
-// multiplied by factor and the load added.
+// multiplied by factor and the load added. nil fs are the settings that
+// suit the capacity model (Model.FORMSettings). A search that does not
+// converge is tried once more with the finite-difference step of a noisy
+// model, numericalStep, before the root search is given up.
 func (md *Model) formBeta(factor, added float64, fs *sim.FORMSettings) (float64, error) {
-	f, err := sim.FORM(md.Loaded(factor, added), fs)
+	if fs == nil {
+		fs = md.FORMSettings()
+	}
+	m := md.Loaded(factor, added)
+	f, err := sim.FORM(m, fs)
 	if err != nil {
 		return math.NaN(), err
 	}
+	if !f.Converged && (fs == nil || fs.Step < numericalStep) {
+		retry := sim.FORMSettings{Step: numericalStep}
+		if fs != nil {
+			retry = *fs
+			retry.Step = numericalStep
+		}
+		if f2, err := sim.FORM(m, &retry); err == nil && f2.Converged {
+			return f2.Beta, nil
+		}
+	}
 	if !f.Converged {
-		return math.NaN(), fmt.Errorf("FORM did not converge (%s)", f.Status)
+		at := fmt.Sprintf("a factor of %.4g on the loads", factor)
+		if added != 0 {
+			at = fmt.Sprintf("an added load of %.4g N", added)
+		}
+		return math.NaN(), fmt.Errorf("FORM did not converge at %s (%s)", at, f.Status)
 	}
 	return f.Beta, nil
 }
