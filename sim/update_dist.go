@@ -5,7 +5,6 @@ import (
 	"math"
 	"math/rand/v2"
 
-	"gonum.org/v1/gonum/mathext"
 	"gonum.org/v1/gonum/stat/distuv"
 )
 
@@ -16,6 +15,7 @@ type logStudentsT struct {
 	mu, sigma float64
 	t         distuv.StudentsT // standard: Mu 0, Sigma 1
 	chi       Gamma            // chi-square(nu)/nu, for draw
+	tc        tConsts          // constants of the quantile
 }
 
 func newLogStudentsT(mu, sigma, nu float64) logStudentsT {
@@ -23,7 +23,7 @@ func newLogStudentsT(mu, sigma, nu float64) logStudentsT {
 	if err != nil {
 		panic("sim: log-Student-t with nu = " + fmtNum(nu))
 	}
-	return logStudentsT{mu: mu, sigma: sigma, t: distuv.StudentsT{Mu: 0, Sigma: 1, Nu: nu}, chi: g.(Gamma)}
+	return logStudentsT{mu: mu, sigma: sigma, t: distuv.StudentsT{Mu: 0, Sigma: 1, Nu: nu}, chi: g.(Gamma), tc: newTConsts(nu)}
 }
 
 func (d logStudentsT) z(x float64) float64 { return (math.Log(x) - d.mu) / d.sigma }
@@ -69,9 +69,9 @@ func (d logStudentsT) StdDev() float64 { return math.Inf(1) }
 
 func (d logStudentsT) FromStdNormal(u float64) float64 {
 	if u <= 0 {
-		return d.lowerQ(stdCDF(u))
+		return math.Exp(d.mu + d.sigma*d.lowerTz(stdCDF(u), u))
 	}
-	return d.upperQ(stdCDF(-u))
+	return math.Exp(d.mu - d.sigma*d.lowerTz(stdCDF(-u), -u))
 }
 
 func (d logStudentsT) ToStdNormal(x float64) float64 {
@@ -91,19 +91,25 @@ func (d logStudentsT) String() string {
 }
 
 // lowerT returns the p-quantile of the standard Student-t for p <= 1/2,
-// accurate for tiny p: F(-y) = I_x(nu/2, 1/2)/2 with x = nu/(nu + y²).
+// accurate for tiny p.
 func (d logStudentsT) lowerT(p float64) float64 {
-	if math.IsNaN(p) {
-		return p // the inverse incomplete beta would not return
+	if !(p > 0 && p < 0.5) {
+		return d.lowerTz(p, 0)
 	}
-	if p <= 0 {
+	return d.lowerTz(p, stdQuantile(p))
+}
+
+// lowerTz is lowerT given z = Phi^-1(p) as well (FromStdNormal has it).
+func (d logStudentsT) lowerTz(p, z float64) float64 {
+	switch {
+	case math.IsNaN(p):
+		return p
+	case p <= 0:
 		return math.Inf(-1)
-	}
-	if p >= 0.5 {
+	case p >= 0.5:
 		return 0
 	}
-	x := mathext.InvRegIncBeta(d.t.Nu/2, 0.5, 2*p)
-	return -math.Sqrt(d.t.Nu * (1 - x) / x)
+	return tLowerQuantile(p, z, d.t.Nu, d.tc)
 }
 
 func (d logStudentsT) lowerQ(p float64) float64 { return math.Exp(d.mu + d.sigma*d.lowerT(p)) }
