@@ -43,7 +43,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	bar.stage("FORM")
 	r.form = res.FORM
 	if r.form == nil && len(m.Vars) > 0 {
-		r.form, r.formErr = sim.FORM(m, nil)
+		r.form, r.formErr = sim.FORM(m, r.l.md.FORMSettings())
 		if r.formErr != nil {
 			r.warnings = append(r.warnings, "form: "+r.formErr.Error())
 		}
