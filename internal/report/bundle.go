@@ -51,6 +51,9 @@ type Bundle struct {
 	// high value. It is drawn about Doc.FORM.Beta and tabulated beside the
 	// tornado of TornadoOutput.
 	TornadoBeta []sim.TornadoRow
+	// SobolCapacity, when not empty, holds the Sobol indices of the
+	// capacity, drawn and tabulated beside those of SobolOutput.
+	SobolCapacity []sim.SobolIndex
 }
 
 // Input is one row of the inputs table.

@@ -37,6 +37,9 @@ type Document struct {
 	Sweep    []Point   `json:"sweep,omitempty"`
 	Variants []Variant `json:"variants,omitempty"`
 	Warnings []string  `json:"warnings"`
+	// SobolCapacity are the Sobol indices of the capacity (Sobol holds those
+	// of the study's sensitivity output, the margin); loads have ~0 here.
+	SobolCapacity []Sobol `json:"sobol_capacity,omitempty"`
 }
 
 // Nominal is the deterministic picture at nominal (mean) values.

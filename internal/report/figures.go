@@ -17,6 +17,7 @@ func figures(b *Bundle) (figs []*figure, skipped []error) {
 		{"tornado", func() *figure { return tornadoFigure(b) }},
 		{"tornado-beta", func() *figure { return tornadoBetaFigure(b) }},
 		{"sobol", func() *figure { return sobolFigure(b) }},
+		{"sobol-capacity", func() *figure { return sobolCapacityFigure(b) }},
 		{"slenderness", func() *figure { return slendernessFigure(b) }},
 		{"sweep", func() *figure { return sweepFigure(b) }},
 		{"variants", func() *figure { return variantsFigure(b) }},

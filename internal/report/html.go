@@ -96,6 +96,12 @@ code{font-size:.9em}
 <table><tr><th>input</th><th>first order (–)</th><th>95% interval (–)</th><th>total (–)</th><th>95% interval (–)</th></tr>
 {{range .Sobol}}<tr><td>{{.Variable}}</td><td class="n">{{.First}}</td><td class="n">{{.FirstCI}}</td><td class="n">{{.Total}}</td><td class="n">{{.TotalCI}}</td></tr>
 {{end}}</table>{{end}}
+{{if .SobolCapacity}}<h3 id="sobol-capacity">Variance-based (Sobol) indices of the capacity</h3>
+<p>The same sampling settings and seed, applied to the capacity: inputs that do not act on it (the loads) have indices about zero.</p>
+{{with .Picture "sobol-capacity"}}{{template "fig" .}}{{end}}
+<table><tr><th>input</th><th>first order (–)</th><th>95% interval (–)</th><th>total (–)</th><th>95% interval (–)</th></tr>
+{{range .SobolCapacity}}<tr><td>{{.Variable}}</td><td class="n">{{.First}}</td><td class="n">{{.FirstCI}}</td><td class="n">{{.Total}}</td><td class="n">{{.TotalCI}}</td></tr>
+{{end}}</table>{{end}}
 <div class="side">
 {{if .FORM}}<div id="form"><h3>FORM design point and importance</h3>
 <p>β = {{.FORMBeta}}, pf = {{.FORMPf}}</p>

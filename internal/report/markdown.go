@@ -95,6 +95,14 @@ func Markdown(b *Bundle) string {
 		}
 		mdTable(&w, []string{"input", "first order (–)", "95% interval (–)", "total (–)", "95% interval (–)"}, rows)
 	}
+	if len(v.SobolCapacity) > 0 {
+		w.WriteString("### Sobol indices of the capacity\n\n")
+		rows = rows[:0]
+		for _, s := range v.SobolCapacity {
+			rows = append(rows, []string{s.Variable, s.First, s.FirstCI, s.Total, s.TotalCI})
+		}
+		mdTable(&w, []string{"input", "first order (–)", "95% interval (–)", "total (–)", "95% interval (–)"}, rows)
+	}
 	if len(v.FORM) > 0 {
 		fmt.Fprintf(&w, "### FORM design point and importance\n\nβ = %s, pf = %s\n\n", v.FORMBeta, v.FORMPf)
 		rows = rows[:0]

@@ -7,6 +7,8 @@ import (
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
 	"gonum.org/v1/plot/vg"
+
+	"strutrisk/sim"
 )
 
 // errXY is a set of points with horizontal error bars.
@@ -15,15 +17,34 @@ type errXY struct {
 	plotter.XErrors
 }
 
-// sobolFigure draws the first-order and total Sobol indices of each input as
-// paired horizontal bars with their bootstrap intervals as whiskers.
+// sobolFigure draws the Sobol indices of the bundle's sensitivity output.
 func sobolFigure(b *Bundle) *figure {
-	d := doc(b)
-	if len(d.Sobol) == 0 {
-		return nil
+	return sobolChart("sobol", doc(b).Sobol, b.SobolOutput, b.SobolNote)
+}
+
+// sobolCapacityFigure draws the Sobol indices of the capacity.
+func sobolCapacityFigure(b *Bundle) *figure {
+	return sobolChart("sobol-capacity", sobolRows(b.SobolCapacity), sobolCapacityOutput, b.SobolNote)
+}
+
+// sobolCapacityOutput names the output of Bundle.SobolCapacity.
+const sobolCapacityOutput = "the capacity"
+
+// sobolRows converts indices to document rows.
+func sobolRows(idx []sim.SobolIndex) []Sobol {
+	var rows []Sobol
+	for _, s := range idx {
+		rows = append(rows, Sobol{Variable: s.Variable, First: s.First, Total: s.Total, FirstCI: s.FirstCI, TotalCI: s.TotalCI})
 	}
-	rows := make([]Sobol, 0, len(d.Sobol))
-	for _, s := range d.Sobol {
+	return rows
+}
+
+// sobolChart draws the first-order and total Sobol indices of each input as
+// paired horizontal bars with their bootstrap intervals as whiskers; what
+// names the output the indices are of.
+func sobolChart(name string, all []Sobol, what, note string) *figure {
+	rows := make([]Sobol, 0, len(all))
+	for _, s := range all {
 		if finite(s.First) && finite(s.Total) {
 			rows = append(rows, s)
 		}
@@ -34,7 +55,6 @@ func sobolFigure(b *Bundle) *figure {
 	// Largest total index at the top.
 	sort.SliceStable(rows, func(i, j int) bool { return rows[i].Total > rows[j].Total })
 	n := len(rows)
-	what := b.SobolOutput
 	if what == "" {
 		what = "the output"
 	}
@@ -103,8 +123,8 @@ func sobolFigure(b *Bundle) *figure {
 	}
 	p.Legend.Top = false
 	caption := "First-order (own effect) and total (with interactions) Sobol indices of " + what + " (shares of its variance, dimensionless), with bootstrap 95% intervals as whiskers."
-	if b.SobolNote != "" {
-		caption += " " + b.SobolNote
+	if note != "" {
+		caption += " " + note
 	}
-	return &figure{Name: "sobol", Caption: caption, W: 16 * vg.Centimeter, H: 4*vg.Centimeter + vg.Length(n)*0.9*vg.Centimeter, Plots: []*plot.Plot{p}}
+	return &figure{Name: name, Caption: caption, W: 16 * vg.Centimeter, H: 4*vg.Centimeter + vg.Length(n)*0.9*vg.Centimeter, Plots: []*plot.Plot{p}}
 }

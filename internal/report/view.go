@@ -29,6 +29,7 @@ type view struct {
 	Tornado                    []tornadoRow
 	SobolOutput, SobolNote     string
 	Sobol                      []sobolRow
+	SobolCapacity              []sobolRow // indices of the capacity
 	FORMBeta, FORMPf           string
 	FORM                       []formRow
 	Spearman                   []KV
@@ -184,11 +185,17 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		v.Tornado = append(v.Tornado, row)
 	}
 	ci := func(c [2]float64) string { return fixed(c[0], 3) + " to " + fixed(c[1], 3) }
-	sobol := append([]Sobol(nil), d.Sobol...)
-	sort.SliceStable(sobol, func(i, j int) bool { return sobol[i].Total > sobol[j].Total })
-	for _, s := range sobol {
-		v.Sobol = append(v.Sobol, sobolRow{s.Variable, fixed(s.First, 3), ci(s.FirstCI), fixed(s.Total, 3), ci(s.TotalCI)})
+	sobolTable := func(rows []Sobol) []sobolRow {
+		rows = append([]Sobol(nil), rows...)
+		sort.SliceStable(rows, func(i, j int) bool { return rows[i].Total > rows[j].Total })
+		var out []sobolRow
+		for _, s := range rows {
+			out = append(out, sobolRow{s.Variable, fixed(s.First, 3), ci(s.FirstCI), fixed(s.Total, 3), ci(s.TotalCI)})
+		}
+		return out
 	}
+	v.Sobol = sobolTable(d.Sobol)
+	v.SobolCapacity = sobolTable(sobolRows(b.SobolCapacity))
 	if f := d.FORM; f != nil {
 		v.FORMBeta, v.FORMPf = f2(f.Beta), prob(f.Pf)
 		names := sortedKeys(f.DesignPoint)
