@@ -21,6 +21,7 @@ type results struct {
 	tornado  []sim.TornadoRow
 	sobol    []sim.SobolIndex
 	sobolMsg string
+	sobolCap []sim.SobolIndex // of the capacity; sobol is of the margin
 	warnings []string
 	target   *targetRun // reserve factor and its confirmation (reserve.go)
 	cases    *cases     // sweep and variants (sweep.go)
@@ -73,6 +74,15 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 			r.sobol = idx
 			r.sobolMsg = sim.SobolIndependenceWarning(margin)
 		}
+		if k := outputIndex(m, "capacity"); k >= 0 && ctx.Err() == nil {
+			bar.stage("Sobol indices of the capacity")
+			idx, err := sim.Sobol(ctx, m, &sim.SobolSettings{Samples: sens.SobolSamples, Seed: s.Seed, Output: k, Workers: s.Workers})
+			if err != nil {
+				r.warnings = append(r.warnings, "sobol of the capacity: "+err.Error())
+			} else {
+				r.sobolCap = idx
+			}
+		}
 	}
 	if ctx.Err() == nil {
 		r.target = runTarget(ctx, l, s, bar)
@@ -124,6 +134,9 @@ func (r *results) document() *report.Document {
 	for _, s := range r.sobol {
 		d.Sobol = append(d.Sobol, report.Sobol{Variable: s.Variable, First: s.First, Total: s.Total, FirstCI: s.FirstCI, TotalCI: s.TotalCI})
 	}
+	for _, s := range r.sobolCap {
+		d.SobolCapacity = append(d.SobolCapacity, report.Sobol{Variable: s.Variable, First: s.First, Total: s.Total, FirstCI: s.FirstCI, TotalCI: s.TotalCI})
+	}
 	if f := r.form; f != nil && f.Converged && len(f.Points) > 0 {
 		// The axis that governs at the most probable failure point.
 		if res, _, _, err := r.l.md.At(f.Points[0].X); err == nil {
@@ -135,6 +148,16 @@ func (r *results) document() *report.Document {
 		d.Warnings = append(d.Warnings, "sobol: "+r.sobolMsg)
 	}
 	return d
+}
+
+// outputIndex returns the index of the output named name in m, or -1.
+func outputIndex(m *sim.Model, name string) int {
+	for i, o := range m.Outputs {
+		if o == name {
+			return i
+		}
+	}
+	return -1
 }
 
 func finite(v float64) float64 {
@@ -218,6 +241,7 @@ func (r *results) bundle() *report.Bundle {
 		TornadoBase:     r.base,
 		SobolOutput:     "margin g = capacity - demand",
 		SobolNote:       r.sobolMsg,
+		SobolCapacity:   r.sobolCap,
 		Updates:         updates(l.st),
 	}
 	if l.st.Model != "beam-column" {
