@@ -24,7 +24,9 @@ type results struct {
 	sobolCap []sim.SobolIndex // of the capacity; sobol is of the margin
 	warnings []string
 	target   *targetRun // reserve factor and its confirmation (reserve.go)
-	cases    *cases     // sweep and variants (sweep.go)
+	// incomplete, when not empty, says why the run is not complete.
+	incomplete string
+	cases      *cases // sweep and variants (sweep.go)
 }
 
 // analyse runs the estimate and the sensitivity measures.
@@ -142,6 +144,9 @@ func (r *results) document() *report.Document {
 		if res, _, _, err := r.l.md.At(f.Points[0].X); err == nil {
 			d.GoverningAxis = res.Axis.String()
 		}
+	}
+	if r.incomplete != "" {
+		d.Complete, d.IncompleteReason = false, r.incomplete
 	}
 	d.Warnings = append(d.Warnings, r.warnings...)
 	if r.sobolMsg != "" {

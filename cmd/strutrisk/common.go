@@ -64,6 +64,7 @@ func (l *loaded) baseDocument() *report.Document {
 		ToolVersion:   version,
 		InputSHA256:   st.SHA256,
 		Units:         "N-mm-MPa",
+		Complete:      true,
 		GoverningAxis: a.String(),
 		Nominal: &report.Nominal{
 			Capacity:            n.Capacity,

@@ -15,8 +15,8 @@
 // Exit status: 0 the command completed (whether or not the target was
 // met); 1 the target was not met and --require-target was given; 2 bad
 // input (a problem in the study file, an unknown flag, a missing file);
-// 3 an internal failure; 130 the run was interrupted (what finished is
-// written, marked incomplete).
+// 3 an internal failure; 130 the run was interrupted by SIGINT (Ctrl-C),
+// 143 by SIGTERM (what finished is written, marked "complete": false).
 //
 // Results depend entirely on the inputs and models stated in the study.
 // strutrisk supports, and never replaces, the judgement of a licensed
@@ -35,11 +35,10 @@ const version = "0.1.0"
 
 // Exit statuses.
 const (
-	exitOK          = 0
-	exitTarget      = 1
-	exitInput       = 2
-	exitInternal    = 3
-	exitInterrupted = 130
+	exitOK       = 0
+	exitTarget   = 1
+	exitInput    = 2
+	exitInternal = 3
 )
 
 const caution = `Caution: results depend entirely on the inputs and models stated in the
@@ -56,7 +55,8 @@ Usage:
   strutrisk COMMAND --help             help on a command
 
 Exit status: 0 done (target met or not), 1 target not met with
---require-target, 2 bad input, 3 internal failure, 130 interrupted.
+--require-target, 2 bad input, 3 internal failure (or the results could
+not be written), 130 interrupted by Ctrl-C (SIGINT), 143 by SIGTERM.
 
 ` + caution + "\n"
 

@@ -21,6 +21,8 @@ type progress struct {
 	drawn   bool
 	last    time.Time
 	current string
+	// name is the step under way, as stage last named it.
+	name string
 }
 
 // newProgress returns a bar on w; it stays quiet unless allowed and w is
@@ -61,11 +63,12 @@ func (p *progress) update(s sim.Progress) {
 
 // stage names a step after sampling (FORM, sensitivities).
 func (p *progress) stage(name string) {
+	p.mu.Lock()
+	defer p.mu.Unlock()
+	p.name = name
 	if !p.on || time.Since(p.start) < time.Second {
 		return
 	}
-	p.mu.Lock()
-	defer p.mu.Unlock()
 	p.draw("\r" + name + "...")
 }
 
@@ -77,6 +80,13 @@ func (p *progress) draw(line string) {
 	fmt.Fprint(p.w, line+pad)
 	p.current = line
 	p.drawn = true
+}
+
+// phase is the step last named by stage ("" during the main run).
+func (p *progress) phase() string {
+	p.mu.Lock()
+	defer p.mu.Unlock()
+	return p.name
 }
 
 // done clears the bar.

@@ -7,10 +7,7 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"os"
-	"os/signal"
 	"path/filepath"
-	"syscall"
 
 	"strutrisk/sim"
 )
@@ -23,7 +20,8 @@ Prints a short summary and writes results.json, samples.csv, summary.txt
 and the report files into the output folder ([output] dir of the study,
 else out/<study name>). Flags override the study's [analysis] settings and
 may stand before or after the study file. Ctrl-C stops sampling; what
-finished is written, marked incomplete, and the exit status is 130.
+finished is written, marked "complete": false, and the exit status is
+130 (143 after SIGTERM).
 A study with [sweep] or [[variant]] tables runs each case after the study
 itself, with the same seed; the summary ends with their tables and the
 report draws them (sweep.csv holds every curve).
@@ -129,7 +127,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		dir = filepath.Join("out", st.Name())
 	}
 
-	ctx, stop := signal.NotifyContext(baseContext(), os.Interrupt, syscall.SIGTERM)
+	ctx, sigs, stop := withSignals(baseContext())
 	defer stop()
 	bar := newProgress(stderr, !o.json)
 	settings.Progress = bar.update
@@ -150,6 +148,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", st.File, err)
 		return exitInternal
 	}
+	r.incomplete = incompleteReason(ctx, r, sigs, bar.phase())
 	b := r.bundle()
 	files, err := writeOutputs(dir, b, st.Output.Formats)
 	if err != nil {
@@ -167,13 +166,9 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stdout, r.summary(dir, files))
 	}
 	switch {
-	case r.res.Incomplete:
-		fmt.Fprintf(stderr, "strutrisk: interrupted: the results in %s are from the samples finished and are marked incomplete\n", dir)
-		return exitInterrupted
-	case ctx.Err() != nil:
-		// Interrupted after the main run, during the sweep or variants.
-		fmt.Fprintf(stderr, "strutrisk: interrupted: the main result in %s is complete; the sweep and variant cases not run are missing\n", dir)
-		return exitInterrupted
+	case r.incomplete != "":
+		fmt.Fprintf(stderr, "strutrisk: %s; the results in %s are marked \"complete\": false\n", r.incomplete, dir)
+		return sigs.code()
 	case o.requireTarget && b.Doc.MeetsTarget == nil:
 		// Undecided counts as not met: the target must be shown to be met.
 		fmt.Fprintf(stderr, "strutrisk: the target reliability index %.2f is not shown to be met: undecided at this sample size (give more samples or a smaller target_cov)\n", *b.Doc.TargetBeta)
@@ -191,4 +186,18 @@ func validMethod(m string) bool {
 		return true
 	}
 	return false
+}
+
+// incompleteReason says why the run is not complete, or "" when it is.
+func incompleteReason(ctx context.Context, r *results, sigs *interrupt, phase string) string {
+	switch {
+	case r.res.Incomplete:
+		return fmt.Sprintf("interrupted by %s after %d evaluations of the main run: the estimate is from the samples finished; the sensitivities, the reserve factor and any sweep or variant cases were not run", sigs.name(), r.res.Evaluations)
+	case ctx.Err() != nil:
+		if phase == "" {
+			phase = "the steps after the main run"
+		}
+		return fmt.Sprintf("interrupted by %s during %s: the main estimate is complete; what had not finished then (sensitivities, reserve factor, sweep or variant cases) is missing", sigs.name(), phase)
+	}
+	return ""
 }

@@ -8,6 +8,11 @@ type Document struct {
 	ToolVersion string `json:"tool_version"`
 	InputSHA256 string `json:"input_sha256"`
 	Units       string `json:"units"` // always "N-mm-MPa"
+	// Complete is always written: true when the command finished
+	// everything it set out to do, false when a signal stopped it, and
+	// then IncompleteReason says what is missing.
+	Complete         bool   `json:"complete"`
+	IncompleteReason string `json:"incomplete_reason,omitempty"`
 
 	Method      string    `json:"method,omitempty"`
 	Seed        *uint64   `json:"seed,omitempty"`
