@@ -248,6 +248,7 @@ func (r *results) bundle() *report.Bundle {
 		SobolNote:       r.sobolMsg,
 		SobolCapacity:   r.sobolCap,
 		Updates:         updates(l.st),
+		ByMagnitude:     l.md.ByMagnitude(),
 	}
 	if l.st.Model != "beam-column" {
 		b.TornadoBeta = r.tornado

@@ -54,6 +54,10 @@ type Bundle struct {
 	// SobolCapacity, when not empty, holds the Sobol indices of the
 	// capacity, drawn and tabulated beside those of SobolOutput.
 	SobolCapacity []sim.SobolIndex
+	// ByMagnitude names the inputs that act by their magnitude (a bow or an
+	// eccentricity, either side of the member): both of their fractiles
+	// can move a result the same way, and the tornado captions say so.
+	ByMagnitude []string
 }
 
 // Input is one row of the inputs table.
