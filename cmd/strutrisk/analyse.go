@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 
 	"strutrisk/internal/report"
 	"strutrisk/sim"
@@ -39,6 +40,9 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	}
 	r.res = res
 	r.warnings = append(r.warnings, res.Warnings...)
+	if st := res.BetaStatement(); st != "" && !res.Incomplete && !hasPrefix(res.Warnings, "no failure") {
+		r.warnings = append(r.warnings, st) // sampling already says "no failure"
+	}
 	if res.Incomplete {
 		r.warnings = append(r.warnings, fmt.Sprintf("incomplete: the run was interrupted after %d evaluations; the estimate is from the samples finished", res.Evaluations))
 		return r, nil
@@ -153,6 +157,16 @@ func (r *results) document() *report.Document {
 		d.Warnings = append(d.Warnings, "sobol: "+r.sobolMsg)
 	}
 	return d
+}
+
+// hasPrefix reports whether one of list starts with p.
+func hasPrefix(list []string, p string) bool {
+	for _, s := range list {
+		if strings.HasPrefix(s, p) {
+			return true
+		}
+	}
+	return false
 }
 
 // outputIndex returns the index of the output named name in m, or -1.

@@ -45,6 +45,8 @@ func load(path string, stderr io.Writer) (*loaded, int) {
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", path, err)
 		return nil, exitInput
 	}
+	// Valid but probably not meant (a unit, a digit): warnings.
+	st.Warnings = append(st.Warnings, md.Plausibility(nom)...)
 	return &loaded{st: st, md: md, nom: nom}, exitOK
 }
 

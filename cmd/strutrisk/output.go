@@ -31,6 +31,14 @@ func (r *results) summary(dir string, files []string) string {
 		fmt.Fprintf(&w, "  failure prob. pf   %s   95 %% interval [%s, %s]\n", pfText(res.Pf), pfText(res.PfCI[0]), pfText(res.PfCI[1]))
 		fmt.Fprintf(&w, "  reliability beta   %s   95 %% interval [%s, %s]\n", betaText(res.Beta), betaText(res.BetaCI[0]), betaText(res.BetaCI[1]))
 	}
+	switch {
+	// Never a bare -inf or inf: say what it means (the warning below
+	// gives the bounds).
+	case math.IsInf(res.Beta, -1):
+		fmt.Fprintf(&w, "                     (-inf: every one of the %d evaluations failed; not a result to read before the inputs are checked: see the warnings)\n", res.Evaluations)
+	case math.IsInf(res.Beta, 1):
+		fmt.Fprintf(&w, "                     (inf: none of the %d evaluations failed; beta is only known to be above %s: see the warnings)\n", res.Evaluations, betaText(res.BetaCI[0]))
+	}
 	w.WriteString(r.targetSummary(d))
 	if res.Method == sim.FORMMethod {
 		fmt.Fprintf(&w, "  method             %s, %d evaluations\n", res.Method, res.Evaluations)

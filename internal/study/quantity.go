@@ -32,6 +32,11 @@ type Quantity struct {
 	// update is the measurement that updated the distribution, if any.
 	update *Measurement
 
+	// bare reports that the value (or a parameter of the distribution that
+	// carries the quantity's dimension) was written without a unit, so the
+	// study's unit system gave it one (see plausible.go).
+	bare bool
+
 	// spec is the distribution as parsed, before it is built.
 	spec *distSpec
 }
@@ -133,11 +138,13 @@ func (p *parser) quantity(path string, v any, o qopt) *Quantity {
 		}
 		if spec.name == "fixed" {
 			q.Value, q.Relative = spec.params["value"].v, spec.params["value"].rel
+			q.bare = bareTable(m, o)
 			if !p.checkFixed(path, q.Value, o) {
 				return nil
 			}
 			return q
 		}
+		q.bare = bareTable(m, o)
 		q.spec = spec
 		q.DistName = spec.name
 		q.Params = spec.written
@@ -148,10 +155,46 @@ func (p *parser) quantity(path string, v any, o qopt) *Quantity {
 		return nil
 	}
 	q.Value, q.Relative = pv.v, pv.rel
+	q.bare = writtenBare(v, o)
 	if !p.checkFixed(path, q.Value, o) {
 		return nil
 	}
 	return q
+}
+
+// writtenBare reports whether v, a number of dimension o.dim, was written
+// without a unit: a TOML number, or text with a number alone.
+func writtenBare(v any, o qopt) bool {
+	if o.dim == Dimensionless {
+		return false
+	}
+	switch x := v.(type) {
+	case int64, float64:
+		return true
+	case string:
+		s := strings.TrimSpace(x)
+		if strings.HasPrefix(s, "L") || s == "rigid" || strings.HasSuffix(s, "inf") {
+			return false
+		}
+		_, unit := splitValue(s)
+		return unit == ""
+	}
+	return false
+}
+
+// bareTable reports whether a distribution table has a parameter of the
+// quantity's dimension written without a unit (mu of a lognormal is the
+// log of such a number).
+func bareTable(m map[string]any, o qopt) bool {
+	for k, v := range m {
+		if k == "mu" && o.dim != Dimensionless {
+			return true
+		}
+		if k != "dist" && !plainParams[k] && writtenBare(v, o) {
+			return true
+		}
+	}
+	return false
 }
 
 func (p *parser) checkFixed(path string, v float64, o qopt) bool {
