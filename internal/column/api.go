@@ -62,6 +62,11 @@ type Member struct {
 	// Bow is the amplitude of the initial half-sine bow and Ecc the end
 	// eccentricity of the load; both act by their magnitude.
 	Bow, Ecc float64
+	// Sway is the initial out-of-plumb angle (rad) of a member whose ends
+	// sway in the plane of the axis evaluated; it acts by its magnitude, on
+	// every axis evaluated (evaluate one axis at a time for a member that
+	// sways in one plane only). See SwayMoment for its effect.
+	Sway float64
 	// Alpha is the imperfection factor per axis (model "curve").
 	Alpha [2]float64
 }

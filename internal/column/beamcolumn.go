@@ -123,7 +123,8 @@ const (
 
 var (
 	errBeamAxis     = errors.New("column: beam-column axis must be Major, Minor or Both")
-	errBeamMember   = errors.New("column: beam-column needs positive, finite E, Fy, Length and Props.A, and finite Bow and Ecc")
+	errBeamMember   = errors.New("column: beam-column needs positive, finite E, Fy, Length and Props.A, and finite Bow, Ecc and Sway")
+	errBeamSway     = errors.New("column: beam-column end springs hold the ends against lateral movement (a braced member): a sway imperfection needs the pinned equivalent member of length K L (no springs)")
 	errBeamAxisProp = errors.New("column: beam-column needs a positive, finite Props.I (or Props.R) and Props.W (or Props.C) for the axis, and K > 0 for a pinned axis")
 	errBeamSpring   = errors.New("column: beam-column end springs must be zero (pinned), positive or +Inf (fixed)")
 	errBeamProfile  = errors.New("column: beam-column profile offsets must be finite numbers")
@@ -139,7 +140,8 @@ var (
 // axial force (second-order theory of moderate rotations), rotational end
 // springs, an initial bow (half-sine of amplitude m.Bow, or opt.Profile)
 // and an end eccentricity m.Ecc in the same direction as the bow, both
-// ends braced. With axis Both both axes are evaluated and the weaker
+// ends braced. A sway imperfection m.Sway (only without springs) adds the
+// half-sine bow SwayBow. With axis Both both axes are evaluated and the weaker
 // reported (a tie reports Minor).
 //
 // First yield (the default) is the elastic second-order load at which
@@ -259,7 +261,7 @@ func bcCheck(m *Member, axis Axis, o *BeamOptions) error {
 		return errBeamAxis
 	}
 	if !bcPositive(m.E) || !bcPositive(m.Fy) || !bcPositive(m.Length) || !bcPositive(m.Props.A) ||
-		!bcFinite(m.Bow) || !bcFinite(m.Ecc) {
+		!bcFinite(m.Bow) || !bcFinite(m.Ecc) || !bcFinite(m.Sway) {
 		return errBeamMember
 	}
 	if o.Limit != FirstYieldLimit && o.Limit != UltimateLimit {
@@ -288,6 +290,9 @@ func bcCheck(m *Member, axis Axis, o *BeamOptions) error {
 		}
 		if o.Springs[a] == [2]float64{} && !bcPositive(m.K[a]) {
 			return errBeamAxisProp
+		}
+		if o.Springs[a] != [2]float64{} && m.Sway != 0 {
+			return errBeamSway
 		}
 		if o.Limit == FirstYieldLimit {
 			if !bcPositive(bcSecond(m, a)) || !bcPositive(bcModulus(m, a)) {

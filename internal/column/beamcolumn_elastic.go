@@ -121,7 +121,7 @@ func (w *bcWork) setup(m *Member, a Axis, o *BeamOptions, ei, area, wel float64)
 	}
 
 	// Initial bow and its direction, which the eccentricity follows.
-	sign := w.bow(m, o)
+	sign := w.bow(m, a, o)
 	w.ecc = sign * math.Abs(m.Ecc)
 	w.imperfect = w.ecc != 0
 	for i := range w.y0v {
@@ -147,19 +147,27 @@ func (w *bcWork) fixed() [4]int {
 }
 
 // bow fills y0v and y0s with the initial bow and returns its direction
-// (+1 or -1).
-func (w *bcWork) bow(m *Member, o *BeamOptions) float64 {
-	if len(o.Profile) < 2 {
-		b := math.Abs(m.Bow)
-		for i := range w.y0v {
-			s, c := math.Sincos(math.Pi * float64(i) / float64(w.nel))
-			w.y0v[i] = b * s
-			w.y0s[i] = b * math.Pi / w.l * c
-		}
-		w.y0v[w.nel] = 0 // sin(pi) is not exactly zero in floating point
-		return 1
+// (+1 or -1). A sway imperfection adds the half-sine bow SwayBow in the
+// direction of the bow.
+func (w *bcWork) bow(m *Member, a Axis, o *BeamOptions) float64 {
+	sign, b := 1.0, math.Abs(m.Bow)
+	if len(o.Profile) >= 2 {
+		sign, b = w.spline(o.Profile), 0 // the half-sine adds to the measured shape
+	} else {
+		clear(w.y0v)
+		clear(w.y0s)
 	}
-	return w.spline(o.Profile)
+	b = sign * (b + SwayBow(m, a))
+	if b == 0 {
+		return sign
+	}
+	for i := range w.y0v {
+		s, c := math.Sincos(math.Pi * float64(i) / float64(w.nel))
+		w.y0v[i] += b * s
+		w.y0s[i] += b * math.Pi / w.l * c
+	}
+	w.y0v[w.nel] = 0 // sin(pi) is not exactly zero in floating point
+	return sign
 }
 
 // spline interpolates the measured offsets p (equal spacing over the

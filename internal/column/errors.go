@@ -13,7 +13,7 @@ var (
 	ErrRadius       = errors.New("column: radius of gyration r must be positive and finite")
 	ErrFibre        = errors.New("column: extreme-fibre distance c must be positive and finite")
 	ErrK            = errors.New("column: effective length factor K must be positive and finite")
-	ErrImperfection = errors.New("column: bow and eccentricity must be finite numbers")
+	ErrImperfection = errors.New("column: bow, eccentricity and sway must be finite numbers")
 	ErrAlpha        = errors.New("column: imperfection factor alpha must be non-negative and finite")
 	ErrAxis         = errors.New("column: axis must be Major, Minor or Both")
 	ErrSpring       = errors.New("column: end spring stiffness must be non-negative (0 pinned, +Inf fixed)")

@@ -28,6 +28,12 @@ import "math"
 // (0, min(A fy, PE)). The capacity tends to the squash load A fy as the
 // imperfections vanish and to PE as the member grows slender.
 //
+// A sway imperfection m.Sway = phi adds the bending stress of the leaning
+// cantilever of length K L/2 (see SwayMoment), (c/r^2) phi (K L/2)
+// tan(u)/u with u = (pi/2) sqrt(P/PE); its maximum, at the fixed base, is
+// where the mirrored equivalent pinned member has its mid-height, so the
+// three terms add at one section.
+//
 // FirstYield evaluates axis, or both axes taking the weaker when axis is
 // Both (a tie reports Minor). Invalid input returns an error (see
 // Member.Validate), never NaN.
@@ -54,7 +60,8 @@ func firstYield(m *Member, a Axis) float64 {
 	lam := m.K[a] * m.Length / r
 	// rho = fy/sE = lam_bar^2, the load ratio P/PE at the squash load.
 	rho := m.Fy * lam * lam / (math.Pi * math.Pi * m.E)
-	return m.Props.A * m.Fy * firstYieldChi(rho, relImp(m.Bow, r, c), relImp(m.Ecc, r, c))
+	sw := relImp(m.Sway*swayArm(m, a), r, c)
+	return m.Props.A * m.Fy * firstYieldChi(rho, relImp(m.Bow, r, c), relImp(m.Ecc, r, c), sw)
 }
 
 // relImp returns the imperfection e as the relative bending stress
@@ -88,12 +95,13 @@ func perryChi(rho, eta float64) float64 {
 	return 2 / s / (b + math.Sqrt(d))
 }
 
-// firstYieldChi solves chi [1 + ecc sec((pi/2) sqrt(chi rho)) +
-// eta/(1 - chi rho)] = 1 for chi in (0, min(1, 1/rho)), where ecc = e c/r^2
-// and eta = e0 c/r^2.
-func firstYieldChi(rho, eta, ecc float64) float64 {
-	if ecc == 0 || math.IsInf(rho, 1) || math.IsInf(eta, 1) || math.IsInf(ecc, 1) {
-		return perryChi(rho, eta+ecc)
+// firstYieldChi solves chi [1 + ecc sec(u) + eta/(1 - chi rho) +
+// sw tan(u)/u] = 1, u = (pi/2) sqrt(chi rho), for chi in
+// (0, min(1, 1/rho)), where ecc = e c/r^2, eta = e0 c/r^2 and
+// sw = phi (K L/2) c/r^2 (see SwayMoment).
+func firstYieldChi(rho, eta, ecc, sw float64) float64 {
+	if ecc == 0 && sw == 0 || math.IsInf(rho, 1) || math.IsInf(eta, 1) || math.IsInf(ecc, 1) || math.IsInf(sw, 1) {
+		return perryChi(rho, eta+ecc+sw)
 	}
 	hi := 1.0
 	if rho > 1 {
@@ -101,12 +109,14 @@ func firstYieldChi(rho, eta, ecc float64) float64 {
 	}
 	lo := 0.0
 	// The left-hand side g is increasing and convex in chi, and sec θ ≥
-	// 1/(1 - q) for q = chi rho in [0, 1), so the Perry root with
-	// eta + ecc lies at or right of the root: Newton then descends
-	// monotonically. The bracket [lo, hi] guards against round-off.
-	x := perryChi(rho, eta+ecc)
+	// 1/(1 - q) for q = chi rho in [0, 1), so without sway the Perry root
+	// with eta + ecc lies at or right of the root: Newton then descends
+	// monotonically. tan θ/θ ≤ 1/(1 - q), so with sway the start may lie
+	// left of the root; the bracket [lo, hi] and bisection keep the
+	// iteration safe either way.
+	x := perryChi(rho, eta+ecc+sw)
 	for i := 0; i < 100; i++ {
-		g, dg := firstYieldG(x, rho, eta, ecc)
+		g, dg := firstYieldG(x, rho, eta, ecc, sw)
 		if g == 0 {
 			return x
 		}
@@ -136,7 +146,7 @@ func firstYieldChi(rho, eta, ecc float64) float64 {
 
 // firstYieldG returns g(chi) - 1 and its derivative, where g is the
 // left-hand side of the first-yield equation over fy.
-func firstYieldG(x, rho, eta, ecc float64) (g, dg float64) {
+func firstYieldG(x, rho, eta, ecc, sw float64) (g, dg float64) {
 	q := x * rho
 	if q >= 1 {
 		return math.Inf(1), math.Inf(1)
@@ -145,7 +155,12 @@ func firstYieldG(x, rho, eta, ecc float64) (g, dg float64) {
 	sin, cos := math.Sincos(th)
 	sec := 1 / cos
 	w := 1 / (1 - q)
-	g = x*(1+ecc*sec+eta*w) - 1
-	dg = 1 + ecc*sec*(1+0.5*th*sin*sec) + eta*w*w
+	tu := 1.0 // tan θ / θ, 1 at θ = 0
+	if th > 1e-8 {
+		tu = sin * sec / th
+	}
+	g = x*(1+ecc*sec+eta*w+sw*tu) - 1
+	// d(x tan θ/θ)/dx = (tan θ/θ + sec^2 θ)/2, as θ = (pi/2) sqrt(x rho).
+	dg = 1 + ecc*sec*(1+0.5*th*sin*sec) + eta*w*w + 0.5*sw*(tu+sec*sec)
 	return g, dg
 }

@@ -180,39 +180,54 @@ func TestPerryRootResidual(t *testing.T) {
 	}
 }
 
-// Robustness: for any positive input the secant solution is finite, lies
-// in (0, min(1, 1/rho)] and satisfies the equation.
+// Robustness: for any positive input the secant solution (with or
+// without a sway term) is finite, lies in (0, min(1, 1/rho)] and satisfies
+// the equation.
 func TestFirstYieldNoNaN(t *testing.T) {
 	for _, rho := range []float64{1e-10, 1e-4, 0.04, 0.3, 1, 1.0000001, 3, 1e3, 1e8} {
 		for _, eta := range []float64{0, 1e-13, 1e-4, 0.2, 3, 1e5} {
-			for _, ecc := range []float64{1e-15, 1e-9, 1e-3, 0.1, 1, 30, 1e6, 1e12} {
-				chi := firstYieldChi(rho, eta, ecc)
-				if !(chi > 0 && chi <= math.Min(1, 1/rho)) {
-					t.Errorf("rho %g, eta %g, ecc %g: chi = %g", rho, eta, ecc, chi)
-					continue
-				}
-				// The root is bracketed by a relative perturbation of 1e-12
-				// (the equation is ill-conditioned near P = PE, so its
-				// residual is not a fair measure).
-				if g := fyLHS(chi*(1-1e-12), rho, eta, ecc); g > 1 {
-					t.Errorf("rho %g, eta %g, ecc %g: chi = %.17g: equation just below gives %.17g > 1", rho, eta, ecc, chi, g)
-				}
-				if g := fyLHS(chi*(1+1e-12), rho, eta, ecc); g < 1 {
-					t.Errorf("rho %g, eta %g, ecc %g: chi = %.17g: equation just above gives %.17g < 1", rho, eta, ecc, chi, g)
+			for _, ecc := range []float64{0, 1e-15, 1e-9, 1e-3, 0.1, 1, 30, 1e6, 1e12} {
+				for _, sw := range []float64{0, 1e-12, 1e-3, 0.4, 20, 1e9} {
+					checkFirstYieldRoot(t, rho, eta, ecc, sw)
 				}
 			}
 		}
 	}
 }
 
+func checkFirstYieldRoot(t *testing.T, rho, eta, ecc, sw float64) {
+	t.Helper()
+	chi := firstYieldChi(rho, eta, ecc, sw)
+	if !(chi > 0 && chi <= math.Min(1, 1/rho)) {
+		t.Errorf("rho %g, eta %g, ecc %g, sw %g: chi = %g", rho, eta, ecc, sw, chi)
+		return
+	}
+	// The root is bracketed by a relative perturbation of 1e-12 (the
+	// equation is ill-conditioned near P = PE, so its residual is not a
+	// fair measure).
+	if g := fyLHS(chi*(1-1e-12), rho, eta, ecc, sw); g > 1 {
+		t.Errorf("rho %g, eta %g, ecc %g, sw %g: chi = %.17g: equation just below gives %.17g > 1", rho, eta, ecc, sw, chi, g)
+	}
+	if g := fyLHS(chi*(1+1e-12), rho, eta, ecc, sw); g < 1 {
+		t.Errorf("rho %g, eta %g, ecc %g, sw %g: chi = %.17g: equation just above gives %.17g < 1", rho, eta, ecc, sw, chi, g)
+	}
+}
+
 // fyLHS is the left-hand side of the first-yield equation over fy, written
-// out from the equation (+Inf past the Euler load).
-func fyLHS(chi, rho, eta, ecc float64) float64 {
+// out from the equation (+Inf past the Euler load): secant term, Perry
+// amplification and the leaning cantilever's tan(u)/u (Timoshenko & Gere,
+// art. 1.3, from memory).
+func fyLHS(chi, rho, eta, ecc, sw float64) float64 {
 	q := chi * rho
 	if q >= 1 {
 		return math.Inf(1)
 	}
-	return chi * (1 + ecc/math.Cos(math.Pi/2*math.Sqrt(q)) + eta/(1-q))
+	u := math.Pi / 2 * math.Sqrt(q)
+	tu := 1.0
+	if u > 0 {
+		tu = math.Tan(u) / u
+	}
+	return chi * (1 + ecc/math.Cos(u) + eta/(1-q) + sw*tu)
 }
 
 // Limits: vanishing imperfections give the squash load A fy (stocky) or the

@@ -30,7 +30,7 @@ func positive(x float64) bool { return x > 0 && x <= math.MaxFloat64 }
 // Validate checks the inputs a capacity evaluation about axis (Major,
 // Minor or Both) reads: E, Fy, Length, Props.A, and per axis K, Props.R and
 // Props.C must be positive and finite, and so must the squash load A fy;
-// Bow and Ecc must be finite (they act by their magnitude). The capacity
+// Bow, Ecc and Sway must be finite (they act by their magnitude). The capacity
 // models call it themselves; it is exported for callers that want to check
 // a member before using the float64 helpers (Slenderness,
 // RelativeSlenderness, Euler).
@@ -49,7 +49,8 @@ func (m *Member) Validate(axis Axis) error {
 		return ErrArea
 	case !positive(m.Props.A * m.Fy):
 		return ErrRange
-	case math.IsNaN(m.Bow) || math.IsInf(m.Bow, 0) || math.IsNaN(m.Ecc) || math.IsInf(m.Ecc, 0):
+	case math.IsNaN(m.Bow) || math.IsInf(m.Bow, 0) || math.IsNaN(m.Ecc) || math.IsInf(m.Ecc, 0) ||
+		math.IsNaN(m.Sway) || math.IsInf(m.Sway, 0):
 		return ErrImperfection
 	}
 	lo, hi := axis, axis
