@@ -7,7 +7,7 @@ import (
 
 // leaningCantileverMoment integrates the elastic cantilever fixed at x = 0
 // whose axis leans by phi and which carries the vertical load p at its top
-// x = l: EI v'' = p (phi l + v(l) - phi x - v(x)), v(0) = v'(0) = 0 (the
+// x = l: EI v” = p (phi l + v(l) - phi x - v(x)), v(0) = v'(0) = 0 (the
 // bending moment of the deflected, leaning member; Timoshenko & Gere,
 // Theory of Elastic Stability, ch. 1, set up from equilibrium). The
 // equation is linear in the unknown top deflection v(l), so two RK4 shots
