@@ -5,12 +5,16 @@
 //	strutrisk run STUDY.toml [--out DIR] [--seed N] [--samples N] [--method M] [--json] [--require-target] [--workers N]
 //	strutrisk check STUDY.toml [--json]
 //	strutrisk new [NAME]
+//	strutrisk help keys
+//	strutrisk --version
 //
 // run estimates the probability that the column of a study fails and the
 // inputs that drive it, prints a summary and writes results.json,
 // samples.csv, summary.txt and the report files into the output folder.
 // check validates a study and prints the deterministic picture at nominal
-// values without sampling. new prints a commented starter study.
+// values without sampling. new prints a commented starter study. help keys
+// lists every table and key of a study file with its meaning, units and
+// default, from the registry the study parser uses.
 //
 // Exit status: 0 the command completed (whether or not the target was
 // met); 1 the target was not met and --require-target was given; 2 bad
@@ -52,6 +56,8 @@ Usage:
   strutrisk run STUDY.toml [flags]     sample the study; print a summary, write results
   strutrisk check STUDY.toml [--json]  validate; deterministic check at nominal values
   strutrisk new [NAME]                 print a commented starter study
+  strutrisk help keys                  every study-file table and key: meaning, units, default
+  strutrisk --version                  print the version
   strutrisk COMMAND --help             help on a command
 
 Exit status: 0 done (target met or not), 1 target not met with
@@ -85,13 +91,18 @@ func run(args []string, stdout, stderr io.Writer) (code int) {
 		return checkCmd(args[1:], stdout, stderr)
 	case "new":
 		return newCmd(args[1:], stdout, stderr)
+	case "keys":
+		return keysCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":
+		if len(args) > 1 {
+			return helpCmd(args[1:], stdout, stderr)
+		}
 		fmt.Fprint(stdout, usage)
 		return exitOK
 	case "version", "--version":
 		fmt.Fprintln(stdout, "strutrisk", version)
 		return exitOK
 	}
-	fmt.Fprintf(stderr, "strutrisk: unknown command %q: use run, check or new (strutrisk --help)\n", args[0])
+	fmt.Fprintf(stderr, "strutrisk: unknown command %q: use run, check, new or help keys (strutrisk --help)\n", args[0])
 	return exitInput
 }

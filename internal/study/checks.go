@@ -89,7 +89,7 @@ func (p *parser) correlation(top *table) {
 			p.errorf(t.key("rho"), "rho = %g must lie strictly between -1 and 1 (a correlation of ±1 means one variable: write it once)", rho)
 			good = false
 		}
-		p.unknown(t, []string{"pair", "rho"})
+		p.unknown(t)
 		if !good {
 			continue
 		}

@@ -49,14 +49,6 @@ var measureTargets = []struct{ key, path string }{
 	{"thickness_loss", "member.section.thickness_loss"},
 }
 
-func measureKeys() []string {
-	keys := make([]string, len(measureTargets))
-	for i, m := range measureTargets {
-		keys[i] = m.key
-	}
-	return keys
-}
-
 // measurements reads the [measurements] table once every quantity is
 // built, updates the distributions and records the updates in the study.
 func (p *parser) measurements(top *table) {
@@ -74,8 +66,8 @@ func (p *parser) measurements(top *table) {
 			p.errorf(t.key(mt.key), "write test results as a table, e.g. %s = { values = [%s] }", mt.key, measureExample(mt.key))
 			continue
 		}
-		known := []string{"values", "prior_tests", "prior_dof", "cov"}
 		mtab := &table{path: t.key(mt.key), m: m, used: map[string]bool{}}
+		known := knownKeys(mtab.path)
 		if ms := p.measurement(mtab, mt.path); ms != nil {
 			p.st.Measurements = append(p.st.Measurements, ms)
 			if ms.Variance() == "unknown" {
@@ -87,9 +79,9 @@ func (p *parser) measurements(top *table) {
 				mtab.used[k] = true // reported already when it was wrong
 			}
 		}
-		p.unknown(mtab, known)
+		p.unknown(mtab)
 	}
-	p.unknown(t, measureKeys())
+	p.unknown(t)
 }
 
 func measureExample(key string) string {

@@ -102,6 +102,13 @@ func (t *table) get(key string) (any, bool) {
 	if t == nil {
 		return nil, false
 	}
+	if tableInfo(t.path) != nil {
+		if !registered(t.path, key) {
+			// A programming error, not a problem of the file: every key
+			// the parser reads is a row of the registry.
+			panic("study: the parser reads " + t.key(key) + ", which is not in the key registry (keys_table.go)")
+		}
+	}
 	v, ok := t.m[key]
 	if ok {
 		t.used[key] = true
@@ -132,8 +139,14 @@ func (p *parser) sub(t *table, key string) *table {
 }
 
 // unknown reports every key of t that was not read, suggesting near
+// misses among the keys the registry (keys_table.go) gives its table.
+func (p *parser) unknown(t *table) {
+	p.unknownOf(t, knownKeys(t.path))
+}
+
+// unknownOf reports every key of t that was not read, suggesting near
 // misses among known.
-func (p *parser) unknown(t *table, known []string) {
+func (p *parser) unknownOf(t *table, known []string) {
 	if t == nil {
 		return
 	}
@@ -250,7 +263,7 @@ func (p *parser) perAxis(t *table, key string, o qopt) (qs [2]*Quantity, given b
 		}
 		qs[a] = p.q(at, name, o)
 	}
-	p.unknown(at, []string{"major", "minor"})
+	p.unknownOf(at, []string{"major", "minor"})
 	return qs, true
 }
 
@@ -279,7 +292,7 @@ func (p *parser) parse() *Study {
 	st := p.st
 
 	// Units first: they decide how every bare number reads.
-	if u, ok := p.choice(top, "units", []string{"N-mm", "kN-m", "kip-in"}); ok {
+	if u, ok := p.choice(top, "units", choicesOf("", "units")); ok {
 		p.sys = systems[u]
 	} else if _, given := raw["units"]; !given {
 		p.defaultf("units: not given; bare numbers are read in N, mm and MPa")
@@ -315,7 +328,7 @@ func (p *parser) parse() *Study {
 	if _, ok := raw["measurements"]; ok {
 		top.used["measurements"] = true // read once the distributions are built
 	}
-	p.unknown(top, []string{"title", "units", "member", "material", "imperfection", "capacity", "loads", "correlation", "target", "analysis", "sensitivity", "sweep", "variant", "output", "measurements"})
+	p.unknown(top)
 	if len(p.probs) > 0 {
 		return st
 	}
@@ -455,7 +468,7 @@ func (p *parser) member(top *table) {
 		p.st.Ends[a] = spec
 	}
 	p.section(t)
-	p.unknown(t, []string{"length", "k", "k_major", "k_minor", "ends", "spring_top", "spring_bottom", "section"})
+	p.unknown(t)
 }
 
 // endNames maps accepted end-condition names to the canonical ones.
@@ -498,7 +511,7 @@ func (p *parser) section(member *table) {
 		}
 		return
 	}
-	shapes := []string{"I", "RHS", "CHS", "rect", "round", "custom"}
+	shapes := choicesOf("member.section", "shape")
 	name, ok := p.str(t, "shape")
 	if !ok {
 		if _, given := t.m["shape"]; !given {
@@ -553,7 +566,7 @@ func (p *parser) section(member *table) {
 			p.errorf(t.key(k), "shape %s does not take %s (it takes %s)", canon, k, strings.Join(append(append([]string{}, keys.required...), keys.optional...), ", "))
 		}
 	}
-	p.unknown(t, append(append([]string{"shape"}, keys.required...), keys.optional...))
+	p.unknownOf(t, append(append([]string{"shape"}, keys.required...), keys.optional...))
 	p.st.Section = spec
 }
 
@@ -582,7 +595,7 @@ func (p *parser) material(top *table) {
 			p.required(t, "yield", "the yield strength, e.g. yield = \"275 MPa\"")
 		}
 	}
-	p.unknown(t, []string{"modulus", "yield"})
+	p.unknown(t)
 }
 
 func (p *parser) imperfection(top *table) {
@@ -593,7 +606,7 @@ func (p *parser) imperfection(top *table) {
 	o := qopt{dim: Length, rel: true}
 	p.st.Bow = p.q(t, "bow", o)
 	p.st.Ecc = p.q(t, "eccentricity", o)
-	p.unknown(t, []string{"bow", "eccentricity"})
+	p.unknown(t)
 }
 
 func (p *parser) loads(top *table) {
@@ -633,14 +646,14 @@ func (p *parser) capacity(top *table) {
 	if t == nil {
 		t = &table{path: "capacity", m: map[string]any{}, used: map[string]bool{}}
 	}
-	models := []string{"perry-robertson", "secant", "curve", "beam-column"}
+	models := choicesOf("capacity", "model")
 	if m, ok := p.choice(t, "model", models); ok {
 		st.Model = m
 	} else if _, given := t.m["model"]; !given {
 		st.Model = "perry-robertson"
 		p.defaultf("capacity.model: not given; perry-robertson is used")
 	}
-	if a, ok := p.choice(t, "axis", []string{"both", "major", "minor"}); ok {
+	if a, ok := p.choice(t, "axis", choicesOf("capacity", "axis")); ok {
 		st.Axis = map[string]column.Axis{"major": column.Major, "minor": column.Minor, "both": column.Both}[a]
 	} else if _, given := t.m["axis"]; !given {
 		p.defaultf("capacity.axis: not given; both axes are checked and each sample takes the weaker")
@@ -676,10 +689,10 @@ func (p *parser) capacity(top *table) {
 		p.errorf(t.key("model"), "model \"curve\" needs a buckling curve: add curve = \"b\" (a0, a, b, c, d) or alpha = 0.34")
 	}
 
-	if l, ok := p.choice(t, "limit", []string{"first-yield", "ultimate"}); ok {
+	if l, ok := p.choice(t, "limit", choicesOf("capacity", "limit")); ok {
 		st.Limit = l
 	}
-	if r, ok := p.choice(t, "residual_stress", []string{"none", "hot-rolled", "welded", "cold-formed"}); ok {
+	if r, ok := p.choice(t, "residual_stress", choicesOf("capacity", "residual_stress")); ok {
 		st.Residual = r
 	}
 	if v, ok := t.get("profile"); ok {
@@ -705,7 +718,7 @@ func (p *parser) capacity(top *table) {
 			p.defaultf("capacity.residual_stress: not given; no residual stresses")
 		}
 	}
-	p.unknown(t, []string{"model", "curve", "alpha", "axis", "limit", "residual_stress", "profile", "model_factor"})
+	p.unknown(t)
 }
 
 // curveAlpha are the imperfection factors of the buckling curves,
@@ -739,7 +752,7 @@ func (p *parser) curves(t *table) (c [2]string, given bool) {
 			}
 			c[a] = check(at.key(name), x)
 		}
-		p.unknown(at, []string{"major", "minor"})
+		p.unknownOf(at, []string{"major", "minor"})
 		return c, true
 	}
 	s := check(t.key("curve"), v)
@@ -779,7 +792,7 @@ func (p *parser) target(top *table) {
 		p.required(t, "beta", "the target reliability index, e.g. beta = 3.8")
 	}
 	p.reserve(t)
-	p.unknown(t, []string{"beta", "reference_period", "reserve_on", "permanent"})
+	p.unknown(t)
 }
 
 // MaxSamples bounds analysis.samples.
@@ -791,7 +804,7 @@ func (p *parser) analysis(top *table) {
 	if t == nil {
 		t = &table{path: "analysis", m: map[string]any{}, used: map[string]bool{}}
 	}
-	methods := []string{"auto", "monte-carlo", "latin-hypercube", "form", "importance", "subset", "conditional-qmc"}
+	methods := choicesOf("analysis", "method")
 	if m, ok := p.choice(t, "method", methods); ok {
 		a.Method = methodOf(m)
 	} else if _, given := t.m["method"]; !given {
@@ -819,7 +832,7 @@ func (p *parser) analysis(top *table) {
 		a.Seed = 1
 		p.defaultf("analysis.seed: not given; seed 1")
 	}
-	p.unknown(t, []string{"method", "samples", "target_cov", "seed"})
+	p.unknown(t)
 }
 
 // count reads a whole number in [0, max] (1 or more for samples).
@@ -878,7 +891,7 @@ func (p *parser) sensitivity(top *table) {
 			if !(s.TornadoLow > 0 && s.TornadoLow < s.TornadoHigh && s.TornadoHigh < 1) {
 				p.errorf(tt.path, "low and high are fractiles with 0 < low < high < 1, e.g. { low = 0.05, high = 0.95 }")
 			}
-			p.unknown(tt, []string{"low", "high"})
+			p.unknownOf(tt, []string{"low", "high"})
 		default:
 			p.errorf(t.key("tornado"), "tornado is true, false or { low = 0.05, high = 0.95 }")
 		}
@@ -895,12 +908,12 @@ func (p *parser) sensitivity(top *table) {
 				}
 				s.SobolSamples = int(n)
 			}
-			p.unknown(tt, []string{"samples"})
+			p.unknownOf(tt, []string{"samples"})
 		default:
 			p.errorf(t.key("sobol"), "sobol is true, false or { samples = 20000 }")
 		}
 	}
-	p.unknown(t, []string{"tornado", "sobol"})
+	p.unknown(t)
 }
 
 func (p *parser) output(top *table) {
@@ -916,7 +929,7 @@ func (p *parser) output(top *table) {
 		o.Dir = d
 	}
 	if v, ok := t.get("formats"); ok {
-		known := []string{"html", "json", "csv", "svg", "png", "txt"}
+		known := choicesOf("output", "formats")
 		list, ok := v.([]any)
 		if !ok {
 			p.errorf(t.key("formats"), "formats is a list, e.g. [\"html\", \"json\", \"csv\"]")
@@ -934,5 +947,5 @@ func (p *parser) output(top *table) {
 			o.Formats = append(o.Formats, s)
 		}
 	}
-	p.unknown(t, []string{"dir", "formats"})
+	p.unknown(t)
 }

@@ -40,9 +40,6 @@ func (s *Sweep) Label() string {
 	return s.Parameter + " (" + InternalUnit(s.dim) + ")"
 }
 
-// sweepKeys are the keys of [sweep].
-var sweepKeys = []string{"parameter", "values", "from", "to", "steps", "scale"}
-
 // sweepOpt returns the rules of the swept key: a quantity's own, or for
 // a distribution parameter its quantity's dimension (plain numbers for
 // cov, shape and the like).
@@ -70,7 +67,7 @@ func (p *parser) sweep(top *table) {
 	if t == nil {
 		return
 	}
-	defer p.unknown(t, sweepKeys)
+	defer p.unknown(t)
 	sw := &Sweep{}
 	name, ok := p.str(t, "parameter")
 	if !ok {
@@ -137,7 +134,7 @@ const maxSteps = 200
 
 func (p *parser) sweepRange(t *table, sw *Sweep, o qopt) {
 	sw.Scale = "linear"
-	if s, ok := p.choice(t, "scale", []string{"linear", "log"}); ok {
+	if s, ok := p.choice(t, "scale", choicesOf("sweep", "scale")); ok {
 		sw.Scale = s
 	}
 	var ends [2]pval

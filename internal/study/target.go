@@ -26,7 +26,7 @@ func (p *parser) reserve(t *table) {
 		st.ReferencePeriod = strings.TrimSpace(s)
 	}
 	defaulted := false
-	if on, ok := p.choice(t, "reserve_on", []string{"variable", "all"}); ok {
+	if on, ok := p.choice(t, "reserve_on", choicesOf("target", "reserve_on")); ok {
 		st.ReserveOn = on
 	} else if _, given := t.m["reserve_on"]; !given {
 		st.ReserveOn, defaulted = "variable", true

@@ -59,7 +59,7 @@ func (p *parser) variants(top *table) {
 		} else if _, given := m["set"]; !given {
 			p.required(t, "set", "the keys the variant changes, e.g. set = { \"imperfection.bow\" = \"L/500\" }")
 		}
-		p.unknown(t, []string{"name", "set"})
+		p.unknown(t)
 		p.st.Variants = append(p.st.Variants, va)
 	}
 }
