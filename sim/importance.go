@@ -5,7 +5,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"strings"
 
 	"gonum.org/v1/gonum/stat/distuv"
 )
@@ -20,18 +19,10 @@ const importanceBlockSize = 1000
 // subset simulation.
 const ImportancePoorPrefix = "importance sampling: poor design point"
 
-// importanceDegenerate reports whether r carries the poor-design-point
-// warning of importance sampling.
+// importanceDegenerate reports whether r is an importance sampling whose
+// weights degenerated.
 func importanceDegenerate(r *Result) bool {
-	if r == nil {
-		return false
-	}
-	for _, w := range r.Warnings {
-		if strings.HasPrefix(w, ImportancePoorPrefix) {
-			return true
-		}
-	}
-	return false
+	return r != nil && r.Status == WeightsDegenerate
 }
 
 // importanceSampling estimates Pf by sampling around the FORM design points.
@@ -133,7 +124,12 @@ func importanceRun(ctx context.Context, sp *uSpace, points []DesignPoint, s *Set
 		if cfg.Progress != nil {
 			cfg.Progress(Progress{Done: tot2.n, Total: cfg.Samples, Pf: pf, CoV: cov})
 		}
-		return !(cfg.TargetCoV > 0 && tot2.fails >= 10 && cov <= cfg.TargetCoV)
+		if cfg.TargetCoV > 0 && tot2.fails >= 10 && cov <= cfg.TargetCoV {
+			return false
+		}
+		// Degenerate weights do not recover: stop early and leave the
+		// budget to an estimator that can be trusted.
+		return !(tot2.n >= isEarlyCheck && isPoor(&tot2) != "")
 	}
 	_, cancelled := rareParallel(ctx, cfg.Workers, nb, work, merge)
 
@@ -141,7 +137,9 @@ func importanceRun(ctx context.Context, sp *uSpace, points []DesignPoint, s *Set
 	if pf > 1 {
 		// Weights above 1 can carry the estimate past certainty: the
 		// design point does not describe a failure domain this large.
-		res.Warnings = append(res.Warnings, fmt.Sprintf("%s: the estimate %.3g exceeds 1 (failure is likely; use monte-carlo)", ImportancePoorPrefix, pf))
+		why := fmt.Sprintf("%s: the estimate %.3g exceeds 1 (failure is likely; use monte-carlo)", ImportancePoorPrefix, pf)
+		res.Warnings = append(res.Warnings, why)
+		res.flag(WeightsDegenerate, why)
 		pf = 1
 	}
 	lo, hi := isInterval(pf, cov, z)
@@ -150,6 +148,9 @@ func importanceRun(ctx context.Context, sp *uSpace, points []DesignPoint, s *Set
 	res.Beta = BetaFromPf(pf)
 	res.BetaCI = [2]float64{BetaFromPf(hi), BetaFromPf(lo)}
 	res.Incomplete = cancelled
+	if poor := isPoor(&tot2); poor != "" {
+		res.flag(WeightsDegenerate, ImportancePoorPrefix+": "+poor)
+	}
 	res.Warnings = append(res.Warnings, isDiagnose(&tot2)...)
 	return res, nil
 }
@@ -260,26 +261,40 @@ func isInterval(pf, cov, z float64) (lo, hi float64) {
 	return math.Max(0, pf-d), math.Min(1, pf+d)
 }
 
-// isDiagnose returns the warnings of a finished importance sampling. The
-// ImportancePoorPrefix warning marks a design point that does not describe
-// the failure domain: no failed sample; fewer than 1 % of the samples
-// failed (about half fail around a good design point of a flat limit
-// state); an effective sample size below 1 % of the failed samples, with
-// at least 50 of them; or one weight carrying more than half of the
-// estimate, with at least 100 failed samples. The effective sample size
-// is (sum w)^2 / sum w^2 (Kish, Survey Sampling, Wiley 1965).
-func isDiagnose(t *isBlock) []string {
-	var out []string
+// isEarlyCheck is the number of samples after which importance sampling
+// stops early when its weights are already degenerate.
+const isEarlyCheck = 10 * importanceBlockSize
+
+// isPoor says why the sums of an importance sampling show a design point
+// that does not describe the failure domain, or "" when they do not: no
+// failed sample; fewer than 1 % of the samples failed (about half fail
+// around a good design point of a flat limit state); an effective sample
+// size below 1 % of the failed samples, with at least 50 of them; or one
+// weight carrying more than half of the estimate, with at least 100
+// failed samples. The effective sample size is (sum w)^2 / sum w^2 (Kish,
+// Survey Sampling, Wiley 1965).
+func isPoor(t *isBlock) string {
 	switch {
 	case t.n == 0:
 	case t.fails == 0:
-		out = append(out, fmt.Sprintf("%s: none of %d samples failed", ImportancePoorPrefix, t.n))
+		return fmt.Sprintf("none of %d samples failed", t.n)
 	case t.n >= 1000 && float64(t.fails) < 0.01*float64(t.n):
-		out = append(out, fmt.Sprintf("%s: only %d of %d samples failed", ImportancePoorPrefix, t.fails, t.n))
+		return fmt.Sprintf("only %d of %d samples failed", t.fails, t.n)
 	case t.fails >= 50 && t.sw*t.sw/t.sw2 < 0.01*float64(t.fails):
-		out = append(out, fmt.Sprintf("%s: weights degenerate (effective sample size %.1f of %d failed samples)", ImportancePoorPrefix, t.sw*t.sw/t.sw2, t.fails))
+		return fmt.Sprintf("weights degenerate (effective sample size %.1f of %d failed samples)", t.sw*t.sw/t.sw2, t.fails)
 	case t.fails >= 100 && t.maxw > 0.5*t.sw:
-		out = append(out, fmt.Sprintf("%s: one sample carries %.0f %% of the estimate", ImportancePoorPrefix, 100*t.maxw/t.sw))
+		return fmt.Sprintf("one sample carries %.0f %% of the estimate", 100*t.maxw/t.sw)
+	}
+	return ""
+}
+
+// isDiagnose returns the warnings of a finished importance sampling: the
+// ImportancePoorPrefix warning when isPoor finds the design point poor,
+// and a count of NaN limit states.
+func isDiagnose(t *isBlock) []string {
+	var out []string
+	if poor := isPoor(t); poor != "" {
+		out = append(out, ImportancePoorPrefix+": "+poor)
 	}
 	if t.nan > 0 {
 		out = append(out, fmt.Sprintf("the limit state was NaN for %d of %d importance samples; they were counted as safe", t.nan, t.n))

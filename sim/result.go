@@ -46,6 +46,11 @@ type Result struct {
 	Kept *Samples
 	// Incomplete is set when the run was cancelled before it finished.
 	Incomplete bool
+	// Status says how far the result can be trusted; StatusReason says
+	// why in words. No verdict may be drawn from a result whose Status is
+	// not Trusted.
+	Status       Status
+	StatusReason string
 	// Warnings are diagnostics a reader should see.
 	Warnings []string
 }

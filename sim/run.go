@@ -131,16 +131,7 @@ func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
 	case FORMMethod:
 		res, err = runFORM(m, &cfg)
 	case Importance:
-		var f *FORMResult
-		f, err = FORM(m, nil)
-		if err != nil {
-			return nil, fmt.Errorf("sim: importance sampling needs FORM, which failed: %v", err)
-		}
-		res, err = importanceSampling(ctx, m, t, f, &cfg)
-		if res != nil {
-			res.FORM = f
-			res.Evaluations += int64(f.Evaluations)
-		}
+		res, err = importanceChecked(ctx, m, t, &cfg)
 	case Subset:
 		res, err = subsetSimulation(ctx, m, t, &cfg)
 	case Auto:
@@ -155,6 +146,7 @@ func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
 	if res.Method == "" {
 		res.Method = cfg.Method
 	}
+	assess(res, cfg.TargetCoV)
 	if res.Outputs == nil && cfg.AuxSamples > 0 && !res.Incomplete {
 		out, kept, err := Describe(ctx, m, cfg.AuxSamples, cfg.Keep, cfg.Seed)
 		if err != nil {
@@ -178,6 +170,7 @@ func runFORM(m *Model, s *Settings) (*Result, error) {
 		PfCI: [2]float64{f.Pf, f.Pf}, BetaCI: [2]float64{f.Beta, f.Beta}, Confidence: s.Confidence}
 	if !f.Converged {
 		res.Warnings = append(res.Warnings, "FORM did not converge: "+f.Status)
+		res.flag(DesignPointUnreliable, "the FORM design-point search did not converge ("+f.Status+")")
 	}
 	res.Warnings = append(res.Warnings, "FORM is a first-order approximation: its pf has no sampling interval")
 	return res, nil

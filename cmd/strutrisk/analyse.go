@@ -109,6 +109,12 @@ func (r *results) document() *report.Document {
 	d.Pf, d.PfCoV, d.Beta = &pf, finitePtr(cov), finitePtr(beta)
 	d.PfCI = []float64{res.PfCI[0], res.PfCI[1]}
 	d.BetaCI = []float64{finite(res.BetaCI[0]), finite(res.BetaCI[1])}
+	d.Status = res.Status.String()
+	if res.Status != sim.Converged {
+		d.StatusReason = res.StatusReason
+	}
+	trusted := res.Status.Trusted()
+	d.Trusted = &trusted
 	r.fillTarget(d) // verdict (absent when undecided) and reserve
 	for _, o := range res.Outputs {
 		switch o.Name {

@@ -99,17 +99,21 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 }
 
 // verdictOf compares the estimate of res with the target beta: "met" or
-// "not met" only when the whole interval of beta lies on one side of the
-// target, else "undecided" (at this sample size).
-func verdictOf(res *sim.Result, target float64) string {
+// "not met" only when res can be trusted (sim.Status.Trusted) and the
+// whole interval of beta lies on one side of the target, else "undecided"
+// with the reason.
+func verdictOf(res *sim.Result, target float64) (verdict, reason string) {
+	if !res.Status.Trusted() {
+		return "undecided", "the estimate cannot be trusted: " + res.StatusReason
+	}
 	lo, hi := res.BetaCI[0], res.BetaCI[1]
 	switch {
 	case lo < target && target < hi:
-		return "undecided"
+		return "undecided", "the interval of beta straddles the target at this sample size"
 	case res.Beta >= target:
-		return "met"
+		return "met", ""
 	}
-	return "not met"
+	return "not met", ""
 }
 
 // samplesToDecide estimates the evaluations after which the interval of
@@ -155,14 +159,15 @@ func (r *results) fillTarget(d *report.Document) {
 	}
 	t := baseTarget(st)
 	d.Target = t
-	v := verdictOf(r.res, st.Target)
-	t.Verdict = v
-	if v == "undecided" {
+	v, why := verdictOf(r.res, st.Target)
+	t.Verdict, t.Reason = v, why
+	switch {
+	case v == "undecided" && r.res.Status.Trusted():
 		n := samplesToDecide(r.res, st.Target)
 		if !math.IsInf(n, 0) {
 			t.SamplesToDecide = &n
 		}
-	} else {
+	case v != "undecided":
 		meets := v == "met"
 		d.MeetsTarget = &meets
 	}
@@ -205,7 +210,11 @@ func (r *results) targetSummary(d *report.Document) string {
 	case "not met":
 		s += "NOT met"
 	case "undecided":
-		s += "undecided at this sample size (the interval of beta straddles the target)"
+		if r.res.Status.Trusted() {
+			s += "undecided at this sample size (the interval of beta straddles the target)"
+		} else {
+			s += "undecided (" + t.Reason + ")"
+		}
 		if t.SamplesToDecide != nil {
 			s += fmt.Sprintf(";\n                     about %.3g evaluations would decide it", *t.SamplesToDecide)
 		}

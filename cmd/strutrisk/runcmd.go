@@ -171,7 +171,11 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		return sigs.code()
 	case o.requireTarget && b.Doc.MeetsTarget == nil:
 		// Undecided counts as not met: the target must be shown to be met.
-		fmt.Fprintf(stderr, "strutrisk: the target reliability index %.2f is not shown to be met: undecided at this sample size (give more samples or a smaller target_cov)\n", *b.Doc.TargetBeta)
+		why := "undecided at this sample size (give more samples or a smaller target_cov)"
+		if t := b.Doc.Target; t != nil && t.Reason != "" && !r.res.Status.Trusted() {
+			why = "undecided: " + t.Reason
+		}
+		fmt.Fprintf(stderr, "strutrisk: the target reliability index %.2f is not shown to be met: %s\n", *b.Doc.TargetBeta, why)
 		return exitTarget
 	case o.requireTarget && !*b.Doc.MeetsTarget:
 		fmt.Fprintf(stderr, "strutrisk: the target reliability index %.2f is not met\n", *b.Doc.TargetBeta)

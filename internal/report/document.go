@@ -22,6 +22,14 @@ type Document struct {
 	PfCoV       *float64  `json:"pf_cov,omitempty"`
 	Beta        *float64  `json:"beta,omitempty"`
 	BetaCI      []float64 `json:"beta_ci,omitempty"`
+	// Status says how far the estimate can be trusted (the names of
+	// sim.Status: "converged", "budget-spent", "few-failures",
+	// "interrupted", "weights-degenerate", "design-point-unreliable",
+	// "imprecise"); StatusReason says why when it is not "converged".
+	Status       string `json:"status,omitempty"`
+	StatusReason string `json:"status_reason,omitempty"`
+	// Trusted is false when no verdict may be drawn from the estimate.
+	Trusted *bool `json:"trusted,omitempty"`
 
 	TargetBeta    *float64 `json:"target_beta,omitempty"`
 	MeetsTarget   *bool    `json:"meets_target,omitempty"`

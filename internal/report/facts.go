@@ -24,6 +24,12 @@ func targetVerdict(d *Document) verdict {
 	if d == nil || d.TargetBeta == nil || d.Beta == nil || !finite(*d.TargetBeta) {
 		return noTarget
 	}
+	if d.Target != nil && d.Target.Verdict == "undecided" {
+		return undecided // the estimate cannot be trusted, or its interval straddles
+	}
+	if d.Trusted != nil && !*d.Trusted {
+		return undecided
+	}
 	t, b := *d.TargetBeta, *d.Beta
 	if len(d.BetaCI) == 2 && d.BetaCI[0] < t && t < d.BetaCI[1] {
 		return undecided
@@ -34,14 +40,22 @@ func targetVerdict(d *Document) verdict {
 	return notMet
 }
 
-// verdictText is the reader's wording of v.
-func verdictText(v verdict) string {
+// verdictText is the reader's wording of v for d: an undecided verdict
+// gives its reason (an interval that straddles the target, or an
+// estimate that cannot be trusted).
+func verdictText(d *Document, v verdict) string {
 	switch v {
 	case met:
 		return "met"
 	case notMet:
 		return "NOT met"
 	case undecided:
+		if d != nil && d.Trusted != nil && !*d.Trusted {
+			if d.Target != nil && d.Target.Reason != "" {
+				return "undecided (" + d.Target.Reason + ")"
+			}
+			return "undecided (the estimate cannot be trusted: " + d.StatusReason + ")"
+		}
 		return "undecided at this sample size (the interval of beta straddles the target)"
 	}
 	return ""

@@ -48,7 +48,7 @@ func SummaryText(b *Bundle) string {
 		line("reliability index beta", "%s", s)
 	}
 	if v := targetVerdict(&d); v != noTarget {
-		line("target beta", "%s: %s", f2(*d.TargetBeta), verdictText(v))
+		line("target beta", "%s: %s", f2(*d.TargetBeta), verdictText(&d, v))
 		if t := d.Target; v == undecided && t != nil && t.SamplesToDecide != nil {
 			line("", "about %s evaluations would decide it", thousands(int64(*t.SamplesToDecide)))
 		}

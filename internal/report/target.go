@@ -18,6 +18,9 @@ type TargetCheck struct {
 	// Verdict is "met", "not met" or "undecided" (the interval of beta
 	// straddles the target); empty without a sampling result.
 	Verdict string `json:"verdict,omitempty"`
+	// Reason says why the verdict is "undecided": the interval straddles
+	// the target, or the estimate cannot be trusted (Document.Status).
+	Reason string `json:"reason,omitempty"`
 	// SamplesToDecide estimates, for an undecided verdict, the
 	// evaluations whose interval would clear the target at the present
 	// estimate: n (CoV / CoV needed)^2.
@@ -99,6 +102,9 @@ func targetRows(d *Document) []KV {
 		s := t.Verdict
 		if t.Verdict == "undecided" {
 			s = "undecided at this sample size"
+			if d.Trusted != nil && !*d.Trusted && t.Reason != "" {
+				s = "undecided (" + t.Reason + ")"
+			}
 			if t.SamplesToDecide != nil {
 				s += fmt.Sprintf("; about %s evaluations would decide it", thousands(int64(*t.SamplesToDecide)))
 			}

@@ -115,7 +115,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	}
 	if vd := targetVerdict(&d); vd != noTarget {
 		v.Result = append(v.Result, KV{"target β", f2(*d.TargetBeta)})
-		v.Verdict = "Target " + verdictText(vd) + "."
+		v.Verdict = "Target " + verdictText(&d, vd) + "."
 		v.VerdictClass = map[verdict]string{met: "met", notMet: "not-met", undecided: "undecided"}[vd]
 	}
 	if d.ReserveFactor != nil {
