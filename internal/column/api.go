@@ -28,7 +28,8 @@ const (
 // of its Shape are used:
 //
 //	I:      Depth, Width, Flange, Web, Root (optional root radius)
-//	RHS:    Depth, Width, Thickness
+//	RHS:    Depth, Width, Thickness, Radius and InnerRadius (corner radii
+//	        outside and inside; 0 is a square corner)
 //	CHS:    Diameter, Thickness
 //	Rect:   Depth, Width
 //	Round:  Diameter
@@ -40,6 +41,7 @@ type Section struct {
 	Shape                                Shape
 	Depth, Width, Flange, Web, Root      float64
 	Thickness, Diameter                  float64
+	Radius, InnerRadius                  float64 // RHS corner radii
 	Area, IMajor, IMinor, CMajor, CMinor float64
 	ThicknessLoss                        float64
 }
@@ -47,9 +49,16 @@ type Section struct {
 // Props are the properties of a section, per axis indexed by Major and
 // Minor: second moment I (mm^4), radius of gyration R (mm), elastic modulus
 // W = I/C (mm^3) and extreme-fibre distance C (mm).
+//
+// AEff and WEff are the effective area and elastic moduli of a class 4
+// section (EN 1993-1-5 4.4, see Section.Classify); zero means the section
+// is fully effective, A and W. I and R stay the gross ones: the elastic
+// critical load is that of the gross section (EN 1993-1-1 6.3.1.2).
 type Props struct {
 	A          float64
 	I, R, W, C [2]float64
+	AEff       float64
+	WEff       [2]float64
 }
 
 // Member is everything a closed-form capacity evaluation needs (N, mm, MPa).

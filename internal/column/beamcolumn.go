@@ -131,6 +131,7 @@ var (
 	errBeamMesh     = errors.New("column: beam-column Elements and Fibres must be zero (default) or positive; Elements at most 2000, Fibres at most 5000")
 	errBeamLimit    = errors.New("column: beam-column limit must be FirstYieldLimit or UltimateLimit")
 	errBeamCustom   = errors.New("column: the ultimate beam-column limit needs a section with dimensions; a custom section (area and second moments only) has no fibres: use the first-yield limit")
+	errBeamClass4   = errors.New("column: the ultimate beam-column limit uses the gross fibre section and cannot follow the local buckling of a class 4 section (Props.AEff set): use the first-yield limit or the buckling curve, which take the effective section")
 	errBeamNoPeak   = errors.New("column: beam-column ultimate analysis did not converge to a peak load; try more elements or check the member's inputs")
 )
 
@@ -165,8 +166,10 @@ var (
 // steps (this can happen for nearly perfect members whose path turns
 // sharply at a bifurcation), the largest load found is returned.
 //
-// m.Props is used by the first-yield limit (A, I or R, W or C); the
-// ultimate limit takes its properties from the fibres of sec.
+// m.Props is used by the first-yield limit (A, I or R, W or C; AEff and
+// WEff of a class 4 section, see Section.Classify); the ultimate limit
+// takes its properties from the fibres of sec and refuses a class 4
+// member (m.Props.AEff > 0): its fibres do not buckle locally.
 func BeamColumn(m *Member, sec Section, axis Axis, opt *BeamOptions) (Result, error) {
 	w := bcGet()
 	defer bcPut(w)
@@ -266,6 +269,9 @@ func bcCheck(m *Member, axis Axis, o *BeamOptions) error {
 	}
 	if o.Limit != FirstYieldLimit && o.Limit != UltimateLimit {
 		return errBeamLimit
+	}
+	if o.Limit == UltimateLimit && m.Props.AEff > 0 {
+		return errBeamClass4
 	}
 	if o.Residual < ResidualNone || o.Residual > ResidualColdFormed {
 		return fmt.Errorf("column: beam-column residual stress pattern %d is not one of the Residual constants", int(o.Residual))

@@ -45,7 +45,11 @@ func (w *bcWork) axis(m *Member, sec Section, a Axis, o *BeamOptions, tr *Trace)
 	if o.Limit == UltimateLimit {
 		return w.ultimate(m, sec, a, o, tr)
 	}
-	w.setup(m, a, o, bcSecond(m, a)*m.E, m.Props.A, bcModulus(m, a))
+	area, mod := m.Props.A, bcModulus(m, a)
+	if m.Props.AEff > 0 { // class 4: the effective section resists N and M
+		area, mod = m.Props.AEff, m.Props.EffectiveModulus(a)
+	}
+	w.setup(m, a, o, bcSecond(m, a)*m.E, area, mod)
 	n, gov := w.firstYield()
 	if tr != nil {
 		w.traceElastic(n, tr)

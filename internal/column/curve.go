@@ -5,21 +5,23 @@ import (
 	"math"
 )
 
+// curveNames and curveAlphas are the buckling curves of EN 1993-1-1:2005
+// Table 6.1 and their imperfection factors alpha, from the least to the
+// most severe. They are written here once; everything else asks
+// CurveAlpha.
+var (
+	curveNames  = [...]string{"a0", "a", "b", "c", "d"}
+	curveAlphas = [...]float64{0.13, 0.21, 0.34, 0.49, 0.76}
+)
+
 // CurveAlpha returns the imperfection factor alpha of the buckling curve
 // named "a0", "a", "b", "c" or "d" (EN 1993-1-1:2005 Table 6.1:
 // 0.13, 0.21, 0.34, 0.49, 0.76).
 func CurveAlpha(name string) (float64, error) {
-	switch name {
-	case "a0":
-		return 0.13, nil
-	case "a":
-		return 0.21, nil
-	case "b":
-		return 0.34, nil
-	case "c":
-		return 0.49, nil
-	case "d":
-		return 0.76, nil
+	for i, n := range curveNames {
+		if n == name {
+			return curveAlphas[i], nil
+		}
 	}
 	return 0, fmt.Errorf("column: unknown buckling curve %q (want a0, a, b, c or d)", name)
 }
@@ -56,9 +58,12 @@ func Curve(m *Member, axis Axis) (Result, error) {
 }
 
 // curve is Curve about one axis of a validated member.
+//
+// A class 4 member (Props.AEff > 0) takes chi A_eff fy with the relative
+// slenderness sqrt(A_eff fy / Ncr) (EN 1993-1-1:2005 eqs. 6.48 and 6.50).
 func curve(m *Member, a Axis) float64 {
-	lam := slenderness(m, a) / (math.Pi * math.Sqrt(m.E/m.Fy))
-	return m.Props.A * m.Fy * curveChi(lam, m.Alpha[a])
+	lam := relSlenderness(m, a)
+	return m.Props.EffectiveArea() * m.Fy * curveChi(lam, m.Alpha[a])
 }
 
 // curveChi is the reduction factor of EN 1993-1-1:2005 eq. (6.49).

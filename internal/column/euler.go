@@ -32,10 +32,23 @@ func slenderness(m *Member, a Axis) float64 {
 
 // RelativeSlenderness returns the relative slenderness
 // sqrt(A fy / Ncr) = (K L / r) / (pi sqrt(E / fy)) of EN 1993-1-1:2005
-// eq. (6.50) about axis; with Both it returns the larger of the two. The
+// eq. (6.50) about axis, or sqrt(A_eff fy / Ncr) (eq. 6.51) for a class 4
+// section (Props.AEff > 0); with Both it returns the larger of the two. The
 // member is not checked (see Member.Validate).
 func RelativeSlenderness(m *Member, axis Axis) float64 {
-	return Slenderness(m, axis) / (math.Pi * math.Sqrt(m.E/m.Fy))
+	if axis == Both {
+		return math.Max(relSlenderness(m, Major), relSlenderness(m, Minor))
+	}
+	return relSlenderness(m, axis)
+}
+
+// relSlenderness is RelativeSlenderness about one axis.
+func relSlenderness(m *Member, a Axis) float64 {
+	lam := slenderness(m, a) / (math.Pi * math.Sqrt(m.E/m.Fy))
+	if m.Props.AEff > 0 {
+		lam *= math.Sqrt(m.Props.AEff / m.Props.A)
+	}
+	return lam
 }
 
 // Euler returns the elastic critical load pi^2 E A r^2 / (K L)^2 about

@@ -55,11 +55,22 @@ func PerryRobertson(m *Member, axis Axis) (Result, error) { return FirstYield(m,
 func Secant(m *Member, axis Axis) (Result, error) { return FirstYield(m, axis) }
 
 // firstYield is FirstYield about one axis of a validated member.
+//
+// A class 4 member (Props.AEff > 0) is taken on its effective section, as
+// EN 1993-1-1 6.3.1 takes A_eff: P/A_eff + P e_total / W_eff = fy, with
+// the Euler load of the gross section, so rho = A_eff fy / PE and the
+// relative imperfection is e A_eff / W_eff.
 func firstYield(m *Member, a Axis) float64 {
 	r, c := m.Props.R[a], m.Props.C[a]
 	lam := m.K[a] * m.Length / r
 	// rho = fy/sE = lam_bar^2, the load ratio P/PE at the squash load.
 	rho := m.Fy * lam * lam / (math.Pi * math.Pi * m.E)
+	if m.Props.AEff > 0 {
+		ae, we := m.Props.AEff, m.Props.EffectiveModulus(a)
+		rho *= ae / m.Props.A
+		sw := math.Abs(m.Sway*swayArm(m, a)) * ae / we
+		return ae * m.Fy * firstYieldChi(rho, math.Abs(m.Bow)*ae/we, math.Abs(m.Ecc)*ae/we, sw)
+	}
 	sw := relImp(m.Sway*swayArm(m, a), r, c)
 	return m.Props.A * m.Fy * firstYieldChi(rho, relImp(m.Bow, r, c), relImp(m.Ecc, r, c), sw)
 }

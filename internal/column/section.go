@@ -14,8 +14,8 @@ import (
 //
 // Closed forms for the elastic properties of thin and solid sections, e.g.
 // Young & Budynas, Roark's Formulas for Stress and Strain, Appendix A
-// (from memory). The
-// corners of rectangular hollow sections are taken as square.
+// (from memory). The corners of a rectangular hollow section are rounded
+// to Radius outside and InnerRadius inside (see rhsSection).
 func (s Section) Properties() (Props, error) {
 	r, err := s.Reduced()
 	if err != nil {
@@ -27,12 +27,8 @@ func (s Section) Properties() (Props, error) {
 		a, ix, iy = iSection(r.Depth, r.Width, r.Flange, r.Web, r.Root)
 		cx, cy = r.Depth/2, r.Width/2
 	case ShapeRHS:
-		h, b, t := r.Depth, r.Width, r.Thickness
-		hi, bi := h-2*t, b-2*t
-		a = b*h - bi*hi
-		ix = (b*h*h*h - bi*hi*hi*hi) / 12
-		iy = (h*b*b*b - hi*bi*bi*bi) / 12
-		cx, cy = h/2, b/2
+		a, ix, iy = rhsSection(r.Depth, r.Width, r.Thickness, r.Radius, r.InnerRadius)
+		cx, cy = r.Depth/2, r.Width/2
 	case ShapeCHS:
 		d, di := r.Diameter, r.Diameter-2*r.Thickness
 		a = math.Pi / 4 * (d*d - di*di)
@@ -70,7 +66,9 @@ func (s Section) Properties() (Props, error) {
 // (depth and width shrink by 2t, flange and web by 2t, and the root
 // radius, whose centre stays put, grows by t; a zero root radius, a sharp
 // corner, stays zero); RHS and CHS lose t on the
-// outside (depth, width or diameter shrink by 2t, the wall by t); solid
+// outside (depth, width or diameter shrink by 2t, the wall by t, the
+// outer corner radius of an RHS by t, down to a sharp corner, and its
+// inner radius stays); solid
 // shapes lose t on every face. A custom section with a thickness loss is
 // an error. Reduced also checks the dimensions before and after the loss.
 func (s Section) Reduced() (Section, error) {
@@ -106,6 +104,7 @@ func (s Section) Reduced() (Section, error) {
 		r.Depth -= 2 * t
 		r.Width -= 2 * t
 		r.Thickness -= t
+		r.Radius = math.Max(s.Radius-t, 0) // the corner's centre stays put
 	case ShapeCHS:
 		if s.Thickness <= t {
 			return Section{}, fmt.Errorf("section: thickness loss %g mm consumes the wall (thickness %g mm)", t, s.Thickness)
@@ -183,6 +182,12 @@ func (s Section) check() error {
 		}
 		if 2*s.Thickness >= math.Min(s.Depth, s.Width) {
 			return sectionError(fmt.Sprintf("wall thickness %g mm leaves no hollow: depth %g mm, width %g mm (use a solid rect)", s.Thickness, s.Depth, s.Width))
+		}
+		if !(s.Radius >= 0 && 2*s.Radius <= math.Min(s.Depth, s.Width)) {
+			return sectionError(fmt.Sprintf("corner radius %g mm must be zero or positive and at most half the smaller side (depth %g mm, width %g mm)", s.Radius, s.Depth, s.Width))
+		}
+		if !(s.InnerRadius >= 0 && 2*s.InnerRadius <= math.Min(s.Depth, s.Width)-2*s.Thickness) {
+			return sectionError(fmt.Sprintf("inner corner radius %g mm must be zero or positive and fit inside the hollow (depth %g mm, width %g mm, wall %g mm)", s.InnerRadius, s.Depth, s.Width, s.Thickness))
 		}
 	case ShapeCHS:
 		if err := first(pos("diameter", s.Diameter), pos("wall thickness", s.Thickness)); err != nil {

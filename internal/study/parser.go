@@ -672,7 +672,7 @@ func (p *parser) capacity(top *table) {
 				continue
 			}
 			st.Curve[a] = c
-			st.Alpha[a] = &Quantity{Path: t.key("curve"), Line: p.line(t.key("curve")), Value: curveAlpha[c]}
+			st.Alpha[a] = &Quantity{Path: t.key("curve"), Line: p.line(t.key("curve")), Value: curveAlpha(c)}
 		}
 	}
 	if hasAlpha {
@@ -721,9 +721,12 @@ func (p *parser) capacity(top *table) {
 	p.unknown(t)
 }
 
-// curveAlpha are the imperfection factors of the buckling curves,
-// EN 1993-1-1:2005 Table 6.1.
-var curveAlpha = map[string]float64{"a0": 0.13, "a": 0.21, "b": 0.34, "c": 0.49, "d": 0.76}
+// curveAlpha is the imperfection factor of a buckling curve's name
+// (column.CurveAlpha, EN 1993-1-1:2005 Table 6.1), 0 for an unknown name.
+func curveAlpha(name string) float64 {
+	a, _ := column.CurveAlpha(name)
+	return a
+}
 
 func (p *parser) curves(t *table) (c [2]string, given bool) {
 	v, ok := t.get("curve")
@@ -736,7 +739,7 @@ func (p *parser) curves(t *table) (c [2]string, given bool) {
 			p.errorf(key, "a buckling curve is a name in quotes: \"a0\", \"a\", \"b\", \"c\" or \"d\"")
 			return ""
 		}
-		if _, ok := curveAlpha[s]; !ok {
+		if _, err := column.CurveAlpha(s); err != nil {
 			p.errorf(key, "%q is not a buckling curve: use \"a0\", \"a\", \"b\", \"c\" or \"d\"", s)
 			return ""
 		}
