@@ -4,7 +4,6 @@ import (
 	"context"
 	"fmt"
 	"math"
-	"sort"
 	"strings"
 
 	"strutrisk/internal/report"
@@ -126,7 +125,8 @@ func (r *results) document() *report.Document {
 	}
 	if f := r.form; f != nil && len(f.Points) > 0 {
 		p := f.Points[0]
-		ff := &report.FORM{Beta: f.Beta, Pf: f.Pf, DesignPoint: map[string]float64{}, Importance: map[string]float64{}}
+		conv := f.Converged
+		ff := &report.FORM{Beta: f.Beta, Pf: f.Pf, DesignPoint: map[string]float64{}, Importance: map[string]float64{}, Converged: &conv}
 		for i, v := range r.l.md.Sim.Vars {
 			ff.DesignPoint[v.Name] = r.l.md.InUnits(i, p.X[i], p.X) // L/n in mm
 			ff.Importance[v.Name] = p.Importance[i]
@@ -215,39 +215,6 @@ func summaryOf(o sim.OutputStats) *report.Summary {
 	}
 	s.P01, s.P05, s.P50, s.P95, s.P99 = q(0.01), q(0.05), q(0.50), q(0.95), q(0.99)
 	return s
-}
-
-// influential returns the names of the three most influential variables
-// with a short reason: by FORM importance when FORM converged, else by
-// the tornado swing.
-func (r *results) influential() []string {
-	type iv struct {
-		name string
-		v    float64
-	}
-	var list []iv
-	how := ""
-	if f := r.form; f != nil && f.Converged && len(f.Points) > 0 {
-		for i, v := range r.l.md.Sim.Vars {
-			list = append(list, iv{v.Name, f.Points[0].Importance[i]})
-		}
-		how = "FORM importance %.0f %%"
-	} else {
-		total := 0.0
-		for _, t := range r.tornado {
-			total += t.Swing()
-		}
-		for _, t := range r.tornado {
-			list = append(list, iv{t.Variable, t.Swing() / total})
-		}
-		how = "tornado share %.0f %%"
-	}
-	sort.SliceStable(list, func(i, j int) bool { return list[i].v > list[j].v })
-	var out []string
-	for i := 0; i < len(list) && i < 3; i++ {
-		out = append(out, fmt.Sprintf("%s ("+how+")", list[i].name, 100*list[i].v))
-	}
-	return out
 }
 
 // bundle is everything the report draws from.

@@ -48,8 +48,16 @@ func (r *results) summary(dir string, files []string) string {
 	if res.Reason != "" {
 		fmt.Fprintf(&w, "                     (%s)\n", res.Reason)
 	}
-	if inf := r.influential(); len(inf) > 0 {
-		fmt.Fprintf(&w, "  most influential   %s\n", strings.Join(inf, "\n                     "))
+	if rk := report.RankInputs(d, 3); len(rk.Inputs) > 0 {
+		// The same ranking, measure and note as the report's (report.RankInputs).
+		fmt.Fprintf(&w, "  most influential   %s\n", report.PlainGreek(rk.Text()))
+		for i, l := range report.WrapText(report.PlainGreek(report.RankingNote(d)), 76) {
+			label := ""
+			if i == 0 {
+				label = "rankings"
+			}
+			fmt.Fprintf(&w, "  %-18s %s\n", label, l)
+		}
 	}
 	w.WriteString(r.cases.summary(r.l.st, res))
 	for _, x := range d.Warnings {

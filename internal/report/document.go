@@ -82,6 +82,10 @@ type FORM struct {
 	Pf          float64            `json:"pf"`
 	DesignPoint map[string]float64 `json:"design_point"`
 	Importance  map[string]float64 `json:"importance"`
+	// Converged is false when the design-point search did not converge:
+	// its importance factors then rank nothing (RankInputs). Nil when
+	// unknown (taken as converged).
+	Converged *bool `json:"converged,omitempty"`
 }
 
 // Tornado is one bar of a tornado chart: the output with the variable at its

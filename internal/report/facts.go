@@ -61,59 +61,6 @@ func verdictText(d *Document, v verdict) string {
 	return ""
 }
 
-// influence is one input's weight in the ranking of influential inputs.
-type influence struct {
-	Name   string
-	Weight float64
-}
-
-// topInfluences returns up to n most influential inputs and the measure
-// used: FORM importance factors when present, else total Sobol indices,
-// else the tornado swings (in their sorted order).
-func topInfluences(d *Document, n int) (measure string, list []influence) {
-	if d == nil {
-		return "", nil
-	}
-	switch {
-	case d.FORM != nil && len(d.FORM.Importance) > 0:
-		measure = "FORM importance alpha^2"
-		for k, v := range d.FORM.Importance {
-			if finite(v) {
-				list = append(list, influence{k, v})
-			}
-		}
-	case len(d.Sobol) > 0:
-		measure = "total Sobol index"
-		for _, s := range d.Sobol {
-			if finite(s.Total) {
-				list = append(list, influence{s.Variable, s.Total})
-			}
-		}
-	case len(d.Tornado) > 0:
-		measure = "tornado swing"
-		for _, t := range d.Tornado {
-			if sw := t.High - t.Low; finite(sw) {
-				if sw < 0 {
-					sw = -sw
-				}
-				list = append(list, influence{t.Variable, sw})
-			}
-		}
-	default:
-		return "", nil
-	}
-	sort.SliceStable(list, func(i, j int) bool {
-		if list[i].Weight != list[j].Weight {
-			return list[i].Weight > list[j].Weight
-		}
-		return list[i].Name < list[j].Name
-	})
-	if len(list) > n {
-		list = list[:n]
-	}
-	return measure, list
-}
-
 // sortedKeys returns the keys of m in increasing order.
 func sortedKeys(m map[string]float64) []string {
 	keys := make([]string, 0, len(m))

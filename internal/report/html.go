@@ -54,7 +54,7 @@ code{font-size:.9em}
 <h2>Result</h2>
 {{if .Verdict}}<p class="verdict {{.VerdictClass}}">{{.Verdict}}</p>{{end}}
 {{if .Result}}<table>{{range .Result}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{else}}<p>No sampling result: deterministic check only.</p>{{end}}
-{{if .Influence}}<p>Most influential inputs: {{.Influence}}.</p>{{end}}
+{{if .Influence}}<p>Most influential inputs: {{.Influence}}. {{.RankingNote}}</p>{{end}}
 {{if .Target}}<h3 id="target">Margin against the target</h3>
 <table>{{range .Target}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{end}}
 {{with .Picture "capacity-demand"}}{{template "fig" .}}{{end}}

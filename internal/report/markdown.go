@@ -27,7 +27,7 @@ func Markdown(b *Bundle) string {
 		w.WriteString("No sampling result: deterministic check only.\n\n")
 	}
 	if v.Influence != "" {
-		fmt.Fprintf(&w, "Most influential inputs: %s.\n\n", mdText(v.Influence))
+		fmt.Fprintf(&w, "Most influential inputs: %s. %s\n\n", mdText(v.Influence), mdText(v.RankingNote))
 	}
 	if len(v.Target) > 0 {
 		w.WriteString("### Margin against the target\n\n")

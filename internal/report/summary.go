@@ -10,7 +10,8 @@ import (
 // reliability index with their intervals, the target and whether it is met
 // ("undecided at this sample size" when the interval of beta straddles the
 // target), the reserve factor when there is one, the method and its
-// evaluations, the three most influential inputs, the warnings and the
+// evaluations, the three most influential inputs (RankInputs) and what
+// each ranking answers (RankingNote), the warnings and the
 // caution. Numbers that are missing or not finite are written as "n/a".
 //
 // (It is not named Summary because Summary is the Document's type for a
@@ -66,12 +67,15 @@ func SummaryText(b *Bundle) string {
 		}
 		line("method", "%s", s)
 	}
-	if measure, top := topInfluences(&d, 3); len(top) > 0 {
-		parts := make([]string, len(top))
-		for i, t := range top {
-			parts[i] = fmt.Sprintf("%s (%s)", t.Name, sig(t.Weight, 2))
+	if r := RankInputs(&d, 3); len(r.Inputs) > 0 {
+		line("most influential", "%s", plainGreek.Replace(r.Text()))
+		for i, l := range WrapText(plainGreek.Replace(RankingNote(&d)), 72) {
+			label := ""
+			if i == 0 {
+				label = "rankings"
+			}
+			line(label, "%s", l)
 		}
-		line("most influential", "%s  [by %s]", strings.Join(parts, ", "), measure)
 	}
 	for _, warn := range d.Warnings {
 		line("warning", "%s", warn)

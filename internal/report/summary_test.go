@@ -62,11 +62,11 @@ func TestSummaryTextSparse(t *testing.T) {
 	// Without FORM, Sobol total indices rank the inputs; without them, the
 	// tornado swings.
 	d := &Document{Sobol: []Sobol{{Variable: "a", Total: 0.2}, {Variable: "b", Total: 0.7}}}
-	if got := SummaryText(&Bundle{Doc: d}); !strings.Contains(got, "b (0.7), a (0.2)  [by total Sobol index]") {
+	if got := SummaryText(&Bundle{Doc: d}); !strings.Contains(got, "b (0.7), a (0.2)  [by total Sobol index of the margin]") {
 		t.Errorf("sobol ranking:\n%s", got)
 	}
 	d = &Document{Tornado: []Tornado{{Variable: "a", Low: 1, High: 2}, {Variable: "b", Low: 5, High: 1}}}
-	if got := SummaryText(&Bundle{Doc: d}); !strings.Contains(got, "b (4), a (1)  [by tornado swing]") {
+	if got := SummaryText(&Bundle{Doc: d}); !strings.Contains(got, "b (0.8), a (0.2)  [by share of the tornado swings of the margin]") {
 		t.Errorf("tornado ranking:\n%s", got)
 	}
 }

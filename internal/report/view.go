@@ -34,6 +34,7 @@ type view struct {
 	FORM                       []formRow
 	Spearman                   []KV
 	Influence                  string
+	RankingNote                string // which ranking answers which question
 
 	SweepLabel string
 	Sweep      []pointRow
@@ -216,15 +217,16 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 			v.FORM = append(v.FORM, formRow{k, dp, imp})
 		}
 	}
-	if measure, top := topInfluences(&d, 3); len(top) > 0 {
+	if r := RankInputs(&d, 3); len(r.Inputs) > 0 {
 		s := ""
-		for i, t := range top {
+		for i, in := range r.Inputs {
 			if i > 0 {
 				s += ", "
 			}
-			s += fmt.Sprintf("%s (%s)", t.Name, sig(t.Weight, 2))
+			s += fmt.Sprintf("%s (%s)", in.Name, sig(in.Weight, 2))
 		}
-		v.Influence = s + " — by " + strings.Replace(measure, "alpha^2", "α²", 1)
+		v.Influence = s + " — by " + r.Measure
+		v.RankingNote = RankingNote(&d)
 	}
 
 	for _, p := range d.Sweep {
