@@ -16,12 +16,15 @@ type Shape int
 
 // The cross-section shapes.
 const (
-	ShapeI      Shape = iota // doubly symmetric I or H
-	ShapeRHS                 // rectangular hollow section
-	ShapeCHS                 // circular hollow section
-	ShapeRect                // solid rectangle
-	ShapeRound               // solid round bar
-	ShapeCustom              // area, I and extreme-fibre distance given per axis
+	ShapeI       Shape = iota // doubly symmetric I or H
+	ShapeRHS                  // rectangular hollow section
+	ShapeCHS                  // circular hollow section
+	ShapeRect                 // solid rectangle
+	ShapeRound                // solid round bar
+	ShapeCustom               // area, I and extreme-fibre distance given per axis
+	ShapeAngle                // equal or unequal angle (L)
+	ShapeChannel              // channel (C or U)
+	ShapeTee                  // tee (T)
 )
 
 // Section describes a cross-section by its dimensions (mm). Only the fields
@@ -33,7 +36,9 @@ const (
 //	CHS:    Diameter, Thickness
 //	Rect:   Depth, Width
 //	Round:  Diameter
-//	Custom: Area, IMajor, IMinor, CMajor, CMinor
+//	Custom: Area, IMajor, IMinor, CMajor, CMinor (optional It, Iw, ShearCentre)
+//	Angle:  Depth, Width (the two legs), Thickness, Root (optional)
+//	Channel, Tee: Depth, Width, Flange, Web
 //
 // ThicknessLoss (corrosion of an existing member) is removed from every
 // exposed face before properties are computed.
@@ -43,12 +48,29 @@ type Section struct {
 	Thickness, Diameter                  float64
 	Radius, InnerRadius                  float64 // RHS corner radii
 	Area, IMajor, IMinor, CMajor, CMinor float64
-	ThicknessLoss                        float64
+	// It and Iw are the St Venant torsion constant (mm^4) and the warping
+	// constant (mm^6) of a custom section; It = 0 leaves its torsional
+	// buckling unchecked. ShearCentre is the position of its shear centre
+	// from the centroid along the major and the minor principal axis (mm).
+	It, Iw        float64
+	ShearCentre   [2]float64
+	ThicknessLoss float64
 }
 
 // Props are the properties of a section, per axis indexed by Major and
 // Minor: second moment I (mm^4), radius of gyration R (mm), elastic modulus
-// W = I/C (mm^3) and extreme-fibre distance C (mm).
+// W = I/C (mm^3) and extreme-fibre distance C (mm), the larger of the two
+// sides CSide (a bow or eccentricity that acts by its magnitude takes the
+// worse side of a monosymmetric section).
+//
+// Bending about an axis stresses in proportion to the distance from it:
+// C[Major] is measured along the minor axis and C[Minor] along the major
+// one. S is the shear centre from the centroid, S[Major] its coordinate
+// along the major axis and S[Minor] along the minor one. It is the St
+// Venant torsion constant (mm^4; 0: unknown, torsional buckling is not
+// checked) and Iw the warping constant (mm^6). Angle (rad) turns the
+// width direction of the drawn section onto the major axis (0 for a
+// section whose major axis is parallel to its width).
 //
 // AEff and WEff are the effective area and elastic moduli of a class 4
 // section (EN 1993-1-5 4.4, see Section.Classify); zero means the section
@@ -57,6 +79,10 @@ type Section struct {
 type Props struct {
 	A          float64
 	I, R, W, C [2]float64
+	CSide      [2][2]float64
+	S          [2]float64
+	It, Iw     float64
+	Angle      float64
 	AEff       float64
 	WEff       [2]float64
 }
@@ -78,14 +104,19 @@ type Member struct {
 	Sway float64
 	// Alpha is the imperfection factor per axis (model "curve").
 	Alpha [2]float64
+	// G is the shear modulus for torsional buckling; 0 takes
+	// E / (2 (1 + 0.3)), steel's Poisson ratio.
+	G float64
 }
 
 // Result is a capacity: the axial resistance N (N), the axis that governs
 // and the limit that governed (GovernsFirstYield "first-yield",
 // GovernsCurve "buckling-curve", or a beam-column limit such as
-// "ultimate").
+// "ultimate"). Mode is the buckling mode of that resistance; a torsional
+// or flexural-torsional mode reports Axis Minor.
 type Result struct {
 	N       float64
 	Axis    Axis
 	Governs string
+	Mode    Mode
 }

@@ -132,6 +132,7 @@ var (
 	errBeamLimit    = errors.New("column: beam-column limit must be FirstYieldLimit or UltimateLimit")
 	errBeamCustom   = errors.New("column: the ultimate beam-column limit needs a section with dimensions; a custom section (area and second moments only) has no fibres: use the first-yield limit")
 	errBeamClass4   = errors.New("column: the ultimate beam-column limit uses the gross fibre section and cannot follow the local buckling of a class 4 section (Props.AEff set): use the first-yield limit or the buckling curve, which take the effective section")
+	errBeamOpen     = errors.New("column: the ultimate beam-column limit has no fibre section for an angle, channel or tee (their bending and twisting interact): use the first-yield limit or the curve model")
 	errBeamNoPeak   = errors.New("column: beam-column ultimate analysis did not converge to a peak load; try more elements or check the member's inputs")
 )
 
@@ -170,6 +171,9 @@ var (
 // WEff of a class 4 section, see Section.Classify); the ultimate limit
 // takes its properties from the fibres of sec and refuses a class 4
 // member (m.Props.AEff > 0): its fibres do not buckle locally.
+// The model bends in one plane: with axis Both, a member whose lowest
+// elastic critical load twists the section (CriticalLoad) is refused with
+// ErrTwisting.
 func BeamColumn(m *Member, sec Section, axis Axis, opt *BeamOptions) (Result, error) {
 	w := bcGet()
 	defer bcPut(w)
@@ -238,7 +242,10 @@ func (w *bcWork) capacity(m *Member, sec Section, axis Axis, opt *BeamOptions, t
 	}
 	if axis != Both {
 		n, gov, err := w.axis(m, sec, axis, &o, tr)
-		return Result{N: n, Axis: axis, Governs: gov}, err
+		return Result{N: n, Axis: axis, Governs: gov, Mode: flexuralMode(axis)}, err
+	}
+	if _, mode := CriticalLoad(m, Both); mode.Twists() {
+		return Result{}, ErrTwisting
 	}
 	nMaj, gMaj, err := w.axis(m, sec, Major, &o, nil)
 	if err != nil {
@@ -249,9 +256,9 @@ func (w *bcWork) capacity(m *Member, sec Section, axis Axis, opt *BeamOptions, t
 		return Result{}, err
 	}
 	if nMaj < nMin {
-		return Result{N: nMaj, Axis: Major, Governs: gMaj}, nil
+		return Result{N: nMaj, Axis: Major, Governs: gMaj, Mode: ModeFlexuralMajor}, nil
 	}
-	return Result{N: nMin, Axis: Minor, Governs: gMin}, nil
+	return Result{N: nMin, Axis: Minor, Governs: gMin, Mode: ModeFlexuralMinor}, nil
 }
 
 func bcFinite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }

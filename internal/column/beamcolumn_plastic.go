@@ -53,8 +53,11 @@ func bcB(xi, h float64) [4]float64 {
 
 // ultimate returns the peak load of the fibre model about axis a.
 func (w *bcWork) ultimate(m *Member, sec Section, a Axis, o *BeamOptions, tr *Trace) (float64, string, error) {
-	if sec.Shape == ShapeCustom {
+	switch sec.Shape {
+	case ShapeCustom:
 		return 0, "", errBeamCustom
+	case ShapeAngle, ShapeChannel, ShapeTee:
+		return 0, "", errBeamOpen
 	}
 	rs, err := sec.Reduced()
 	if err != nil {

@@ -18,5 +18,8 @@ var (
 	ErrAxis         = errors.New("column: axis must be Major, Minor or Both")
 	ErrSpring       = errors.New("column: end spring stiffness must be non-negative (0 pinned, +Inf fixed)")
 	ErrRange        = errors.New("column: the squash load A fy is out of the floating-point range; check the units")
+	ErrShear        = errors.New("column: shear modulus G must be positive and finite (0 takes E / 2.6)")
+	ErrTorsion      = errors.New("column: torsion constant It and warping constant Iw must be non-negative and finite, the shear-centre position finite")
+	ErrTwisting     = errors.New("column: the lowest elastic critical load twists the section (torsional or flexural-torsional buckling); the beam-column model bends in one plane only: use the perry-robertson, secant or curve model")
 	ErrSecond       = errors.New("column: second moment of area I must be positive and finite")
 )

@@ -53,6 +53,16 @@ func (m *Member) Validate(axis Axis) error {
 		math.IsNaN(m.Sway) || math.IsInf(m.Sway, 0):
 		return ErrImperfection
 	}
+	if axis == Both && m.Props.It != 0 {
+		p := &m.Props
+		switch {
+		case !positive(ShearModulus(m)):
+			return ErrShear
+		case !positive(p.It) || !(p.Iw >= 0 && p.Iw <= math.MaxFloat64) ||
+			math.IsNaN(p.S[0]+p.S[1]) || math.IsInf(p.S[0]+p.S[1], 0):
+			return ErrTorsion
+		}
+	}
 	lo, hi := axis, axis
 	if axis == Both {
 		lo, hi = Major, Minor
@@ -75,16 +85,23 @@ func (m *Member) Validate(axis Axis) error {
 // chosen by governs rather than passed as a function value so that the
 // member does not escape to the heap: a capacity evaluation stays free of
 // allocation for callers too.
+//
+// With Both, the modes that twist the section are evaluated too
+// (twisting); a twisting mode wins a tie.
 func weaker(m *Member, axis Axis, governs string) Result {
 	if axis != Both {
-		return Result{N: evalAxis(m, axis, governs), Axis: axis, Governs: governs}
+		return Result{N: evalAxis(m, axis, governs), Axis: axis, Governs: governs, Mode: flexuralMode(axis)}
 	}
-	nMaj := evalAxis(m, Major, governs)
-	nMin := evalAxis(m, Minor, governs)
-	if nMaj < nMin {
-		return Result{N: nMaj, Axis: Major, Governs: governs}
+	res := Result{N: evalAxis(m, Major, governs), Axis: Major, Governs: governs, Mode: ModeFlexuralMajor}
+	if n := evalAxis(m, Minor, governs); n <= res.N {
+		res = Result{N: n, Axis: Minor, Governs: governs, Mode: ModeFlexuralMinor}
 	}
-	return Result{N: nMin, Axis: Minor, Governs: governs}
+	if m.Props.It != 0 {
+		if t := twisting(m, governs); t.N <= res.N {
+			res = t
+		}
+	}
+	return res
 }
 
 // evalAxis runs the closed-form model named by governs about one axis.

@@ -3,16 +3,19 @@ package column
 import "fmt"
 
 var shapeNames = [...]string{
-	ShapeI:      "I",
-	ShapeRHS:    "RHS",
-	ShapeCHS:    "CHS",
-	ShapeRect:   "rect",
-	ShapeRound:  "round",
-	ShapeCustom: "custom",
+	ShapeI:       "I",
+	ShapeRHS:     "RHS",
+	ShapeCHS:     "CHS",
+	ShapeRect:    "rect",
+	ShapeRound:   "round",
+	ShapeCustom:  "custom",
+	ShapeAngle:   "angle",
+	ShapeChannel: "channel",
+	ShapeTee:     "tee",
 }
 
 // String returns the study-file name of the shape: "I", "RHS", "CHS",
-// "rect", "round" or "custom".
+// "rect", "round", "custom", "angle", "channel" or "tee".
 func (s Shape) String() string {
 	if s >= 0 && int(s) < len(shapeNames) {
 		return shapeNames[s]
@@ -28,7 +31,7 @@ func ParseShape(name string) (Shape, error) {
 			return Shape(s), nil
 		}
 	}
-	return 0, fmt.Errorf("column: unknown section shape %q (want I, RHS, CHS, rect, round or custom)", name)
+	return 0, fmt.Errorf("column: unknown section shape %q (want I, RHS, CHS, rect, round, custom, angle, channel or tee)", name)
 }
 
 // ParseAxis returns the axis named "major", "minor" or "both".

@@ -21,6 +21,9 @@ func (s Section) Properties() (Props, error) {
 	if err != nil {
 		return Props{}, err
 	}
+	if d, ok := r.drawn(); ok {
+		return d.principal(), nil
+	}
 	var a, ix, iy, cx, cy float64 // x: bending that stresses the depth
 	switch r.Shape {
 	case ShapeI:
@@ -47,17 +50,19 @@ func (s Section) Properties() (Props, error) {
 	case ShapeCustom:
 		a, ix, iy, cx, cy = r.Area, r.IMajor, r.IMinor, r.CMajor, r.CMinor
 	}
+	var p Props
 	if iy > ix {
 		ix, iy, cx, cy = iy, ix, cy, cx
+		p.Angle = math.Pi / 2
 	}
-	var p Props
 	p.A = a
 	p.I = [2]float64{ix, iy}
-	p.C = [2]float64{cx, cy}
-	for k := range 2 {
-		p.R[k] = math.Sqrt(p.I[k] / a)
-		p.W[k] = p.I[k] / p.C[k]
+	p.CSide = [2][2]float64{{cx, cx}, {cy, cy}}
+	p.It, p.Iw = r.torsion(p.I[Minor])
+	if r.Shape == ShapeCustom {
+		p.S = r.ShearCentre
 	}
+	p.finish()
 	return p, nil
 }
 
@@ -122,6 +127,10 @@ func (s Section) Reduced() (Section, error) {
 			return Section{}, fmt.Errorf("section: thickness loss %g mm consumes the bar (diameter %g mm)", t, s.Diameter)
 		}
 		r.Diameter -= 2 * t
+	case ShapeAngle, ShapeChannel, ShapeTee:
+		if err := r.reduceOpen(t); err != nil {
+			return Section{}, err
+		}
 	case ShapeCustom:
 		return Section{}, fmt.Errorf("section: a thickness loss (%g mm) cannot be applied to a custom section; give its reduced area, second moments and fibre distances instead", t)
 	}
@@ -214,6 +223,9 @@ func (s Section) check() error {
 		if s.IMinor > s.IMajor {
 			return sectionError(fmt.Sprintf("second moment about the minor axis %g mm^4 exceeds the major %g mm^4 (the major axis is the stiffer one; swap them)", s.IMinor, s.IMajor))
 		}
+		return s.checkCustomTorsion()
+	case ShapeAngle, ShapeChannel, ShapeTee:
+		return s.checkOpen()
 	default:
 		return sectionError(fmt.Sprintf("unknown shape %d", int(s.Shape)))
 	}

@@ -1,0 +1,57 @@
+package column
+
+import "math"
+
+// Twisting returns the resistance of the member in the modes that twist
+// the section (torsional and flexural-torsional buckling) by the model
+// that governs names (GovernsFirstYield or GovernsCurve), with Mode
+// ModeTorsional or ModeFlexuralTorsional and Axis Minor. It is +Inf when
+// Props.It is 0 (torsion unknown). FirstYield and Curve include it when
+// they evaluate both axes.
+//
+// As EN 1993-1-1:2005 6.3.1.4 does for the buckling curves, the relative
+// slenderness is lam_T = sqrt(A fy / N_cr) with N_cr from TwistingLoad,
+// and the reduction factor is that of a flexural mode of the same
+// slenderness:
+//
+//   - curve: eq. (6.49) with the imperfection factor of the minor axis
+//     (6.3.1.4(2): the curve of the z-z axis);
+//   - first yield: the first-yield equation of FirstYield with P/PE
+//     replaced by P/N_cr and the bow and eccentricity of the axis with
+//     the larger e c / r^2 (the larger relative bending stress). This
+//     generalises the Perry-Robertson and secant formulas beyond their
+//     ground (they are exact for flexure only); a caller should say so.
+//
+// Invalid input returns an error (see Member.Validate), never NaN.
+func Twisting(m *Member, governs string) (Result, error) {
+	if err := m.Validate(Both); err != nil {
+		return Result{}, err
+	}
+	if governs == GovernsCurve && !(m.Alpha[Minor] >= 0 && m.Alpha[Minor] <= math.MaxFloat64) {
+		return Result{}, ErrAlpha
+	}
+	if m.Props.It == 0 {
+		return Result{N: math.Inf(1), Axis: Minor, Governs: governs, Mode: ModeTorsional}, nil
+	}
+	return twisting(m, governs), nil
+}
+
+// twisting is Twisting of a validated member whose It is not 0.
+func twisting(m *Member, governs string) Result {
+	ncr, mode := TwistingLoad(m)
+	res := Result{Axis: Minor, Governs: governs, Mode: mode}
+	rho := m.Props.A * m.Fy / ncr // lam_T^2
+	if governs == GovernsCurve {
+		res.N = m.Props.A * m.Fy * curveChi(math.Sqrt(rho), m.Alpha[Minor])
+		return res
+	}
+	p := &m.Props
+	a := Major
+	if p.C[Minor]/(p.R[Minor]*p.R[Minor]) >= p.C[Major]/(p.R[Major]*p.R[Major]) {
+		a = Minor
+	}
+	eta := relImp(m.Bow, p.R[a], p.C[a])
+	ecc := relImp(m.Ecc, p.R[a], p.C[a])
+	res.N = m.Props.A * m.Fy * firstYieldChi(rho, eta, ecc)
+	return res
+}
