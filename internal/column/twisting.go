@@ -17,7 +17,7 @@ import "math"
 //   - curve: eq. (6.49) with the imperfection factor of the minor axis
 //     (6.3.1.4(2): the curve of the z-z axis);
 //   - first yield: the first-yield equation of FirstYield with P/PE
-//     replaced by P/N_cr and the bow and eccentricity of the axis with
+//     replaced by P/N_cr and the bow, eccentricity and sway of the axis with
 //     the larger e c / r^2 (the larger relative bending stress). This
 //     generalises the Perry-Robertson and secant formulas beyond their
 //     ground (they are exact for flexure only); a caller should say so.
@@ -52,6 +52,7 @@ func twisting(m *Member, governs string) Result {
 	}
 	eta := relImp(m.Bow, p.R[a], p.C[a])
 	ecc := relImp(m.Ecc, p.R[a], p.C[a])
-	res.N = m.Props.A * m.Fy * firstYieldChi(rho, eta, ecc)
+	sw := relImp(m.Sway*swayArm(m, a), p.R[a], p.C[a])
+	res.N = m.Props.A * m.Fy * firstYieldChi(rho, eta, ecc, sw)
 	return res
 }
