@@ -10,7 +10,8 @@ import "math"
 // they evaluate both axes.
 //
 // As EN 1993-1-1:2005 6.3.1.4 does for the buckling curves, the relative
-// slenderness is lam_T = sqrt(A fy / N_cr) with N_cr from TwistingLoad,
+// slenderness is lam_T = sqrt(A fy / N_cr) with N_cr from TwistingLoad
+// (A_eff of a class 4 section, which also resists chi A_eff fy),
 // and the reduction factor is that of a flexural mode of the same
 // slenderness:
 //
@@ -40,19 +41,27 @@ func Twisting(m *Member, governs string) (Result, error) {
 func twisting(m *Member, governs string) Result {
 	ncr, mode := TwistingLoad(m)
 	res := Result{Axis: Minor, Governs: governs, Mode: mode}
-	rho := m.Props.A * m.Fy / ncr // lam_T^2
+	p := &m.Props
+	ae := p.EffectiveArea()
+	rho := ae * m.Fy / ncr // lam_T^2
 	if governs == GovernsCurve {
-		res.N = m.Props.A * m.Fy * curveChi(math.Sqrt(rho), m.Alpha[Minor])
+		res.N = ae * m.Fy * curveChi(math.Sqrt(rho), m.Alpha[Minor])
 		return res
 	}
-	p := &m.Props
 	a := Major
 	if p.C[Minor]/(p.R[Minor]*p.R[Minor]) >= p.C[Major]/(p.R[Major]*p.R[Major]) {
 		a = Minor
 	}
-	eta := relImp(m.Bow, p.R[a], p.C[a])
-	ecc := relImp(m.Ecc, p.R[a], p.C[a])
-	sw := relImp(m.Sway*swayArm(m, a), p.R[a], p.C[a])
-	res.N = m.Props.A * m.Fy * firstYieldChi(rho, eta, ecc, sw)
+	// e c / r^2 = e A / W; a class 4 section takes A_eff / W_eff.
+	k := ae / p.EffectiveModulus(a)
+	eta := math.Abs(m.Bow) * k
+	ecc := math.Abs(m.Ecc) * k
+	sw := math.Abs(m.Sway*swayArm(m, a)) * k
+	if p.AEff == 0 {
+		eta = relImp(m.Bow, p.R[a], p.C[a])
+		ecc = relImp(m.Ecc, p.R[a], p.C[a])
+		sw = relImp(m.Sway*swayArm(m, a), p.R[a], p.C[a])
+	}
+	res.N = ae * m.Fy * firstYieldChi(rho, eta, ecc, sw)
 	return res
 }
