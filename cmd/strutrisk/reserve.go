@@ -19,6 +19,10 @@ type targetRun struct {
 	// index there and confirm the sampling run there.
 	factor, formBeta float64
 	confirm          *sim.Result
+	// confirmed is set when the last sampling run's interval of beta
+	// holds the target and the run can be trusted to say so
+	// (confirmation).
+	confirmed bool
 	// added is the largest added load after correction (NaN: none).
 	added float64
 	notes []string
@@ -65,8 +69,14 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 			return t
 		}
 		t.confirm = res
-		if math.IsInf(res.Beta, 0) || math.IsNaN(res.Beta) ||
-			(res.BetaCI[0] <= st.Target && st.Target <= res.BetaCI[1]) || math.Abs(res.Beta-st.Target) < 0.005 {
+		ok, usable, why := confirmation(res, st.Target)
+		if ok {
+			t.confirmed = true
+			break
+		}
+		if !usable {
+			// Too little to correct FORM by: say what was found.
+			t.notes = append(t.notes, fmt.Sprintf("the reserve factor is not confirmed: the sampling run there (%s) %s", res.Method, why))
 			break
 		}
 		d = t.formBeta - res.Beta
@@ -81,8 +91,10 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 		}
 		t.factor, t.formBeta = f, b
 	}
-	if c := t.confirm; c != nil && !math.IsInf(c.Beta, 0) {
-		d = t.formBeta - c.Beta
+	if c := t.confirm; c != nil {
+		if _, usable, _ := confirmation(c, st.Target); usable {
+			d = t.formBeta - c.Beta
+		}
 	}
 	if d != 0 && rv.AddedErr == nil {
 		if a, _, err := l.md.AddedFor(st.Target+d, nil); err == nil {
@@ -96,6 +108,27 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 		t.notes = append(t.notes, fmt.Sprintf("FORM and sampling differ by %.2f in beta here; the reserve factor and the added load are corrected for it (FORM alone gives a factor of %.3f)", d, rv.Factor))
 	}
 	return t
+}
+
+// confirmation says whether the sampling run res at the reserve factor
+// confirms it: its estimate is trusted, rests on enough failures, and its
+// interval of beta holds the target (or its beta is within 0.005 of it).
+// usable reports whether res is precise enough to correct FORM by (a
+// trusted estimate with a finite beta and at least sim.MinFailures failed
+// samples when crude); why says what was found when it does not confirm.
+func confirmation(res *sim.Result, target float64) (ok, usable bool, why string) {
+	found := fmt.Sprintf("beta %s, 95 %% interval [%s, %s]", betaText(res.Beta), betaText(res.BetaCI[0]), betaText(res.BetaCI[1]))
+	switch {
+	case !res.Status.Trusted():
+		return false, false, "cannot be trusted: " + res.StatusReason
+	case math.IsInf(res.Beta, 0) || math.IsNaN(res.Beta):
+		return false, false, "found " + found + ", no finite index to compare with the target"
+	case res.Status == sim.FewFailures:
+		return false, false, fmt.Sprintf("found %s from only %d failed samples of %d; give more samples", found, res.Failures, res.Evaluations)
+	case res.BetaCI[0] <= target && target <= res.BetaCI[1], math.Abs(res.Beta-target) < 0.005:
+		return true, true, ""
+	}
+	return false, true, "found " + found + ", which does not hold the target"
 }
 
 // verdictOf compares the estimate of res with the target beta: "met" or
@@ -186,6 +219,7 @@ func (r *results) fillTarget(d *report.Document) {
 	}
 	if c := tr.confirm; c != nil {
 		t.Confirmation = &report.Confirmation{
+			Confirmed: tr.confirmed, Status: c.Status.String(),
 			Method: string(c.Method), Evaluations: c.Evaluations,
 			Pf: c.Pf, PfCI: c.PfCI, Beta: finite(c.Beta),
 			BetaCI: [2]float64{finite(c.BetaCI[0]), finite(c.BetaCI[1])},
@@ -227,8 +261,12 @@ func (r *results) targetSummary(d *report.Document) string {
 		}
 		s += fmt.Sprintf("  reserve factor     %.3f on the %s (FORM beta %.2f there)\n", *d.ReserveFactor, on, *t.ReserveFORMBeta)
 		if c := t.Confirmation; c != nil && c.Method != string(sim.FORMMethod) {
-			s += fmt.Sprintf("                     confirmed by %s: beta %s, 95 %% interval [%s, %s], %d evaluations\n",
-				c.Method, betaText(c.Beta), betaText(c.BetaCI[0]), betaText(c.BetaCI[1]), c.Evaluations)
+			how := "confirmed by"
+			if !c.Confirmed {
+				how = "not confirmed by"
+			}
+			s += fmt.Sprintf("                     %s %s: beta %s, 95 %% interval [%s, %s], %d evaluations\n",
+				how, c.Method, betaText(c.Beta), betaText(c.BetaCI[0]), betaText(c.BetaCI[1]), c.Evaluations)
 		}
 	}
 	if a := t.LargestAddedLoad; a != nil {

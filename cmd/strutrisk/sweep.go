@@ -149,18 +149,23 @@ func runCase(ctx context.Context, st *study.Study, v, i int, s *sim.Settings) (*
 	if err != nil {
 		return nil, nil, err
 	}
-	pt, err := runDerived(ctx, st, cs, i, s)
-	return pt, cs.Warnings, err
+	pt, status, err := runDerived(ctx, st, cs, i, s)
+	warns := cs.Warnings
+	if status != "" {
+		warns = append(warns[:len(warns):len(warns)], status)
+	}
+	return pt, warns, err
 }
 
-// runDerived runs the derived study cs of st at swept value i.
-func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings) (*report.Point, error) {
+// runDerived runs the derived study cs of st at swept value i. status
+// says why the estimate cannot be trusted, or is "" when it can.
+func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings) (pt *report.Point, status string, err error) {
 	md, err := study.Build(cs)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	if len(md.Sim.Vars) == 0 {
-		return nil, fmt.Errorf("nothing in it is uncertain")
+		return nil, "", fmt.Errorf("nothing in it is uncertain")
 	}
 	// A variant may set its own [analysis] keys (a cheaper method for an
 	// expensive model); the rest is the main run's.
@@ -180,16 +185,19 @@ func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings
 	}
 	res, err := sim.Run(ctx, md.Sim, &settings)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	if res.Incomplete {
-		return nil, fmt.Errorf("interrupted")
+		return nil, "", fmt.Errorf("interrupted")
 	}
-	pt := &report.Point{Pf: res.Pf, Beta: finite(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]}}
+	if !res.Status.Trusted() {
+		status = "the estimate of this case cannot be trusted: " + res.StatusReason
+	}
+	pt = &report.Point{Pf: res.Pf, Beta: finite(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]}}
 	if i >= 0 {
 		pt.Value = st.Sweep.Values[i].Value
 	}
-	return pt, nil
+	return pt, status, nil
 }
 
 // fill puts the cases into the bundle and its document.

@@ -109,3 +109,40 @@ func TestUntrustedEstimateIsUndecided(t *testing.T) {
 		t.Errorf("summary does not say why it is undecided:\n%s", out)
 	}
 }
+
+// TestReserveNotConfirmedByFewFailures is issue 10's second case: the
+// retrofit demo with 3000 plain samples sees one failure at the reserve
+// factor; its interval of beta (2.90 to 3.85) happens to hold the target,
+// but one failure confirms nothing. The run must say "not confirmed" and
+// what it found.
+func TestReserveNotConfirmedByFewFailures(t *testing.T) {
+	study := overloadedRetrofit(t, "520 kN") // the demo's own dead load
+	code, out, errs := invoke(t, "run", study, "--json", "--out", t.TempDir(), "--method", "monte-carlo", "--samples", "3000")
+	var d report.Document
+	if err := json.Unmarshal([]byte(out), &d); err != nil {
+		t.Fatalf("exit %d, no document: %v\n%s", code, err, errs)
+	}
+	if d.Target == nil || d.Target.Confirmation == nil {
+		t.Fatalf("no confirmation in %s", out)
+	}
+	c := d.Target.Confirmation
+	if c.Confirmed {
+		t.Errorf("confirmed by %+v", c)
+	}
+	found := false
+	for _, n := range d.Target.Notes {
+		found = found || strings.Contains(n, "not confirmed") && strings.Contains(n, "failed samples of 3000")
+	}
+	if !found {
+		t.Errorf("no note says what the run found: %q", d.Target.Notes)
+	}
+	_, out, _ = invoke(t, "run", study, "--out", t.TempDir(), "--method", "monte-carlo", "--samples", "3000")
+	for _, line := range strings.Split(out, "\n") {
+		if strings.HasPrefix(strings.TrimSpace(line), "confirmed by") {
+			t.Errorf("summary says %q", line)
+		}
+	}
+	if !strings.Contains(out, "not confirmed by monte-carlo") {
+		t.Errorf("summary:\n%s", out)
+	}
+}

@@ -47,6 +47,12 @@ type TargetCheck struct {
 // Confirmation is a sampling run of the study with the reserve loads
 // multiplied by the reserve factor.
 type Confirmation struct {
+	// Confirmed is true only when the run can be trusted, rests on enough
+	// failures, and its interval of beta holds the target; otherwise the
+	// notes of the target say what the run found.
+	Confirmed bool `json:"confirmed"`
+	// Status is the trust status of the run (see Document.Status).
+	Status      string     `json:"status,omitempty"`
 	Method      string     `json:"method"`
 	Evaluations int64      `json:"evaluations"`
 	Pf          float64    `json:"pf"`
@@ -125,7 +131,11 @@ func targetRows(d *Document) []KV {
 			rows = append(rows, KV{"reserve factor by FORM alone", f2(*t.ReserveFORMFactor)})
 		}
 		if c := t.Confirmation; c != nil && c.Method != "form" {
-			rows = append(rows, KV{"confirmed by " + c.Method, "β " + f2(c.Beta) + " (95% interval " + intervalText(c.BetaCI[:], f2) + "), " + thousands(c.Evaluations) + " evaluations"})
+			label := "confirmed by " + c.Method
+			if !c.Confirmed {
+				label = "not confirmed by " + c.Method
+			}
+			rows = append(rows, KV{label, "β " + f2(c.Beta) + " (95% interval " + intervalText(c.BetaCI[:], f2) + "), " + thousands(c.Evaluations) + " evaluations"})
 		}
 	}
 	if t.LargestAddedLoad != nil {

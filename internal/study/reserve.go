@@ -111,6 +111,10 @@ func (md *Model) FactorFor(beta float64, fs *sim.FORMSettings) (factor, found fl
 		return b - beta, err
 	}
 	t, err := fallingRoot(f, 0, math.Ln2, math.Log(1e-3), math.Log(1e3))
+	var be *boundError
+	if errors.As(err, &be) {
+		be.bound = fmt.Sprintf("a factor of %.4g", math.Exp(be.at)) // not its logarithm
+	}
 	if err != nil {
 		return math.NaN(), math.NaN(), calls, err
 	}
@@ -136,6 +140,10 @@ func (md *Model) AddedFor(beta float64, fs *sim.FORMSettings) (added float64, ca
 		return b - beta, err
 	}
 	a, err := fallingRoot(f, 0, 0.25, -1, 1e3)
+	var be *boundError
+	if errors.As(err, &be) {
+		be.bound = fmt.Sprintf("an added load of %.4g kN", be.at*unit/1e3)
+	}
 	if err != nil {
 		return math.NaN(), calls, err
 	}
@@ -173,10 +181,7 @@ func fallingRoot(f func(float64) (float64, error), x0, step, lo, hi float64) (fl
 			break
 		}
 		if b == lo || b == hi {
-			if dir > 0 {
-				return 0, fmt.Errorf("the target is still met at the bound of the search (%.4g); the reliability index hardly falls with the load", b)
-			}
-			return 0, fmt.Errorf("the target is missed even at the bound of the search (%.4g)", b)
+			return 0, &boundError{at: b, met: dir > 0}
 		}
 		a, fa = b, fb
 		step *= 2
@@ -212,4 +217,24 @@ func fallingRoot(f func(float64) (float64, error), x0, step, lo, hi float64) (fl
 		}
 	}
 	return 0, errors.New("the search did not converge in 100 steps")
+}
+
+// boundError is the error of fallingRoot when the root lies beyond the
+// bound of its search; bound, when set, names the bound for the reader
+// (else the number at is printed).
+type boundError struct {
+	at    float64
+	met   bool
+	bound string
+}
+
+func (e *boundError) Error() string {
+	b := e.bound
+	if b == "" {
+		b = fmt.Sprintf("%.4g", e.at)
+	}
+	if e.met {
+		return fmt.Sprintf("the target is still met at the bound of the search (%s); the reliability index hardly falls with the load", b)
+	}
+	return fmt.Sprintf("the target is missed even at the bound of the search (%s)", b)
 }
