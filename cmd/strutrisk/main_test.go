@@ -117,6 +117,9 @@ func TestBadStudies(t *testing.T) {
 		{"bad toml value", edit(3, `length = 2 m`), []string{"study.toml:3:", "not valid TOML"}},
 		{"effect factor typo", edit(16, `imposed = 80000`+"\neffect_facter = 1.1"), []string{"study.toml:17: loads.effect_facter: unknown key in [loads]; did you mean loads.effect_factor?"}},
 		{"units", "units = \"kN-mm\"\n" + good, []string{"study.toml:1: units: \"kN-mm\" is not a choice"}},
+		{"beta and consequence", edit(18, "beta = 3.8\nconsequence = \"medium\""), []string{"study.toml:18: target.beta: give the target either as beta or by consequence"}},
+		{"cost without consequence", edit(18, `cost_of_safety = "normal"`), []string{"study.toml:18: target.cost_of_safety: cost_of_safety needs a consequence too"}},
+		{"unknown consequence", edit(18, `consequence = "CC2"`), []string{"study.toml:18: target.consequence: \"CC2\" is not a choice"}},
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			code, out, errs := invoke(t, "check", writeStudy(t, c.study))

@@ -176,7 +176,10 @@ func baseTarget(st *study.Study) *report.TargetCheck {
 	if !st.HasTarget {
 		return nil
 	}
-	t := &report.TargetCheck{Beta: st.Target, Pf: sim.PfFromBeta(st.Target), ReferencePeriod: st.ReferencePeriod, ReserveOn: st.ReserveOn}
+	t := &report.TargetCheck{Beta: st.Target, Pf: sim.PfFromBeta(st.Target), Source: st.TargetSource, ReferencePeriod: st.ReferencePeriod, ReserveOn: st.ReserveOn}
+	if y := st.ReferenceYears; y > 0 {
+		t.ReferenceYears = &y
+	}
 	for _, q := range st.ReserveLoads() {
 		t.ReserveLoads = append(t.ReserveLoads, q.Path)
 	}
@@ -291,7 +294,7 @@ func targetCheckText(st *study.Study) string {
 	for _, q := range st.ReserveLoads() {
 		names = append(names, q.Path)
 	}
-	s := ""
+	s := fmt.Sprintf("  target from %s\n", st.TargetSource)
 	if st.ReferencePeriod != "" {
 		s += fmt.Sprintf("  reference period %s\n", st.ReferencePeriod)
 	}

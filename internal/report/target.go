@@ -13,8 +13,15 @@ type TargetCheck struct {
 	// Beta is the target reliability index, Pf = Phi(-Beta).
 	Beta float64 `json:"beta"`
 	Pf   float64 `json:"pf"`
-	// ReferencePeriod is the reference period as the study states it.
-	ReferencePeriod string `json:"reference_period,omitempty"`
+	// Source says where Beta came from: "target.beta as given", or the
+	// table (EN 1990 Annex B, ISO 2394) and the conversion to the
+	// reference period.
+	Source string `json:"source,omitempty"`
+	// ReferencePeriod is the reference period ("50 years", or the study's
+	// free text); ReferenceYears is it in years, absent when the study
+	// gives none or free text.
+	ReferencePeriod string   `json:"reference_period,omitempty"`
+	ReferenceYears  *float64 `json:"reference_period_years,omitempty"`
 	// Verdict is "met", "not met" or "undecided" (the interval of beta
 	// straddles the target); empty without a sampling result.
 	Verdict string `json:"verdict,omitempty"`
@@ -101,6 +108,9 @@ func targetRows(d *Document) []KV {
 	}
 	f2 := func(x float64) string { return fixed(x, 2) }
 	rows := []KV{{"target β", f2(t.Beta) + " (pf " + prob(t.Pf) + ")"}}
+	if t.Source != "" {
+		rows = append(rows, KV{"target from", t.Source})
+	}
 	if t.ReferencePeriod != "" {
 		rows = append(rows, KV{"reference period", t.ReferencePeriod})
 	}

@@ -785,15 +785,7 @@ func (p *parser) target(top *table) {
 	if t == nil {
 		return
 	}
-	if b, ok := p.number(t, "beta"); ok {
-		if b < 0 || b > 10 {
-			p.errorf(t.key("beta"), "beta = %g is outside 0..10: a target reliability index is usually 2 to 5.5", b)
-		} else {
-			p.st.Target, p.st.HasTarget = b, true
-		}
-	} else if _, given := t.m["beta"]; !given {
-		p.required(t, "beta", "the target reliability index, e.g. beta = 3.8")
-	}
+	p.targetBeta(t) // targetsource.go
 	p.reserve(t)
 	p.unknown(t)
 }

@@ -47,13 +47,19 @@ type Study struct {
 	// was given.
 	Target    float64
 	HasTarget bool
-	// ReferencePeriod is the target's reference period as written (a
-	// note for the report, e.g. "50 years"); ReserveOn is "variable" or
-	// "all": the loads the reserve factor multiplies; PermanentLoads are
-	// the paths of the loads taken as permanent (see target.go).
+	// TargetSource says where Target came from ("target.beta as given", or
+	// the table and the conversion; see targetsource.go).
+	TargetSource string
+	// ReferencePeriod is the target's reference period ("50 years", or
+	// free text as written); ReferenceYears is it in years, 0 when it was
+	// not given or is not a duration.
 	ReferencePeriod string
-	ReserveOn       string
-	PermanentLoads  []string
+	ReferenceYears  float64
+	// ReserveOn is "variable" or "all": the loads the reserve factor
+	// multiplies; PermanentLoads are the paths of the loads taken as
+	// permanent (see target.go).
+	ReserveOn      string
+	PermanentLoads []string
 
 	// Measurements are the test results that updated quantities of the
 	// study (see measure.go).

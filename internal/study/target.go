@@ -13,7 +13,6 @@ var permanentNames = []string{"dead", "permanent", "self_weight", "superimposed_
 // reserve reads the keys of [target] that say what the reserve factor
 // multiplies:
 //
-//	reference_period = "50 years"        # a note, shown in the report
 //	reserve_on       = "variable"        # or "all"
 //	permanent        = ["dead"]          # the permanent loads (names in [loads])
 //
@@ -22,9 +21,6 @@ var permanentNames = []string{"dead", "permanent", "self_weight", "superimposed_
 // named dead, permanent, self_weight or superimposed_dead are permanent.
 func (p *parser) reserve(t *table) {
 	st := p.st
-	if s, ok := p.str(t, "reference_period"); ok {
-		st.ReferencePeriod = strings.TrimSpace(s)
-	}
 	defaulted := false
 	if on, ok := p.choice(t, "reserve_on", choicesOf("target", "reserve_on")); ok {
 		st.ReserveOn = on
