@@ -5,9 +5,9 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
-	"os"
-	"path/filepath"
 	"slices"
+
+	"strutrisk/internal/outdir"
 )
 
 // DefaultFormats are the output formats Write uses when given none.
@@ -16,12 +16,30 @@ var DefaultFormats = []string{"html", "json", "csv", "svg", "png"}
 // knownFormats are the formats Write accepts.
 var knownFormats = []string{"html", "json", "csv", "svg", "png", "md", "txt"}
 
-// Write writes the report of b into dir (created if needed) and returns the
-// paths written, in order. Whatever the formats, it writes results.json
-// (the Document, indented), summary.txt (SummaryText), summary.md
-// (Markdown), when the bundle holds sample points, samples.csv, and when
-// it holds sweep curves, sweep.csv (one row per series and value). The
-// formats add:
+// Write writes the report of b into dir and returns the paths written, in
+// order: it is Prepare, Files and Commit of package outdir, whose rules
+// say which folders it takes and how a run replaces the previous one as a
+// whole (the folder ends up holding exactly the files of this run and the
+// marker outdir.Marker). A failure leaves any earlier report in dir as it
+// was.
+func Write(dir string, b *Bundle, formats []string) ([]string, error) {
+	files, err := Files(b, formats)
+	if err != nil {
+		return nil, err
+	}
+	f, err := outdir.Prepare(dir)
+	if err != nil {
+		return nil, err
+	}
+	defer f.Close()
+	return f.Commit(files)
+}
+
+// Files renders the report of b: whatever the formats, results.json (the
+// Document, indented), summary.txt (SummaryText), summary.md (Markdown),
+// when the bundle holds sample points, samples.csv, and when it holds
+// sweep curves, sweep.csv (one row per series and value). The formats
+// add:
 //
 //	"html"  report.html, one self-contained file with inline SVG pictures
 //	"svg"   every picture as NAME.svg
@@ -34,14 +52,9 @@ var knownFormats = []string{"html", "json", "csv", "svg", "png", "md", "txt"}
 // variants, beam-column and update-1, update-2...; a picture without data is left
 // out (and one that cannot be drawn is listed in the HTML report).
 //
-// Write is atomic per run: every file is first written under a temporary
-// name in dir, and only when all are complete are they renamed to their
-// final names. A failure while writing removes the temporary files and
-// leaves any earlier report in dir untouched.
-//
 // All numbers in b are in N, mm and MPa, like the Document; the pictures
 // and text show forces in kN.
-func Write(dir string, b *Bundle, formats []string) ([]string, error) {
+func Files(b *Bundle, formats []string) ([]outdir.File, error) {
 	if b == nil || b.Doc == nil {
 		return nil, errors.New("report: nothing to write: the bundle has no result document")
 	}
@@ -55,28 +68,28 @@ func Write(dir string, b *Bundle, formats []string) ([]string, error) {
 	}
 	want := func(f string) bool { return slices.Contains(formats, f) }
 
-	var files []outFile
+	var files []outdir.File
 	js, err := documentJSON(b.Doc)
 	if err != nil {
 		return nil, err
 	}
-	files = append(files, outFile{"results.json", js})
+	files = append(files, outdir.File{Name: "results.json", Data: js})
 	if b.Samples != nil && len(b.Samples.Rows) > 0 {
 		csv, err := samplesCSV(b.Samples)
 		if err != nil {
 			return nil, err
 		}
-		files = append(files, outFile{"samples.csv", csv})
+		files = append(files, outdir.File{Name: "samples.csv", Data: csv})
 	}
 	if len(b.Series) > 0 {
 		csv, err := seriesCSV(b)
 		if err != nil {
 			return nil, err
 		}
-		files = append(files, outFile{"sweep.csv", csv})
+		files = append(files, outdir.File{Name: "sweep.csv", Data: csv})
 	}
-	files = append(files, outFile{"summary.txt", []byte(SummaryText(b))})
-	files = append(files, outFile{"summary.md", []byte(Markdown(b))})
+	files = append(files, outdir.File{Name: "summary.txt", Data: []byte(SummaryText(b))})
+	files = append(files, outdir.File{Name: "summary.md", Data: []byte(Markdown(b))})
 
 	if want("html") || want("svg") || want("png") {
 		pics, notes := renderPictures(b, want("svg") || want("html"), want("png"))
@@ -85,24 +98,18 @@ func Write(dir string, b *Bundle, formats []string) ([]string, error) {
 			if err != nil {
 				return nil, err
 			}
-			files = append(files, outFile{"report.html", html})
+			files = append(files, outdir.File{Name: "report.html", Data: html})
 		}
 		for _, p := range pics {
 			if want("svg") && p.svg != nil {
-				files = append(files, outFile{p.fig.Name + ".svg", p.svg})
+				files = append(files, outdir.File{Name: p.fig.Name + ".svg", Data: p.svg})
 			}
 			if want("png") && p.png != nil {
-				files = append(files, outFile{p.fig.Name + ".png", p.png})
+				files = append(files, outdir.File{Name: p.fig.Name + ".png", Data: p.png})
 			}
 		}
 	}
-	return writeAtomic(dir, files)
-}
-
-// outFile is a file's name within the output directory and its content.
-type outFile struct {
-	name string
-	data []byte
+	return files, nil
 }
 
 // picture is a rendered figure.
@@ -152,70 +159,4 @@ func documentJSON(d *Document) ([]byte, error) {
 		return nil, fmt.Errorf("report: cannot encode the result document (a value is probably NaN or infinite): %w", err)
 	}
 	return buf.Bytes(), nil
-}
-
-// writeHook, when set (by tests), is called before each temporary file is
-// written and can make the write fail.
-var writeHook func(name string) error
-
-// writeAtomic writes files into dir under temporary names, then renames
-// them all. On failure it removes its temporary files.
-func writeAtomic(dir string, files []outFile) (paths []string, err error) {
-	if err := os.MkdirAll(dir, 0o755); err != nil {
-		return nil, fmt.Errorf("report: cannot create the output directory: %w", err)
-	}
-	temps := make([]string, 0, len(files))
-	defer func() {
-		if err != nil {
-			for _, t := range temps {
-				os.Remove(t)
-			}
-		}
-	}()
-	for _, f := range files {
-		t, err := writeTemp(dir, f)
-		if t != "" {
-			temps = append(temps, t)
-		}
-		if err != nil {
-			return nil, err
-		}
-	}
-	for i, f := range files {
-		final := filepath.Join(dir, f.name)
-		if err := os.Rename(temps[i], final); err != nil {
-			return paths, fmt.Errorf("report: cannot move %s into place: %w", f.name, err)
-		}
-		temps[i] = "" // renamed; nothing to clean up
-		paths = append(paths, final)
-	}
-	return paths, nil
-}
-
-// writeTemp writes f to a new temporary file in dir and returns its name.
-func writeTemp(dir string, f outFile) (string, error) {
-	tf, err := os.CreateTemp(dir, "."+f.name+".tmp-*")
-	if err != nil {
-		return "", fmt.Errorf("report: cannot write %s: %w", f.name, err)
-	}
-	name := tf.Name()
-	fail := func(err error) (string, error) {
-		tf.Close()
-		return name, fmt.Errorf("report: cannot write %s: %w", f.name, err)
-	}
-	if writeHook != nil {
-		if err := writeHook(f.name); err != nil {
-			return fail(err)
-		}
-	}
-	if _, err := tf.Write(f.data); err != nil {
-		return fail(err)
-	}
-	if err := tf.Chmod(0o644); err != nil {
-		return fail(err)
-	}
-	if err := tf.Close(); err != nil {
-		return name, fmt.Errorf("report: cannot write %s: %w", f.name, err)
-	}
-	return name, nil
 }
