@@ -1106,14 +1106,16 @@ func TestContractLoadNames(t *testing.T) {
 	}
 }
 
-// TestContractOutput: [output] dir and formats are honoured; the nominal
-// length of a random length is its mean (Perry's load, ctPerry, at L =
-// 3000 mm with the bow L/500 of that length).
+// TestContractOutput: [output] dir (relative to the study file's folder)
+// and formats are honoured; the nominal length of a random length is its
+// mean (Perry's load, ctPerry, at L = 3000 mm with the bow L/500 of that
+// length).
 func TestContractOutput(t *testing.T) {
-	dir := filepath.Join(t.TempDir(), "out")
 	s := fmt.Sprintf(ctStrut, "", `{ dist = "uniform", min = 2000, max = 4000 }`, "100", "50", "200000", "250", `"L/500"`, "100000") +
-		fmt.Sprintf("[analysis]\nsamples = 3000\n[sensitivity]\nsobol = false\n[output]\ndir = %q\nformats = [\"json\", \"csv\"]\n", dir)
-	code, _, errs := invoke(t, "run", writeStudy(t, s))
+		"[analysis]\nsamples = 3000\n[sensitivity]\nsobol = false\n[output]\ndir = \"out/a\"\nformats = [\"json\", \"csv\"]\n"
+	study := writeStudy(t, s)
+	dir := filepath.Join(filepath.Dir(study), "out", "a")
+	code, _, errs := invoke(t, "run", study)
 	if code != 0 {
 		t.Fatalf("exit %d\n%s", code, errs)
 	}

@@ -5,14 +5,8 @@ import (
 	"math"
 	"strings"
 
-	"strutrisk/internal/report"
 	"strutrisk/sim"
 )
-
-// writeOutputs writes the report files of b into dir, atomically.
-func writeOutputs(dir string, b *report.Bundle, formats []string) ([]string, error) {
-	return report.Write(dir, b, formats)
-}
 
 // summary is the concise text run prints on the terminal.
 func (r *results) summary(dir string, files []string) string {

@@ -7,8 +7,8 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"path/filepath"
 
+	"strutrisk/internal/report"
 	"strutrisk/sim"
 )
 
@@ -17,8 +17,10 @@ const runHelp = `Usage: strutrisk run STUDY.toml [flags]
 Estimates the probability that the column of the study fails and the
 reliability index, with 95 % intervals, and the inputs that drive them.
 Prints a short summary and writes results.json, samples.csv, summary.txt
-and the report files into the output folder ([output] dir of the study,
-else out/<study name>). Flags override the study's [analysis] settings and
+and the report files into the output folder: --out, else [output] dir
+(relative to the study file), else out/<study file name>. Each run replaces
+the folder as a whole; it must be new, empty or written by strutrisk, and
+is checked before sampling. Flags override the study's [analysis] settings and
 may stand before or after the study file. Ctrl-C stops sampling; what
 finished is written, marked "complete": false, and the exit status is
 130 (143 after SIGTERM).
@@ -47,7 +49,7 @@ type runOptions struct {
 func runCmd(args []string, stdout, stderr io.Writer) int {
 	var o runOptions
 	fs := flag.NewFlagSet("run", flag.ContinueOnError)
-	fs.StringVar(&o.out, "out", "", "write results into `DIR` (default: [output] dir, else out/<study name>)")
+	fs.StringVar(&o.out, "out", "", "write results into `DIR`, replacing it as a whole (default: [output] dir, else out/<study file name>)")
 	fs.Uint64Var(&o.seed, "seed", 0, "seed of every random stream (`N`; default: [analysis] seed)")
 	fs.Int64Var(&o.samples, "samples", 0, "at most `N` model evaluations (default: [analysis] samples)")
 	fs.StringVar(&o.method, "method", "", "estimator `M`: auto, monte-carlo, latin-hypercube, form, importance, subset, conditional-qmc")
@@ -119,13 +121,12 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	if note := beamTimeNote(l, &settings); note != "" {
 		fmt.Fprintf(stderr, "strutrisk: %s: %s\n", st.File, note)
 	}
-	dir := o.out
-	if dir == "" {
-		dir = st.Output.Dir
+	folder, code := prepareOutput(pos[0], st, o.out, stderr)
+	if code != exitOK {
+		return code
 	}
-	if dir == "" {
-		dir = filepath.Join("out", st.Name())
-	}
+	defer folder.Close()
+	dir := folder.Path
 
 	ctx, sigs, stop := withSignals(baseContext())
 	defer stop()
@@ -150,10 +151,10 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	r.incomplete = incompleteReason(ctx, r, sigs, bar.phase())
 	b := r.bundle()
-	files, err := writeOutputs(dir, b, st.Output.Formats)
-	if err != nil {
-		fmt.Fprintf(stderr, "strutrisk: writing %s: %v\n", dir, err)
-		return exitInternal
+	files, werr := report.Files(b, st.Output.Formats)
+	var paths []string
+	if werr == nil {
+		paths, werr = folder.Commit(files)
 	}
 	if o.json {
 		out, err := json.MarshalIndent(b.Doc, "", "  ")
@@ -163,7 +164,12 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		}
 		stdout.Write(append(out, '\n'))
 	} else {
-		fmt.Fprint(stdout, r.summary(dir, files))
+		fmt.Fprint(stdout, r.summary(dir, paths))
+	}
+	if werr != nil {
+		// The results are on standard output; say they are nowhere else.
+		fmt.Fprintf(stderr, "strutrisk: the results were not written to %s: %v; what is on standard output is all there is of this run\n", dir, werr)
+		return exitInternal
 	}
 	switch {
 	case r.incomplete != "":

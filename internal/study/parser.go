@@ -921,7 +921,7 @@ func (p *parser) output(top *table) {
 		if strings.TrimSpace(d) == "" {
 			p.errorf(t.key("dir"), "dir is empty: give a folder, e.g. \"out/bay3\"")
 		}
-		o.Dir = d
+		o.Dir, o.DirLine = d, p.line(t.key("dir"))
 	}
 	if v, ok := t.get("formats"); ok {
 		known := choicesOf("output", "formats")

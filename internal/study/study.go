@@ -119,7 +119,10 @@ type Sensitivity struct {
 
 // Output says where results go.
 type Output struct {
+	// Dir is [output] dir as written (relative to the study file's folder:
+	// the command resolves it); DirLine is its line, 0 when not given.
 	Dir     string
+	DirLine int
 	Formats []string
 }
 
