@@ -5,6 +5,7 @@ import (
 	"math"
 	"strings"
 
+	"strutrisk/internal/report"
 	"strutrisk/sim"
 )
 
