@@ -236,6 +236,11 @@ func (r *results) bundle() *report.Bundle {
 		SobolCapacity:   r.sobolCap,
 		Updates:         updates(l.st),
 		ByMagnitude:     l.md.ByMagnitude(),
+		StudyModel:      l.st.Model,
+		VariantModels:   map[string]string{},
+	}
+	for v, va := range l.st.Variants {
+		b.VariantModels[va.Name] = caseModel(l.st, v)
 	}
 	if l.st.Model != "beam-column" {
 		b.TornadoBeta = r.tornado
@@ -278,26 +283,26 @@ func (r *results) bundle() *report.Bundle {
 }
 
 // slendernessChart is the capacity ratio against relative slenderness:
-// the study's model, the closed-form models it is compared with (see
-// study.ReferenceCurves) and Euler's curve, the nominal member and a cloud
+// the study's model and the closed-form models it is compared with, per
+// axis (see study.ReferenceCurves) and Euler's curve, the nominal member and a cloud
 // of sampled members.
 func (r *results) slendernessChart() *report.SlendernessChart {
 	md := r.l.md
-	lam, ratio := md.CurveChart(60, 3)
-	if len(lam) == 0 {
+	refs := md.ReferenceCurves(60, 3)
+	if len(refs) == 0 {
 		return nil
 	}
-	c := &report.SlendernessChart{Curves: []report.Curve{{Name: r.l.st.Model, X: lam, Y: ratio}}}
+	c := &report.SlendernessChart{}
+	for _, rc := range refs {
+		c.Curves = append(c.Curves, report.Curve{Name: rc.Name, Model: rc.Model, Note: rc.Note, Axis: rc.Axis.String(), X: rc.X, Y: rc.Y})
+	}
 	var ex, ey []float64
 	for i := 1; i <= 60; i++ {
 		l := 3 * float64(i) / 60
 		ex = append(ex, l)
 		ey = append(ey, math.Min(1, 1/(l*l))) // Euler: N/(A fy) = 1/lam^2, capped by the squash load
 	}
-	for _, rc := range md.ReferenceCurves(60, 3) {
-		c.Curves = append(c.Curves, report.Curve{Name: rc.Name, X: rc.X, Y: rc.Y})
-	}
-	c.Curves = append(c.Curves, report.Curve{Name: "Euler", X: ex, Y: ey})
+	c.Curves = append(c.Curves, report.Curve{Name: "Euler", Model: "euler", X: ex, Y: ey})
 	n := r.l.nom
 	m := n.Member
 	c.Member = [2]float64{n.RelSlenderness[n.Axis], n.Capacity / n.ModelFactor / (m.Props.A * m.Fy)}

@@ -101,7 +101,7 @@ func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *c
 	}
 	if n > 0 {
 		for v := -1; v < len(st.Variants); v++ {
-			s := report.Series{Name: "study"}
+			s := report.Series{Name: "study", Model: caseModel(st, v)}
 			if v >= 0 {
 				s.Name = st.Variants[v].Name
 			} else if len(st.Variants) > 0 {
@@ -209,6 +209,18 @@ func (c *cases) fill(b *report.Bundle) {
 	b.Doc.Variants = c.variants
 	b.Series = c.series
 	b.SweepLabel = c.label
+}
+
+// caseModel is the capacity model of variant v of st (-1: the study).
+func caseModel(st *study.Study, v int) string {
+	if v < 0 {
+		return st.Model
+	}
+	cs, err := st.Derive(v, -1)
+	if err != nil {
+		return ""
+	}
+	return cs.Model
 }
 
 // summary is the compact table of the cases for the terminal.

@@ -58,6 +58,11 @@ type Bundle struct {
 	// eccentricity, either side of the member): both of their fractiles
 	// can move a result the same way, and the tornado captions say so.
 	ByMagnitude []string
+	// StudyModel and VariantModels (by variant name) are the capacity
+	// models of the study and of its variants: they style the variants
+	// picture as every other (modelStyle).
+	StudyModel    string
+	VariantModels map[string]string
 }
 
 // Input is one row of the inputs table.
@@ -92,16 +97,21 @@ type SlendernessChart struct {
 	Member [2]float64
 }
 
-// Curve is a named line.
+// Curve is a named line. Model names the capacity model it is drawn with
+// ("perry-robertson", "secant", "curve", "beam-column", "euler"): every
+// line of one model has one colour and line style in every picture (see
+// modelStyle). Axis is "major" or "minor" when the curve is about one axis.
+// Note, when set, says where the curve comes from and goes in the caption.
 type Curve struct {
-	Name string
-	X, Y []float64
+	Name, Model, Axis, Note string
+	X, Y                    []float64
 }
 
 // Series is beta (with interval) against a swept value, for one variant.
+// Model is the case's capacity model: it styles the series (modelStyle).
 type Series struct {
-	Name   string
-	Points []Point
+	Name, Model string
+	Points      []Point
 }
 
 // Update shows the prior and updated (predictive) densities of a variable.

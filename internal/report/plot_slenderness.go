@@ -1,6 +1,8 @@
 package report
 
 import (
+	"strings"
+
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
 	"gonum.org/v1/plot/vg"
@@ -45,7 +47,14 @@ func slendernessFigure(b *Bundle) *figure {
 			drawn++
 		}
 	}
-	for i, c := range s.Curves {
+	var notes []string
+	axes := map[string]bool{}
+	for _, c := range s.Curves {
+		if c.Axis != "" {
+			axes[c.Axis] = true
+		}
+	}
+	for _, c := range s.Curves {
 		xy := finiteXYs(c.X, c.Y)
 		if len(xy) < 2 {
 			continue
@@ -54,16 +63,30 @@ func slendernessFigure(b *Bundle) *figure {
 		if err != nil {
 			continue
 		}
-		ln.LineStyle = lineStyle(seriesColor(i), 1.6, false)
-		if i%len(palette) == 1 {
-			ln.LineStyle = lineStyle(colDemand, 1.6, false)
-		}
+		st := modelStyle(c.Model)
+		ln.LineStyle = st.line(1.6)
+		thumbs := []plot.Thumbnailer{ln}
 		p.Add(ln)
+		if c.Axis == "minor" && len(axes) > 1 {
+			// The minor axis's curves carry rings, in their model's style.
+			var marks plotter.XYs
+			for k := 4; k < len(xy); k += 6 {
+				marks = append(marks, xy[k])
+			}
+			if sc, err := plotter.NewScatter(marks); err == nil {
+				sc.GlyphStyle = draw.GlyphStyle{Color: st.Color, Radius: vg.Points(2.2), Shape: draw.RingGlyph{}}
+				p.Add(sc)
+				thumbs = append(thumbs, sc)
+			}
+		}
 		name := c.Name
 		if name == "" {
 			name = "capacity model"
 		}
-		p.Legend.Add(name, ln)
+		p.Legend.Add(name, thumbs...)
+		if c.Note != "" {
+			notes = append(notes, name+": "+c.Note+".")
+		}
 		drawn++
 	}
 	if m := s.Member; finite(m[0]) && finite(m[1]) && (m[0] != 0 || m[1] != 0) {
@@ -79,5 +102,12 @@ func slendernessFigure(b *Bundle) *figure {
 		return nil
 	}
 	p.X.Min, p.Y.Min = 0, 0
-	return &figure{Name: "slenderness", Caption: "Capacity as a fraction of the squash load, N/Ny, against relative slenderness λ (both dimensionless): the deterministic curve of each capacity model, the sampled members (cloud) and the nominal member (cross).", W: 16 * vg.Centimeter, H: 10 * vg.Centimeter, Plots: []*plot.Plot{p}}
+	// The curves fall from the top left: the bottom left is free.
+	p.Legend.Top, p.Legend.Left = false, true
+	p.Legend.XOffs, p.Legend.YOffs = vg.Points(8), vg.Points(6)
+	caption := ""
+	if len(notes) > 0 {
+		caption = " " + strings.Join(notes, " ")
+	}
+	return &figure{Name: "slenderness", Caption: "Capacity as a fraction of the squash load, N/Ny, against relative slenderness λ (both dimensionless): the deterministic curve of each capacity model about each axis the study checks (the minor axis's marked with rings), each model in one colour and line style in every picture, the sampled members (cloud) and the nominal member (cross)." + caption, W: 16 * vg.Centimeter, H: 10 * vg.Centimeter, Plots: []*plot.Plot{p}}
 }

@@ -40,8 +40,14 @@ func sweepFigure(b *Bundle) *figure {
 	var curves, marks []entry
 	pfMin, pfMax := math.Inf(1), math.Inf(-1)
 	xmin, xmax := math.Inf(1), math.Inf(-1)
+	models := make([]string, len(b.Series))
 	for i, s := range b.Series {
-		c := seriesColor(i)
+		models[i] = s.Model
+	}
+	glyphs := seriesGlyphs(models)
+	for i, s := range b.Series {
+		style := modelStyle(s.Model)
+		c := style.Color
 		var beta, pf, lo, hi plotter.XYs
 		for _, pt := range s.Points {
 			if !finite(pt.Value) {
@@ -81,8 +87,8 @@ func sweepFigure(b *Bundle) *figure {
 		if len(beta) > 0 {
 			ln, sc, err := plotter.NewLinePoints(beta)
 			if err == nil {
-				ln.LineStyle = lineStyle(c, 1.5, false)
-				sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: vg.Points(2.2), Shape: draw.CircleGlyph{}}
+				ln.LineStyle = style.line(1.5)
+				sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: vg.Points(2.6), Shape: glyphs[i]}
 				pb.Add(ln, sc)
 				curves = append(curves, entry{name, []plot.Thumbnailer{ln, sc}})
 				drawn++
@@ -95,8 +101,8 @@ func sweepFigure(b *Bundle) *figure {
 		if len(pf) > 0 {
 			ln, sc, err := plotter.NewLinePoints(pf)
 			if err == nil {
-				ln.LineStyle = lineStyle(c, 1.5, false)
-				sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: vg.Points(2.2), Shape: draw.CircleGlyph{}}
+				ln.LineStyle = style.line(1.5)
+				sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: vg.Points(2.6), Shape: glyphs[i]}
 				pp.Add(ln, sc)
 				pp.Legend.Add(name, ln, sc)
 			}

@@ -21,16 +21,21 @@ func variantsFigure(b *Bundle) *figure {
 		return nil
 	}
 	type row struct {
-		name         string
+		name, model  string
 		beta, lo, hi float64
 	}
 	var rows []row
 	if d.Beta != nil && len(d.PfCI) == 2 {
-		rows = append(rows, row{"study", *d.Beta, sim.BetaFromPf(d.PfCI[1]), sim.BetaFromPf(d.PfCI[0])})
+		rows = append(rows, row{"study", b.StudyModel, *d.Beta, sim.BetaFromPf(d.PfCI[1]), sim.BetaFromPf(d.PfCI[0])})
 	}
 	for _, v := range d.Variants {
-		rows = append(rows, row{v.Name, v.Beta, sim.BetaFromPf(v.PfCI[1]), sim.BetaFromPf(v.PfCI[0])})
+		rows = append(rows, row{v.Name, b.VariantModels[v.Name], v.Beta, sim.BetaFromPf(v.PfCI[1]), sim.BetaFromPf(v.PfCI[0])})
 	}
+	models := make([]string, len(rows))
+	for i, r := range rows {
+		models[i] = r.model
+	}
+	glyphs := seriesGlyphs(models)
 	p := newPlot("Reliability index of the variants", "reliability index β (–)", "")
 	addGridLines(p, false, true)
 	n := len(rows)
@@ -44,7 +49,7 @@ func variantsFigure(b *Bundle) *figure {
 		if !finite(r.beta) || r.beta > 1e300 {
 			continue
 		}
-		c := seriesColor(i)
+		c := modelStyle(r.model).Color
 		if finite(r.lo) && finite(r.hi) && r.lo <= r.hi {
 			ln, err := plotter.NewLine(plotter.XYs{{X: r.lo, Y: y}, {X: r.hi, Y: y}})
 			if err == nil {
@@ -58,7 +63,7 @@ func variantsFigure(b *Bundle) *figure {
 		if err != nil {
 			return nil
 		}
-		sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: vg.Points(3.5), Shape: draw.CircleGlyph{}}
+		sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: vg.Points(3.5), Shape: glyphs[i]}
 		p.Add(sc)
 		xmin, xmax = math.Min(xmin, r.beta), math.Max(xmax, r.beta)
 		drawn++

@@ -7,39 +7,105 @@ import (
 )
 
 // RefCurve is a deterministic capacity curve N / (A fy) against relative
-// slenderness.
+// slenderness about one axis.
 type RefCurve struct {
-	Name string
+	// Name labels the curve for a legend; Model is the capacity model it
+	// is drawn with ("perry-robertson", "secant", "curve", "beam-column"),
+	// so that a picture can style every curve of one model alike.
+	Name, Model string
+	// Note says where the curve comes from, for a caption (the row of EN
+	// 1993-1-1 Table 6.2 for a buckling curve); "" when the name says it.
+	Note string
+	// Axis is the axis whose relative slenderness X is.
+	Axis column.Axis
 	X, Y []float64
 }
 
-// ReferenceCurves returns, beside the study's own model (CurveChart), the
-// closed-form models a researcher compares it with, for the nominal member
-// as its length varies (model factor excluded), at n points up to relative
-// slenderness lamMax:
+// axes returns the axes the study checks.
+func (md *Model) axes() []column.Axis {
+	if a := md.Study.Axis; a == column.Major || a == column.Minor {
+		return []column.Axis{a}
+	}
+	return []column.Axis{column.Major, column.Minor}
+}
+
+// ReferenceCurve returns the EN 1993-1-1 buckling curve the slenderness
+// picture draws about axis a: the study's own when its model is "curve"
+// (by letter, or by its imperfection factor alpha), else the curve EN
+// 1993-1-1:2005 Table 6.2 gives the nominal section (column.BucklingCurve)
+// with the shape's default fabrication. It is the one place that choice
+// is made. name is the curve's label ("b", or "alpha = 0.4"), row says why
+// (the row of Table 6.2, or "the study's curve"). A section the table does
+// not cover (custom) takes curve "b", labelled as a reference only.
+func (md *Model) ReferenceCurve(a column.Axis) (name, row string, alpha float64) {
+	st := md.Study
+	if st.Model == "curve" {
+		v := md.nominalValues()
+		alpha = v[fAlpha0+int(a)]
+		if st.Curve[a] != "" {
+			return st.Curve[a], "the study's curve", alpha
+		}
+		return fmt.Sprintf("alpha = %.3g", alpha), "the study's curve", alpha
+	}
+	nom, err := md.Nominal()
+	if err == nil {
+		fabs := column.Fabrications(nom.Section.Shape)
+		if len(fabs) > 0 {
+			if c, why, err := column.BucklingCurve(nom.Section, fabs[0], nom.Member.Fy, a); err == nil {
+				if al, err := column.CurveAlpha(c); err == nil {
+					return c, "Table 6.2: " + why, al
+				}
+			}
+		}
+	}
+	alpha, _ = column.CurveAlpha("b")
+	return "b", "a reference: Table 6.2 does not cover the section", alpha
+}
+
+// refKind is one curve family of the slenderness picture.
+type refKind struct {
+	name, model, note string
+	eval              func(m *column.Member, a column.Axis) (column.Result, error)
+}
+
+// ReferenceCurves returns the curves of the slenderness picture for the
+// nominal member as its length varies (model factor excluded), at n
+// points up to relative slenderness lamMax, about each axis the study
+// checks (named "..., minor axis" when there are two):
+//   - the study's own model;
 //   - Perry-Robertson first yield with the study's nominal bow, when the
 //     study has a bow and its model is not perry-robertson;
 //   - the secant formula with the study's nominal eccentricity, when it has
 //     one and its model is not secant;
-//   - the EN 1993-1-1 buckling curve of the study, or curve "b" as a
-//     reference when the study's model is not "curve" (EN 1993-1-1:2005
-//     6.3.1.2, Table 6.1).
+//   - the EN 1993-1-1 buckling curve of ReferenceCurve, when the study's
+//     model is not "curve" (EN 1993-1-1:2005 6.3.1.2, Tables 6.1 and 6.2).
 func (md *Model) ReferenceCurves(n int, lamMax float64) []RefCurve {
 	nom, err := md.Nominal()
 	if err != nil {
 		return nil
 	}
-	a := nom.Axis
-	v := md.nominalValues()
-	lam0 := nom.RelSlenderness[a]
-	if !(lam0 > 0) {
-		return nil
+	var curves []RefCurve
+	axes := md.axes()
+	for _, a := range axes {
+		suffix := ""
+		if len(axes) > 1 {
+			suffix = ", " + a.String() + " axis"
+		}
+		for _, k := range md.refKinds(nom, a) {
+			c := RefCurve{Name: k.name + suffix, Model: k.model, Note: k.note, Axis: a}
+			c.X, c.Y = md.curveAbout(nom, a, n, lamMax, k.eval)
+			if len(c.X) > 0 {
+				curves = append(curves, c)
+			}
+		}
 	}
-	type kind struct {
-		name string
-		eval func(m *column.Member) (column.Result, error)
-	}
-	var kinds []kind
+	return curves
+}
+
+// refKinds lists the curve families of the slenderness picture about a.
+func (md *Model) refKinds(nom *Nominal, a column.Axis) []refKind {
+	st := md.Study
+	kinds := []refKind{{st.Model, st.Model, "", nil}}
 	bow, ecc := nom.Member.Bow, nom.Member.Ecc
 	// An imperfection written as L/n is labelled so: it follows the length.
 	label := func(q *Quantity, x float64) string {
@@ -48,29 +114,37 @@ func (md *Model) ReferenceCurves(n int, lamMax float64) []RefCurve {
 		}
 		return fmt.Sprintf("%.3g mm", x)
 	}
-	if bow > 0 && md.Study.Model != "perry-robertson" {
-		kinds = append(kinds, kind{"perry-robertson, bow " + label(md.Study.Bow, bow), func(m *column.Member) (column.Result, error) {
+	if bow > 0 && st.Model != "perry-robertson" {
+		kinds = append(kinds, refKind{"perry-robertson, bow " + label(st.Bow, bow), "perry-robertson", "", func(m *column.Member, a column.Axis) (column.Result, error) {
 			m.Ecc = 0
 			return column.PerryRobertson(m, a)
 		}})
 	}
-	if ecc > 0 && md.Study.Model != "secant" {
-		kinds = append(kinds, kind{"secant, e = " + label(md.Study.Ecc, ecc), func(m *column.Member) (column.Result, error) {
+	if ecc > 0 && st.Model != "secant" {
+		kinds = append(kinds, refKind{"secant, e = " + label(st.Ecc, ecc), "secant", "", func(m *column.Member, a column.Axis) (column.Result, error) {
 			m.Bow = 0
 			return column.Secant(m, a)
 		}})
 	}
-	if md.Study.Model != "curve" {
-		alphaB, _ := column.CurveAlpha("b")
-		kinds = append(kinds, kind{"EN 1993-1-1 curve b (reference)", func(m *column.Member) (column.Result, error) {
-			m.Alpha = [2]float64{alphaB, alphaB}
+	if st.Model != "curve" {
+		name, row, alpha := md.ReferenceCurve(a)
+		kinds = append(kinds, refKind{"EN 1993-1-1 curve " + name, "curve", row, func(m *column.Member, a column.Axis) (column.Result, error) {
+			m.Alpha[a] = alpha
 			return column.Curve(m, a)
 		}})
 	}
-	curves := make([]RefCurve, len(kinds))
-	for k := range kinds {
-		curves[k].Name = kinds[k].name
+	return kinds
+}
+
+// curveAbout evaluates eval (the study's own model when nil) for the
+// nominal member about a, its length scaled so that the relative
+// slenderness runs over n points up to lamMax.
+func (md *Model) curveAbout(nom *Nominal, a column.Axis, n int, lamMax float64, eval func(m *column.Member, a column.Axis) (column.Result, error)) (x, y []float64) {
+	lam0 := nom.RelSlenderness[a]
+	if !(lam0 > 0) {
+		return nil, nil
 	}
+	v := md.nominalValues()
 	l0 := v[fLength]
 	for i := 1; i <= n; i++ {
 		scale := lamMax * float64(i) / float64(n) / lam0
@@ -83,19 +157,19 @@ func (md *Model) ReferenceCurves(n int, lamMax float64) []RefCurve {
 		if q := md.Study.Ecc; q != nil && q.perLength {
 			w[fEcc] *= scale
 		}
-		m, _, err := md.member(&w)
+		var res column.Result
+		var m column.Member
+		var err error
+		if eval == nil {
+			res, m, err = md.capacity(&w, a)
+		} else if m, _, err = md.member(&w); err == nil {
+			res, err = eval(&m, a)
+		}
 		if err != nil {
 			continue
 		}
-		for k, kd := range kinds {
-			mk := m
-			res, err := kd.eval(&mk)
-			if err != nil {
-				continue
-			}
-			curves[k].X = append(curves[k].X, column.RelativeSlenderness(&mk, a))
-			curves[k].Y = append(curves[k].Y, res.N/(mk.Props.A*mk.Fy))
-		}
+		x = append(x, column.RelativeSlenderness(&m, a))
+		y = append(y, res.N/(m.Props.A*m.Fy))
 	}
-	return curves
+	return x, y
 }

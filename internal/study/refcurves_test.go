@@ -3,13 +3,15 @@ package study
 import (
 	"math"
 	"strings"
+	"strutrisk/internal/column"
 	"testing"
 )
 
 // TestReferenceCurves checks the comparison curves of the slenderness
-// picture: the EN 1993-1-1 curve "b" at relative slenderness 1, 2 and 3
-// gives chi = 0.597023, 0.209461, 0.099432 (EN 1993-1-1:2005 eq. 6.49 with
-// alpha = 0.34 of Table 6.1), and the secant curve with a vanishing
+// picture: the CHS of the base study is cold-formed by default, so EN
+// 1993-1-1:2005 Table 6.2 gives curve "c", which at relative slenderness
+// 1, 2 and 3 gives chi = 0.539939, 0.196184, 0.095092 (eq. 6.49 with
+// alpha = 0.49 of Table 6.1), and the secant curve with a vanishing
 // eccentricity tends to the Euler/squash envelope (common practice: the
 // perfect member buckles at min(1, 1/lam^2)).
 func TestReferenceCurves(t *testing.T) {
@@ -23,14 +25,17 @@ func TestReferenceCurves(t *testing.T) {
 	for _, c := range curves {
 		byName[c.Name] = c
 	}
-	cb, ok := byName["EN 1993-1-1 curve b (reference)"]
+	cb, ok := byName["EN 1993-1-1 curve c, major axis"]
 	if !ok {
-		t.Fatalf("no curve b among %d curves", len(curves))
+		t.Fatalf("no curve c among %v", curves)
 	}
-	want := []float64{0.597023, 0.209461, 0.099432}
+	if cb.Model != "curve" || !strings.Contains(cb.Note, "cold-formed") {
+		t.Errorf("curve c: model %q, note %q", cb.Model, cb.Note)
+	}
+	want := []float64{0.539939, 0.196184, 0.095092}
 	for i := range want {
 		if !near(cb.X[i], float64(i+1), 1e-9) || math.Abs(cb.Y[i]-want[i]) > 5e-7 {
-			t.Errorf("curve b point %d: (%.6f, %.6f), want (%d, %.6f)", i, cb.X[i], cb.Y[i], i+1, want[i])
+			t.Errorf("curve c point %d: (%.6f, %.6f), want (%d, %.6f)", i, cb.X[i], cb.Y[i], i+1, want[i])
 		}
 	}
 	var sec *RefCurve
@@ -48,9 +53,61 @@ func TestReferenceCurves(t *testing.T) {
 			t.Errorf("secant at lam %.3f: %.5f, want about %.5f", l, sec.Y[i], env)
 		}
 	}
+	own := 0
 	for _, c := range curves {
 		if strings.HasPrefix(c.Name, "perry-robertson") {
-			t.Errorf("the study's own model is listed again as %q", c.Name)
+			own++
+			if c.Model != "perry-robertson" || strings.Contains(c.Name, "bow") {
+				t.Errorf("the study's own model is listed again as %q", c.Name)
+			}
+		}
+	}
+	if own != 2 {
+		t.Errorf("the study's own curve is drawn %d times, want once per axis", own)
+	}
+}
+
+// TestReferenceCurvePerAxis: the reference buckling curve is chosen per
+// axis from the section. An I section with tf <= 40 mm takes curve b about
+// y-y and c about z-z, rolled with h/b <= 1.2 or welded alike (EN
+// 1993-1-1:2005 Table 6.2); a study with model "curve" keeps its own
+// curves; a custom section, which the table does not cover, takes b as a
+// reference.
+func TestReferenceCurvePerAxis(t *testing.T) {
+	ish := strings.Replace(base, "shape = \"CHS\"\ndiameter = 168.3\nthickness = 8", "shape = \"I\"\ndepth = 254.1\nwidth = 254.6\nflange = 14.2\nweb = 8.6", 1)
+	own := strings.Replace(base, "[loads]", "[capacity]\nmodel = \"curve\"\ncurve = { major = \"a\", minor = \"d\" }\n[loads]", 1)
+	custom := strings.Replace(base, "shape = \"CHS\"\ndiameter = 168.3\nthickness = 8", "shape = \"custom\"\narea = 4000\ni_major = 2e7\ni_minor = 8e6\nc_major = 100\nc_minor = 80", 1)
+	for _, c := range []struct {
+		name, text   string
+		major, minor string
+	}{
+		{"I section", ish, "b", "c"},
+		{"the study's curves", own, "a", "d"},
+		{"custom section", custom, "b", "b"},
+	} {
+		md, err := Build(parse(t, c.text))
+		if err != nil {
+			t.Fatalf("%s: %v", c.name, err)
+		}
+		for a, want := range []string{c.major, c.minor} {
+			got, row, alpha := md.ReferenceCurve(column.Axis(a))
+			wantAlpha, _ := column.CurveAlpha(want)
+			if got != want || alpha != wantAlpha || row == "" {
+				t.Errorf("%s, %v axis: curve %q (alpha %g, %s), want %q", c.name, column.Axis(a), got, alpha, row, want)
+			}
+		}
+	}
+	md, err := Build(parse(t, ish))
+	if err != nil {
+		t.Fatal(err)
+	}
+	names := map[string]bool{}
+	for _, c := range md.ReferenceCurves(5, 3) {
+		names[c.Name] = true
+	}
+	for _, want := range []string{"EN 1993-1-1 curve b, major axis", "EN 1993-1-1 curve c, minor axis", "perry-robertson, minor axis"} {
+		if !names[want] {
+			t.Errorf("no curve %q among %v", want, names)
 		}
 	}
 }
