@@ -4,6 +4,8 @@ import (
 	"os"
 	"path/filepath"
 	"testing"
+
+	"github.com/BurntSushi/toml"
 )
 
 // FuzzLoad feeds arbitrary bytes to the study loader: it must never panic,
@@ -20,6 +22,13 @@ func FuzzLoad(f *testing.F) {
 	f.Add([]byte(`units = "kip-in"` + "\n" + base + "[[correlation]]\npair = [\"a\", \"b\"]\nrho = 0.5\n"))
 	f.Add([]byte("[member]\nlength = \"L/0\"\n"))
 	f.Add([]byte("x = { dist = \"normal\", mean = nan, sd = inf }\n"))
+	// The size and nesting limits (limits.go, nesting.go).
+	for _, in := range deepInputs() {
+		f.Add([]byte(in))
+	}
+	f.Add([]byte("x = [[[[[[1]]]]]]\n"))
+	f.Add([]byte("[a.b.c.d.e]\nf = 1\n"))
+	f.Add([]byte("a = \"\"\"\n[[[[[[[[\n\"\"\"\nb = '''[{[{'''\n"))
 	f.Fuzz(func(t *testing.T, data []byte) {
 		st, err := Parse("fuzz.toml", data)
 		if err != nil {
@@ -42,4 +51,49 @@ func FuzzLoad(f *testing.F) {
 		out := make([]float64, 2)
 		md.Sim.G(x, out)
 	})
+}
+
+// FuzzNesting checks the nesting pre-scan against the TOML decoder: a file
+// the pre-scan lets through decodes to values at most about MaxDepth deep
+// (an array of tables adds a level the pre-scan does not count, so twice
+// MaxDepth bounds it), so the decoder never recurses without bound.
+func FuzzNesting(f *testing.F) {
+	for _, in := range deepInputs() {
+		f.Add([]byte(in))
+	}
+	f.Add([]byte(base))
+	f.Add([]byte("x = [[1, [2]], {a = {b = [3]}}]\n[[v]]\n[[v.w]]\nk = 1\n"))
+	f.Add([]byte("a = \"\"\"\n[[[[[[[[\n\"\"\"\nb = '''[{[{'''\nc = 'x[' # [[[\n"))
+	f.Fuzz(func(t *testing.T, data []byte) {
+		if len(data) > 1<<16 || nestingProblem("f", data) != nil {
+			return
+		}
+		var raw map[string]any
+		if _, err := toml.Decode(string(data), &raw); err != nil {
+			return
+		}
+		if d := valueDepth(raw); d > 2*MaxDepth+1 {
+			t.Fatalf("the pre-scan passed a file that decodes %d levels deep", d)
+		}
+	})
+}
+
+// valueDepth is the number of key path parts of the deepest value of v.
+func valueDepth(v any) int {
+	deepest := 0
+	switch x := v.(type) {
+	case map[string]any:
+		for _, e := range x {
+			deepest = max(deepest, 1+valueDepth(e))
+		}
+	case []map[string]any:
+		for _, e := range x {
+			deepest = max(deepest, 1+valueDepth(e))
+		}
+	case []any:
+		for _, e := range x {
+			deepest = max(deepest, 1+valueDepth(e))
+		}
+	}
+	return deepest
 }

@@ -12,7 +12,7 @@ import (
 // already have been parsed successfully; the scanner is lenient and only
 // follows the structure that determines key paths.
 func keyLines(doc string) map[string]int {
-	s := &scanner{src: doc, line: 1, lines: make(map[string]int), count: make(map[string]int)}
+	s := &scanner{src: doc, line: 1, lines: make(map[string]int), count: make(map[string]int), path: make([]byte, 0, 64)}
 	s.document()
 	return s.lines
 }
@@ -23,6 +23,9 @@ type scanner struct {
 	line  int
 	lines map[string]int
 	count map[string]int // arrays of tables: number of elements so far
+	// path is the key path being read, grown and cut back in place so
+	// that a deep path is not rebuilt at every level.
+	path []byte
 }
 
 func (s *scanner) peek() byte {
@@ -66,14 +69,15 @@ func (s *scanner) skipLine() {
 	}
 }
 
-func (s *scanner) record(path string, line int) {
-	if _, ok := s.lines[path]; !ok {
-		s.lines[path] = line
+// record notes the line of the current path, once. Looking a []byte up
+// as a string does not allocate; only a new path is copied.
+func (s *scanner) record(line int) {
+	if _, ok := s.lines[string(s.path)]; !ok {
+		s.lines[string(s.path)] = line
 	}
 }
 
 func (s *scanner) document() {
-	prefix := ""
 	for {
 		s.space(true)
 		if s.eof() {
@@ -87,34 +91,39 @@ func (s *scanner) document() {
 				s.next()
 			}
 			s.space(false)
-			key := s.key()
+			s.path = s.path[:0]
+			ok := s.key()
 			s.space(false)
 			s.skipLine()
-			if key == nil {
+			if !ok {
+				s.path = s.path[:0]
 				continue
 			}
-			path := join("", key)
 			if array {
-				n := s.count[path]
-				s.count[path] = n + 1
-				s.record(path, line)
-				path += "[" + strconv.Itoa(n) + "]"
+				name := string(s.path)
+				n := s.count[name]
+				s.count[name] = n + 1
+				s.record(line)
+				s.path = append(s.path, '[')
+				s.path = strconv.AppendInt(s.path, int64(n), 10)
+				s.path = append(s.path, ']')
 			}
-			s.record(path, line)
-			prefix = path
+			s.record(line)
 			continue
 		}
-		if !s.keyValue(prefix) {
+		if !s.keyValue() {
 			s.skipLine()
 		}
 	}
 }
 
-// keyValue reads key = value below prefix and reports success.
-func (s *scanner) keyValue(prefix string) bool {
+// keyValue reads key = value below the current path and reports success;
+// the path is as before when it returns.
+func (s *scanner) keyValue() bool {
 	line := s.line
-	key := s.key()
-	if key == nil {
+	mark := len(s.path)
+	defer func() { s.path = s.path[:mark] }()
+	if !s.key() {
 		return false
 	}
 	s.space(false)
@@ -123,37 +132,36 @@ func (s *scanner) keyValue(prefix string) bool {
 	}
 	s.next()
 	s.space(false)
-	path := join(prefix, key)
-	s.record(path, line)
-	return s.value(path)
+	s.record(line)
+	return s.value(line)
 }
 
-// key reads a dotted key of bare and quoted parts.
-func (s *scanner) key() []string {
-	var parts []string
+// key appends a dotted key of bare and quoted parts to the path.
+func (s *scanner) key() bool {
 	for {
 		s.space(false)
-		var part string
+		if len(s.path) > 0 {
+			s.path = append(s.path, '.')
+		}
 		switch c := s.peek(); {
 		case c == '"' || c == '\'':
 			str, ok := s.str()
 			if !ok {
-				return nil
+				return false
 			}
-			part = str
+			s.path = append(s.path, str...)
 		case isBare(c):
 			start := s.pos
 			for !s.eof() && isBare(s.peek()) {
 				s.next()
 			}
-			part = s.src[start:s.pos]
+			s.path = append(s.path, s.src[start:s.pos]...)
 		default:
-			return nil
+			return false
 		}
-		parts = append(parts, part)
 		s.space(false)
 		if s.peek() != '.' {
-			return parts
+			return true
 		}
 		s.next()
 	}
@@ -208,8 +216,10 @@ func (s *scanner) str() (string, bool) {
 }
 
 // value reads one value; inline tables and arrays record their inner keys
-// below path.
-func (s *scanner) value(path string) bool {
+// below the current path. An element of an array is recorded only when it
+// starts on another line than its parent (line): the line of an
+// unrecorded path is its parent's, so a long one-line list costs nothing.
+func (s *scanner) value(line int) bool {
 	switch c := s.peek(); c {
 	case '"', '\'':
 		_, ok := s.str()
@@ -222,7 +232,7 @@ func (s *scanner) value(path string) bool {
 				s.next()
 				return true
 			}
-			if !s.keyValue(path) {
+			if !s.keyValue() {
 				return false
 			}
 			s.space(true)
@@ -232,15 +242,23 @@ func (s *scanner) value(path string) bool {
 		}
 	case '[':
 		s.next()
+		mark := len(s.path)
+		defer func() { s.path = s.path[:mark] }()
 		for i := 0; ; i++ {
 			s.space(true)
 			if s.peek() == ']' {
 				s.next()
 				return true
 			}
-			elem := path + "[" + strconv.Itoa(i) + "]"
-			s.record(elem, s.line)
-			if !s.value(elem) {
+			s.path = append(s.path[:mark], '[')
+			s.path = strconv.AppendInt(s.path, int64(i), 10)
+			s.path = append(s.path, ']')
+			elemLine := line
+			if s.line != line {
+				elemLine = s.line
+				s.record(elemLine)
+			}
+			if !s.value(elemLine) {
 				return false
 			}
 			s.space(true)
@@ -259,12 +277,4 @@ func (s *scanner) value(path string) bool {
 		}
 		return s.pos > start
 	}
-}
-
-func join(prefix string, key []string) string {
-	p := strings.Join(key, ".")
-	if prefix == "" {
-		return p
-	}
-	return prefix + "." + p
 }

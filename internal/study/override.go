@@ -91,6 +91,8 @@ func derive(name string, data []byte, ovs []override) (*Study, []Problem) {
 	}
 	p.relines = func(lines map[string]int) {
 		for _, o := range ovs {
+			// An element of a one-line list has its list's line.
+			lines[o.key] = lineIn(lines, o.at)
 			for k, n := range lines {
 				if k == o.at || strings.HasPrefix(k, o.at+".") || strings.HasPrefix(k, o.at+"[") {
 					lines[o.key+k[len(o.at):]] = n

@@ -29,6 +29,22 @@ type parser struct {
 	// relines the key lines (overrides: see override.go).
 	edit    func(raw map[string]any)
 	relines func(lines map[string]int)
+
+	// dropped counts the problems beyond maxProblems, not listed.
+	dropped int
+}
+
+// full reports that no more problems are listed.
+func (p *parser) full() bool { return len(p.probs) >= maxProblems }
+
+// problems returns the problems found, with a last line counting those
+// not listed.
+func (p *parser) problems() []Problem {
+	probs := withoutMissingMisspelt(p.probs)
+	if p.dropped > 0 {
+		probs = append(probs, Problem{File: p.file, Msg: fmt.Sprintf("%d more problems not listed (the first %d are above: fix them first)", p.dropped, maxProblems)})
+	}
+	return probs
 }
 
 func newParser(name string, data []byte) *parser {
@@ -47,6 +63,10 @@ func newParser(name string, data []byte) *parser {
 // distribution is reported under the variable's name, at the parameter's
 // line, with the parameter named in the message.
 func (p *parser) errorf(key, format string, args ...any) {
+	if p.full() {
+		p.dropped++
+		return
+	}
 	msg := fmt.Sprintf(format, args...)
 	line := p.line(key)
 	if v, param, ok := p.param(key); ok {
@@ -77,9 +97,13 @@ func (p *parser) defaultf(format string, args ...any) {
 }
 
 // line returns the line of key, or of its nearest parent that has one.
-func (p *parser) line(key string) int {
+func (p *parser) line(key string) int { return lineIn(p.lines, key) }
+
+// lineIn returns the line of key in lines, or of its nearest parent that
+// has one.
+func lineIn(lines map[string]int, key string) int {
 	for key != "" {
-		if n, ok := p.lines[key]; ok {
+		if n, ok := lines[key]; ok {
 			return n
 		}
 		i := strings.LastIndexAny(key, ".[")
@@ -152,6 +176,10 @@ func (p *parser) unknownOf(t *table, known []string) {
 	}
 	for _, k := range sortedKeys(t.m) {
 		if t.used[k] {
+			continue
+		}
+		if p.full() {
+			p.dropped++
 			continue
 		}
 		where := "in [" + t.path + "]"

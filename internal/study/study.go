@@ -129,7 +129,7 @@ type Output struct {
 // Load reads and checks the study file at path. A file with problems
 // returns an *Error listing all of them.
 func Load(path string) (*Study, error) {
-	data, err := os.ReadFile(path)
+	data, err := readLimited(path)
 	if err != nil {
 		if errors.Is(err, os.ErrNotExist) {
 			return nil, &Error{Problems: []Problem{{File: path, Msg: "no such file (give the path of a study; `strutrisk new` prints a starter)"}}}
@@ -142,11 +142,17 @@ func Load(path string) (*Study, error) {
 // Parse checks the study file contents data; name is used in messages and
 // for the default title.
 func Parse(name string, data []byte) (*Study, error) {
+	if len(data) > MaxFileSize {
+		return nil, &Error{Problems: []Problem{{File: name, Msg: errTooLarge.Error()}}}
+	}
+	if pr := nestingProblem(name, data); pr != nil {
+		return nil, &Error{Problems: []Problem{*pr}}
+	}
 	sum := sha256.Sum256(data)
 	p := newParser(name, data)
 	st := p.parse()
 	if len(p.probs) > 0 {
-		return nil, &Error{Problems: withoutMissingMisspelt(p.probs)}
+		return nil, &Error{Problems: p.problems()}
 	}
 	st.File = name
 	st.SHA256 = hex.EncodeToString(sum[:])

@@ -1,0 +1,33 @@
+package main
+
+import (
+	"os"
+	"strings"
+	"testing"
+)
+
+// TestHostileStudyFiles: huge, endless and deeply nested study files end
+// with exit 2 and a message naming the limit, not with the runtime's
+// out-of-memory crash (issue 10, item 5).
+func TestHostileStudyFiles(t *testing.T) {
+	cases := map[string]struct{ path, want string }{
+		"nested arrays": {writeStudy(t, "x = "+strings.Repeat("[", 100000)+strings.Repeat("]", 100000)+"\n"), "study.toml:1: nested deeper than 6 levels"},
+		"deep header":   {writeStudy(t, good+"["+strings.Repeat("a.", 20000)+"a]\n"), "study.toml:19: nested deeper than 6 levels"},
+		"inline tables": {writeStudy(t, good+"x = "+strings.Repeat("{a = ", 50000)+"1"+strings.Repeat("}", 50000)+"\n"), "study.toml:19: nested deeper"},
+		"too large":     {writeStudy(t, good+"# "+strings.Repeat("x", 5<<20)+"\n"), "larger than 4194304 bytes (4 MiB)"},
+	}
+	if _, err := os.Stat("/dev/zero"); err == nil {
+		cases["endless"] = struct{ path, want string }{"/dev/zero", "(4 MiB)"}
+	}
+	for name, c := range cases {
+		for _, cmd := range []string{"check", "run"} {
+			code, _, errs := invoke(t, cmd, c.path, "--out", t.TempDir())
+			if cmd == "check" {
+				code, _, errs = invoke(t, cmd, c.path)
+			}
+			if code != exitInput || !strings.Contains(errs, c.want) || strings.Contains(errs, "goroutine") {
+				t.Errorf("%s %s: exit %d, stderr %.300q; want exit 2 and %q", cmd, name, code, errs, c.want)
+			}
+		}
+	}
+}
