@@ -41,13 +41,13 @@ func TestFileSizeLimit(t *testing.T) {
 // deep builds the adversarial nestings of issue 10, item 5.
 func deepInputs() map[string]string {
 	return map[string]string{
-		"arrays":        "x = " + strings.Repeat("[", 100000) + strings.Repeat("]", 100000) + "\n",
-		"header":        "[" + strings.Repeat("a.", 20000) + "a]\nk = 1\n",
-		"inline tables": "x = " + strings.Repeat("{a = ", 50000) + "1" + strings.Repeat("}", 50000) + "\n",
-		"dotted key":    strings.Repeat("a.", 5000) + "a = 1\n",
+		"arrays":                  "x = " + strings.Repeat("[", 100000) + strings.Repeat("]", 100000) + "\n",
+		"header":                  "[" + strings.Repeat("a.", 20000) + "a]\nk = 1\n",
+		"inline tables":           "x = " + strings.Repeat("{a = ", 50000) + "1" + strings.Repeat("}", 50000) + "\n",
+		"dotted key":              strings.Repeat("a.", 5000) + "a = 1\n",
 		"arrays of inline tables": "x = " + strings.Repeat("[{a = ", 20) + "1" + strings.Repeat("}]", 20) + "\n",
-		"long key":      base + "[loads]\n\"" + strings.Repeat("w", 200) + "\" = 1\n",
-		"long header":   "[" + strings.Repeat("b", 100) + "." + strings.Repeat("c", 100) + "]\n",
+		"long key":                base + "[loads]\n\"" + strings.Repeat("w", 200) + "\" = 1\n",
+		"long header":             "[" + strings.Repeat("b", 100) + "." + strings.Repeat("c", 100) + "]\n",
 	}
 }
 
