@@ -219,3 +219,29 @@ func TestRunOutputWhere(t *testing.T) {
 		t.Errorf("out/ holds %v", got)
 	}
 }
+
+// TestRunHostileText: a title with HTML reaches summary.md as text, and
+// a variant's name a spreadsheet would run as a formula is neutralised in
+// sweep.csv (names in samples.csv begin with their table, "loads.").
+func TestRunHostileText(t *testing.T) {
+	text := strings.Replace(quick, `title = "stocky strut, lognormal R and S"`, `title = "<script>alert(1)</script>"`, 1)
+	text += "[sweep]\nparameter = \"material.yield.mean\"\nvalues = [290, 310]\n[[variant]]\nname = \"=HYPERLINK(1)\"\nset = { \"capacity.model_factor\" = 1.0 }\n"
+	dir := filepath.Join(t.TempDir(), "res")
+	code, _, errs := invoke(t, "run", writeStudy(t, text), "--method", "monte-carlo", "--samples", "20000", "--out", dir)
+	if code != 0 {
+		t.Fatalf("exit %d\n%s", code, errs)
+	}
+	read := func(name string) string {
+		b, err := os.ReadFile(filepath.Join(dir, name))
+		if err != nil {
+			t.Fatal(err)
+		}
+		return string(b)
+	}
+	if md := read("summary.md"); !strings.Contains(md, `# \<script\>alert(1)\</script\>`) {
+		t.Errorf("summary.md does not escape the title:\n%.300s", md)
+	}
+	if s := read("sweep.csv"); !strings.Contains(s, "'=HYPERLINK(1)") || strings.Contains(s, "\n=HYPERLINK") {
+		t.Errorf("sweep.csv does not neutralise the variant's name:\n%s", s)
+	}
+}

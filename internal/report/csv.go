@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"encoding/csv"
 	"fmt"
+	"slices"
 	"strconv"
 
 	"strutrisk/sim"
@@ -15,7 +16,7 @@ import (
 func samplesCSV(s *sim.Samples) ([]byte, error) {
 	var buf bytes.Buffer
 	w := csv.NewWriter(&buf)
-	if err := w.Write(s.Names); err != nil {
+	if err := w.Write(csvCells(slices.Clone(s.Names))[0]); err != nil {
 		return nil, err
 	}
 	rec := make([]string, len(s.Names))

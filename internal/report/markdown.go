@@ -182,13 +182,6 @@ func Markdown(b *Bundle) string {
 	return w.String()
 }
 
-// mdText escapes the characters that would break a Markdown table cell or
-// start unintended formatting.
-func mdText(s string) string {
-	r := strings.NewReplacer("|", `\|`, "\n", " ", "*", `\*`)
-	return r.Replace(s)
-}
-
 // mdKV writes a two-column table of labelled values.
 func mdKV(w *strings.Builder, kv []KV) {
 	rows := make([][]string, len(kv))

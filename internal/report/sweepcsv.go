@@ -27,7 +27,7 @@ func seriesCSV(b *Bundle) ([]byte, error) {
 			rows = append(rows, []string{name, g(p.Value), g(p.Pf), g(p.PfCI[0]), g(p.PfCI[1]), g(p.Beta)})
 		}
 	}
-	if err := w.WriteAll(rows); err != nil {
+	if err := w.WriteAll(csvCells(rows...)); err != nil {
 		return nil, err
 	}
 	return buf.Bytes(), nil
