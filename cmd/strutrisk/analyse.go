@@ -131,6 +131,7 @@ func (r *results) document() *report.Document {
 			ff.DesignPoint[v.Name] = r.l.md.InUnits(i, p.X[i], p.X) // L/n in mm
 			ff.Importance[v.Name] = p.Importance[i]
 		}
+		r.fillDesign(ff) // design.go
 		d.FORM = ff
 	}
 	med := r.l.md.Medians()

@@ -1002,7 +1002,8 @@ sobol = { samples = 256 }
 	same("nominal", keys(raw["nominal"]), "capacity", "euler_load", "slenderness", "relative_slenderness", "k", "axis")
 	same("capacity", keys(raw["capacity"]), "mean", "sd", "p01", "p05", "p50", "p95", "p99")
 	same("demand", keys(raw["demand"]), "mean", "sd", "p01", "p05", "p50", "p95", "p99")
-	same("form", keys(raw["form"]), "beta", "pf", "design_point", "importance", "converged") // converged: an extension (issue 10, item 16)
+	same("form", keys(raw["form"]), "beta", "pf", "design_point", "importance", "converged", // converged: an extension (issue 10, item 16)
+		"design_beta", "design_values", "characteristic_values", "partial_factors", "design_roles", "characteristic_basis", "design_note") // issue 13, item 4
 	vars := []string{"imperfection.bow", "loads.dead", "loads.live", "material.yield"}
 	form, _ := raw["form"].(map[string]any)
 	same("form.design_point", keys(form["design_point"]), vars...)

@@ -82,6 +82,20 @@ type FORM struct {
 	Pf          float64            `json:"pf"`
 	DesignPoint map[string]float64 `json:"design_point"`
 	Importance  map[string]float64 `json:"importance"`
+	// DesignBeta is the reliability index of the design values: the
+	// target's, or FORM's own (the design point itself) without a target.
+	// DesignValues, CharacteristicValues and PartialFactors are keyed by
+	// the input's path (N, mm, MPa); a partial factor that is not defined
+	// (a characteristic value of zero) is absent. DesignRoles says
+	// "resistance" or "action", CharacteristicBasis how each
+	// characteristic value was taken; DesignNote what a reader must know.
+	DesignBeta           *float64           `json:"design_beta,omitempty"`
+	DesignValues         map[string]float64 `json:"design_values,omitempty"`
+	CharacteristicValues map[string]float64 `json:"characteristic_values,omitempty"`
+	PartialFactors       map[string]float64 `json:"partial_factors,omitempty"`
+	DesignRoles          map[string]string  `json:"design_roles,omitempty"`
+	CharacteristicBasis  map[string]string  `json:"characteristic_basis,omitempty"`
+	DesignNote           string             `json:"design_note,omitempty"`
 	// Converged is false when the design-point search did not converge:
 	// its importance factors then rank nothing (RankInputs). Nil when
 	// unknown (taken as converged).

@@ -108,6 +108,11 @@ code{font-size:.9em}
 <table><tr><th>input</th><th>design point</th><th>importance α² (–)</th></tr>
 {{range .FORM}}<tr><td>{{.Variable}}</td><td class="n">{{.DesignPoint}}</td><td class="n">{{.Importance}}</td></tr>
 {{end}}</table></div>{{end}}
+{{if .Design}}<div id="design"><h3>Design values and partial factors at β = {{.DesignBeta}}</h3>
+<table><tr><th>input</th><th>role</th><th>characteristic value</th><th>taken as</th><th>design value</th><th>partial factor γ (–)</th></tr>
+{{range .Design}}<tr><td>{{.Variable}}</td><td>{{.Role}}</td><td class="n">{{.Characteristic}}</td><td>{{.Basis}}</td><td class="n">{{.Design}}</td><td class="n">{{.Factor}}</td></tr>
+{{end}}</table>
+<p>{{.DesignNote}}</p></div>{{end}}
 {{if .Spearman}}<div id="spearman"><h3>Rank correlation with the margin</h3>
 <table><tr><th>input</th><th>Spearman ρ (–)</th></tr>
 {{range .Spearman}}<tr><td>{{.Key}}</td><td class="n">{{.Value}}</td></tr>

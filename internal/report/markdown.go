@@ -111,6 +111,15 @@ func Markdown(b *Bundle) string {
 		}
 		mdTable(&w, []string{"input", "design point", "importance α² (–)"}, rows)
 	}
+	if len(v.Design) > 0 {
+		fmt.Fprintf(&w, "### Design values and partial factors at β = %s\n\n", v.DesignBeta)
+		rows = rows[:0]
+		for _, r := range v.Design {
+			rows = append(rows, []string{r.Variable, r.Role, r.Characteristic, r.Basis, r.Design, r.Factor})
+		}
+		mdTable(&w, []string{"input", "role", "characteristic value", "taken as", "design value", "partial factor γ (–)"}, rows)
+		fmt.Fprintf(&w, "%s\n\n", mdText(v.DesignNote))
+	}
 	if len(v.Spearman) > 0 {
 		w.WriteString("### Rank correlation with the margin\n\n")
 		rows = rows[:0]

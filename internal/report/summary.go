@@ -77,6 +77,12 @@ func SummaryText(b *Bundle) string {
 			line(label, "%s", l)
 		}
 	}
+	if rows, beta, _ := designTable(b, d.FORM); len(rows) > 0 {
+		line("design values", "at beta %s (FORM, EN 1990 Annex C): characteristic -> design, partial factor", beta)
+		for _, r := range rows {
+			line("", "%s (%s): %s (%s) -> %s, gamma %s", r.Variable, r.Role, r.Characteristic, r.Basis, r.Design, r.Factor)
+		}
+	}
 	for _, warn := range d.Warnings {
 		line("warning", "%s", warn)
 	}

@@ -32,6 +32,8 @@ type view struct {
 	SobolCapacity              []sobolRow // indices of the capacity
 	FORMBeta, FORMPf           string
 	FORM                       []formRow
+	Design                     []designRow // design values (design.go)
+	DesignBeta, DesignNote     string
 	Spearman                   []KV
 	Influence                  string
 	RankingNote                string // which ranking answers which question
@@ -217,6 +219,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 			v.FORM = append(v.FORM, formRow{k, dp, imp})
 		}
 	}
+	v.Design, v.DesignBeta, v.DesignNote = designTable(b, d.FORM)
 	if r := RankInputs(&d, 3); len(r.Inputs) > 0 {
 		s := ""
 		for i, in := range r.Inputs {

@@ -1,0 +1,103 @@
+package study
+
+import (
+	"fmt"
+	"math"
+
+	"strutrisk/internal/assess"
+	"strutrisk/sim"
+)
+
+// Characteristic returns the characteristic value of the i-th random
+// input of md.Sim and how it is taken (EN 1990:2002 4.1.2 and 4.2, from
+// memory; the geometric rule is this tool's choice):
+//
+//   - the yield strength: its 5 % fractile (a strength);
+//   - the modulus: its mean (a stiffness, EN 1990 4.2);
+//   - a permanent load: its mean (EN 1990 4.1.2, small variability);
+//   - a variable load: the 98 % fractile of its annual maxima. The
+//     distribution is taken to describe maxima over the reference period
+//     of n years ([target] reference_period, 1 year when none is given),
+//     with independent years, so the annual maxima have the distribution
+//     F^(1/n) and the value is F^-1(0.98^n);
+//   - geometric inputs (length, section, K, end springs, bow,
+//     eccentricity, thickness loss), the model and the effect factor:
+//     their mean, the nominal value (bow and eccentricity: the mean of
+//     their magnitude, as at nominal values).
+func (md *Model) Characteristic(i int) assess.Characteristic {
+	st := md.Study
+	q := md.quantity(i)
+	d := q.Dist
+	switch {
+	case q == st.Yield:
+		return assess.Characteristic{Value: d.Quantile(0.05), Basis: "5 % fractile"}
+	case q == st.Bow || q == st.Ecc:
+		return assess.Characteristic{Value: meanMagnitude(d), Basis: "mean of the magnitude"}
+	case md.isLoad(q) && !md.isPermanent(q):
+		n := st.ReferenceYears
+		if !(n > 0) {
+			n = 1
+		}
+		basis := "98 % fractile of annual maxima"
+		if n != 1 {
+			basis += fmt.Sprintf(" (%s maxima: fractile 0.98^%g)", assess.YearsText(n), n)
+		}
+		return assess.Characteristic{Value: d.Quantile(math.Pow(0.98, n)), Basis: basis}
+	}
+	return assess.Characteristic{Value: q.MeanValue(), Basis: "mean"}
+}
+
+func (md *Model) isLoad(q *Quantity) bool {
+	for _, l := range md.Study.Loads {
+		if l == q {
+			return true
+		}
+	}
+	return false
+}
+
+func (md *Model) isPermanent(q *Quantity) bool {
+	for _, p := range md.Study.PermanentLoads {
+		if p == q.Path {
+			return true
+		}
+	}
+	return false
+}
+
+// DesignValues returns each random input's design value at the
+// reliability index beta from the FORM design point p (its alpha, EN 1990
+// Annex C, C.7), its characteristic value (Characteristic) and the partial
+// factor, in N, mm and MPa: a bow or eccentricity written as L/n is
+// converted with the member length at the same point. Bow and
+// eccentricity act by their magnitude, so theirs are magnitudes and they
+// count as actions.
+func (md *Model) DesignValues(p sim.DesignPoint, beta float64) ([]assess.DesignValue, error) {
+	n := len(md.Sim.Vars)
+	char := make([]assess.Characteristic, n)
+	xk := make([]float64, n)
+	for i := range char {
+		char[i] = md.Characteristic(i)
+		xk[i] = char[i].Value
+	}
+	dv, err := assess.DesignValues(md.Sim, p.Alpha, beta, char)
+	if err != nil {
+		return nil, err
+	}
+	xd := make([]float64, n)
+	for i := range dv {
+		xd[i] = dv[i].Design
+	}
+	st := md.Study
+	for i := range dv {
+		d := &dv[i]
+		d.Design, d.Characteristic = md.InUnits(i, xd[i], xd), md.InUnits(i, xk[i], xk)
+		if q := md.quantity(i); q == st.Bow || q == st.Ecc {
+			// Either sign of a bow is as bad: a larger magnitude acts
+			// against the member, whatever the sign of alpha.
+			d.Design, d.Role = math.Abs(d.Design), assess.Action
+		}
+		d.Factor = assess.PartialFactor(d.Role, d.Characteristic, d.Design)
+	}
+	return dv, nil
+}
