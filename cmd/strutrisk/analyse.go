@@ -306,7 +306,7 @@ func (r *results) slendernessChart() *report.SlendernessChart {
 	c.Curves = append(c.Curves, report.Curve{Name: "Euler", Model: "euler", X: ex, Y: ey})
 	n := r.l.nom
 	m := n.Member
-	c.Member = [2]float64{n.RelSlenderness[n.Axis], n.Capacity / n.ModelFactor / (m.Props.A * m.Fy)}
+	c.Member = [2]float64{n.RelSlenderness[n.Axis], n.Capacity / n.ModelFactor / (m.Props.EffectiveArea() * m.Fy)}
 	kept := r.res.Kept
 	limit := 500
 	if r.l.st.Model == "beam-column" {
@@ -322,7 +322,7 @@ func (r *results) slendernessChart() *report.SlendernessChart {
 			if err != nil || math.IsNaN(l) {
 				continue
 			}
-			c.Cloud = append(c.Cloud, [2]float64{l, res.N / (mm.Props.A * mm.Fy)})
+			c.Cloud = append(c.Cloud, [2]float64{l, res.N / (mm.Props.EffectiveArea() * mm.Fy)})
 		}
 	}
 	return c

@@ -75,6 +75,8 @@ func (l *loaded) baseDocument() *report.Document {
 			RelativeSlenderness: n.RelSlenderness[a],
 			K:                   n.Member.K[a],
 			Axis:                a.String(),
+			SectionClass:        n.Class.Class,
+			EffectiveArea:       n.EffectiveArea,
 		},
 		Warnings: append([]string{}, st.Warnings...),
 	}
@@ -169,6 +171,7 @@ func (l *loaded) checkText() string {
 	fmt.Fprintf(&b, "study %s (bare numbers in %s); values below in N, mm, MPa and kN\n\n", st.File, st.Units.Name)
 	fmt.Fprintf(&b, "Nominal member: %s section, A = %.0f mm2, L = %.0f mm, E = %.0f MPa, fy = %.1f MPa\n",
 		st.Section.Name, n.Member.Props.A, n.Member.Length, n.Member.E, n.Member.Fy)
+	b.WriteString(classText(n)) // class.go
 	if st.Model != "curve" {
 		fmt.Fprintf(&b, "  bow %.2f mm, eccentricity %.2f mm (means of their magnitude)\n", math.Abs(n.Member.Bow), math.Abs(n.Member.Ecc))
 	} else {

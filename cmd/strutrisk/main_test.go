@@ -78,6 +78,13 @@ func TestBadStudies(t *testing.T) {
 		name, study string
 		want        []string // fragments of stderr, e.g. "study.toml:11: material.yield:"
 	}{
+		{"fabrication for the shape", edit(8, "width = 50\nfabrication = \"welded\""), []string{"study.toml:9: member.section.fabrication: a rect section cannot be \"welded\": use \"hot-rolled\""}},
+		{"fabrication unknown", edit(8, "width = 50\nfabrication = \"rolled\""), []string{"study.toml:9: member.section.fabrication: \"rolled\" is not a choice"}},
+		{"radius on a rect", edit(8, "width = 50\nradius = 5"), []string{"study.toml:9: member.section.radius: shape rect does not take radius"}},
+		{"radius negative", edit(6, "shape = \"RHS\"\nthickness = 5\nradius = -1"), []string{"study.toml:8: member.section.radius:"}},
+		{"radius too large", edit(6, "shape = \"RHS\"\nthickness = 5\nradius = 30"), []string{"member.section: section: corner radius 30 mm must be zero or positive and at most half the smaller side"}},
+		{"class 4 CHS", strings.Replace(good, "shape = \"rect\"\ndepth = 100\nwidth = 50", "shape = \"CHS\"\ndiameter = 1000\nthickness = 5", 1), []string{"study.toml:5: member.section: the CHS is class 4", "give capacity.model_factor"}},
+		{"class 4 ultimate", strings.Replace(edit(6, "shape = \"RHS\"\nthickness = 1.5"), "[loads]", "[capacity]\nmodel = \"beam-column\"\nlimit = \"ultimate\"\n[loads]", 1), []string{"study.toml:17: capacity.limit: the section is class 4"}},
 		{"typo key", edit(11, `yeild = 250`), []string{"study.toml:11: material.yeild: unknown key", "did you mean material.yield?", "1 problem in"}}, // the typo, not also a missing yield
 		{"unknown table", good + "[materail]\nx = 1\n", []string{"study.toml:19: materail: unknown key", "did you mean material?"}},
 		{"negative cov", edit(11, `yield = { dist = "lognormal", mean = 250, cov = -0.1 }`), []string{"study.toml:11: material.yield: cov = -0.1 must be between 0 and 1"}},

@@ -183,7 +183,7 @@ func TestSweepVariantErrors(t *testing.T) {
 		{"[[variant]]\nname = \"x\"\nset = { \"imperfection.bow\" = \"2 kN\" }\n", fmt.Sprintf(":%d: variant[0].set.imperfection.bow: \"2 kN\" is a force", n+3)},
 		{"[[variant]]\nname = \"x\"\nset = { \"capacity.model\" = \"curv\" }\n", fmt.Sprintf(":%d: variant[0].set.capacity.model: \"curv\" is not a choice; did you mean \"curve\"?", n+3)},
 		{"[[variant]]\nname = \"x\"\nset = { \"loads.dead.mean.x\" = 1 }\n", fmt.Sprintf(":%d: variant[0].set.loads.dead.mean.x: loads.dead.mean holds a value", n+3)},
-		{"[[variant]]\nname = \"x\"\nset = { \"capacity.model\" = \"curve\" }\n", "variant[0]"},
+		{"[[variant]]\nname = \"x\"\nset = { \"capacity.model\" = \"curve\", \"capacity.alpha\" = -1 }\n", "variant[0]"},
 	} {
 		path := writeStudy(t, good+c.add)
 		for _, cmd := range []string{"check", "run"} {

@@ -63,6 +63,12 @@ type Nominal struct {
 	RelativeSlenderness float64 `json:"relative_slenderness"`
 	K                   float64 `json:"k"`
 	Axis                string  `json:"axis"`
+	// SectionClass is the governing class of the section in pure
+	// compression (EN 1993-1-1 Table 5.2), 1 to 4; absent for a custom
+	// section. EffectiveArea (mm2) is A_eff of a class 4 section (EN
+	// 1993-1-5 4.4), else the area.
+	SectionClass  int     `json:"section_class,omitempty"`
+	EffectiveArea float64 `json:"effective_area"`
 }
 
 // Summary describes the sampled distribution of a quantity.

@@ -270,6 +270,7 @@ func (s SectionSpec) at(value func(*Quantity) float64) column.Section {
 	for k, q := range s.Dims {
 		*sectionField(&sec, k) = value(q)
 	}
+	corners(&sec, s.Dims["radius"] != nil, s.Fabrication)
 	return sec
 }
 
@@ -302,6 +303,8 @@ func sectionField(sec *column.Section, key string) *float64 {
 		return &sec.CMinor
 	case "thickness_loss":
 		return &sec.ThicknessLoss
+	case "radius":
+		return &sec.Radius
 	}
 	panic("study: unknown section key " + key)
 }

@@ -30,7 +30,7 @@ const (
 )
 
 // secKeys are the section dimensions in field order.
-var secKeys = [...]string{"depth", "width", "flange", "web", "root", "thickness", "diameter", "area", "i_major", "i_minor", "c_major", "c_minor", "thickness_loss"}
+var secKeys = [...]string{"depth", "width", "flange", "web", "root", "thickness", "diameter", "area", "i_major", "i_minor", "c_major", "c_minor", "thickness_loss", "radius"}
 
 const nFields = fSec0 + len(secKeys)
 
@@ -57,13 +57,19 @@ type Model struct {
 	relBow    bool // bow and eccentricity are fractions of the length
 	relEcc    bool
 	secRandom bool
-	sec       column.Section
-	props     column.Props
-	springs   [2]bool
-	kDynamic  bool // spring K depends on random inputs
-	k         [2]float64
-	model     int
-	beam      beamOpts
+	// radiusGiven: the RHS corner radius is given (else the fabrication's);
+	// classify: the shape has a section class to find; propsDynamic: the
+	// properties change per sample (the section or, for its class, the
+	// yield strength is random); shellOK: a class 4 CHS is accepted
+	// (see class.go).
+	radiusGiven, classify, propsDynamic, shellOK bool
+	sec                                          column.Section
+	props                                        column.Props
+	springs                                      [2]bool
+	kDynamic                                     bool // spring K depends on random inputs
+	k                                            [2]float64
+	model                                        int
+	beam                                         beamOpts
 }
 
 // Capacity models.
@@ -171,12 +177,20 @@ func Build(st *Study) (*Model, error) {
 			}
 		}
 	}
+	md.radiusGiven = st.Section.Dims["radius"] != nil
+	corners(&md.sec, md.radiusGiven, st.Section.Fabrication)
+	md.classifyOptions(st)
 	if !md.secRandom {
 		p, err := md.sec.Properties()
 		if err != nil {
 			return nil, err
 		}
-		md.props = p
+		if !md.propsDynamic {
+			if p, err = md.sectionProps(&md.sec, md.base[fFy]); err != nil {
+				return nil, err
+			}
+		}
+		md.props = p // the gross I of p is all the static springs read
 	}
 	for a := range 2 {
 		md.springs[a] = st.Ends[a].How == "springs"
@@ -306,7 +320,10 @@ func (md *Model) member(v *values) (column.Member, column.Section, error) {
 				*f = v[fSec0+i]
 			}
 		}
-		p, err := sec.Properties()
+		corners(&sec, md.radiusGiven, md.Study.Section.Fabrication)
+	}
+	if md.propsDynamic {
+		p, err := md.sectionProps(&sec, m.Fy)
 		if err != nil {
 			return m, sec, err
 		}
@@ -364,6 +381,8 @@ func sectionPtr(s *column.Section, i int) *float64 {
 		return &s.CMinor
 	case 12:
 		return &s.ThicknessLoss
+	case 13:
+		return &s.Radius
 	}
 	return nil
 }

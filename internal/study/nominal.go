@@ -27,6 +27,12 @@ type Nominal struct {
 	ModelFactor, EffectFactor, Demand float64
 	// Utilisation is Demand / Capacity.
 	Utilisation float64
+	// Class is the section's class in pure compression at the nominal
+	// yield strength (EN 1993-1-1 Table 5.2; Class.Class 0 for a custom
+	// section) and EffectiveArea the area that carries the load: A_eff of
+	// a class 4 section (EN 1993-1-5 4.4), else A.
+	Class         column.Classification
+	EffectiveArea float64
 }
 
 // Nominal evaluates the model at nominal values.
@@ -43,6 +49,10 @@ func (md *Model) Nominal() (*Nominal, error) {
 		return nil, fmt.Errorf("at nominal values: %v", err)
 	}
 	n.Member, n.Section = m, sec
+	n.EffectiveArea = m.Props.EffectiveArea()
+	if _, cl, err := sec.Classify(m.Fy); err == nil {
+		n.Class = cl
+	}
 	for a := column.Major; a <= column.Minor; a++ {
 		n.Euler[a] = column.Euler(&m, a)
 		n.Slenderness[a] = column.Slenderness(&m, a)

@@ -387,6 +387,10 @@ func (p *parser) parse() *Study {
 	p.correlation(top)
 	p.checkModel()
 	p.checkSection()
+	if len(p.probs) == 0 {
+		p.checkClass()  // class.go
+		p.tableCurves() // curvechoice.go
+	}
 	return st
 }
 
@@ -514,7 +518,7 @@ var sectionKeys = map[string]struct {
 	optional []string
 }{
 	"I":      {0, []string{"depth", "width", "flange", "web"}, []string{"root", "thickness_loss"}},
-	"RHS":    {1, []string{"depth", "width", "thickness"}, []string{"thickness_loss"}},
+	"RHS":    {1, []string{"depth", "width", "thickness"}, []string{"radius", "thickness_loss"}},
 	"CHS":    {2, []string{"diameter", "thickness"}, []string{"thickness_loss"}},
 	"rect":   {3, []string{"depth", "width"}, []string{"thickness_loss"}},
 	"round":  {4, []string{"diameter"}, []string{"thickness_loss"}},
@@ -529,6 +533,7 @@ var sectionDims = map[string]qopt{
 	"i_major": {dim: SecondMoment, need: positive}, "i_minor": {dim: SecondMoment, need: positive},
 	"c_major": {dim: Length, need: positive}, "c_minor": {dim: Length, need: positive},
 	"thickness_loss": {dim: Length, need: nonNegative},
+	"radius":         {dim: Length, need: nonNegative},
 }
 
 func (p *parser) section(member *table) {
@@ -584,9 +589,10 @@ func (p *parser) section(member *table) {
 		t.used["thickness_loss"] = true
 		p.errorf(t.key("thickness_loss"), "a custom section has no faces to lose thickness from: reduce area, i_major, i_minor instead")
 	}
+	p.fabrication(t, &spec)
 	// Keys that belong to another shape get a pointed message.
 	for _, k := range sortedKeys(t.m) {
-		if t.used[k] || k == "shape" {
+		if t.used[k] || k == "shape" || k == "fabrication" {
 			continue
 		}
 		if _, isDim := sectionDims[k]; isDim {
@@ -594,7 +600,7 @@ func (p *parser) section(member *table) {
 			p.errorf(t.key(k), "shape %s does not take %s (it takes %s)", canon, k, strings.Join(append(append([]string{}, keys.required...), keys.optional...), ", "))
 		}
 	}
-	p.unknownOf(t, append(append([]string{"shape"}, keys.required...), keys.optional...))
+	p.unknownOf(t, append(append([]string{"shape", "fabrication"}, keys.required...), keys.optional...))
 	p.st.Section = spec
 }
 
@@ -713,9 +719,8 @@ func (p *parser) capacity(top *table) {
 		}
 		p.errorf(t.key(key), "%s applies to model = \"curve\" only (the model is %q)", key, st.Model)
 	}
-	if st.Model == "curve" && !hasCurve && !hasAlpha {
-		p.errorf(t.key("model"), "model \"curve\" needs a buckling curve: add curve = \"b\" (a0, a, b, c, d) or alpha = 0.34")
-	}
+	// Without curve or alpha, model "curve" takes EN 1993-1-1 Table 6.2's
+	// (curvechoice.go).
 
 	if l, ok := p.choice(t, "limit", choicesOf("capacity", "limit")); ok {
 		st.Limit = l

@@ -53,7 +53,7 @@ func (md *Model) CurveChart(n int, lamMax float64) (lam, ratio []float64) {
 			continue
 		}
 		lam = append(lam, column.RelativeSlenderness(&m, a))
-		ratio = append(ratio, res.N/(m.Props.A*m.Fy))
+		ratio = append(ratio, res.N/(m.Props.EffectiveArea()*m.Fy))
 	}
 	return lam, ratio
 }

@@ -169,7 +169,7 @@ func (md *Model) curveAbout(nom *Nominal, a column.Axis, n int, lamMax float64, 
 			continue
 		}
 		x = append(x, column.RelativeSlenderness(&m, a))
-		y = append(y, res.N/(m.Props.A*m.Fy))
+		y = append(y, res.N/(m.Props.EffectiveArea()*m.Fy))
 	}
 	return x, y
 }

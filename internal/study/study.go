@@ -86,6 +86,9 @@ type SectionSpec struct {
 	// Dims holds the dimension quantities by key ("depth", "flange", ...,
 	// "thickness_loss").
 	Dims map[string]*Quantity
+	// Fabrication is how the section is made (given, or the shape's
+	// default: see fabrication.go); NoFabrication for a custom section.
+	Fabrication column.Fabrication
 }
 
 // EndSpec is how the effective length factor of one axis is given.

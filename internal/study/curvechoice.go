@@ -1,0 +1,60 @@
+package study
+
+import (
+	"strutrisk/internal/column"
+)
+
+// tableCurves gives model "curve" the buckling curve of EN 1993-1-1 Table
+// 6.2 (column.BucklingCurve) about each axis that has none, and warns
+// when a curve or alpha the study gives is less severe than the table's.
+// The S460 rows are read from the characteristic yield strength: the 5 %
+// fractile of a random material.yield, else its value.
+func (p *parser) tableCurves() {
+	st := p.st
+	if st.Model != "curve" || st.Section.Dims == nil || st.Yield == nil {
+		return
+	}
+	missing := st.Alpha[0] == nil || st.Alpha[1] == nil
+	if st.Section.Shape == column.ShapeCustom {
+		if missing {
+			p.errorf("capacity.model", "model \"curve\" on a custom section needs a buckling curve (EN 1993-1-1 Table 6.2 has no row for it): add curve = \"b\" (a0, a, b, c, d) or alpha = 0.34")
+		}
+		return
+	}
+	fyk := nominalValue(st.Yield, 0)
+	from := "material.yield"
+	if st.Yield.Random() && st.Yield.Dist != nil {
+		fyk = st.Yield.Dist.Quantile(0.05)
+		from = "the 5 % fractile of material.yield"
+	}
+	sec := st.Section.at(func(q *Quantity) float64 { return nominalValue(q, 0) })
+	fab := st.Section.Fabrication
+	var chosen [2]string
+	var rows [2]string
+	for a := column.Major; a <= column.Minor; a++ {
+		c, row, err := column.BucklingCurve(sec, fab, fyk, a)
+		if err != nil {
+			p.errorf("member.section", "%v", err)
+			return
+		}
+		chosen[a], rows[a] = c, row
+		given := st.Alpha[a]
+		if given == nil {
+			st.Curve[a] = c
+			st.Alpha[a] = &Quantity{Path: "capacity.curve", Line: p.line("capacity"), Value: curveAlpha(c)}
+			continue
+		}
+		table := curveAlpha(c)
+		alpha := nominalValue(given, 0)
+		if alpha < table {
+			name := "alpha"
+			if st.Curve[a] != "" {
+				name = "curve \"" + st.Curve[a] + "\""
+			}
+			p.warnf("capacity.curve: the %s axis takes %s, less severe than EN 1993-1-1 Table 6.2 curve \"%s\" (alpha %.2f) for this section: %s, fabrication %s, fyk %.0f MPa from %s", a, name, c, table, row, fab, fyk, from)
+		}
+	}
+	if missing {
+		p.defaultf("capacity.curve: not given; EN 1993-1-1 Table 6.2 gives \"%s\" about the major axis (%s) and \"%s\" about the minor (%s), for a %s section with fyk %.0f MPa from %s", chosen[0], rows[0], chosen[1], rows[1], fab, fyk, from)
+	}
+}
