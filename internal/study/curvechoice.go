@@ -1,6 +1,8 @@
 package study
 
 import (
+	"errors"
+
 	"strutrisk/internal/column"
 )
 
@@ -21,18 +23,12 @@ func (p *parser) tableCurves() {
 		}
 		return
 	}
-	fyk := nominalValue(st.Yield, 0)
-	from := "material.yield"
-	if st.Yield.Random() && st.Yield.Dist != nil {
-		fyk = st.Yield.Dist.Quantile(0.05)
-		from = "the 5 % fractile of material.yield"
-	}
-	sec := st.Section.at(func(q *Quantity) float64 { return nominalValue(q, 0) })
+	fyk, from := st.characteristicYield()
 	fab := st.Section.Fabrication
 	var chosen [2]string
 	var rows [2]string
 	for a := column.Major; a <= column.Minor; a++ {
-		c, row, err := column.BucklingCurve(sec, fab, fyk, a)
+		c, row, err := st.Table62(a)
 		if err != nil {
 			p.errorf("member.section", "%v", err)
 			return
@@ -57,4 +53,28 @@ func (p *parser) tableCurves() {
 	if missing {
 		p.defaultf("capacity.curve: not given; EN 1993-1-1 Table 6.2 gives \"%s\" about the major axis (%s) and \"%s\" about the minor (%s), for a %s section with fyk %.0f MPa from %s", chosen[0], rows[0], chosen[1], rows[1], fab, fyk, from)
 	}
+}
+
+// characteristicYield is the yield strength that picks the grade's
+// column of EN 1993-1-1 Table 6.2: the 5 % fractile of a random
+// material.yield, else its value, and where it comes from in words.
+func (st *Study) characteristicYield() (fyk float64, from string) {
+	if st.Yield.Random() && st.Yield.Dist != nil {
+		return st.Yield.Dist.Quantile(0.05), "the 5 % fractile of material.yield"
+	}
+	return nominalValue(st.Yield, 0), "material.yield"
+}
+
+// Table62 returns the buckling curve EN 1993-1-1:2005 Table 6.2 gives the
+// study's section about axis a (column.BucklingCurve: nominal dimensions,
+// the study's fabrication, given or default, and its characteristic yield,
+// see characteristicYield) and the row it read, in words. A custom section
+// is an error.
+func (st *Study) Table62(a column.Axis) (curve, row string, err error) {
+	if st.Section.Dims == nil || st.Yield == nil {
+		return "", "", errors.New("study: no section or yield strength")
+	}
+	fyk, _ := st.characteristicYield()
+	sec := st.Section.at(func(q *Quantity) float64 { return nominalValue(q, 0) })
+	return column.BucklingCurve(sec, st.Section.Fabrication, fyk, a)
 }

@@ -32,9 +32,8 @@ func (md *Model) axes() []column.Axis {
 // ReferenceCurve returns the EN 1993-1-1 buckling curve the slenderness
 // picture draws about axis a: the study's own when its model is "curve"
 // (by letter, or by its imperfection factor alpha), else the curve EN
-// 1993-1-1:2005 Table 6.2 gives the nominal section (column.BucklingCurve)
-// with the shape's default fabrication. It is the one place that choice
-// is made. name is the curve's label ("b", or "alpha = 0.4"), row says why
+// 1993-1-1:2005 Table 6.2 gives the section (Study.Table62, with the
+// study's fabrication and characteristic yield). name is the curve's label ("b", or "alpha = 0.4"), row says why
 // (the row of Table 6.2, or "the study's curve"). A section the table does
 // not cover (custom) takes curve "b", labelled as a reference only.
 func (md *Model) ReferenceCurve(a column.Axis) (name, row string, alpha float64) {
@@ -47,15 +46,9 @@ func (md *Model) ReferenceCurve(a column.Axis) (name, row string, alpha float64)
 		}
 		return fmt.Sprintf("alpha = %.3g", alpha), "the study's curve", alpha
 	}
-	nom, err := md.Nominal()
-	if err == nil {
-		fabs := column.Fabrications(nom.Section.Shape)
-		if len(fabs) > 0 {
-			if c, why, err := column.BucklingCurve(nom.Section, fabs[0], nom.Member.Fy, a); err == nil {
-				if al, err := column.CurveAlpha(c); err == nil {
-					return c, "Table 6.2: " + why, al
-				}
-			}
+	if c, why, err := st.Table62(a); err == nil {
+		if al, err := column.CurveAlpha(c); err == nil {
+			return c, "Table 6.2: " + why, al
 		}
 	}
 	alpha, _ = column.CurveAlpha("b")
