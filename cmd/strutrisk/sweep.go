@@ -6,6 +6,7 @@ import (
 	"math"
 	"strings"
 
+	"strutrisk/internal/column"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
@@ -18,7 +19,8 @@ type cases struct {
 	label    string
 	params   string         // the swept parameter
 	values   []float64      // swept values, internal units
-	lam      []float64      // nominal relative slenderness of the study at each value
+	lam      []float64      // nominal relative slenderness of the study at each value, about lamAxis
+	lamAxis  column.Axis    // the axis governing the study at its own values
 	sweep    []report.Point // the study itself at each swept value
 	variants []report.Variant
 	series   []report.Series
@@ -50,9 +52,10 @@ func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *c
 	if sw := st.Sweep; sw != nil {
 		n = len(sw.Values)
 		c.label, c.params = sw.Label(), sw.Parameter
+		c.lamAxis = l.nom.Axis
 		for i, q := range sw.Values {
 			c.values = append(c.values, q.Value)
-			c.lam = append(c.lam, relSlenderness(st, i))
+			c.lam = append(c.lam, relSlendernessAbout(st, i, c.lamAxis))
 		}
 	}
 	total := len(st.Variants) + (len(st.Variants)+1)*n
@@ -209,6 +212,23 @@ func (c *cases) fill(b *report.Bundle) {
 	b.Doc.Variants = c.variants
 	b.Series = c.series
 	b.SweepLabel = c.label
+	if lamVaries(c.lam) {
+		b.SweepLambda = map[float64]float64{}
+		for i, x := range c.values {
+			b.SweepLambda[x] = c.lam[i]
+		}
+		b.SweepLambdaAxis = c.lamAxis.String()
+	}
+}
+
+// lamVaries tells whether the swept values change the relative slenderness.
+func lamVaries(lam []float64) bool {
+	for _, l := range lam {
+		if math.Abs(l-lam[0]) > 1e-3 {
+			return true
+		}
+	}
+	return false
 }
 
 // caseModel is the capacity model of variant v of st (-1: the study).
@@ -251,10 +271,7 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 				fmt.Fprintf(&w, "    (%d) %s\n", k+1, s.Name)
 			}
 		}
-		showLam := false
-		for _, l := range c.lam {
-			showLam = showLam || math.Abs(l-c.lam[0]) > 1e-3
-		}
+		showLam := lamVaries(c.lam)
 		fmt.Fprintf(&w, "    %12s", "value")
 		dec := sweepDecimals(c.values)
 		if showLam {
@@ -296,6 +313,24 @@ func caseBeta(pt *report.Point) string {
 		return "inf"
 	}
 	return betaText(pt.Beta)
+}
+
+// relSlendernessAbout is the nominal relative slenderness of the study at
+// swept value i about axis a (NaN if it cannot be found).
+func relSlendernessAbout(st *study.Study, i int, a column.Axis) float64 {
+	cs, err := st.Derive(-1, i)
+	if err != nil {
+		return math.NaN()
+	}
+	md, err := study.Build(cs)
+	if err != nil {
+		return math.NaN()
+	}
+	n, err := md.Nominal()
+	if err != nil {
+		return math.NaN()
+	}
+	return n.RelSlenderness[a]
 }
 
 // relSlenderness is the nominal relative slenderness of the study at

@@ -42,6 +42,11 @@ type Bundle struct {
 	// (a single unnamed series for a plain sweep); SweepLabel names the axis.
 	Series     []Series
 	SweepLabel string
+	// SweepLambda, when the swept values change it, is the study's nominal
+	// relative slenderness at each swept value (by value), about the axis
+	// SweepLambdaAxis ("major" or "minor", the one governing the study).
+	SweepLambda     map[float64]float64
+	SweepLambdaAxis string
 	// Updates are prior and updated distributions from measurements.
 	Updates []Update
 	// Trace is the beam-column load-deflection path at the design point.

@@ -121,12 +121,16 @@ code{font-size:.9em}
 {{if not (or .Tornado .Sobol .FORM .Spearman)}}<p>No sensitivity measures were computed.</p>{{end}}
 </section>
 
-{{if or .Sweep .Variants (.Picture "sweep")}}<section id="sweep">
+{{if or .Sweep .Variants .SweepCurves (.Picture "sweep")}}<section id="sweep">
 <h2>Sweep and variants</h2>
 {{with .Picture "sweep"}}{{template "fig" .}}{{end}}
 {{with .Picture "variants"}}{{template "fig" .}}{{end}}
 {{if .Sweep}}<table><tr><th>{{if .SweepLabel}}{{.SweepLabel}}{{else}}value{{end}}</th><th>pf (–)</th><th>95% interval of pf (–)</th><th>β (–)</th></tr>
 {{range .Sweep}}<tr><td class="n">{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td></tr>
+{{end}}</table>{{end}}
+{{with .SweepCurves}}<p>β of every curve (95% interval in brackets) at each swept value:</p>
+<table><tr>{{range .Head}}<th>{{.}}</th>{{end}}</tr>
+{{range .Rows}}<tr>{{range .}}<td class="n">{{.}}</td>{{end}}</tr>
 {{end}}</table>{{end}}
 {{if .Variants}}<table><tr><th>variant</th><th>pf (–)</th><th>95% interval of pf (–)</th><th>β (–)</th></tr>
 {{range .Variants}}<tr><td>{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td></tr>

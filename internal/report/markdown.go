@@ -129,8 +129,12 @@ func Markdown(b *Bundle) string {
 		mdTable(&w, []string{"input", "Spearman ρ (–)"}, rows)
 	}
 
-	if len(v.Sweep) > 0 || len(v.Variants) > 0 {
+	if len(v.Sweep) > 0 || len(v.Variants) > 0 || v.SweepCurves != nil {
 		w.WriteString("## Sweep and variants\n\n")
+		if t := v.SweepCurves; t != nil {
+			w.WriteString("β of every curve (95% interval in brackets) at each swept value:\n\n")
+			mdTable(&w, t.Head, t.Rows)
+		}
 		label := v.SweepLabel
 		if label == "" {
 			label = "value"

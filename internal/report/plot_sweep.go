@@ -26,8 +26,17 @@ func sweepFigure(b *Bundle) *figure {
 	if xlabel == "" {
 		xlabel = "swept parameter"
 	}
-	pb := newPlot("Reliability index", xlabel, "reliability index β (–)")
-	pp := newPlot("Probability of failure", xlabel, "probability of failure pf (log scale)")
+	axisLabel := xlabel
+	if newLambdaTicks(b, niceTicks{}) != nil {
+		axisLabel = lambdaAxisLabel(b, xlabel)
+	}
+	pb := newPlot("Reliability index", axisLabel, "reliability index β (–)")
+	pp := newPlot("Probability of failure", axisLabel, "probability of failure pf (log scale)")
+	for _, p := range []*plot.Plot{pb, pp} {
+		if lt := newLambdaTicks(b, p.X.Tick.Marker); lt != nil {
+			p.X.Tick.Marker = lt
+		}
+	}
 	addGrid(pb, false)
 	addGrid(pp, false)
 	drawn, bands := 0, 0
@@ -170,6 +179,9 @@ func sweepFigure(b *Bundle) *figure {
 		w = 24 * vg.Centimeter
 	}
 	caption := "Reliability index β (dimensionless) and probability of failure pf (dimensionless, log scale) against " + xlabel + ", one curve per variant (named in the legend of the pf panel when both are drawn); dashed: the target."
+	if newLambdaTicks(b, niceTicks{}) != nil {
+		caption += " Below each value of the axis: the study's nominal relative slenderness λ (dimensionless) about its " + b.SweepLambdaAxis + " axis there."
+	}
 	if bands > 0 {
 		caption += " The shaded band round each β curve is its 95% interval, drawn to scale: where it is narrower than the line it is hidden behind it."
 	}

@@ -38,9 +38,10 @@ type view struct {
 	Influence                  string
 	RankingNote                string // which ranking answers which question
 
-	SweepLabel string
-	Sweep      []pointRow
-	Variants   []pointRow
+	SweepLabel  string
+	SweepCurves *table // every curve's β at every swept value
+	Sweep       []pointRow
+	Variants    []pointRow
 
 	Updates     []updateRow
 	Measured    []measuredRow // see target.go
@@ -232,6 +233,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		v.RankingNote = RankingNote(&d)
 	}
 
+	v.SweepCurves = sweepCurvesTable(b)
 	for _, p := range d.Sweep {
 		v.Sweep = append(v.Sweep, pointRow{sig(p.Value, 4), prob(p.Pf), intervalText(p.PfCI[:], prob), f2(p.Beta)})
 	}
