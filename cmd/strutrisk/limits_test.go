@@ -2,6 +2,8 @@ package main
 
 import (
 	"os"
+	"runtime"
+	"strconv"
 	"strings"
 	"testing"
 )
@@ -29,5 +31,22 @@ func TestHostileStudyFiles(t *testing.T) {
 				t.Errorf("%s %s: exit %d, stderr %.300q; want exit 2 and %q", cmd, name, code, errs, c.want)
 			}
 		}
+	}
+}
+
+// TestWorkersCapped: --workers beyond 16 per core (at least 64) is bad
+// input naming the cap, before the study is read (issue 10, item 8: a
+// million workers took 3 GB).
+func TestWorkersCapped(t *testing.T) {
+	study := writeStudy(t, good)
+	for _, n := range []string{"1000000", strconv.Itoa(maxWorkers() + 1), "0"} {
+		code, _, errs := invoke(t, "run", study, "--workers", n, "--out", t.TempDir())
+		want := "must be between 1 and " + strconv.Itoa(maxWorkers())
+		if code != exitInput || !strings.Contains(errs, want) {
+			t.Errorf("--workers %s: exit %d, stderr %q; want exit 2 and %q", n, code, errs, want)
+		}
+	}
+	if maxWorkers() < 64 || maxWorkers() < 16*runtime.NumCPU() {
+		t.Errorf("cap %d below 64 or 16 per core", maxWorkers())
 	}
 }

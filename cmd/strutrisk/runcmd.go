@@ -55,7 +55,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	fs.StringVar(&o.method, "method", "", "estimator `M`: auto, monte-carlo, latin-hypercube, form, importance, subset, conditional-qmc")
 	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
 	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
-	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores); results do not depend on it")
+	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
 	pos, help, err := parseArgs(fs, args)
 	if help {
 		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+caution+"\n")
@@ -79,8 +79,8 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "strutrisk run: --samples %d must be between 1 and 1e10\n", o.samples)
 		return exitInput
 	}
-	if o.set["workers"] && o.workers < 1 {
-		fmt.Fprintf(stderr, "strutrisk run: --workers %d must be 1 or more\n", o.workers)
+	if o.set["workers"] && (o.workers < 1 || o.workers > maxWorkers()) {
+		fmt.Fprintf(stderr, "strutrisk run: --workers %d must be between 1 and %d (16 per core, at least 64; results do not depend on it)\n", o.workers, maxWorkers())
 		return exitInput
 	}
 

@@ -149,6 +149,12 @@ func (s *scanner) key() bool {
 			if !ok {
 				return false
 			}
+			if c == '"' && strings.IndexByte(str, '\\') >= 0 {
+				// The decoder's key has its escapes read (\t, \u001b).
+				if u, err := strconv.Unquote(`"` + str + `"`); err == nil {
+					str = u
+				}
+			}
 			s.path = append(s.path, str...)
 		case isBare(c):
 			start := s.pos

@@ -312,6 +312,14 @@ func (p *parser) parse() *Study {
 		return nil
 	}
 	p.lines = keyLines(p.data)
+	if p.edit == nil {
+		// Text first: no later message may echo a control character.
+		// (A derived case reads the same file, checked here once.)
+		if hasBadText(raw) {
+			p.checkText(raw, "")
+			return nil
+		}
+	}
 	if p.edit != nil {
 		p.edit(raw)
 		p.relines(p.lines)
