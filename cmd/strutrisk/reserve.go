@@ -257,6 +257,9 @@ func (r *results) targetSummary(d *report.Document) string {
 		}
 	}
 	s += "\n"
+	if t.Source != "" && !strings.HasPrefix(t.Source, "target.beta") {
+		s += "                     (target from " + t.Source + ")\n"
+	}
 	if d.ReserveFactor != nil {
 		on := "variable loads"
 		if t.ReserveOn == "all" {

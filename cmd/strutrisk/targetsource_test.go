@@ -3,6 +3,8 @@ package main
 import (
 	"encoding/json"
 	"math"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 
@@ -54,5 +56,24 @@ func TestCheckTargetSource(t *testing.T) {
 		if _, ok := raw["target"]["source"]; !ok {
 			t.Errorf("%q: JSON target has no source field", c.keys)
 		}
+	}
+}
+
+// TestRunTargetSource: the run summary and summary.txt say where a table
+// target came from (EN 1990 Annex B Table B2, RC2 over 50 years: 3.8,
+// from memory).
+func TestRunTargetSource(t *testing.T) {
+	s := strings.Replace(stocky, "beta = 3.8\n", "consequence = \"medium\"\n", 1)
+	dir := t.TempDir()
+	code, out, errs := invoke(t, "run", writeStudy(t, s), "--method", "form", "--out", dir)
+	if code != 0 {
+		t.Fatalf("exit %d\n%s", code, errs)
+	}
+	if !strings.Contains(out, "target beta        3.80 (pf 7.2e-05, 50 years)") || !strings.Contains(out, "(target from EN 1990 Annex B Table B2, RC2 (consequence medium), 50-year value)") {
+		t.Errorf("summary does not give the target and its source:\n%s", out)
+	}
+	b, err := os.ReadFile(filepath.Join(dir, "summary.txt"))
+	if err != nil || !strings.Contains(string(b), "from EN 1990 Annex B Table B2, RC2") {
+		t.Errorf("summary.txt does not give the target's source (%v):\n%s", err, b)
 	}
 }

@@ -50,6 +50,9 @@ func SummaryText(b *Bundle) string {
 	}
 	if v := targetVerdict(&d); v != noTarget {
 		line("target beta", "%s: %s", f2(*d.TargetBeta), verdictText(&d, v))
+		if t := d.Target; t != nil && t.Source != "" {
+			line("", "from %s", t.Source)
+		}
 		if t := d.Target; v == undecided && t != nil && t.SamplesToDecide != nil {
 			line("", "about %s evaluations would decide it", thousands(int64(*t.SamplesToDecide)))
 		}

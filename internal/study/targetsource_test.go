@@ -8,6 +8,8 @@ import (
 	"testing"
 
 	"gonum.org/v1/gonum/stat/distuv"
+
+	"strutrisk/internal/assess"
 )
 
 // TestTargetSources: the target from beta, from EN 1990 Annex B Table B2
@@ -103,5 +105,15 @@ func TestTargetSourceErrors(t *testing.T) {
 		if !found {
 			t.Errorf("%q: want %s with %q, got\n%v", c.keys, c.key, c.msg, err)
 		}
+	}
+}
+
+// TestTargetChoicesAgree: the registry's choices are the tables' rows.
+func TestTargetChoicesAgree(t *testing.T) {
+	if got := strings.Join(choicesOf("target", "consequence"), ","); got != strings.Join(assess.Consequences, ",") {
+		t.Errorf("consequence choices %s, tables %v", got, assess.Consequences)
+	}
+	if got := strings.Join(choicesOf("target", "cost_of_safety"), ","); got != strings.Join(assess.CostsOfSafety, ",") {
+		t.Errorf("cost_of_safety choices %s, tables %v", got, assess.CostsOfSafety)
 	}
 }
