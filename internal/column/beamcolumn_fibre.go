@@ -225,8 +225,9 @@ func (pl *bcPlastic) iFibres(s Section, depth bool, res Residual, nf int, fy flo
 	return c, nil
 }
 
-// rhsFibres cuts a rectangular hollow section (square corners) into two
-// flanges across the full width and two webs between them.
+// rhsFibres cuts a rectangular hollow section into two flanges across the
+// full width and two webs between them, then rounds the corners
+// (rhsCorners).
 func (pl *bcPlastic) rhsFibres(s Section, depth bool, res Residual, nf int, fy float64) (float64, error) {
 	if res == ResidualHotRolled {
 		return 0, fmt.Errorf("column: residual stress \"hot-rolled\" is the pattern of I sections; for a hollow section use \"none\" (hot-finished), \"welded\" or \"cold-formed\"")
@@ -262,10 +263,39 @@ func (pl *bcPlastic) rhsFibres(s Section, depth bool, res Residual, nf int, fy f
 			return 0
 		}, res == ResidualWelded)
 	}
+	pl.rhsCorners(s, depth)
 	if depth {
 		return d / 2, nil
 	}
 	return b / 2, nil
+}
+
+// rhsCorners rounds the square corners of the plates of rhsFibres: a
+// fibre of negative area takes away each outer corner spandrel (radius
+// Radius) and one of positive area adds each inner spandrel (radius
+// InnerRadius), at the spandrel's radius of gyration about the axis so
+// that the area and the second moment equal those of Properties. They
+// carry no residual stress, so each pattern stays self-equilibrated.
+func (pl *bcPlastic) rhsCorners(s Section, depth bool) {
+	d, b, t := s.Depth, s.Width, s.Thickness
+	h := d
+	if !depth {
+		h = b
+	}
+	for _, c := range [2]struct{ r, half, sign float64 }{
+		{s.Radius, h / 2, -1},
+		{s.InnerRadius, h/2 - t, 1},
+	} {
+		if c.r <= 0 {
+			continue
+		}
+		a := filletA * c.r * c.r
+		dz := c.half - filletC*c.r
+		z := math.Sqrt(dz*dz + filletI*c.r*c.r*c.r*c.r/a)
+		for _, zz := range [4]float64{z, z, -z, -z} {
+			pl.add(c.sign*a, zz, 0)
+		}
+	}
 }
 
 // chsFibres cuts a circular hollow section into sectors in two layers,

@@ -228,7 +228,7 @@ func (p *parser) checkSection() {
 	if _, err := sec.Properties(); err != nil {
 		p.errorf("member.section", "%v", strings.TrimPrefix(err.Error(), "column: "))
 	}
-	for _, k := range []string{"thickness", "flange", "web", "depth", "width", "diameter"} {
+	for _, k := range []string{"thickness", "flange", "web", "depth", "width", "diameter", "radius"} {
 		q := st.Section.Dims[k]
 		if q == nil || !q.Random() {
 			continue
