@@ -61,7 +61,7 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 		if ctx.Err() != nil {
 			return t
 		}
-		bar.stage(fmt.Sprintf("reserve factor (sampling run %d)", k+1))
+		bar.stage(fmt.Sprintf("reserve confirmation (sampling run %d of at most %d)", k+1, maxConfirm))
 		cs := *s
 		res, err := sim.Run(ctx, l.md.Loaded(t.factor, 0), &cs)
 		if err != nil || res.Incomplete {

@@ -132,6 +132,8 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	defer stop()
 	bar := newProgress(stderr, !o.json)
 	settings.Progress = bar.update
+	bar.targetCoV = settings.TargetCoV
+	bar.stage("main run (" + string(settings.Method) + ")")
 	r, err := analyse(ctx, l, &settings, bar)
 	if err == nil && !r.res.Incomplete {
 		// The main result stays the study itself; sweep and variants

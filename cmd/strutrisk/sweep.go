@@ -31,12 +31,11 @@ type cases struct {
 
 // caseSettings are the settings of a case run: the main run's, without
 // the kept samples and the auxiliary sample (a case only reports pf and
-// beta).
+// beta); its progress goes to the same line.
 func caseSettings(s *sim.Settings) sim.Settings {
 	c := *s
 	c.Keep = -1
 	c.AuxSamples = -1
-	c.Progress = nil
 	return c
 }
 
@@ -79,7 +78,7 @@ func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *c
 			}
 			done++
 			name := caseName(st, v, i)
-			bar.stage(fmt.Sprintf("case %d/%d: %s", done, total, name))
+			bar.startCase(done, total, caseLabel(st, v, i))
 			pt, warns, err := runCase(ctx, st, v, i, &settings)
 			for _, x := range warns {
 				if !seen[x] {
@@ -141,9 +140,22 @@ func caseName(st *study.Study, v, i int) string {
 		parts = append(parts, fmt.Sprintf("variant %q", st.Variants[v].Name))
 	}
 	if i >= 0 {
-		parts = append(parts, fmt.Sprintf("%s = %.4g", st.Sweep.Parameter, st.Sweep.Values[i].Value))
+		parts = append(parts, st.Sweep.Parameter+" = "+valueText(st.Sweep.Values[i].Value, st.Sweep.Unit()))
 	}
 	return strings.Join(parts, " at ")
+}
+
+// caseLabel names a case briefly for the progress line: the swept value
+// first, then the variant's name, shortened.
+func caseLabel(st *study.Study, v, i int) string {
+	var parts []string
+	if i >= 0 {
+		parts = append(parts, st.Sweep.Parameter+" = "+valueText(st.Sweep.Values[i].Value, st.Sweep.Unit()))
+	}
+	if v >= 0 {
+		parts = append(parts, fmt.Sprintf("variant %q", clip(st.Variants[v].Name, 24)))
+	}
+	return strings.Join(parts, ", ")
 }
 
 // runCase builds and runs one case; it also returns the case's warnings.
@@ -391,4 +403,30 @@ func sweepDecimals(values []float64) int {
 		}
 	}
 	return min(dec, 6)
+}
+
+// valueText writes a swept value in unit (an internal unit of
+// study.Sweep.Unit) as a person reads it: forces in kN, lengths of a metre
+// or more in m, moments in kN*m, L/n fractions as L/n.
+func valueText(v float64, unit string) string {
+	switch unit {
+	case "N":
+		return fmt.Sprintf("%.4g kN", v/1e3)
+	case "mm":
+		if math.Abs(v) >= 1000 {
+			return fmt.Sprintf("%.4g m", v/1e3)
+		}
+		return fmt.Sprintf("%.4g mm", v)
+	case "N*mm":
+		return fmt.Sprintf("%.4g kN*m", v/1e6)
+	case "N*mm/rad":
+		return fmt.Sprintf("%.4g kN*m/rad", v/1e6)
+	case "fraction of L":
+		if v != 0 {
+			return fmt.Sprintf("L/%.4g", 1/v)
+		}
+	case "":
+		return fmt.Sprintf("%.4g", v)
+	}
+	return fmt.Sprintf("%.4g %s", v, unit)
 }

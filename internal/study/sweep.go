@@ -27,6 +27,16 @@ type Sweep struct {
 	raw []any
 }
 
+// Unit is the unit of the swept values as Label gives it: "mm", "N",
+// "MPa"..., "" for plain numbers and "fraction of L" for values written
+// L/n.
+func (s *Sweep) Unit() string {
+	if s.rel {
+		return "fraction of L"
+	}
+	return InternalUnit(s.dim)
+}
+
 // Label names the swept parameter and the unit of its values for a
 // chart axis or a table head: "member.length (mm)", "imperfection.bow
 // (fraction of L)".
