@@ -105,9 +105,10 @@ func (r *results) document() *report.Document {
 	ev := res.Evaluations
 	d.Evaluations = &ev
 	pf, cov, beta := res.Pf, res.PfCoV, res.Beta
-	d.Pf, d.PfCoV, d.Beta = &pf, finitePtr(cov), finitePtr(beta)
+	ib := report.Index(beta)
+	d.Pf, d.PfCoV, d.Beta = &pf, finitePtr(cov), &ib // null when unbounded
 	d.PfCI = []float64{res.PfCI[0], res.PfCI[1]}
-	d.BetaCI = []float64{finite(res.BetaCI[0]), finite(res.BetaCI[1])}
+	d.BetaCI = report.Indices(res.BetaCI[0], res.BetaCI[1])
 	d.Status = res.Status.String()
 	if res.Status != sim.Converged {
 		d.StatusReason = res.StatusReason
@@ -184,16 +185,6 @@ func outputIndex(m *sim.Model, name string) int {
 		}
 	}
 	return -1
-}
-
-func finite(v float64) float64 {
-	if math.IsInf(v, 1) {
-		return math.MaxFloat64
-	}
-	if math.IsInf(v, -1) {
-		return -math.MaxFloat64
-	}
-	return v
 }
 
 // finitePtr returns nil for a value JSON cannot carry (NaN, Inf).

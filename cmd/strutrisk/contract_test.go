@@ -789,7 +789,7 @@ func TestContractReliabilityCases(t *testing.T) {
 				if d.Beta == nil || len(d.BetaCI) != 2 || len(d.PfCI) != 2 || d.Pf == nil {
 					t.Fatalf("no beta, pf or intervals")
 				}
-				b, lo, hi := *d.Beta, d.BetaCI[0], d.BetaCI[1]
+				b, lo, hi := float64(*d.Beta), float64(d.BetaCI[0]), float64(d.BetaCI[1])
 				if !(lo <= b && b <= hi) || !(d.PfCI[0] <= *d.Pf && *d.Pf <= d.PfCI[1]) {
 					t.Errorf("estimate outside its interval: beta %g in [%g, %g], pf %g in %v", b, lo, hi, *d.Pf, d.PfCI)
 				}
@@ -843,7 +843,7 @@ func TestContractCorrelation(t *testing.T) {
 	if d.Beta == nil {
 		t.Fatal("no beta")
 	}
-	ctClose(t, "FORM beta with rho = 0.8 of the variables", *d.Beta, want, 1e-5)
+	ctClose(t, "FORM beta with rho = 0.8 of the variables", float64(*d.Beta), want, 1e-5)
 
 	// A pair with a fixed quantity, and a rho these two lognormals cannot
 	// reach (their lowest correlation is (exp(-zR zS) - 1)/(VR VS) =
@@ -1041,7 +1041,7 @@ sobol = { samples = 256 }
 	if len(d.PfCI) != 2 || len(d.BetaCI) != 2 || !(d.PfCI[0] <= *d.Pf && *d.Pf <= d.PfCI[1]) || !(d.BetaCI[0] <= *d.Beta && *d.Beta <= d.BetaCI[1]) {
 		t.Errorf("intervals: pf %g %v, beta %g %v", *d.Pf, d.PfCI, *d.Beta, d.BetaCI)
 	}
-	ctClose(t, "beta = -Phi^-1(pf)", ctCDF(-*d.Beta), *d.Pf, 1e-6)
+	ctClose(t, "beta = -Phi^-1(pf)", ctCDF(-float64(*d.Beta)), *d.Pf, 1e-6)
 	// Values in N, mm, MPa: mean demand 100 kips (the Gumbel and normal
 	// means add), the yield at the design point in MPa near 46 ksi.
 	ctClose(t, "demand mean (N)", d.Demand.Mean, 100*ctKip, 0.02)
@@ -1102,7 +1102,7 @@ func TestContractLoadNames(t *testing.T) {
 		t.Errorf("method %q, want form as the file asks", d.Method)
 	}
 	// Case B of TestContractReliabilityCases: beta = 1.894516.
-	if d.Beta == nil || math.Abs(*d.Beta-1.894516) > 1e-5 {
+	if d.Beta == nil || math.Abs(float64(*d.Beta)-1.894516) > 1e-5 {
 		t.Errorf("beta %v, want 1.894516", d.Beta)
 	}
 	if d.ReserveFactor == nil || !(*d.ReserveFactor > 0 && *d.ReserveFactor < 1) {
@@ -1235,7 +1235,7 @@ func TestContractAutoCoverage(t *testing.T) {
 				t.Fatalf("document: %v", err)
 			}
 			runs++
-			if !(d.BetaCI[0] <= c.beta && c.beta <= d.BetaCI[1]) {
+			if !(float64(d.BetaCI[0]) <= c.beta && c.beta <= float64(d.BetaCI[1])) {
 				misses++
 			}
 		}

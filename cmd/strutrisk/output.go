@@ -38,7 +38,11 @@ func (r *results) summary(dir string, files []string) string {
 	if res.Method == sim.FORMMethod {
 		fmt.Fprintf(&w, "  method             %s, %d evaluations\n", res.Method, res.Evaluations)
 	} else {
-		fmt.Fprintf(&w, "  method             %s, %d evaluations, cov of pf %.3f\n", res.Method, res.Evaluations, res.PfCoV)
+		cov := fmt.Sprintf("%.3f", res.PfCoV)
+		if math.IsInf(res.PfCoV, 0) {
+			cov = "unbounded (no failure seen)"
+		}
+		fmt.Fprintf(&w, "  method             %s, %d evaluations, cov of pf %s\n", res.Method, res.Evaluations, cov)
 	}
 	if res.Reason != "" {
 		fmt.Fprintf(&w, "                     (%s)\n", res.Reason)
@@ -72,12 +76,6 @@ func pfText(p float64) string {
 	return fmt.Sprintf("%.3g", p)
 }
 
-func betaText(b float64) string {
-	if math.IsInf(b, 1) {
-		return "inf"
-	}
-	if math.IsInf(b, -1) {
-		return "-inf"
-	}
-	return fmt.Sprintf("%.2f", b)
-}
+// betaText formats a reliability index for the terminal; an infinite one
+// is "inf (unbounded)" or "-inf (unbounded)" (report.BetaText).
+func betaText(b float64) string { return report.BetaText(b) }

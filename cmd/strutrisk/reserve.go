@@ -224,8 +224,8 @@ func (r *results) fillTarget(d *report.Document) {
 		t.Confirmation = &report.Confirmation{
 			Confirmed: tr.confirmed, Status: c.Status.String(),
 			Method: string(c.Method), Evaluations: c.Evaluations,
-			Pf: c.Pf, PfCI: c.PfCI, Beta: finite(c.Beta),
-			BetaCI: [2]float64{finite(c.BetaCI[0]), finite(c.BetaCI[1])},
+			Pf: c.Pf, PfCI: c.PfCI, Beta: report.Index(c.Beta),
+			BetaCI: [2]report.Index{report.Index(c.BetaCI[0]), report.Index(c.BetaCI[1])},
 		}
 	}
 }
@@ -272,7 +272,7 @@ func (r *results) targetSummary(d *report.Document) string {
 				how = "not confirmed by"
 			}
 			s += fmt.Sprintf("                     %s %s: beta %s, 95 %% interval [%s, %s], %d evaluations\n",
-				how, c.Method, betaText(c.Beta), betaText(c.BetaCI[0]), betaText(c.BetaCI[1]), c.Evaluations)
+				how, c.Method, betaText(float64(c.Beta)), betaText(float64(c.BetaCI[0])), betaText(float64(c.BetaCI[1])), c.Evaluations)
 		}
 	}
 	if a := t.LargestAddedLoad; a != nil {

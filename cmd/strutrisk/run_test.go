@@ -76,7 +76,7 @@ func TestRunLognormalClosedForm(t *testing.T) {
 			}
 			if method == "form" {
 				// FORM is exact here: ln R - ln S is linear in normal space.
-				if math.Abs(*d.Beta-stockyBeta) > 1e-4 {
+				if math.Abs(float64(*d.Beta)-stockyBeta) > 1e-4 {
 					t.Errorf("FORM beta %.6f, want %.6f", *d.Beta, stockyBeta)
 				}
 			} else if !(d.PfCI[0] <= stockyPf && stockyPf <= d.PfCI[1]) {

@@ -208,7 +208,7 @@ func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings
 	if !res.Status.Trusted() {
 		status = "the estimate of this case cannot be trusted: " + res.StatusReason
 	}
-	pt = &report.Point{Pf: res.Pf, Beta: finite(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]}}
+	pt = &report.Point{Pf: res.Pf, Beta: report.Index(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]}}
 	if i >= 0 {
 		pt.Value = st.Sweep.Values[i].Value
 	}
@@ -262,7 +262,7 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 	}
 	var w strings.Builder
 	row := func(name string, pf float64, ci [2]float64, beta float64) {
-		pt := &report.Point{Pf: pf, Beta: beta}
+		pt := &report.Point{Pf: pf, Beta: report.Index(beta)}
 		fmt.Fprintf(&w, "    %-28s %10s  [%9s, %9s]  %6s\n", name, pfText(pf), pfText(ci[0]), pfText(ci[1]), caseBeta(pt))
 	}
 	head := func(first string) {
@@ -273,7 +273,7 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 		head("variant")
 		row("study ("+baseName(st)+")", main.Pf, [2]float64{main.PfCI[0], main.PfCI[1]}, main.Beta)
 		for _, v := range c.variants {
-			row(v.Name, v.Pf, v.PfCI, v.Beta)
+			row(v.Name, v.Pf, v.PfCI, float64(v.Beta))
 		}
 	}
 	if len(c.values) > 0 {
@@ -319,12 +319,12 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 	return w.String()
 }
 
-// caseBeta is a case's beta as text ("inf" when no sample failed).
+// caseBeta is a case's beta as text ("unbounded" when no sample failed).
 func caseBeta(pt *report.Point) string {
 	if pt.Pf == 0 {
-		return "inf"
+		return betaText(math.Inf(1))
 	}
-	return betaText(pt.Beta)
+	return betaText(float64(pt.Beta))
 }
 
 // relSlendernessAbout is the nominal relative slenderness of the study at

@@ -73,7 +73,7 @@ func TestSweepClosedForm(t *testing.T) {
 				}
 			}
 			// The main result stays the study itself.
-			if math.Abs(*d.Beta-stockyBeta) > 0.02 {
+			if math.Abs(float64(*d.Beta)-stockyBeta) > 0.02 {
 				t.Errorf("main beta %.4f, want the study's %.4f", *d.Beta, stockyBeta)
 			}
 		})

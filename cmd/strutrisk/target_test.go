@@ -173,7 +173,7 @@ func TestRunReserve(t *testing.T) {
 	if c == nil {
 		t.Fatal("no confirmation run")
 	}
-	if !(c.BetaCI[0] <= 3.8 && 3.8 <= c.BetaCI[1]) && math.Abs(c.Beta-3.8) > 0.005 {
+	if !(c.BetaCI[0] <= 3.8 && 3.8 <= c.BetaCI[1]) && math.Abs(float64(c.Beta)-3.8) > 0.005 {
 		t.Errorf("confirmed beta %.3f [%.3f, %.3f] misses the target 3.8", c.Beta, c.BetaCI[0], c.BetaCI[1])
 	}
 	if f := *d.ReserveFactor; math.Abs(f-want) > 0.03*want {

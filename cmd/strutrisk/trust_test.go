@@ -146,3 +146,41 @@ func TestReserveNotConfirmedByFewFailures(t *testing.T) {
 		t.Errorf("summary:\n%s", out)
 	}
 }
+
+// TestUnboundedBetaIsNeverAHugeNumber is issue 10's third case: one plain
+// sample of a safe strut sees no failure, so beta and the top of its
+// interval are unbounded. JSON must write null there (documented), and
+// text "unbounded", never 1.797e308 or its 309 digits.
+func TestUnboundedBetaIsNeverAHugeNumber(t *testing.T) {
+	dir := t.TempDir()
+	code, out, errs := invoke(t, "run", writeStudy(t, stocky), "--json", "--out", dir, "--method", "monte-carlo", "--samples", "1")
+	if code != 0 {
+		t.Fatalf("exit %d\n%s", code, errs)
+	}
+	var raw map[string]any
+	if err := json.Unmarshal([]byte(out), &raw); err != nil {
+		t.Fatal(err)
+	}
+	ci, _ := raw["beta_ci"].([]any)
+	if b, ok := raw["beta"]; !ok || b != nil || len(ci) != 2 || ci[1] != nil {
+		t.Errorf("beta %v, beta_ci %v: want null for the unbounded ends", raw["beta"], raw["beta_ci"])
+	}
+	files := []string{out}
+	for _, f := range []string{"results.json", "summary.txt"} {
+		b, err := os.ReadFile(dir + "/" + f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		files = append(files, string(b))
+	}
+	_, text, _ := invoke(t, "run", writeStudy(t, stocky), "--out", t.TempDir(), "--method", "monte-carlo", "--samples", "1")
+	files = append(files, text)
+	for i, s := range files {
+		if strings.Contains(s, "1.797") || strings.Contains(s, "e+308") || strings.Contains(s, "00000000000000000000") {
+			t.Errorf("output %d writes the largest float for infinity:\n%s", i, s)
+		}
+	}
+	if !strings.Contains(text, "unbounded") {
+		t.Errorf("the summary does not say beta is unbounded:\n%s", text)
+	}
+}

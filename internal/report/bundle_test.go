@@ -55,7 +55,7 @@ func demoBundle() *Bundle {
 		InputSHA256: "3f1c9a0d5e2b7c4a9e8f6d1b0c3a5e7f9d2b4c6a8e0f1d3b5c7a9e2f4d6b8c0a", Units: "N-mm-MPa",
 		Method: "monte-carlo", Seed: ptr(uint64(20261201)), Evaluations: ptr(int64(1000000)),
 		Pf: ptr(1.84e-3), PfCI: []float64{1.76e-3, 1.93e-3}, PfCoV: ptr(0.0233),
-		Beta: ptr(2.904), BetaCI: []float64{2.891, 2.918},
+		Beta: ptr(Index(2.904)), BetaCI: []Index{2.891, 2.918},
 		TargetBeta: ptr(3.8), MeetsTarget: ptr(false), ReserveFactor: ptr(0.81),
 		GoverningAxis: "minor",
 		Nominal:       &Nominal{Capacity: 1402e3, EulerLoad: 3120e3, Slenderness: 84.2, RelativeSlenderness: 0.972, K: 1, Axis: "minor"},
@@ -159,9 +159,9 @@ func demoBundle() *Bundle {
 	}{{"as built", 0}, {"bow L/500", 0.45}} {
 		s := Series{Name: v.name}
 		for _, p := range doc.Sweep {
-			beta := p.Beta - v.shift
+			beta := float64(p.Beta) - v.shift
 			pf := sim.PfFromBeta(beta)
-			s.Points = append(s.Points, Point{Value: p.Value, Beta: beta, Pf: pf, PfCI: [2]float64{pf * 0.9, pf * 1.1}})
+			s.Points = append(s.Points, Point{Value: p.Value, Beta: Index(beta), Pf: pf, PfCI: [2]float64{pf * 0.9, pf * 1.1}})
 		}
 		b.Series = append(b.Series, s)
 	}

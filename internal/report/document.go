@@ -20,8 +20,9 @@ type Document struct {
 	Pf          *float64  `json:"pf,omitempty"`
 	PfCI        []float64 `json:"pf_ci,omitempty"`
 	PfCoV       *float64  `json:"pf_cov,omitempty"`
-	Beta        *float64  `json:"beta,omitempty"`
-	BetaCI      []float64 `json:"beta_ci,omitempty"`
+	// Beta and BetaCI are null when unbounded (Index).
+	Beta   *Index  `json:"beta,omitempty"`
+	BetaCI []Index `json:"beta_ci,omitempty"`
 	// Status says how far the estimate can be trusted (the names of
 	// sim.Status: "converged", "budget-spent", "few-failures",
 	// "interrupted", "weights-degenerate", "design-point-unreliable",
@@ -132,7 +133,7 @@ type Sobol struct {
 type Point struct {
 	Value float64    `json:"value"`
 	Pf    float64    `json:"pf"`
-	Beta  float64    `json:"beta"`
+	Beta  Index      `json:"beta"`
 	PfCI  [2]float64 `json:"pf_ci"`
 }
 
@@ -140,6 +141,6 @@ type Point struct {
 type Variant struct {
 	Name string     `json:"name"`
 	Pf   float64    `json:"pf"`
-	Beta float64    `json:"beta"`
+	Beta Index      `json:"beta"`
 	PfCI [2]float64 `json:"pf_ci"`
 }

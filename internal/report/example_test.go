@@ -7,13 +7,14 @@ import (
 )
 
 func ExampleSummaryText() {
-	pf, beta, target, reserve := 1.3e-4, 3.65, 3.8, 0.93
+	pf, target, reserve := 1.3e-4, 3.8, 0.93
+	beta := report.Index(3.65)
 	evals, seed := int64(17502), uint64(1)
 	b := &report.Bundle{Doc: &report.Document{
 		Title:  "Column C4",
 		Method: "conditional-qmc", Evaluations: &evals, Seed: &seed,
 		Pf: &pf, PfCI: []float64{1.18e-4, 1.44e-4},
-		Beta: &beta, BetaCI: []float64{3.63, 3.68},
+		Beta: &beta, BetaCI: []report.Index{3.63, 3.68},
 		TargetBeta: &target, ReserveFactor: &reserve,
 		FORM: &report.FORM{Importance: map[string]float64{"loads.imposed": 0.62, "material.yield": 0.09, "capacity.model_factor": 0.10}},
 	}}

@@ -30,8 +30,8 @@ func targetVerdict(d *Document) verdict {
 	if d.Trusted != nil && !*d.Trusted {
 		return undecided
 	}
-	t, b := *d.TargetBeta, *d.Beta
-	if len(d.BetaCI) == 2 && d.BetaCI[0] < t && t < d.BetaCI[1] {
+	t, b := *d.TargetBeta, float64(*d.Beta)
+	if len(d.BetaCI) == 2 && float64(d.BetaCI[0]) < t && t < float64(d.BetaCI[1]) {
 		return undecided
 	}
 	if b >= t {

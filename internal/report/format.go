@@ -145,6 +145,15 @@ func intervalText(ci []float64, f func(float64) string) string {
 	return f(ci[0]) + " to " + f(ci[1])
 }
 
+// betaIntervalText is intervalText for an interval of beta whose ends may
+// be unbounded.
+func betaIntervalText(ci []Index) string {
+	if len(ci) != 2 {
+		return notAvailable
+	}
+	return BetaText(float64(ci[0])) + " to " + BetaText(float64(ci[1]))
+}
+
 // thousands formats an integer with a thin space between groups of three
 // digits, e.g. 1 000 000.
 func thousands(n int64) string {

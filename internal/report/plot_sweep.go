@@ -62,8 +62,8 @@ func sweepFigure(b *Bundle) *figure {
 			if !finite(pt.Value) {
 				continue
 			}
-			if finite(pt.Beta) {
-				beta = append(beta, plotter.XY{X: pt.Value, Y: pt.Beta})
+			if finite(float64(pt.Beta)) {
+				beta = append(beta, plotter.XY{X: pt.Value, Y: float64(pt.Beta)})
 			}
 			if pt.Pf > 0 && finite(pt.Pf) {
 				pf = append(pf, plotter.XY{X: pt.Value, Y: math.Log10(pt.Pf)})

@@ -17,7 +17,7 @@ func TestSweepNarrowBands(t *testing.T) {
 			beta -= shift
 			// A precise estimate: a band of ±0.005 in β.
 			pf, lo, hi := sim.PfFromBeta(beta), sim.PfFromBeta(beta+0.005), sim.PfFromBeta(beta-0.005)
-			s.Points = append(s.Points, Point{Value: 1000 * float64(i+1), Pf: pf, Beta: beta, PfCI: [2]float64{lo, hi}})
+			s.Points = append(s.Points, Point{Value: 1000 * float64(i+1), Pf: pf, Beta: Index(beta), PfCI: [2]float64{lo, hi}})
 		}
 		return s
 	}

@@ -26,10 +26,10 @@ func variantsFigure(b *Bundle) *figure {
 	}
 	var rows []row
 	if d.Beta != nil && len(d.PfCI) == 2 {
-		rows = append(rows, row{"study", b.StudyModel, *d.Beta, sim.BetaFromPf(d.PfCI[1]), sim.BetaFromPf(d.PfCI[0])})
+		rows = append(rows, row{"study", b.StudyModel, float64(*d.Beta), sim.BetaFromPf(d.PfCI[1]), sim.BetaFromPf(d.PfCI[0])})
 	}
 	for _, v := range d.Variants {
-		rows = append(rows, row{v.Name, b.VariantModels[v.Name], v.Beta, sim.BetaFromPf(v.PfCI[1]), sim.BetaFromPf(v.PfCI[0])})
+		rows = append(rows, row{v.Name, b.VariantModels[v.Name], float64(v.Beta), sim.BetaFromPf(v.PfCI[1]), sim.BetaFromPf(v.PfCI[0])})
 	}
 	models := make([]string, len(rows))
 	for i, r := range rows {

@@ -8,7 +8,7 @@ import (
 // TestVariantsFigure checks when the variants chart is drawn: with
 // variants and no sweep curves only.
 func TestVariantsFigure(t *testing.T) {
-	beta := 3.2
+	beta := Index(3.2)
 	doc := &Document{Beta: &beta, PfCI: []float64{5e-4, 9e-4}, Variants: []Variant{
 		{Name: "bow L/500", Pf: 2e-3, Beta: 2.88, PfCI: [2]float64{1.8e-3, 2.2e-3}},
 		{Name: "curve b", Pf: 1e-2, Beta: 2.33, PfCI: [2]float64{0.9e-2, 1.1e-2}},

@@ -13,11 +13,11 @@ import (
 func degenerate() *Bundle {
 	nan, inf := math.NaN(), math.Inf(1)
 	return &Bundle{
-		Doc: &Document{Title: "degenerate", Pf: ptr(0.0), PfCI: []float64{0, 3e-6}, Beta: ptr(inf), BetaCI: []float64{4.5, inf},
+		Doc: &Document{Title: "degenerate", Pf: ptr(0.0), PfCI: []float64{0, 3e-6}, Beta: ptr(Index(inf)), BetaCI: []Index{4.5, Index(inf)},
 			Tornado: []Tornado{{Variable: "a", Low: nan, High: 1}, {Variable: "b", Low: 2, High: 2}},
 			Sobol:   []Sobol{{Variable: "a", First: nan, Total: nan}},
 			FORM:    &FORM{Beta: nan, Pf: nan, DesignPoint: map[string]float64{"a": nan}},
-			Sweep:   []Point{{Value: nan, Pf: 0, Beta: inf}}},
+			Sweep:   []Point{{Value: nan, Pf: 0, Beta: Index(inf)}}},
 		Capacity:        &sim.OutputStats{Mean: nan, SD: 0, Hist: sim.Histogram{Lo: nan, Width: 1, Counts: []float64{1, 2}}},
 		Demand:          &sim.OutputStats{Hist: sim.Histogram{Lo: 0, Width: 0, Counts: []float64{1}}},
 		Margin:          &sim.OutputStats{Hist: sim.Histogram{Lo: 0, Width: 1, Counts: []float64{0, 0, 0}}},
@@ -25,7 +25,7 @@ func degenerate() *Bundle {
 		Convergence:     []sim.ConvergencePoint{{Evaluations: 0, Pf: nan}, {Evaluations: 10, Pf: inf}},
 		TornadoBase:     nan,
 		Slenderness:     &SlendernessChart{Curves: []Curve{{Name: "x", X: []float64{nan}, Y: []float64{1, 2}}}, Cloud: [][2]float64{{nan, 1}}},
-		Series:          []Series{{Name: "s", Points: []Point{{Value: 1, Pf: nan, Beta: nan, PfCI: [2]float64{nan, nan}}}}},
+		Series:          []Series{{Name: "s", Points: []Point{{Value: 1, Pf: nan, Beta: Index(nan), PfCI: [2]float64{nan, nan}}}}},
 		Updates:         []Update{{Variable: "fy", Prior: testNormal{1, 0}, After: testNormal{nan, 1}, Data: []float64{nan}}},
 		Trace:           &Trace{Deflection: []float64{inf}, Load: []float64{nan}},
 	}

@@ -18,7 +18,7 @@ func TestFORMShowsNoInterval(t *testing.T) {
 		{"form", []float64{1e-4, 1e-4}, false},
 		{"monte-carlo", []float64{0.9e-4, 1.1e-4}, true},
 	} {
-		b := &Bundle{Doc: &Document{Title: "t", Method: c.method, Pf: ptr(1e-4), PfCI: c.ci, PfCoV: ptr(0.0), Beta: ptr(3.719), BetaCI: []float64{3.7, 3.74}}}
+		b := &Bundle{Doc: &Document{Title: "t", Method: c.method, Pf: ptr(1e-4), PfCI: c.ci, PfCoV: ptr(0.0), Beta: ptr(Index(3.719)), BetaCI: []Index{3.7, 3.74}}}
 		sum := SummaryText(b)
 		html, err := HTML(b)
 		if err != nil {

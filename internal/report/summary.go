@@ -42,9 +42,9 @@ func SummaryText(b *Bundle) string {
 		line("probability of failure", "%s", s)
 	}
 	if d.Beta != nil {
-		s := f2(*d.Beta)
+		s := BetaText(float64(*d.Beta))
 		if len(d.BetaCI) == 2 && sampled(&d) {
-			s += "  (95% interval " + intervalText(d.BetaCI, f2) + ")"
+			s += "  (95% interval " + betaIntervalText(d.BetaCI) + ")"
 		}
 		line("reliability index beta", "%s", s)
 	}

@@ -11,17 +11,17 @@ func TestSummaryTextVerdict(t *testing.T) {
 	for _, c := range []struct {
 		name   string
 		beta   float64
-		ci     []float64
+		ci     []Index
 		target float64
 		want   string
 	}{
-		{"met", 4.1, []float64{4.0, 4.2}, 3.8, "target beta              3.80: met"},
-		{"not met", 2.9, []float64{2.89, 2.92}, 3.8, "3.80: NOT met"},
-		{"straddles", 3.81, []float64{3.7, 3.95}, 3.8, "undecided at this sample size"},
-		{"straddles below", 3.75, []float64{3.7, 3.85}, 3.8, "undecided at this sample size"},
+		{"met", 4.1, []Index{4.0, 4.2}, 3.8, "target beta              3.80: met"},
+		{"not met", 2.9, []Index{2.89, 2.92}, 3.8, "3.80: NOT met"},
+		{"straddles", 3.81, []Index{3.7, 3.95}, 3.8, "undecided at this sample size"},
+		{"straddles below", 3.75, []Index{3.7, 3.85}, 3.8, "undecided at this sample size"},
 		{"no interval", 3.9, nil, 3.8, "3.80: met"},
 	} {
-		b := &Bundle{Doc: &Document{Title: "t", Beta: ptr(c.beta), BetaCI: c.ci, TargetBeta: ptr(c.target)}}
+		b := &Bundle{Doc: &Document{Title: "t", Beta: ptr(Index(c.beta)), BetaCI: c.ci, TargetBeta: ptr(c.target)}}
 		if got := SummaryText(b); !strings.Contains(got, c.want) {
 			t.Errorf("%s: summary lacks %q:\n%s", c.name, c.want, got)
 		}

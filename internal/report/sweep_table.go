@@ -60,8 +60,8 @@ func sweepCurvesTable(b *Bundle) *table {
 				continue
 			}
 			// The upper pf gives the lower β.
-			ci := []float64{sim.BetaFromPf(p.PfCI[1]), sim.BetaFromPf(p.PfCI[0])}
-			row = append(row, fixed(p.Beta, 2)+" ("+intervalText(ci, func(v float64) string { return fixed(v, 2) })+")")
+			ci := Indices(sim.BetaFromPf(p.PfCI[1]), sim.BetaFromPf(p.PfCI[0]))
+			row = append(row, BetaText(float64(p.Beta))+" ("+betaIntervalText(ci)+")")
 		}
 		t.Rows = append(t.Rows, row)
 	}

@@ -30,7 +30,7 @@ func seriesCSV(b *Bundle) ([]byte, error) {
 			name = "study"
 		}
 		for _, p := range s.Points {
-			row := []string{name, g(p.Value), g(p.Pf), g(p.PfCI[0]), g(p.PfCI[1]), g(p.Beta)}
+			row := []string{name, g(p.Value), g(p.Pf), g(p.PfCI[0]), g(p.PfCI[1]), csvIndex(p.Beta)}
 			if lam {
 				l, ok := b.SweepLambda[p.Value]
 				row = append(row, "")

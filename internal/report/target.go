@@ -64,8 +64,8 @@ type Confirmation struct {
 	Evaluations int64      `json:"evaluations"`
 	Pf          float64    `json:"pf"`
 	PfCI        [2]float64 `json:"pf_ci"`
-	Beta        float64    `json:"beta"`
-	BetaCI      [2]float64 `json:"beta_ci"`
+	Beta        Index      `json:"beta"`
+	BetaCI      [2]Index   `json:"beta_ci"`
 }
 
 // Measurement is an input updated from test results (Bayes' rule,
@@ -145,7 +145,7 @@ func targetRows(d *Document) []KV {
 			if !c.Confirmed {
 				label = "not confirmed by " + c.Method
 			}
-			rows = append(rows, KV{label, "β " + f2(c.Beta) + " (95% interval " + intervalText(c.BetaCI[:], f2) + "), " + thousands(c.Evaluations) + " evaluations"})
+			rows = append(rows, KV{label, "β " + BetaText(float64(c.Beta)) + " (95% interval " + betaIntervalText(c.BetaCI[:]) + "), " + thousands(c.Evaluations) + " evaluations"})
 		}
 	}
 	if t.LargestAddedLoad != nil {

@@ -112,9 +112,9 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		}
 	}
 	if d.Beta != nil {
-		v.Result = append(v.Result, KV{"reliability index β", f2(*d.Beta)})
+		v.Result = append(v.Result, KV{"reliability index β", BetaText(float64(*d.Beta))})
 		if len(d.BetaCI) == 2 && sampled(&d) {
-			v.Result = append(v.Result, KV{"95% interval of β", intervalText(d.BetaCI, f2)})
+			v.Result = append(v.Result, KV{"95% interval of β", betaIntervalText(d.BetaCI)})
 		}
 	}
 	if vd := targetVerdict(&d); vd != noTarget {
@@ -235,10 +235,10 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 
 	v.SweepCurves = sweepCurvesTable(b)
 	for _, p := range d.Sweep {
-		v.Sweep = append(v.Sweep, pointRow{sig(p.Value, 4), prob(p.Pf), intervalText(p.PfCI[:], prob), f2(p.Beta)})
+		v.Sweep = append(v.Sweep, pointRow{sig(p.Value, 4), prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta))})
 	}
 	for _, p := range d.Variants {
-		v.Variants = append(v.Variants, pointRow{p.Name, prob(p.Pf), intervalText(p.PfCI[:], prob), f2(p.Beta)})
+		v.Variants = append(v.Variants, pointRow{p.Name, prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta))})
 	}
 	v.Target, v.Measured = targetRows(&d), measuredRows(&d)
 	for k, u := range b.Updates {
