@@ -278,6 +278,9 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 	}
 	if len(c.values) > 0 {
 		fmt.Fprintf(&w, "  sweep              beta against %s\n", c.label)
+		if lamVaries(c.lam) {
+			fmt.Fprintf(&w, "                     (rel.sl.: the study's nominal relative slenderness, %s axis)\n", c.lamAxis)
+		}
 		if len(c.series) > 1 {
 			for k, s := range c.series {
 				fmt.Fprintf(&w, "    (%d) %s\n", k+1, s.Name)

@@ -23,37 +23,12 @@ func (md *Model) At(x []float64) (res column.Result, m column.Member, relSlender
 
 // CurveChart returns the capacity ratio N / (A fy) of the nominal member
 // against its relative slenderness as the length varies (model factor
-// excluded), at n points up to relative slenderness lamMax.
+// excluded), at n points up to relative slenderness lamMax, about the
+// governing axis (ReferenceCurves gives every axis).
 func (md *Model) CurveChart(n int, lamMax float64) (lam, ratio []float64) {
 	nom, err := md.Nominal()
 	if err != nil {
 		return nil, nil
 	}
-	v := md.nominalValues()
-	a := nom.Axis
-	lam0 := nom.RelSlenderness[a]
-	if !(lam0 > 0) {
-		return nil, nil
-	}
-	l0 := v[fLength]
-	for i := 1; i <= n; i++ {
-		target := lamMax * float64(i) / float64(n)
-		w := v
-		scale := target / lam0
-		w[fLength] = l0 * scale
-		// Imperfections written as L/n follow the length.
-		if q := md.Study.Bow; q != nil && q.perLength {
-			w[fBow] *= scale
-		}
-		if q := md.Study.Ecc; q != nil && q.perLength {
-			w[fEcc] *= scale
-		}
-		res, m, err := md.capacity(&w, a)
-		if err != nil {
-			continue
-		}
-		lam = append(lam, column.RelativeSlenderness(&m, a))
-		ratio = append(ratio, res.N/(m.Props.EffectiveArea()*m.Fy))
-	}
-	return lam, ratio
+	return md.curveAbout(nom, nom.Axis, n, lamMax, nil)
 }
