@@ -1,6 +1,7 @@
 package main
 
 import (
+	"fmt"
 	"os"
 	"runtime"
 	"strconv"
@@ -48,5 +49,33 @@ func TestWorkersCapped(t *testing.T) {
 	}
 	if maxWorkers() < 64 || maxWorkers() < 16*runtime.NumCPU() {
 		t.Errorf("cap %d below 64 or 16 per core", maxWorkers())
+	}
+}
+
+// TestManyCases: check reads thousands of variants (each case used to
+// decode the whole file again: 10,000 variants took 40 minutes), and
+// refuses more cases than the cap, naming it, with exit 2 (issue 10,
+// item 6).
+func TestManyCases(t *testing.T) {
+	variants := func(n int) string {
+		var b strings.Builder
+		b.WriteString(good)
+		for i := 0; i < n; i++ {
+			fmt.Fprintf(&b, "[[variant]]\nname = \"v%d\"\nset = { \"imperfection.bow\" = %d }\n", i, 1+i%5)
+		}
+		return b.String()
+	}
+	if code, _, errs := invoke(t, "check", writeStudy(t, variants(3000))); code != exitOK {
+		t.Errorf("3000 variants: exit %d, stderr %.300s", code, errs)
+	}
+	for name, c := range map[string]struct{ study, want string }{
+		"variants": {variants(10001), "study.toml:19: variant: 10001 variants are more than the 10000 cases a study may run"},
+		"values": {good + "[sweep]\nparameter = \"member.length\"\nvalues = [" + strings.Repeat("2000,", 700000) + "2000]\n",
+			"study.toml:21: sweep.values: 700001 values are more than the 10000 cases a study may run"},
+	} {
+		code, _, errs := invoke(t, "check", writeStudy(t, c.study))
+		if code != exitInput || !strings.Contains(errs, c.want) {
+			t.Errorf("%s: exit %d, stderr %.300q; want exit 2 and %q", name, code, errs, c.want)
+		}
 	}
 }

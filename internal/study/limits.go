@@ -19,6 +19,9 @@ const (
 	// MaxKeyPath is the longest key path, in bytes, tables and dotted
 	// parts included ("member.section.thickness_loss" has 29).
 	MaxKeyPath = 128
+	// MaxCases is the most runs a study may ask for beside its own: each
+	// variant, and the study and each variant at each swept value.
+	MaxCases = 10000
 	// maxProblems is the number of problems listed; the rest are counted.
 	maxProblems = 50
 )

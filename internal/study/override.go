@@ -78,15 +78,14 @@ func setPath(doc map[string]any, path string, value any) error {
 	return nil
 }
 
-// derive reads the study data again with the overrides applied, without
-// its [sweep] and [[variant]] tables. Problems with an overridden key are
-// reported at the override; others name the case.
-func derive(name string, data []byte, ovs []override) (*Study, []Problem) {
-	p := newParser(name, data)
+// derive reads the study again from its source with the overrides
+// applied, without its [sweep] and [[variant]] tables. Problems with an
+// overridden key are reported at the override; others name the case.
+func derive(name string, src *source, ovs []override) (*Study, []Problem) {
+	p := newParser(name, nil)
+	p.doc, p.lines = src.caseDoc(ovs)
 	var bad []string
 	p.edit = func(raw map[string]any) {
-		delete(raw, "sweep")
-		delete(raw, "variant")
 		bad = apply(raw, ovs)
 	}
 	p.relines = func(lines map[string]int) {

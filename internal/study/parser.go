@@ -30,6 +30,12 @@ type parser struct {
 	edit    func(raw map[string]any)
 	relines func(lines map[string]int)
 
+	// doc, when set, is the decoded document (with lines set): parse
+	// does not decode data (a case read from a source, see source.go).
+	doc map[string]any
+	// raw is the document parse decoded, for newSource.
+	raw map[string]any
+
 	// dropped counts the problems beyond maxProblems, not listed.
 	dropped int
 }
@@ -297,7 +303,10 @@ func (p *parser) perAxis(t *table, key string, o qopt) (qs [2]*Quantity, given b
 
 // parse reads the whole study.
 func (p *parser) parse() *Study {
-	var raw map[string]any
+	raw := p.doc
+	if raw != nil {
+		return p.parseDoc(raw)
+	}
 	if _, err := toml.Decode(p.data, &raw); err != nil {
 		var pe toml.ParseError
 		if errors.As(err, &pe) {
@@ -320,6 +329,12 @@ func (p *parser) parse() *Study {
 			return nil
 		}
 	}
+	p.raw = raw
+	return p.parseDoc(raw)
+}
+
+// parseDoc reads the decoded document raw, its lines in p.lines.
+func (p *parser) parseDoc(raw map[string]any) *Study {
 	if p.edit != nil {
 		p.edit(raw)
 		p.relines(p.lines)

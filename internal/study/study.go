@@ -75,8 +75,8 @@ type Study struct {
 	// reader should know; both are full sentences naming the key.
 	Defaults, Warnings []string
 
-	// data is the file's contents, read again by Derive.
-	data []byte
+	// src is the decoded file, read again by Derive.
+	src *source
 }
 
 // SectionSpec is the cross-section: its shape and its dimensions.
@@ -159,7 +159,7 @@ func Parse(name string, data []byte) (*Study, error) {
 	}
 	st.File = name
 	st.SHA256 = hex.EncodeToString(sum[:])
-	st.data = data
+	st.src = newSource(p.raw, p.lines)
 	// Every variant at every swept value is checked now, so a run does
 	// not stop half way (see sweep.go).
 	if probs := st.checkCases(); len(probs) > 0 {

@@ -128,6 +128,10 @@ func (p *parser) sweepList(t *table, sw *Sweep, o qopt) {
 		p.errorf(t.key("values"), "values is a non-empty list of numbers or quantities, e.g. [\"3 m\", \"4 m\"]")
 		return
 	}
+	if len(list) > MaxCases {
+		p.errorf(t.key("values"), "%d values are more than the %d cases a study may run: sweep fewer values", len(list), MaxCases)
+		return
+	}
 	for i, x := range list {
 		key := fmt.Sprintf("%s[%d]", t.key("values"), i)
 		pv, ok := p.scalar(key, x, o)
@@ -260,7 +264,7 @@ func (s *Study) Derive(v, i int) (*Study, error) {
 	if v < -1 || v >= len(s.Variants) || i < -1 || i >= 0 && (s.Sweep == nil || i >= len(s.Sweep.Values)) {
 		return nil, fmt.Errorf("study: no case variant %d, value %d", v, i)
 	}
-	st, probs := derive(s.File, s.data, s.overrides(v, i))
+	st, probs := derive(s.File, s.src, s.overrides(v, i))
 	if len(probs) > 0 {
 		return nil, &Error{Problems: probs}
 	}
@@ -278,22 +282,49 @@ func (s *Study) checkCases() []Problem {
 	if s.Sweep != nil {
 		n = len(s.Sweep.Values)
 	}
+	if cases := s.Cases(); cases > MaxCases {
+		key, line := "variant", s.src.parts["sweep"]["variant"]
+		if n > len(s.Variants) {
+			key, line = "sweep", s.src.parts["sweep"]["sweep"]
+		}
+		return []Problem{{File: s.File, Line: line, Key: key, Msg: fmt.Sprintf(
+			"%d cases (the study and %d variants, at %d swept values) are more than the %d a study may run: split it into several studies",
+			cases, len(s.Variants), n, MaxCases)}}
+	}
 	var out []Problem
 	seen := map[string]bool{}
+	more := 0
 	for v := -1; v < len(s.Variants); v++ {
 		for i := -1; i < n; i++ {
 			if v < 0 && i < 0 {
 				continue
 			}
-			_, probs := derive(s.File, s.data, s.overrides(v, i))
+			_, probs := derive(s.File, s.src, s.overrides(v, i))
 			for _, pr := range probs {
 				pr.File = s.File
 				if k := pr.String(); !seen[k] {
 					seen[k] = true
+					if len(out) >= maxProblems {
+						more++
+						continue
+					}
 					out = append(out, pr)
 				}
 			}
 		}
 	}
+	if more > 0 {
+		out = append(out, Problem{File: s.File, Msg: fmt.Sprintf("%d more problems not listed (the first %d are above: fix them first)", more, maxProblems)})
+	}
 	return out
+}
+
+// Cases is the number of runs after the study's own: each variant, and
+// the study and each variant at each swept value.
+func (s *Study) Cases() int {
+	n := 0
+	if s.Sweep != nil {
+		n = len(s.Sweep.Values)
+	}
+	return (len(s.Variants)+1)*(n+1) - 1
 }

@@ -29,6 +29,10 @@ func (p *parser) variants(top *table) {
 		p.errorf("variant", "write variants as [[variant]] tables with name and set")
 		return
 	}
+	if len(list) > MaxCases {
+		p.errorf("variant", "%d variants are more than the %d cases a study may run: split them into several studies", len(list), MaxCases)
+		return
+	}
 	names := map[string]bool{}
 	for i, m := range list {
 		t := &table{path: fmt.Sprintf("variant[%d]", i), m: m, used: map[string]bool{}}
