@@ -84,11 +84,20 @@ type Classification struct {
 //
 // Classify does not allocate. Invalid dimensions or fy return an error.
 func (s Section) Classify(fy float64) (Props, Classification, error) {
-	var cl Classification
 	p, err := s.Properties()
 	if err != nil {
-		return Props{}, cl, err
+		return Props{}, Classification{}, err
 	}
+	return s.ClassifyProps(p, fy)
+}
+
+// ClassifyProps is Classify for a caller that already holds the gross
+// properties p of s (from s.Properties): a sampler whose section is fixed
+// while the yield strength varies classifies each sample without
+// computing the section again. p must be the properties of s.
+func (s Section) ClassifyProps(p Props, fy float64) (Props, Classification, error) {
+	var cl Classification
+	p.AEff, p.WEff = 0, [2]float64{}
 	if !positive(fy) {
 		return Props{}, cl, ErrYield
 	}

@@ -31,7 +31,14 @@ func (md *Model) sectionProps(sec *column.Section, fy float64) (column.Props, er
 	if !md.classify {
 		return sec.Properties()
 	}
-	p, cl, err := sec.Classify(fy)
+	var p column.Props
+	var cl column.Classification
+	var err error
+	if md.secRandom {
+		p, cl, err = sec.Classify(fy)
+	} else {
+		p, cl, err = sec.ClassifyProps(md.gross, fy) // the section is fixed
+	}
 	if err != nil {
 		return p, err
 	}

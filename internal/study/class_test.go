@@ -79,37 +79,42 @@ func TestClass4EndToEnd(t *testing.T) {
 // eps) and the effective area follow each sample, and the limit state
 // stays free of allocation.
 func TestClassPerSample(t *testing.T) {
-	text := strings.Replace(shs400, "yield = 355", `yield = { dist = "lognormal", mean = 300, cov = 0.1 }`, 1)
-	text = strings.Replace(text, "thickness = 4", `thickness = { dist = "normal", mean = 4, sd = 0.1 }`, 1)
-	md, err := Build(parse(t, text))
-	if err != nil {
-		t.Fatal(err)
-	}
-	x := make([]float64, len(md.Sim.Vars))
-	out := make([]float64, 2)
-	for k, v := range md.Sim.Vars {
-		switch v.Name {
-		case "material.yield":
-			x[k] = 420
-		case "member.section.thickness":
-			x[k] = 3.9
-		case "loads.dead":
-			x[k] = 5e5
+	yield := strings.Replace(shs400, "yield = 355", `yield = { dist = "lognormal", mean = 300, cov = 0.1 }`, 1)
+	both := strings.Replace(yield, "thickness = 4", `thickness = { dist = "normal", mean = 4, sd = 0.1 }`, 1)
+	for _, c := range []struct {
+		name, text string
+		t          float64 // the sample's wall
+	}{{"yield random", yield, 4}, {"yield and wall random", both, 3.9}} {
+		md, err := Build(parse(t, c.text))
+		if err != nil {
+			t.Fatal(err)
 		}
-	}
-	md.g(x, out)
-	ro, ri := column.RHSCornerRadii(3.9, column.ColdFormed)
-	p, _, err := column.Section{Shape: column.ShapeRHS, Depth: 400, Width: 400, Thickness: 3.9, Radius: ro, InnerRadius: ri}.Classify(420)
-	if err != nil {
-		t.Fatal(err)
-	}
-	m := column.Member{Props: p, E: 210000, Fy: 420, Length: 6000, K: [2]float64{1, 1}, Alpha: [2]float64{0.49, 0.49}}
-	res, _ := column.Curve(&m, column.Both)
-	if math.Abs(out[OutCapacity]-res.N) > 1e-9*res.N || p.AEff == 0 {
-		t.Errorf("sample capacity %.1f, want %.1f on A_eff %.1f at fy 420", out[OutCapacity], res.N, p.AEff)
-	}
-	if n := testing.AllocsPerRun(50, func() { md.g(x, out) }); n != 0 {
-		t.Errorf("g allocates %g times per sample", n)
+		x := make([]float64, len(md.Sim.Vars))
+		out := make([]float64, 2)
+		for k, v := range md.Sim.Vars {
+			switch v.Name {
+			case "material.yield":
+				x[k] = 420
+			case "member.section.thickness":
+				x[k] = c.t
+			case "loads.dead":
+				x[k] = 5e5
+			}
+		}
+		md.g(x, out)
+		ro, ri := column.RHSCornerRadii(c.t, column.ColdFormed)
+		p, _, err := column.Section{Shape: column.ShapeRHS, Depth: 400, Width: 400, Thickness: c.t, Radius: ro, InnerRadius: ri}.Classify(420)
+		if err != nil {
+			t.Fatal(err)
+		}
+		m := column.Member{Props: p, E: 210000, Fy: 420, Length: 6000, K: [2]float64{1, 1}, Alpha: [2]float64{0.49, 0.49}}
+		res, _ := column.Curve(&m, column.Both)
+		if math.Abs(out[OutCapacity]-res.N) > 1e-9*res.N || p.AEff == 0 {
+			t.Errorf("%s: sample capacity %.1f, want %.1f on A_eff %.1f at fy 420", c.name, out[OutCapacity], res.N, p.AEff)
+		}
+		if n := testing.AllocsPerRun(50, func() { md.g(x, out) }); n != 0 {
+			t.Errorf("%s: g allocates %g times per sample", c.name, n)
+		}
 	}
 }
 

@@ -63,6 +63,7 @@ type Model struct {
 	// yield strength is random); shellOK: a class 4 CHS is accepted
 	// (see class.go).
 	radiusGiven, classify, propsDynamic, shellOK bool
+	gross                                        column.Props // of a fixed section
 	sec                                          column.Section
 	props                                        column.Props
 	springs                                      [2]bool
@@ -185,6 +186,7 @@ func Build(st *Study) (*Model, error) {
 		if err != nil {
 			return nil, err
 		}
+		md.gross = p
 		if !md.propsDynamic {
 			if p, err = md.sectionProps(&md.sec, md.base[fFy]); err != nil {
 				return nil, err
