@@ -297,7 +297,7 @@ func (r *results) slendernessChart() *report.SlendernessChart {
 	c.Curves = append(c.Curves, report.Curve{Name: "Euler", Model: "euler", X: ex, Y: ey})
 	n := r.l.nom
 	m := n.Member
-	c.Member = [2]float64{n.RelSlenderness[n.Axis], n.Capacity / n.ModelFactor / (m.Props.EffectiveArea() * m.Fy)}
+	c.Member = [2]float64{n.ModeSlenderness, n.Capacity / n.ModelFactor / (m.Props.EffectiveArea() * m.Fy)}
 	kept := r.res.Kept
 	limit := 500
 	if r.l.st.Model == "beam-column" {

@@ -77,6 +77,9 @@ func (l *loaded) baseDocument() *report.Document {
 			Axis:                a.String(),
 			SectionClass:        n.Class.Class,
 			EffectiveArea:       n.EffectiveArea,
+			CriticalLoad:        n.Critical,
+			Mode:                n.Mode.String(),
+			CapacityMode:        n.CapacityMode.String(),
 		},
 		Warnings: append([]string{}, st.Warnings...),
 	}
@@ -185,7 +188,8 @@ func (l *loaded) checkText() string {
 		}
 		fmt.Fprintf(&b, "  %-44s %12s %12s\n", q, r.Major, r.Minor)
 	}
-	fmt.Fprintf(&b, "\nCapacity model %s: the %s axis governs (%s), capacity %.1f kN", st.Model, n.Axis, n.Governs, n.Capacity/1e3)
+	b.WriteString(torsionText(n))
+	fmt.Fprintf(&b, "\nCapacity model %s: %s governs (%s), capacity %.1f kN", st.Model, governingText(n), n.Governs, n.Capacity/1e3)
 	if n.ModelFactor != 1 {
 		fmt.Fprintf(&b, " (model factor %.3g included)", n.ModelFactor)
 	}

@@ -1002,7 +1002,7 @@ sobol = { samples = 256 }
 			t.Errorf("%s keys %q, want %q", what, got, want)
 		}
 	}
-	same("nominal", keys(raw["nominal"]), "capacity", "euler_load", "slenderness", "relative_slenderness", "k", "axis", "section_class", "effective_area")
+	same("nominal", keys(raw["nominal"]), "capacity", "euler_load", "slenderness", "relative_slenderness", "k", "axis", "section_class", "effective_area", "critical_load", "mode", "capacity_mode")
 	same("capacity", keys(raw["capacity"]), "mean", "sd", "p01", "p05", "p50", "p95", "p99")
 	same("demand", keys(raw["demand"]), "mean", "sd", "p01", "p05", "p50", "p95", "p99")
 	same("form", keys(raw["form"]), "beta", "pf", "design_point", "importance", "converged", // converged: an extension (issue 10, item 16)

@@ -52,6 +52,12 @@ imposed = { dist = "gumbel", mean = "80 kN", cov = 0.3 }
 beta = 3.8
 `
 
+// sec replaces the rect section of good by the lines of another shape
+// (from line 6 on).
+func sec(lines string) string {
+	return strings.Replace(good, "shape = \"rect\"\ndepth = 100\nwidth = 50\n", lines, 1)
+}
+
 // edit replaces line n (1-based) of good by repl (which may hold several
 // lines, or none to delete it).
 func edit(n int, repl string) string {
@@ -127,6 +133,17 @@ func TestBadStudies(t *testing.T) {
 		{"beta and consequence", edit(18, "beta = 3.8\nconsequence = \"medium\""), []string{"study.toml:18: target.beta: give the target either as beta or by consequence"}},
 		{"cost without consequence", edit(18, `cost_of_safety = "normal"`), []string{"study.toml:18: target.cost_of_safety: cost_of_safety needs a consequence too"}},
 		{"unknown consequence", edit(18, `consequence = "CC2"`), []string{"study.toml:18: target.consequence: \"CC2\" is not a choice"}},
+		{"angle zero leg", sec("shape = \"angle\"\ndepth = 100\nwidth = 100\nthickness = 0\n"), []string{"study.toml:9: member.section.thickness: a length must be positive"}},
+		{"angle leg too thick", sec("shape = \"angle\"\ndepth = 100\nwidth = 10\nthickness = 10\n"), []string{"study.toml:5: member.section: section: leg thickness 10 mm leaves no leg"}},
+		{"angle flange", sec("shape = \"angle\"\ndepth = 100\nwidth = 100\nthickness = 10\nflange = 8\n"), []string{"study.toml:10: member.section.flange: shape angle does not take flange"}},
+		{"tee without web", sec("shape = \"tee\"\ndepth = 12\nwidth = 150\nflange = 12\nweb = 8\n"), []string{"study.toml:5: member.section: section: flange thickness 12 mm leaves no web"}},
+		{"channel missing web", sec("shape = \"channel\"\ndepth = 200\nwidth = 75\nflange = 11\n"), []string{"member.section.web: missing: shape channel needs depth, width, flange, web"}},
+		{"custom iw unit", sec("shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\nit = 1e5\niw = \"5 cm4\"\n"), []string{"study.toml:13: member.section.iw: \"5 cm4\" is a second moment of area but this key takes a warping constant"}},
+		{"custom iw without it", sec("shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\niw = 1e9\n"), []string{"study.toml:5: member.section: section: a warping constant or shear-centre position needs the torsion constant it too"}},
+		{"negative it", sec("shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\nit = -1\n"), []string{"study.toml:12: member.section.it:", "must be zero or positive"}},
+		{"negative shear modulus", edit(10, "modulus = 200000\nshear_modulus = -80000"), []string{"study.toml:11: material.shear_modulus: a stress must be positive"}},
+		{"beam-column on a twisting angle", strings.Replace(sec("shape = \"angle\"\ndepth = 100\nwidth = 100\nthickness = 10\n"), "length = 2000", "length = 600", 1) + "[capacity]\nmodel = \"beam-column\"\n",
+			[]string{"study.toml:21: capacity.model: the lowest elastic critical load is flexural-torsional buckling", "use model \"curve\""}},
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			code, out, errs := invoke(t, "check", writeStudy(t, c.study))

@@ -16,8 +16,8 @@ func (r *results) summary(dir string, files []string) string {
 	res := r.res
 	fmt.Fprintf(&w, "%s\n", d.Title)
 	n := r.l.nom
-	fmt.Fprintf(&w, "  nominal capacity   %.1f kN (%s axis, %s), demand at mean loads %.1f kN, utilisation %.2f\n",
-		n.Capacity/1e3, n.Axis, n.Governs, n.Demand/1e3, n.Utilisation)
+	fmt.Fprintf(&w, "  nominal capacity   %.1f kN (%s, %s), demand at mean loads %.1f kN, utilisation %.2f\n",
+		n.Capacity/1e3, governingText(n), n.Governs, n.Demand/1e3, n.Utilisation)
 	if res.Method == sim.FORMMethod {
 		// A first-order approximation: no sampling, so no interval.
 		fmt.Fprintf(&w, "  failure prob. pf   %s   (first-order approximation: no sampling interval)\n", pfText(res.Pf))

@@ -363,7 +363,7 @@ func relSlenderness(st *study.Study, i int) float64 {
 	if err != nil {
 		return math.NaN()
 	}
-	return n.RelSlenderness[n.Axis]
+	return n.ModeSlenderness
 }
 
 // casesCheckText lists the sweep and the variants for check, with the

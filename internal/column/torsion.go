@@ -133,10 +133,10 @@ func cubicRoot(n0, n1, nt, q0, q1 float64) float64 {
 
 // CriticalLoad returns the governing (lowest) elastic critical load of the
 // member over flexural buckling about the axes that axis names (Major,
-// Minor or Both) and, when Props.It is not zero, the modes that twist
-// (TwistingLoad), with its mode. A tie between the flexural axes reports
-// the minor one; a twisting mode wins a tie with a flexural one. The
-// member is not checked (see Member.Validate).
+// Minor or Both) and, with Both and Props.It not zero, the modes that
+// twist (TwistingLoad), with its mode. A tie between the flexural axes
+// reports the minor one; a twisting mode wins a tie with a flexural one.
+// The member is not checked (see Member.Validate).
 func CriticalLoad(m *Member, axis Axis) (float64, Mode) {
 	n, mode := math.Inf(1), ModeFlexuralMinor
 	for a := Major; a <= Minor; a++ {
@@ -146,6 +146,9 @@ func CriticalLoad(m *Member, axis Axis) (float64, Mode) {
 		if e := Euler(m, a); e <= n {
 			n, mode = e, flexuralMode(a)
 		}
+	}
+	if axis != Both {
+		return n, mode
 	}
 	if nt, tm := TwistingLoad(m); nt <= n {
 		n, mode = nt, tm

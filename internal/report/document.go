@@ -70,6 +70,15 @@ type Nominal struct {
 	// 1993-1-5 4.4), else the area.
 	SectionClass  int     `json:"section_class,omitempty"`
 	EffectiveArea float64 `json:"effective_area"`
+	// CriticalLoad is the governing elastic critical load (N) over
+	// flexure about the checked axes and, with both axes checked,
+	// torsional and flexural-torsional buckling; Mode names its mode
+	// (flexural-major, flexural-minor, torsional, flexural-torsional).
+	// EulerLoad stays the flexural load of Axis. CapacityMode is the mode
+	// of the governing capacity.
+	CriticalLoad float64 `json:"critical_load"`
+	Mode         string  `json:"mode"`
+	CapacityMode string  `json:"capacity_mode"`
 }
 
 // Summary describes the sampled distribution of a quantity.

@@ -157,6 +157,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		v.Nominal = []KV{
 			{"nominal capacity", kN(n.Capacity)},
 			{"Euler load", kN(n.EulerLoad)},
+			{"elastic critical load", kN(n.CriticalLoad) + " (" + n.Mode + ")"},
 			{"slenderness KL/r", sig(n.Slenderness, 4)},
 			{"relative slenderness", fixed(n.RelativeSlenderness, 3)},
 			{"effective length factor K", fixed(n.K, 3)},

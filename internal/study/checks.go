@@ -12,7 +12,8 @@ import (
 )
 
 func shapeOf(i int) column.Shape {
-	return []column.Shape{column.ShapeI, column.ShapeRHS, column.ShapeCHS, column.ShapeRect, column.ShapeRound, column.ShapeCustom}[i]
+	return []column.Shape{column.ShapeI, column.ShapeRHS, column.ShapeCHS, column.ShapeRect, column.ShapeRound, column.ShapeCustom,
+		column.ShapeAngle, column.ShapeChannel, column.ShapeTee}[i]
 }
 
 func methodOf(s string) sim.Method { return sim.Method(s) }
@@ -305,6 +306,14 @@ func sectionField(sec *column.Section, key string) *float64 {
 		return &sec.ThicknessLoss
 	case "radius":
 		return &sec.Radius
+	case "it":
+		return &sec.It
+	case "iw":
+		return &sec.Iw
+	case "y0":
+		return &sec.ShearCentre[column.Major]
+	case "z0":
+		return &sec.ShearCentre[column.Minor]
 	}
 	panic("study: unknown section key " + key)
 }

@@ -24,7 +24,7 @@ func WriteKeyHelp(w io.Writer) error {
 		}
 	}
 	b.WriteString("\nUnits accepted with a number (inside the program: N, mm, MPa):\n")
-	for d := Length; d <= SecondMoment; d++ {
+	for d := Length; d <= Warping; d++ {
 		if d == Moment {
 			continue // moments are read only as springs (per radian)
 		}

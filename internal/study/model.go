@@ -26,11 +26,13 @@ const (
 	fBot0
 	fBot1
 	fLoads // sum of the loads
+	fG     // shear modulus (0: E / 2.6)
 	fSec0  // section dimensions in the order of secKeys
 )
 
 // secKeys are the section dimensions in field order.
-var secKeys = [...]string{"depth", "width", "flange", "web", "root", "thickness", "diameter", "area", "i_major", "i_minor", "c_major", "c_minor", "thickness_loss", "radius"}
+var secKeys = [...]string{"depth", "width", "flange", "web", "root", "thickness", "diameter", "area", "i_major", "i_minor", "c_major", "c_minor", "thickness_loss",
+	"radius", "it", "iw", "y0", "z0"}
 
 const nFields = fSec0 + len(secKeys)
 
@@ -96,6 +98,7 @@ func targets(st *Study) map[*Quantity][]int {
 	}
 	add(st.Length, fLength)
 	add(st.Modulus, fE)
+	add(st.Shear, fG)
 	add(st.Yield, fFy)
 	add(st.Bow, fBow)
 	add(st.Ecc, fEcc)
@@ -308,7 +311,7 @@ func (md *Model) eval(v *values) (capacity, demand float64) {
 
 // member assembles the column member of one set of inputs.
 func (md *Model) member(v *values) (column.Member, column.Section, error) {
-	m := column.Member{E: v[fE], Fy: v[fFy], Length: v[fLength], Bow: v[fBow], Ecc: v[fEcc]}
+	m := column.Member{E: v[fE], G: v[fG], Fy: v[fFy], Length: v[fLength], Bow: v[fBow], Ecc: v[fEcc]}
 	if md.relBow {
 		m.Bow *= m.Length
 	}
@@ -385,6 +388,14 @@ func sectionPtr(s *column.Section, i int) *float64 {
 		return &s.ThicknessLoss
 	case 13:
 		return &s.Radius
+	case 14:
+		return &s.It
+	case 15:
+		return &s.Iw
+	case 16:
+		return &s.ShearCentre[column.Major]
+	case 17:
+		return &s.ShearCentre[column.Minor]
 	}
 	return nil
 }

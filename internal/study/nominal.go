@@ -33,6 +33,17 @@ type Nominal struct {
 	// a class 4 section (EN 1993-1-5 4.4), else A.
 	Class         column.Classification
 	EffectiveArea float64
+	// Critical is the governing elastic critical load over the flexural
+	// modes of the checked axes and, with axis both, the modes that twist
+	// the section; Mode is its mode. Twisting is the lowest critical load
+	// of the modes that twist (+Inf when the torsion constant is unknown)
+	// and TwistingMode that mode.
+	Critical, Twisting float64
+	Mode, TwistingMode column.Mode
+	// CapacityMode is the buckling mode of the governing capacity and
+	// ModeSlenderness its relative slenderness sqrt(A fy / N_cr).
+	CapacityMode    column.Mode
+	ModeSlenderness float64
 }
 
 // Nominal evaluates the model at nominal values.
@@ -68,7 +79,11 @@ func (md *Model) Nominal() (*Nominal, error) {
 		// The weaker axis governs; a tie reports minor.
 		if n.Governs == "" || n.AxisCapacity[a] <= n.Capacity {
 			n.Capacity, n.Axis, n.Governs = n.AxisCapacity[a], a, res.Governs
+			n.CapacityMode, n.ModeSlenderness = res.Mode, n.RelSlenderness[a]
 		}
+	}
+	if err := md.nominalTwisting(n, &m); err != nil {
+		return nil, err
 	}
 	if n.Capacity > 0 {
 		n.Utilisation = n.Demand / n.Capacity

@@ -413,6 +413,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	if len(p.probs) == 0 {
 		p.checkClass()  // class.go
 		p.tableCurves() // curvechoice.go
+		p.twistingNotes()
 	}
 	return st
 }
@@ -540,12 +541,15 @@ var sectionKeys = map[string]struct {
 	required []string
 	optional []string
 }{
-	"I":      {0, []string{"depth", "width", "flange", "web"}, []string{"root", "thickness_loss"}},
-	"RHS":    {1, []string{"depth", "width", "thickness"}, []string{"radius", "thickness_loss"}},
-	"CHS":    {2, []string{"diameter", "thickness"}, []string{"thickness_loss"}},
-	"rect":   {3, []string{"depth", "width"}, []string{"thickness_loss"}},
-	"round":  {4, []string{"diameter"}, []string{"thickness_loss"}},
-	"custom": {5, []string{"area", "i_major", "i_minor", "c_major", "c_minor"}, nil},
+	"I":       {0, []string{"depth", "width", "flange", "web"}, []string{"root", "thickness_loss"}},
+	"RHS":     {1, []string{"depth", "width", "thickness"}, []string{"radius", "thickness_loss"}},
+	"CHS":     {2, []string{"diameter", "thickness"}, []string{"thickness_loss"}},
+	"rect":    {3, []string{"depth", "width"}, []string{"thickness_loss"}},
+	"round":   {4, []string{"diameter"}, []string{"thickness_loss"}},
+	"custom":  {5, []string{"area", "i_major", "i_minor", "c_major", "c_minor"}, []string{"it", "iw", "y0", "z0"}},
+	"angle":   {6, []string{"depth", "width", "thickness"}, []string{"root", "thickness_loss"}},
+	"channel": {7, []string{"depth", "width", "flange", "web"}, []string{"thickness_loss"}},
+	"tee":     {8, []string{"depth", "width", "flange", "web"}, []string{"thickness_loss"}},
 }
 
 var sectionDims = map[string]qopt{
@@ -557,6 +561,8 @@ var sectionDims = map[string]qopt{
 	"c_major": {dim: Length, need: positive}, "c_minor": {dim: Length, need: positive},
 	"thickness_loss": {dim: Length, need: nonNegative},
 	"radius":         {dim: Length, need: nonNegative},
+	"it":             {dim: SecondMoment, need: nonNegative}, "iw": {dim: Warping, need: nonNegative},
+	"y0": {dim: Length}, "z0": {dim: Length},
 }
 
 func (p *parser) section(member *table) {
@@ -652,6 +658,7 @@ func (p *parser) material(top *table) {
 			p.required(t, "yield", "the yield strength, e.g. yield = \"275 MPa\"")
 		}
 	}
+	p.st.Shear = p.q(t, "shear_modulus", o)
 	p.unknown(t)
 }
 

@@ -24,10 +24,13 @@ type Study struct {
 	// Quantities lists every numeric input in the order of the file.
 	Quantities []*Quantity
 
-	Length   *Quantity
-	Section  SectionSpec
-	Modulus  *Quantity
-	Yield    *Quantity
+	Length  *Quantity
+	Section SectionSpec
+	Modulus *Quantity
+	Yield   *Quantity
+	// Shear is material.shear_modulus; nil takes E / (2 (1 + 0.3)) per
+	// sample.
+	Shear    *Quantity
 	Ends     [2]EndSpec // indexed by column.Major, column.Minor
 	Bow, Ecc *Quantity  // nil when not given
 	// Capacity model.

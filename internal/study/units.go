@@ -22,6 +22,7 @@ const (
 	Spring       // rotational stiffness, N*mm/rad
 	Area         // mm^2
 	SecondMoment // mm^4
+	Warping      // warping constant, mm^6
 )
 
 // String names the dimension for messages.
@@ -43,6 +44,8 @@ func (d Dim) String() string {
 		return "an area"
 	case SecondMoment:
 		return "a second moment of area"
+	case Warping:
+		return "a warping constant"
 	}
 	return "dim(?)"
 }
@@ -86,6 +89,9 @@ var units = map[string]unitDef{
 
 	"mm4": {SecondMoment, 1}, "cm4": {SecondMoment, 1e4},
 	"m4": {SecondMoment, 1e12}, "in4": {SecondMoment, inch * inch * inch * inch},
+
+	"mm6": {Warping, 1}, "cm6": {Warping, 1e6}, "m6": {Warping, 1e18},
+	"in6": {Warping, inch * inch * inch * inch * inch * inch},
 }
 
 func init() {
@@ -99,6 +105,8 @@ func init() {
 			units[strings.TrimSuffix(name, "2")+"^2"] = u
 		case SecondMoment:
 			units[strings.TrimSuffix(name, "4")+"^4"] = u
+		case Warping:
+			units[strings.TrimSuffix(name, "6")+"^6"] = u
 		}
 	}
 }
@@ -112,6 +120,7 @@ var unitOrder = []string{
 	"N*mm/rad", "N*m/rad", "kN*mm/rad", "kN*m/rad", "lbf*in/rad", "lbf*ft/rad", "kip*in/rad", "kip*ft/rad",
 	"mm2", "cm2", "m2", "in2",
 	"mm4", "cm4", "m4", "in4",
+	"mm6", "cm6", "m6", "in6",
 }
 
 // unitsOf returns the accepted units of dimension d for messages.
@@ -128,8 +137,8 @@ func unitsOf(d Dim) string {
 // System is a unit system of bare numbers in a study.
 type System struct {
 	Name   string
-	factor [SecondMoment + 1]float64
-	unit   [SecondMoment + 1]string
+	factor [Warping + 1]float64
+	unit   [Warping + 1]string
 }
 
 func newSystem(name string, names ...string) System {
@@ -145,9 +154,9 @@ func newSystem(name string, names ...string) System {
 
 // The unit systems of the "units" key.
 var systems = map[string]System{
-	"N-mm":   newSystem("N-mm", "mm", "N", "MPa", "N*mm", "N*mm/rad", "mm2", "mm4"),
-	"kN-m":   newSystem("kN-m", "m", "kN", "kPa", "kN*m", "kN*m/rad", "m2", "m4"),
-	"kip-in": newSystem("kip-in", "in", "kip", "ksi", "kip*in", "kip*in/rad", "in2", "in4"),
+	"N-mm":   newSystem("N-mm", "mm", "N", "MPa", "N*mm", "N*mm/rad", "mm2", "mm4", "mm6"),
+	"kN-m":   newSystem("kN-m", "m", "kN", "kPa", "kN*m", "kN*m/rad", "m2", "m4", "m6"),
+	"kip-in": newSystem("kip-in", "in", "kip", "ksi", "kip*in", "kip*in/rad", "in2", "in4", "in6"),
 }
 
 // Unit returns the unit of bare numbers of dimension d ("" if none).

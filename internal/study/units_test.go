@@ -64,6 +64,9 @@ func TestConvert(t *testing.T) {
 		{"1 in4", SecondMoment, nmm, 416231.4256},
 		{"1 m4", SecondMoment, nmm, 1e12},
 		{"1 mm^4", SecondMoment, nmm, 1},
+		{"125.9e3 cm6", Warping, nmm, 1.259e11},    // 1 cm^6 = 10^6 mm^6
+		{"1 in6", Warping, nmm, 268535866.5400959}, // 25.4^6
+		{"2 m^6", Warping, nmm, 2e18},
 		{"740", SecondMoment, kipin, 740 * 416231.4256},
 		{"0.03", Dimensionless, knm, 0.03},
 	} {
