@@ -46,7 +46,8 @@ func ParseFabrication(name string) (Fabrication, error) {
 // Fabrications returns the fabrications a shape can have, the first being
 // the default strutrisk takes when none is stated (the more severe rows of
 // EN 1993-1-1 Table 6.2: welded for an I section, cold-formed for hollow
-// sections, hot-rolled for solid bars). A custom section has none.
+// sections, hot-rolled for solid bars, angles, channels and tees). A custom
+// section has none.
 func Fabrications(s Shape) []Fabrication {
 	switch s {
 	case ShapeI:
@@ -55,7 +56,7 @@ func Fabrications(s Shape) []Fabrication {
 		return []Fabrication{ColdFormed, HotFinished, Welded}
 	case ShapeCHS:
 		return []Fabrication{ColdFormed, HotFinished}
-	case ShapeRect, ShapeRound:
+	case ShapeRect, ShapeRound, ShapeAngle, ShapeChannel, ShapeTee:
 		return []Fabrication{HotRolled}
 	}
 	return nil

@@ -32,7 +32,8 @@ const S460Yield = 440
 //   - welded box: b in general, c with thick welds and b/tf < 30,
 //     h/tw < 30; the weld size is not known here, so c applies whenever
 //     both ratios are below 30;
-//   - solid sections: c.
+//   - solid sections: c;
+//   - L-sections: b; U- and T-sections: c (any grade).
 //
 // y-y is the axis about which bending stresses the depth of an I section
 // (its major axis unless the flanges are wider than the depth makes the
@@ -72,6 +73,10 @@ func BucklingCurve(s Section, fab Fabrication, fyk float64, axis Axis) (curve, r
 		return "b", "welded box", nil
 	case ShapeRect, ShapeRound:
 		return "c", "solid section", nil
+	case ShapeAngle:
+		return "b", "L-section", nil
+	case ShapeChannel, ShapeTee:
+		return "c", "U- or T-section", nil
 	}
 	return "", "", errors.New("column: a custom section has no row in EN 1993-1-1 Table 6.2: give capacity.curve")
 }

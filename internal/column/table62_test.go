@@ -44,6 +44,11 @@ func TestBucklingCurveTable62(t *testing.T) {
 		{"CHS hot-finished", chs, HotFinished, 355, "a", "a"},
 		{"CHS cold-formed", chs, ColdFormed, 355, "c", "c"},
 		{"solid", bar, HotRolled, 235, "c", "c"},
+		// L-sections b; U-, T- and solid sections c, any grade (same table).
+		{"angle", Section{Shape: ShapeAngle, Depth: 100, Width: 100, Thickness: 10}, HotRolled, 355, "b", "b"},
+		{"angle, S460", Section{Shape: ShapeAngle, Depth: 150, Width: 90, Thickness: 10}, HotRolled, 460, "b", "b"},
+		{"channel", Section{Shape: ShapeChannel, Depth: 200, Width: 75, Flange: 11.5, Web: 8.5}, HotRolled, 355, "c", "c"},
+		{"tee", Section{Shape: ShapeTee, Depth: 150, Width: 150, Flange: 12, Web: 8}, HotRolled, 460, "c", "c"},
 	}
 	for _, tt := range tests {
 		for a, want := range []string{tt.major, tt.min} {
