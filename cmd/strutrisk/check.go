@@ -5,6 +5,8 @@ import (
 	"flag"
 	"fmt"
 	"io"
+
+	"strutrisk/internal/outdir"
 )
 
 const checkHelp = `Usage: strutrisk check STUDY.toml [--json]
@@ -37,6 +39,10 @@ func checkCmd(args []string, stdout, stderr io.Writer) int {
 	l, code := load(pos[0], stderr)
 	if code != exitOK {
 		return code
+	}
+	if _, err := outdir.Resolve(outdir.Request{StudyFile: pos[0], Dir: l.st.Output.Dir}); err != nil {
+		// Not a problem of the study itself: --out can stand in for it.
+		l.st.Warnings = append(l.st.Warnings, fmt.Sprintf("output.dir (line %d): %v; `strutrisk run` refuses it unless --out is given", l.st.Output.DirLine, err))
 	}
 	if *asJSON {
 		out, err := json.MarshalIndent(l.baseDocument(), "", "  ")

@@ -245,3 +245,15 @@ func TestRunHostileText(t *testing.T) {
 		t.Errorf("sweep.csv does not neutralise the variant's name:\n%s", s)
 	}
 }
+
+// TestCheckOutputDir: check warns, naming key and line, of an [output] dir
+// that run would refuse (--out can stand in for it, so it is no error).
+func TestCheckOutputDir(t *testing.T) {
+	code, out, errs := invoke(t, "check", writeStudy(t, quick+"[output]\ndir = \"../../x\"\n"))
+	if code != 0 {
+		t.Fatalf("exit %d\n%s", code, errs)
+	}
+	if !strings.Contains(out, "output.dir (line 28): \"../../x\" leaves the study's folder") {
+		t.Errorf("check does not warn of the escaping dir:\n%s", out)
+	}
+}

@@ -128,7 +128,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	defer folder.Close()
 	dir := folder.Path
 
-	ctx, sigs, stop := withSignals(baseContext())
+	ctx, sigs, stop := withSignals(baseContext(), stderr)
 	defer stop()
 	bar := newProgress(stderr, !o.json)
 	settings.Progress = bar.update

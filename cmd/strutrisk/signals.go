@@ -2,6 +2,8 @@ package main
 
 import (
 	"context"
+	"fmt"
+	"io"
 	"os"
 	"os/signal"
 	"sync"
@@ -27,8 +29,9 @@ var signalHook func(ctx context.Context)
 
 // withSignals returns a context derived from parent that SIGINT and
 // SIGTERM cancel, the record of which came, and a function that removes
-// the handlers.
-func withSignals(parent context.Context) (context.Context, *interrupt, func()) {
+// the handlers. The first signal is told on stderr; after it the
+// handlers are removed, so a second one stops the process at once.
+func withSignals(parent context.Context, stderr io.Writer) (context.Context, *interrupt, func()) {
 	ctx, cancel := context.WithCancel(parent)
 	in := &interrupt{}
 	ch := make(chan os.Signal, 2)
@@ -37,9 +40,11 @@ func withSignals(parent context.Context) (context.Context, *interrupt, func()) {
 	go func() {
 		select {
 		case s := <-ch:
+			signal.Stop(ch)
 			in.mu.Lock()
 			in.sig = s
 			in.mu.Unlock()
+			fmt.Fprintf(stderr, "\nstrutrisk: %s: stopping; what has finished will be written (a second signal stops at once, writing nothing)\n", in.name())
 			cancel()
 		case <-done:
 		}
