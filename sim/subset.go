@@ -66,11 +66,18 @@ func subsetLevelSize(n int64) int {
 // estimate as median. N is s.Samples/6 clamped to [500, 10000] (a budget
 // of 50000 then reaches about 1e-6 with full levels); levels stop when the
 // next would exceed s.Samples evaluations (a warning then says Pf is only
-// bounded). TargetCoV is not used. Every chain and every block of level 0
-// draws from its own generator seeded from (seed, level, index), so the
-// result does not depend on the number of workers.
+// bounded). When the CoV of one run stays above s.TargetCoV, further
+// independent runs follow while the budget allows (subsetRepeat). Every
+// chain and every block of level 0 draws from its own generator seeded
+// from (seed, level, index), so the result does not depend on the number
+// of workers.
 func subsetSimulation(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, error) {
-	return subsetRun(ctx, modelSpace(m, t), s, 0)
+	sp := modelSpace(m, t)
+	first, err := subsetRun(ctx, sp, s, 0)
+	if err != nil {
+		return nil, err
+	}
+	return subsetRepeat(ctx, sp, s, first)
 }
 
 // ssWorker is the scratch memory of one goroutine.

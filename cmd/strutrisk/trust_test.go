@@ -184,3 +184,27 @@ func TestUnboundedBetaIsNeverAHugeNumber(t *testing.T) {
 		t.Errorf("the summary does not say beta is unbounded:\n%s", text)
 	}
 }
+
+// TestRareEventDemoHonoursTargetCoV is issue 10's fourth case: the
+// rare-event demo asks target_cov = 0.10 of subset simulation, whose one
+// run ends at about 0.12. The run must reach the target (by combining
+// independent runs) or warn that it did not.
+func TestRareEventDemoHonoursTargetCoV(t *testing.T) {
+	code, out, errs := invoke(t, "run", "../../studies/rare-event.toml", "--json", "--out", t.TempDir())
+	var d report.Document
+	if err := json.Unmarshal([]byte(out), &d); err != nil {
+		t.Fatalf("exit %d, no document: %v\n%s", code, err, errs)
+	}
+	if d.Method != "subset" || d.PfCoV == nil {
+		t.Fatalf("method %s, pf_cov %v", d.Method, d.PfCoV)
+	}
+	if *d.PfCoV <= 0.10 {
+		return
+	}
+	for _, w := range d.Warnings {
+		if strings.Contains(w, "above the target 0.1") {
+			return
+		}
+	}
+	t.Errorf("CoV %.3g above the study's target 0.10 without a warning: %q", *d.PfCoV, d.Warnings)
+}
