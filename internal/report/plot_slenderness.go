@@ -1,7 +1,9 @@
 package report
 
 import (
+	"math"
 	"strings"
+	"unicode/utf8"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
@@ -32,6 +34,10 @@ func slendernessFigure(b *Bundle) *figure {
 	p := newPlot("Capacity against relative slenderness", "relative slenderness λ (–)", "capacity / squash load N/Ny (–)")
 	addGrid(p, true)
 	drawn := 0
+	// occupied are the points drawn, names the legend's entries: the
+	// legend goes where it hides the fewest points.
+	var occupied plotter.XYs
+	var names []string
 	var cloud plotter.XYs
 	for _, c := range s.Cloud {
 		if finite(c[0]) && finite(c[1]) {
@@ -44,6 +50,7 @@ func slendernessFigure(b *Bundle) *figure {
 			sc.GlyphStyle = draw.GlyphStyle{Color: faded(colSafe, 0x66), Radius: vg.Points(1.3), Shape: draw.CircleGlyph{}}
 			p.Add(sc)
 			p.Legend.Add("sampled members", sc)
+			occupied, names = append(occupied, cloud...), append(names, "sampled members")
 			drawn++
 		}
 	}
@@ -84,6 +91,7 @@ func slendernessFigure(b *Bundle) *figure {
 			name = "capacity model"
 		}
 		p.Legend.Add(name, thumbs...)
+		occupied, names = append(occupied, xy...), append(names, name)
 		if c.Note != "" {
 			notes = append(notes, name+": "+c.Note+".")
 		}
@@ -95,6 +103,7 @@ func slendernessFigure(b *Bundle) *figure {
 			sc.GlyphStyle = draw.GlyphStyle{Color: colFailure, Radius: vg.Points(4.5), Shape: draw.CrossGlyph{}}
 			p.Add(sc)
 			p.Legend.Add("this member (nominal)", sc)
+			occupied, names = append(occupied, plotter.XY{X: m[0], Y: m[1]}), append(names, "this member (nominal)")
 			drawn++
 		}
 	}
@@ -102,12 +111,18 @@ func slendernessFigure(b *Bundle) *figure {
 		return nil
 	}
 	p.X.Min, p.Y.Min = 0, 0
-	// The curves fall from the top left: the bottom left is free.
-	p.Legend.Top, p.Legend.Left = false, true
-	p.Legend.XOffs, p.Legend.YOffs = vg.Points(8), vg.Points(6)
+	xmax, ymax, longest := 0.0, 0.0, 0
+	for _, q := range occupied {
+		xmax, ymax = math.Max(xmax, q.X), math.Max(ymax, q.Y)
+	}
+	for _, n := range names {
+		longest = max(longest, utf8.RuneCountInString(n))
+	}
+	w, h := 16*vg.Centimeter, 10*vg.Centimeter
+	placeLegend(p, occupied, len(names), longest, xmax, ymax, w, h)
 	caption := ""
 	if len(notes) > 0 {
 		caption = " " + strings.Join(notes, " ")
 	}
-	return &figure{Name: "slenderness", Caption: "Capacity as a fraction of the squash load, N/Ny, against relative slenderness λ (both dimensionless): the deterministic curve of each capacity model about each axis the study checks (the minor axis's marked with rings), each model in one colour and line style in every picture, the sampled members (cloud) and the nominal member (cross)." + caption, W: 16 * vg.Centimeter, H: 10 * vg.Centimeter, Plots: []*plot.Plot{p}}
+	return &figure{Name: "slenderness", Caption: "Capacity as a fraction of the squash load, N/Ny, against relative slenderness λ (both dimensionless): the deterministic curve of each capacity model about each axis the study checks (the minor axis's marked with rings), each model in one colour and line style in every picture, the sampled members (cloud) and the nominal member (cross)." + caption, W: w, H: h, Plots: []*plot.Plot{p}}
 }

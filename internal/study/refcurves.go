@@ -2,6 +2,7 @@ package study
 
 import (
 	"fmt"
+	"math"
 
 	"strutrisk/internal/column"
 )
@@ -64,7 +65,8 @@ type refKind struct {
 // ReferenceCurves returns the curves of the slenderness picture for the
 // nominal member as its length varies (model factor excluded), at n
 // points up to relative slenderness lamMax, about each axis the study
-// checks (named "..., minor axis" when there are two):
+// checks (named "..., minor axis" when there are two; a curve the same
+// about both is given once, about column.Both, named "..., both axes"):
 //   - the study's own model;
 //   - Perry-Robertson first yield with the study's nominal bow, when the
 //     study has a bow and its model is not perry-robertson;
@@ -77,22 +79,54 @@ func (md *Model) ReferenceCurves(n int, lamMax float64) []RefCurve {
 	if err != nil {
 		return nil
 	}
-	var curves []RefCurve
 	axes := md.axes()
-	for _, a := range axes {
-		suffix := ""
-		if len(axes) > 1 {
-			suffix = ", " + a.String() + " axis"
-		}
+	perAxis := make([][]RefCurve, len(axes))
+	for i, a := range axes {
 		for _, k := range md.refKinds(nom, a) {
-			c := RefCurve{Name: k.name + suffix, Model: k.model, Note: k.note, Axis: a}
+			c := RefCurve{Name: k.name, Model: k.model, Note: k.note, Axis: a}
 			c.X, c.Y = md.curveAbout(nom, a, n, lamMax, k.eval)
-			if len(c.X) > 0 {
-				curves = append(curves, c)
+			perAxis[i] = append(perAxis[i], c)
+		}
+	}
+	var curves []RefCurve
+	if len(axes) == 2 && len(perAxis[0]) == len(perAxis[1]) {
+		// A curve the same about both axes (a square or round section with
+		// one K and one curve) is drawn once.
+		for k := range perAxis[0] {
+			if c := perAxis[0][k]; sameCurve(c, perAxis[1][k]) {
+				c.Name += ", both axes"
+				c.Axis = column.Both
+				perAxis[0][k], perAxis[1][k] = c, RefCurve{}
 			}
 		}
 	}
+	for i, cs := range perAxis {
+		for _, c := range cs {
+			if len(c.X) == 0 {
+				continue
+			}
+			if len(axes) > 1 && c.Axis != column.Both {
+				c.Name += ", " + axes[i].String() + " axis"
+			}
+			curves = append(curves, c)
+		}
+	}
 	return curves
+}
+
+// sameCurve tells whether two curves have the same name and points (to
+// one part in 1e9).
+func sameCurve(a, b RefCurve) bool {
+	if a.Name != b.Name || len(a.X) != len(b.X) || len(a.Y) != len(b.Y) || len(a.X) == 0 {
+		return false
+	}
+	close := func(x, y float64) bool { return math.Abs(x-y) <= 1e-9*math.Max(1, math.Abs(y)) }
+	for i := range a.X {
+		if !close(a.X[i], b.X[i]) || !close(a.Y[i], b.Y[i]) {
+			return false
+		}
+	}
+	return true
 }
 
 // refKinds lists the curve families of the slenderness picture about a.
