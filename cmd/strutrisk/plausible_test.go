@@ -1,6 +1,8 @@
 package main
 
 import (
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 )
@@ -128,11 +130,15 @@ func TestRunInfiniteBeta(t *testing.T) {
 			"(inf: none of the 2000 evaluations failed; beta is only known to be above",
 			"warning            no failure in 2000 samples",
 		}, []string{"beta is -inf"}},
-		{"some fail", edit(15, `dead = { dist = "normal", mean = "250 kN", cov = 0.1 }`), nil, []string{"-inf:", "inf: none", "beta is -inf", "beta is +inf"}},
+		{"some fail", edit(15, `dead = { dist = "normal", mean = "250 kN", cov = 0.1 }`), nil, []string{"-inf:", "inf: none", "beta is -inf", "beta is +inf", "(beta inf:"}},
+		// A sweep case whose every sample fails: its table says what -inf means.
+		{"sweep case fails", edit(15, `dead = { dist = "normal", mean = "250 kN", cov = 0.1 }`) + "[sweep]\nparameter = \"loads.dead.mean\"\nvalues = [\"250 kN\", \"5000 kN\"]\n",
+			[]string{"5000000 -inf (unbounded)", "(beta inf: no sample of the case failed, beta is only bounded below; -inf: every sample failed, not a result to read before the inputs are checked)"}, []string{"beta is -inf"}},
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			p := writeStudy(t, c.study)
-			code, out, errs := invoke(t, "run", p, "--method", "monte-carlo", "--samples", "2000", "--out", t.TempDir())
+			dir := t.TempDir()
+			code, out, errs := invoke(t, "run", p, "--method", "monte-carlo", "--samples", "2000", "--out", dir)
 			if code != 0 {
 				t.Fatalf("run exit %d, stderr:\n%s", code, errs)
 			}
@@ -144,6 +150,20 @@ func TestRunInfiniteBeta(t *testing.T) {
 			for _, w := range c.absent {
 				if strings.Contains(out, w) {
 					t.Errorf("run output has %q:\n%s", w, out)
+				}
+			}
+			// The reports never write the largest float that stands for an
+			// infinite beta in results.json as a number.
+			for _, f := range []string{"report.html", "summary.md", "summary.txt"} {
+				b, err := os.ReadFile(filepath.Join(dir, f))
+				if err != nil {
+					t.Fatal(err)
+				}
+				if strings.Contains(string(b), "17976931348623") {
+					t.Errorf("%s prints an infinite beta as a number", f)
+				}
+				if strings.Contains(c.name, "sweep") && f != "summary.txt" && !strings.Contains(string(b), "-inf (unbounded)") {
+					t.Errorf("%s does not say what the -inf of the failing sweep case means", f)
 				}
 			}
 		})

@@ -261,6 +261,12 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 		return ""
 	}
 	var w strings.Builder
+	infinite := false // a beta printed as inf or -inf needs its statement
+	caseBeta := func(pt *report.Point) string {
+		b := caseBeta(pt)
+		infinite = infinite || strings.Contains(b, "inf")
+		return b
+	}
 	row := func(name string, pf float64, ci [2]float64, beta float64) {
 		pt := &report.Point{Pf: pf, Beta: report.Index(beta)}
 		fmt.Fprintf(&w, "    %-28s %10s  [%9s, %9s]  %6s\n", name, pfText(pf), pfText(ci[0]), pfText(ci[1]), caseBeta(pt))
@@ -318,6 +324,9 @@ func (c *cases) summary(st *study.Study, main *sim.Result) string {
 			}
 			w.WriteString("\n")
 		}
+	}
+	if infinite {
+		w.WriteString("    (beta inf: no sample of the case failed, beta is only bounded below; -inf: every sample failed, not a result to read before the inputs are checked)\n")
 	}
 	return w.String()
 }
