@@ -83,6 +83,7 @@ code{font-size:.9em}
 
 <section id="sensitivity">
 <h2>Sensitivity</h2>
+{{if .RankingNote}}<p>{{.RankingNote}}</p>{{end}}
 {{if .Tornado}}<h3 id="tornado">One at a time (tornado): {{.TornadoOutput}}</h3>
 <p>All inputs at their medians give {{.TornadoBase}}.</p>
 {{with .Picture "tornado"}}{{template "fig" .}}{{end}}

@@ -64,6 +64,9 @@ func Markdown(b *Bundle) string {
 	mdTable(&w, []string{"quantity", "major axis", "minor axis", "unit"}, rows)
 
 	w.WriteString("## Sensitivity\n\n")
+	if v.RankingNote != "" {
+		w.WriteString(mdText(v.RankingNote) + "\n\n")
+	}
 	if len(v.Tornado) > 0 {
 		fmt.Fprintf(&w, "### One at a time (tornado): %s\n\nAll inputs at their medians give %s.\n\n", mdText(v.TornadoOutput), v.TornadoBase)
 		rows = rows[:0]
