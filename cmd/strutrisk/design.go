@@ -13,7 +13,11 @@ import (
 // doubts (not converged) gives none.
 func (r *results) fillDesign(ff *report.FORM) {
 	f, st := r.form, r.l.st
-	if f == nil || !f.Converged || len(f.Points) == 0 {
+	if f == nil || len(f.Points) == 0 {
+		return
+	}
+	if !f.Converged {
+		ff.DesignNote = "No design values or partial factors: the FORM design-point search did not converge, so its direction alpha is not to be trusted."
 		return
 	}
 	p := f.Points[0]
