@@ -37,7 +37,7 @@ func designPointDoubt(f *FORMResult, err error) string {
 // warning say so; when too little budget is left, the flagged result is
 // returned with its status.
 func importanceChecked(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, error) {
-	f, ferr := FORM(m, nil)
+	f, ferr := FORMContext(ctx, m, nil)
 	var formEvals int64
 	if f != nil {
 		formEvals = int64(f.Evaluations)
@@ -62,8 +62,13 @@ func importanceChecked(ctx context.Context, m *Model, t *Transform, s *Settings)
 // evaluations. With less than minFallbackSamples left it returns flagged,
 // with its status set.
 func crudeFallback(ctx context.Context, m *Model, t *Transform, s *Settings, f *FORMResult, spent int64, flagged *Result, status Status, why string) (*Result, error) {
+	if ctx.Err() != nil {
+		res := interruptedResult(flagged.Method, spent)
+		res.FORM = f
+		return res, nil
+	}
 	left := s.Samples - spent
-	if left < minFallbackSamples || ctx.Err() != nil {
+	if left < minFallbackSamples {
 		flagged.FORM = f
 		flagged.flag(status, fmt.Sprintf("%s: %s cannot be trusted, and the %d evaluations left of the budget are too few for plain Monte Carlo", why, flagged.Method, max(left, 0)))
 		return flagged, nil

@@ -1,6 +1,7 @@
 package sim
 
 import (
+	"context"
 	"errors"
 	"fmt"
 	"math"
@@ -45,6 +46,13 @@ type FORMSettings struct {
 // it, for diagnosis only. The error is for a model that cannot be analysed
 // at all.
 func FORM(m *Model, s *FORMSettings) (*FORMResult, error) {
+	return FORMContext(context.Background(), m, s)
+}
+
+// FORMContext is FORM that stops promptly when ctx is done: no limit
+// state is evaluated after that, and the error wraps ctx.Err() (the
+// result, marked not converged, is the state at the stop).
+func FORMContext(ctx context.Context, m *Model, s *FORMSettings) (*FORMResult, error) {
 	if m == nil || m.G == nil {
 		return nil, errors.New("sim: FORM needs a Model with a limit state G")
 	}
@@ -52,7 +60,12 @@ func FORM(m *Model, s *FORMSettings) (*FORMResult, error) {
 	if err != nil {
 		return nil, err
 	}
-	res := formRun(modelSpace(m, t), s)
+	res := formRunContext(ctx, modelSpace(m, t), s)
+	if err := ctx.Err(); err != nil {
+		res.Converged = false
+		res.Status = "interrupted"
+		return res, fmt.Errorf("sim: FORM interrupted after %d evaluations: %w", res.Evaluations, err)
+	}
 	for i := range res.Points {
 		p := &res.Points[i]
 		p.X = make([]float64, t.Dim())
@@ -84,9 +97,14 @@ func formSettings(s *FORMSettings) FORMSettings {
 
 // formRun is FORM in standard normal space; the points' X are left nil.
 func formRun(sp *uSpace, s *FORMSettings) *FORMResult {
+	return formRunContext(context.Background(), sp, s)
+}
+
+// formRunContext is formRun that stops when ctx is done.
+func formRunContext(ctx context.Context, sp *uSpace, s *FORMSettings) *FORMResult {
 	set := formSettings(s)
 	n := sp.dim
-	f := &formSolver{dim: n, g: sp.newG(), maxIter: set.MaxIter, tol: set.Tol, gScale: 1, step: set.Step}
+	f := &formSolver{dim: n, g: sp.newG(), maxIter: set.MaxIter, tol: set.Tol, gScale: 1, step: set.Step, done: ctx.Done()}
 	origin := make([]float64, n)
 	g0 := f.eval(origin)
 	if math.IsNaN(g0) || math.IsInf(g0, 0) {
@@ -110,7 +128,7 @@ func formRun(sp *uSpace, s *FORMSettings) *FORMResult {
 		failed    int
 	)
 	maxTries := 2 + set.MaxPoints*12
-	for len(queue) > 0 && len(found) < set.MaxPoints && tries < maxTries {
+	for len(queue) > 0 && len(found) < set.MaxPoints && tries < maxTries && !f.stopped() {
 		start := queue[0]
 		queue = queue[1:]
 		tries++
@@ -149,6 +167,9 @@ func formRun(sp *uSpace, s *FORMSettings) *FORMResult {
 		}
 		found = append(found, r)
 		queue = append(queue, formRestarts(r, rng)...)
+	}
+	if first == nil { // stopped before the first search
+		return &FORMResult{Evaluations: f.evals, Status: "interrupted"}
 	}
 	onKink := false
 	if len(found) == 0 && kinkPoint != nil {

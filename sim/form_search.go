@@ -24,6 +24,10 @@ type formSolver struct {
 	// over from one search to the next.
 	step, noise float64
 	evals       int
+	// done, when not nil, is closed when the analysis is to stop: every
+	// later evaluation returns NaN without calling g, so that the search
+	// ends at once.
+	done <-chan struct{}
 }
 
 // formDefaultStep is the default relative finite-difference step and
@@ -55,8 +59,21 @@ type formSearch struct {
 
 // eval calls g and counts the call.
 func (f *formSolver) eval(u []float64) float64 {
+	if f.stopped() {
+		return math.NaN()
+	}
 	f.evals++
 	return f.g(u)
+}
+
+// stopped reports whether the analysis was asked to stop.
+func (f *formSolver) stopped() bool {
+	select {
+	case <-f.done:
+		return true
+	default:
+		return false
+	}
 }
 
 // gradient stores in grad the central finite-difference gradient of g at u,

@@ -129,7 +129,7 @@ func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
 	case ConditionalQMC:
 		res, err = conditionalQMC(ctx, m, t, &cfg)
 	case FORMMethod:
-		res, err = runFORM(m, &cfg)
+		res, err = runFORM(ctx, m, &cfg)
 	case Importance:
 		res, err = importanceChecked(ctx, m, t, &cfg)
 	case Subset:
@@ -160,9 +160,24 @@ func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
 	return res, nil
 }
 
+// interruptedResult is the result of a method stopped before it had an
+// estimate: pf unknown (NaN) within [0, 1], marked Incomplete.
+func interruptedResult(m Method, evals int64) *Result {
+	return &Result{Method: m, Evaluations: evals, Incomplete: true,
+		Pf: math.NaN(), PfCoV: math.Inf(1), PfCI: [2]float64{0, 1},
+		Beta: math.NaN(), BetaCI: [2]float64{math.Inf(-1), math.Inf(1)}}
+}
+
 // runFORM wraps a FORM analysis as a Result.
-func runFORM(m *Model, s *Settings) (*Result, error) {
-	f, err := FORM(m, nil)
+func runFORM(ctx context.Context, m *Model, s *Settings) (*Result, error) {
+	f, err := FORMContext(ctx, m, nil)
+	if ctx.Err() != nil {
+		res := interruptedResult(FORMMethod, 0)
+		if f != nil {
+			res.Evaluations = int64(f.Evaluations)
+		}
+		return res, nil
+	}
 	if err != nil {
 		return nil, err
 	}

@@ -49,7 +49,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	bar.stage("FORM")
 	r.form = res.FORM
 	if r.form == nil && len(m.Vars) > 0 {
-		r.form, r.formErr = sim.FORM(m, r.l.md.FORMSettings())
+		r.form, r.formErr = sim.FORMContext(ctx, m, r.l.md.FORMSettings())
 		if r.formErr != nil {
 			r.warnings = append(r.warnings, "form: "+r.formErr.Error())
 		}
@@ -59,7 +59,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	}
 	sens := l.st.Sensitivity
 	margin := l.md.MarginModel()
-	if sens.Tornado && len(m.Vars) > 0 {
+	if sens.Tornado && len(m.Vars) > 0 && ctx.Err() == nil {
 		bar.stage("tornado")
 		// FORM betas per bar, unless each evaluation is a numerical analysis.
 		withFORM := l.st.Model != "beam-column"
@@ -106,7 +106,7 @@ func (r *results) document() *report.Document {
 	d.Evaluations = &ev
 	pf, cov, beta := res.Pf, res.PfCoV, res.Beta
 	ib := report.Index(beta)
-	d.Pf, d.PfCoV, d.Beta = &pf, finitePtr(cov), &ib // null when unbounded
+	d.Pf, d.PfCoV, d.Beta = finitePtr(pf), finitePtr(cov), &ib // beta null when unbounded
 	d.PfCI = []float64{res.PfCI[0], res.PfCI[1]}
 	d.BetaCI = report.Indices(res.BetaCI[0], res.BetaCI[1])
 	d.Status = res.Status.String()

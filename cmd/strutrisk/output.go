@@ -70,6 +70,9 @@ func (r *results) summary(dir string, files []string) string {
 }
 
 func pfText(p float64) string {
+	if p != p {
+		return "unknown"
+	}
 	if p == 0 {
 		return "0"
 	}

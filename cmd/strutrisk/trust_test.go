@@ -1,6 +1,7 @@
 package main
 
 import (
+	"context"
 	"encoding/json"
 	"os"
 	"strings"
@@ -207,4 +208,29 @@ func TestRareEventDemoHonoursTargetCoV(t *testing.T) {
 		}
 	}
 	t.Errorf("CoV %.3g above the study's target 0.10 without a warning: %q", *d.PfCoV, d.Warnings)
+}
+
+// TestRunFORMInterrupted is issue 10's item 8 for FORM: a run whose
+// context is cancelled (Ctrl-C) before FORM starts must not run the
+// design-point search, nor the reserve search, and must exit 130 with no
+// verdict. Before FORM took a context it ran to the end (21 s for a
+// beam-column).
+func TestRunFORMInterrupted(t *testing.T) {
+	ctx, cancel := context.WithCancel(context.Background())
+	cancel()
+	baseContext = func() context.Context { return ctx }
+	defer func() { baseContext = context.Background }()
+	for _, method := range []string{"form", "importance", "auto"} {
+		code, out, errs := invoke(t, "run", writeStudy(t, stocky), "--out", t.TempDir(), "--method", method, "--json")
+		if code != exitInterrupted {
+			t.Errorf("%s: exit %d, want %d\n%s", method, code, exitInterrupted, errs)
+		}
+		var d report.Document
+		if err := json.Unmarshal([]byte(out), &d); err != nil {
+			t.Fatalf("%s: no document: %v\n%s", method, err, errs)
+		}
+		if d.Evaluations == nil || *d.Evaluations > 0 || d.MeetsTarget != nil {
+			t.Errorf("%s: evaluations %v, meets_target %v after a cancelled run", method, d.Evaluations, d.MeetsTarget)
+		}
+	}
 }

@@ -1,6 +1,7 @@
 package study
 
 import (
+	"context"
 	"errors"
 	"fmt"
 	"math"
@@ -39,7 +40,7 @@ const ReserveTol = 1e-4
 // study for the target reliability index target, by root finding on the
 // FORM index: beta(factor) and beta(added load) both fall as the load
 // grows. fs are passed to sim.FORM (nil: those of Model.FORMSettings).
-func (md *Model) Reserve(target float64, fs *sim.FORMSettings) (*Reserve, error) {
+func (md *Model) Reserve(ctx context.Context, target float64, fs *sim.FORMSettings) (*Reserve, error) {
 	st := md.Study
 	r := &Reserve{Target: target, On: st.ReserveOn, Added: math.NaN()}
 	if r.On == "" {
@@ -53,12 +54,12 @@ func (md *Model) Reserve(target float64, fs *sim.FORMSettings) (*Reserve, error)
 	}
 	calls := 0
 	var err error
-	r.Factor, r.FactorBeta, calls, err = md.FactorFor(target, fs)
+	r.Factor, r.FactorBeta, calls, err = md.FactorFor(ctx, target, fs)
 	r.FORMCalls += calls
 	if err != nil {
 		return nil, err // the caller says it is the reserve factor that failed
 	}
-	r.Added, calls, err = md.AddedFor(target, fs)
+	r.Added, calls, err = md.AddedFor(ctx, target, fs)
 	r.FORMCalls += calls
 	if err != nil {
 		r.Added, r.AddedErr = math.NaN(), fmt.Errorf("largest added load: %v", err)
@@ -71,12 +72,12 @@ func (md *Model) Reserve(target float64, fs *sim.FORMSettings) (*Reserve, error)
 // suit the capacity model (Model.FORMSettings). A search that does not
 // converge is tried once more with the finite-difference step of a noisy
 // model, numericalStep, before the root search is given up.
-func (md *Model) formBeta(factor, added float64, fs *sim.FORMSettings) (float64, error) {
+func (md *Model) formBeta(ctx context.Context, factor, added float64, fs *sim.FORMSettings) (float64, error) {
 	if fs == nil {
 		fs = md.FORMSettings()
 	}
 	m := md.Loaded(factor, added)
-	f, err := sim.FORM(m, fs)
+	f, err := sim.FORMContext(ctx, m, fs)
 	if err != nil {
 		return math.NaN(), err
 	}
@@ -86,7 +87,7 @@ func (md *Model) formBeta(factor, added float64, fs *sim.FORMSettings) (float64,
 			retry = *fs
 			retry.Step = numericalStep
 		}
-		if f2, err := sim.FORM(m, &retry); err == nil && f2.Converged {
+		if f2, err := sim.FORMContext(ctx, m, &retry); err == nil && f2.Converged {
 			return f2.Beta, nil
 		}
 	}
@@ -104,10 +105,10 @@ func (md *Model) formBeta(factor, added float64, fs *sim.FORMSettings) (float64,
 // reliability index equals beta, the index found there and the number of
 // FORM analyses used. The search is on the logarithm of the factor,
 // between 1e-3 and 1e3.
-func (md *Model) FactorFor(beta float64, fs *sim.FORMSettings) (factor, found float64, calls int, err error) {
+func (md *Model) FactorFor(ctx context.Context, beta float64, fs *sim.FORMSettings) (factor, found float64, calls int, err error) {
 	f := func(t float64) (float64, error) {
 		calls++
-		b, err := md.formBeta(math.Exp(t), 0, fs)
+		b, err := md.formBeta(ctx, math.Exp(t), 0, fs)
 		return b - beta, err
 	}
 	t, err := fallingRoot(f, 0, math.Ln2, math.Log(1e-3), math.Log(1e3))
@@ -120,7 +121,7 @@ func (md *Model) FactorFor(beta float64, fs *sim.FORMSettings) (factor, found fl
 	}
 	factor = math.Exp(t)
 	calls++
-	found, err = md.formBeta(factor, 0, fs)
+	found, err = md.formBeta(ctx, factor, 0, fs)
 	return factor, found, calls, err
 }
 
@@ -128,7 +129,7 @@ func (md *Model) FactorFor(beta float64, fs *sim.FORMSettings) (factor, found fl
 // study's loads, brings the FORM reliability index to beta (negative: the
 // load to take away), and the number of FORM analyses used. The search
 // runs from taking away the whole mean load to adding a thousand times it.
-func (md *Model) AddedFor(beta float64, fs *sim.FORMSettings) (added float64, calls int, err error) {
+func (md *Model) AddedFor(ctx context.Context, beta float64, fs *sim.FORMSettings) (added float64, calls int, err error) {
 	nv := md.nominalValues()
 	unit := math.Abs(nv[fLoads])
 	if unit == 0 {
@@ -136,7 +137,7 @@ func (md *Model) AddedFor(beta float64, fs *sim.FORMSettings) (added float64, ca
 	}
 	f := func(a float64) (float64, error) {
 		calls++
-		b, err := md.formBeta(1, a*unit, fs)
+		b, err := md.formBeta(ctx, 1, a*unit, fs)
 		return b - beta, err
 	}
 	a, err := fallingRoot(f, 0, 0.25, -1, 1e3)

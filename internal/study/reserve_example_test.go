@@ -1,6 +1,7 @@
 package study_test
 
 import (
+	"context"
 	"fmt"
 	"log"
 
@@ -40,7 +41,7 @@ beta = 3.8
 	if err != nil {
 		log.Fatal(err)
 	}
-	r, err := md.Reserve(st.Target, nil)
+	r, err := md.Reserve(context.Background(), st.Target, nil)
 	if err != nil {
 		log.Fatal(err)
 	}

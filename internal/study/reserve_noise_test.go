@@ -1,6 +1,7 @@
 package study
 
 import (
+	"context"
 	"math"
 	"strings"
 	"testing"
@@ -121,7 +122,7 @@ func TestReserveBeamColumnUltimate(t *testing.T) {
 		t.Log("the reserve search (a dozen FORM analyses) is checked without the race detector")
 		return
 	}
-	r, err := md.Reserve(3.8, md.FORMSettings())
+	r, err := md.Reserve(context.Background(), 3.8, md.FORMSettings())
 	if err != nil {
 		t.Fatal(err)
 	}
