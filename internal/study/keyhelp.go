@@ -31,6 +31,8 @@ func WriteKeyHelp(w io.Writer) error {
 		fmt.Fprintf(&b, "  %-24s %s\n", strings.TrimPrefix(strings.TrimPrefix(d.String(), "an "), "a "), unitsOf(d))
 	}
 	b.WriteString("Unit systems (units): N-mm, kN-m, kip-in; a bare number takes the system's unit.\n")
+	b.WriteString("\nMagnitudes a study may use (check refuses others; L/n needs n of 1 or more):\n")
+	b.WriteString(rangeHelp())
 	_, err := io.WriteString(w, b.String())
 	return err
 }

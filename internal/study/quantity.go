@@ -85,8 +85,17 @@ type pval struct {
 }
 
 // scalar reads one number written as a TOML number or a string, reporting
-// problems against path.
+// problems against path; its magnitude must be plausible (ranges.go).
 func (p *parser) scalar(path string, v any, o qopt) (pval, bool) {
+	pv, ok := p.scalarAny(path, v, o)
+	if ok && !p.inRange(path, pv, o) {
+		return pval{}, false
+	}
+	return pv, ok
+}
+
+// scalarAny reads one number of any finite size.
+func (p *parser) scalarAny(path string, v any, o qopt) (pval, bool) {
 	switch x := v.(type) {
 	case int64:
 		return pval{v: float64(x) * p.sys.Factor(o.dim)}, true
