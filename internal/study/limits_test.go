@@ -158,3 +158,13 @@ func TestProblemsCapped(t *testing.T) {
 		t.Errorf("%d problems, last %q; want %d listed and the rest counted", len(e.Problems), last, maxProblems)
 	}
 }
+
+// TestEveryDimHasARange: each dimension has a range of magnitudes
+// (ranges.go), so a new one is not read without bounds.
+func TestEveryDimHasARange(t *testing.T) {
+	for d := Dimensionless; d.String() != "dim(?)"; d++ {
+		if _, ok := magnitude[d]; !ok {
+			t.Errorf("dimension %s has no range in ranges.go", d)
+		}
+	}
+}

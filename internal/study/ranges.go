@@ -16,7 +16,7 @@ type span struct{ lo, hi float64 }
 // magnitude holds the range of each dimension. A plain number (K, a
 // model or effect factor, alpha, and distribution parameters such as cov
 // and shape) is at most 1000.
-var magnitude = [SecondMoment + 1]span{
+var magnitude = map[Dim]span{
 	Dimensionless: {1e-9, 1e6},
 	Length:        {1e-6, 1e8},
 	Force:         {1e-6, 1e12},
@@ -25,6 +25,17 @@ var magnitude = [SecondMoment + 1]span{
 	Spring:        {1e-6, 1e20},
 	Area:          {1e-12, 1e16},
 	SecondMoment:  {1e-24, 1e32},
+	Warping:       {1e-36, 1e48},
+}
+
+// rangeOf returns the range of dimension d; a dimension added without a
+// range here has none (every finite value), and TestEveryDimHasARange
+// says so.
+func rangeOf(d Dim) span {
+	if r, ok := magnitude[d]; ok {
+		return r
+	}
+	return span{0, math.MaxFloat64}
 }
 
 // maxFraction bounds a value written L/n: at most the member length.
@@ -44,7 +55,7 @@ func (p *parser) inRange(path string, pv pval, o qopt) bool {
 		}
 		return true
 	}
-	r := magnitude[o.dim]
+	r := rangeOf(o.dim)
 	if m >= r.lo && m <= r.hi {
 		return true
 	}
@@ -60,9 +71,12 @@ func (p *parser) inRange(path string, pv pval, o qopt) bool {
 // rangeHelp lists the ranges for the key help.
 func rangeHelp() string {
 	s := ""
-	for d := Dimensionless; d <= SecondMoment; d++ {
+	for d := Dimensionless; ; d++ {
 		if d == Moment {
 			continue
+		}
+		if _, ok := magnitude[d]; !ok {
+			break
 		}
 		unit := InternalUnit(d)
 		if unit != "" {
