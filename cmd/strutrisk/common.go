@@ -47,6 +47,9 @@ func load(path string, stderr io.Writer) (*loaded, int) {
 	}
 	// Valid but probably not meant (a unit, a digit): warnings.
 	st.Warnings = append(st.Warnings, md.Plausibility(nom)...)
+	// A model outside its ground (L/n with K != 1, residual stresses left
+	// out): warnings with the size of the effect.
+	st.Warnings = append(st.Warnings, md.Adequacy(nom)...)
 	return &loaded{st: st, md: md, nom: nom}, exitOK
 }
 

@@ -144,6 +144,18 @@ func TestBadStudies(t *testing.T) {
 		{"negative shear modulus", edit(10, "modulus = 200000\nshear_modulus = -80000"), []string{"study.toml:11: material.shear_modulus: a stress must be positive"}},
 		{"beam-column on a twisting angle", strings.Replace(sec("shape = \"angle\"\ndepth = 100\nwidth = 100\nthickness = 10\n"), "length = 2000", "length = 600", 1) + "[capacity]\nmodel = \"beam-column\"\n",
 			[]string{"study.toml:21: capacity.model: the lowest elastic critical load is flexural-torsional buckling", "use model \"curve\""}},
+		// Imperfections in the buckling mode, sway and the equivalent imperfection (lcr.go, imperfections.go).
+		{"Lcr/n outside imperfection", edit(3, `length = "Lcr/2"`), []string{"study.toml:3: member.length: \"Lcr/2\": the form Lcr/n is only for imperfections"}},
+		{"Lcr/0", edit(13, `bow = "Lcr/0"`), []string{"study.toml:13: imperfection.bow: \"Lcr/0\": write Lcr/n with a non-zero number n"}},
+		{"Lcr mixed", edit(13, `bow = { dist = "normal", mean = "Lcr/1000", sd = "1 mm" }`), []string{"study.toml:13: imperfection.bow: mixes Lcr/n with L/n or lengths with a unit"}},
+		{"measured bow not Lcr", edit(13, `bow = { dist = "lognormal", mean = "Lcr/1000", cov = 0.5 }`) + "[measurements]\nbow = { values = [\"3 mm\", \"2 mm\"], cov = 0.3 }\n", []string{"study.toml:20: measurements.bow.values[0]: imperfection.bow is written as Lcr/n", "write the measured bows as Lcr/n too"}},
+		{"sway on a braced member", edit(13, "bow = 2\nsway = \"1/200\""), []string{"study.toml:14: imperfection.sway: the member is braced about the axes checked (major (K = 1) and minor (K = 1))", "ends = \"fixed-free\""}},
+		{"sway not a fraction", edit(13, "bow = 2\nsway = \"1/0\""), []string{"study.toml:14: imperfection.sway: \"1/0\": write an angle as a fraction of two numbers"}},
+		{"sway with the curve", strings.Replace(edit(13, "sway = \"1/200\""), `ends = "pinned-pinned"`, `ends = "fixed-free"`, 1) + "[capacity]\nmodel = \"curve\"\ncurve = \"c\"\n", []string{"study.toml:13: imperfection.sway: a sway imperfection needs a first-yield model"}},
+		{"imperfection choice", good + "[capacity]\nimperfection = \"equivalant\"\n", []string{"study.toml:20: capacity.imperfection: \"equivalant\" is not a choice; did you mean \"equivalent\"?"}},
+		{"equivalent with the curve", good + "[capacity]\nmodel = \"curve\"\ncurve = \"b\"\nimperfection = \"equivalent\"\n", []string{"study.toml:22: capacity.imperfection: the buckling curve already carries its equivalent imperfection"}},
+		{"equivalent ultimate", good + "[capacity]\nmodel = \"beam-column\"\nlimit = \"ultimate\"\nimperfection = \"equivalent\"\n", []string{"study.toml:22: capacity.imperfection: the equivalent imperfection stands for the bow and the residual stresses in a first-yield check"}},
+		{"equivalent custom", strings.Replace(edit(13, ``), "shape = \"rect\"\ndepth = 100\nwidth = 50\n", "shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\n", 1) + "[capacity]\nimperfection = \"equivalent\"\n", []string{"capacity.curve: missing: capacity.imperfection = \"equivalent\" needs the buckling curve of a custom section"}},
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			code, out, errs := invoke(t, "check", writeStudy(t, c.study))

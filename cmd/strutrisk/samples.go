@@ -19,7 +19,7 @@ func (r *results) samplesInUnits() *sim.Samples {
 	units := make(map[string]string, len(r.l.st.Quantities))
 	for _, q := range r.l.st.Quantities {
 		u := q.Unit()
-		if q.Relative {
+		if q.Relative || q.Lcr {
 			u = "mm"
 		}
 		units[q.Path] = u

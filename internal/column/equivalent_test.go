@@ -61,3 +61,34 @@ func TestEquivalentBowValues(t *testing.T) {
 		t.Errorf("NaN alpha: e0 = %g, want 0", e)
 	}
 }
+
+// In the modes that twist the section the equivalent bow reproduces the
+// curve of EN 1993-1-1:2005 6.3.1.4 (eq. (6.49) with lam_T = sqrt(A fy /
+// N_cr) and the minor axis's alpha), as Twisting's curve model gives it:
+// short equal and unequal angles, whose flexural-torsional load governs.
+func TestEquivalentTwistingBow(t *testing.T) {
+	for _, s := range []Section{
+		{Shape: ShapeAngle, Depth: 100, Width: 100, Thickness: 10, Root: 12},
+		{Shape: ShapeAngle, Depth: 150, Width: 90, Thickness: 10, Root: 12},
+	} {
+		p, err := s.Properties()
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, l := range []float64{400, 600, 900, 1500} {
+			for _, alpha := range []float64{0.34, 0.49} {
+				m := Member{Props: p, E: 210000, Fy: 355, Length: l, K: [2]float64{1, 1}, Alpha: [2]float64{alpha, alpha}}
+				ncr, _ := TwistingLoad(&m)
+				want := p.EffectiveArea() * 355 * en1993Chi(math.Sqrt(p.EffectiveArea()*355/ncr), alpha)
+				m.Bow = EquivalentTwistingBow(&m, alpha)
+				got, err := Twisting(&m, GovernsFirstYield)
+				if err != nil {
+					t.Fatal(err)
+				}
+				if math.Abs(got.N-want) > 1e-9*want {
+					t.Errorf("%v, L %g, alpha %g: first yield with the equivalent bow %.9g, eq. (6.49) with lam_T %.9g", s, l, alpha, got.N, want)
+				}
+			}
+		}
+	}
+}

@@ -48,10 +48,7 @@ func twisting(m *Member, governs string) Result {
 		res.N = ae * m.Fy * curveChi(math.Sqrt(rho), m.Alpha[Minor])
 		return res
 	}
-	a := Major
-	if p.C[Minor]/(p.R[Minor]*p.R[Minor]) >= p.C[Major]/(p.R[Major]*p.R[Major]) {
-		a = Minor
-	}
+	a := TwistingAxis(p)
 	// e c / r^2 = e A / W; a class 4 section takes A_eff / W_eff.
 	k := ae / p.EffectiveModulus(a)
 	eta := math.Abs(m.Bow) * k

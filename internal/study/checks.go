@@ -190,8 +190,8 @@ func (p *parser) checkModel() {
 	st := p.st
 	switch st.Model {
 	case "perry-robertson":
-		if st.Bow == nil {
-			p.errorf("imperfection.bow", "missing: model perry-robertson needs an initial bow, e.g. [imperfection] bow = \"L/1000\" (or choose another capacity.model)")
+		if st.Bow == nil && st.Sway == nil && st.Imperfection != "equivalent" {
+			p.errorf("imperfection.bow", "missing: model perry-robertson needs an initial bow, e.g. [imperfection] bow = \"Lcr/1000\", or [capacity] imperfection = \"equivalent\" (or choose another capacity.model)")
 		}
 	case "secant":
 		if st.Ecc == nil {
@@ -202,7 +202,7 @@ func (p *parser) checkModel() {
 			p.warnf("capacity.model: the buckling curve already contains the imperfections; imperfection.bow and imperfection.eccentricity are ignored")
 		}
 	case "beam-column":
-		if st.Bow == nil && st.Ecc == nil && len(st.Profile) == 0 {
+		if st.Bow == nil && st.Ecc == nil && len(st.Profile) == 0 && st.Sway == nil && st.Imperfection != "equivalent" {
 			p.errorf("imperfection.bow", "missing: model beam-column needs a bow, an eccentricity or capacity.profile")
 		}
 		if len(st.Profile) > 0 && st.Bow != nil {

@@ -95,7 +95,7 @@ func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
 			continue
 		}
 		given[k] = true
-		po := qopt{dim: o.dim, rel: o.rel, inf: false}
+		po := qopt{dim: o.dim, rel: o.rel, frac: o.frac, inf: false}
 		if plainParams[k] {
 			po = qopt{dim: Dimensionless}
 		}
@@ -267,6 +267,9 @@ func (p *parser) checkParams(path string, s *distSpec, o qopt) bool {
 // a random length (length = 0).
 func (p *parser) resolve(q *Quantity, length float64) {
 	if q == nil {
+		return
+	}
+	if p.resolveLcr(q) {
 		return
 	}
 	if q.spec == nil {

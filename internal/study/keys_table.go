@@ -60,9 +60,12 @@ var keyTables = []*TableInfo{
 		{Name: "shear_modulus", Takes: "quantity (stress)", Default: "E / (2 (1 + 0.3)), per sample",
 			Meaning: "The shear modulus G of torsional and flexural-torsional buckling."},
 	}},
-	{Path: "imperfection", Meaning: "Geometric imperfections; both act by their magnitude.", Keys: []KeyInfo{
-		{Name: "bow", Takes: "quantity (length, or \"L/n\")", Default: "none", Meaning: "The out-of-straightness at mid-length."},
-		{Name: "eccentricity", Takes: "quantity (length, or \"L/n\")", Default: "none", Meaning: "The load eccentricity at both ends."},
+	{Path: "imperfection", Meaning: "Geometric imperfections; each acts by its magnitude.", Keys: []KeyInfo{
+		{Name: "bow", Takes: "quantity (length, \"L/n\" or \"Lcr/n\")", Default: "none",
+			Meaning: "The amplitude of the half-sine bow on the equivalent pinned member K L; \"Lcr/n\" is a fraction of the buckling length K L (the buckling-mode shape), \"L/n\" of the member length."},
+		{Name: "eccentricity", Takes: "quantity (length, \"L/n\" or \"Lcr/n\")", Default: "none", Meaning: "The load eccentricity at both ends."},
+		{Name: "sway", Takes: "quantity (angle: \"1/200\" or radians)", Default: "none",
+			Meaning: "The initial out-of-plumb angle phi of a member whose ends sway (ends fixed-free or K above 1), EN 1993-1-1 5.3.2(3); give phi itself (phi0 alpha_h alpha_m)."},
 	}},
 	{Path: "capacity", Meaning: "The capacity model.", Keys: []KeyInfo{
 		{Name: "model", Takes: "text", Choices: []string{"perry-robertson", "secant", "curve", "beam-column"}, Default: "perry-robertson",
@@ -70,7 +73,7 @@ var keyTables = []*TableInfo{
 		{Name: "axis", Takes: "text", Choices: []string{"both", "major", "minor"}, Default: "both",
 			Meaning: "The axes checked; with both each sample takes the weaker."},
 		{Name: "curve", Takes: "text (a0 a b c d), once or { major, minor }", Default: "per axis from EN 1993-1-1 Table 6.2 (shape, fabrication, h/b, tf, grade); custom sections must give it",
-			Meaning: "The buckling curve of EN 1993-1-1 Table 6.1 (model curve); a warning says when it is less severe than Table 6.2's."},
+			Meaning: "The buckling curve of EN 1993-1-1 Table 6.1 (model curve, or imperfection equivalent); a warning says when it is less severe than Table 6.2's."},
 		{Name: "alpha", Takes: "quantity (number), once or { major, minor }", Meaning: "The imperfection factor, instead of curve (model curve)."},
 		{Name: "limit", Takes: "text", Choices: []string{"first-yield", "ultimate"}, Default: "first-yield",
 			Meaning: "Where the beam-column stops (model beam-column)."},
@@ -78,6 +81,8 @@ var keyTables = []*TableInfo{
 			Meaning: "The residual stress pattern (model beam-column, limit ultimate)."},
 		{Name: "profile", Takes: "list of lengths (3 or more)", Meaning: "Measured bow offsets at equal spacing along the member (model beam-column)."},
 		{Name: "model_factor", Takes: "quantity (number)", Default: "1", Meaning: "Multiplies the capacity: the model's uncertainty."},
+		{Name: "imperfection", Takes: "text", Choices: []string{"geometric", "equivalent"}, Default: "geometric",
+			Meaning: "equivalent: the EN 1993-1-1 equivalent bow alpha (lambda - 0.2) W/A (residual stresses included) for the first-yield models, alpha from curve, alpha or Table 6.2; a bow given too replaces its geometric part Lcr/1000."},
 	}},
 	{Path: "loads", Meaning: "Axial loads, summed; compression positive.", Keys: []KeyInfo{
 		{Name: "effect_factor", Takes: "quantity (number)", Default: "1", Meaning: "Multiplies the sum of the loads: the uncertainty of the load effect."},

@@ -144,6 +144,10 @@ func (p *parser) measurement(t *table, path string) *Measurement {
 		if pv.rel {
 			val *= length
 		}
+		if !p.measuredLcr(at, q, pv, &val, length) {
+			good = false
+			continue
+		}
 		if !(val > 0) || math.IsInf(val, 0) {
 			p.errorf(at, "test result %d is %s: the update is on the logarithm, so every result must be positive (give the magnitude of a measured bow)", i+1, p.show(val, q.Dim))
 			good = false

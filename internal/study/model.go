@@ -25,6 +25,7 @@ const (
 	fTop1
 	fBot0
 	fBot1
+	fSway  // out-of-plumb angle
 	fLoads // sum of the loads
 	fG     // shear modulus (0: E / 2.6)
 	fSec0  // section dimensions in the order of secKeys
@@ -54,11 +55,15 @@ type Model struct {
 	// Study is the study it was built from.
 	Study *Study
 
-	base      values
-	binds     []binding
-	relBow    bool // bow and eccentricity are fractions of the length
-	relEcc    bool
-	secRandom bool
+	base       values
+	binds      []binding
+	relBow     bool // bow and eccentricity are fractions of the length
+	relEcc     bool
+	lcrBow     bool // bow and eccentricity are fractions of the buckling length
+	lcrEcc     bool
+	perAxis    bool // the member differs by axis (see axisMember)
+	equivalent bool // capacity.imperfection = "equivalent"
+	secRandom  bool
 	// radiusGiven: the RHS corner radius is given (else the fabrication's);
 	// classify: the shape has a section class to find; propsDynamic: the
 	// properties change per sample (the section or, for its class, the
@@ -102,6 +107,7 @@ func targets(st *Study) map[*Quantity][]int {
 	add(st.Yield, fFy)
 	add(st.Bow, fBow)
 	add(st.Ecc, fEcc)
+	add(st.Sway, fSway)
 	add(st.ModelFactor, fModel)
 	add(st.EffectFactor, fEffect)
 	for _, q := range st.Loads {
@@ -172,6 +178,10 @@ func Build(st *Study) (*Model, error) {
 	}
 	md.relBow = st.Bow != nil && st.Bow.Relative
 	md.relEcc = st.Ecc != nil && st.Ecc.Relative
+	md.lcrBow = st.Bow != nil && st.Bow.Lcr
+	md.lcrEcc = st.Ecc != nil && st.Ecc.Lcr
+	md.equivalent = st.Imperfection == "equivalent"
+	md.perAxis = md.lcrBow || md.lcrEcc || st.Imperfection == "equivalent" || st.Sway != nil
 	md.sec = column.Section{Shape: st.Section.Shape}
 	for i, k := range secKeys {
 		if q := st.Section.Dims[k]; q != nil {
@@ -404,25 +414,38 @@ func (md *Model) springK(v *values, p *column.Props, a int) (float64, error) {
 	return column.SpringKFromStiffness(v[fTop0+a], v[fBot0+a], v[fE], p.I[a], v[fLength])
 }
 
-// capacity evaluates the capacity model (without the model factor).
+// capacity evaluates the capacity model (without the model factor). With
+// axis Both it returns the member of the governing axis.
 func (md *Model) capacity(v *values, axis column.Axis) (column.Result, column.Member, error) {
 	m, sec, err := md.member(v)
 	if err != nil {
 		return column.Result{}, m, err
 	}
 	var res column.Result
-	switch md.model {
-	case modelCurve:
-		res, err = column.Curve(&m, axis)
-	case modelBeam:
-		res, err = md.beamCapacity(&m, sec, v, axis)
+	switch {
+	case !md.perAxis:
+		res, err = md.evaluate(&m, sec, v, axis)
+	case axis != column.Both:
+		md.axisMember(&m, v, axis)
+		res, err = md.evaluate(&m, sec, v, axis)
 	default:
-		res, err = column.FirstYield(&m, axis)
+		res, m, err = md.bothAxes(m, sec, v)
 	}
 	if err == nil && (math.IsNaN(res.N) || math.IsInf(res.N, 0)) {
 		err = errors.New("study: capacity is not a number")
 	}
 	return res, m, err
+}
+
+// evaluate runs the study's capacity model on the member.
+func (md *Model) evaluate(m *column.Member, sec column.Section, v *values, axis column.Axis) (column.Result, error) {
+	switch md.model {
+	case modelCurve:
+		return column.Curve(m, axis)
+	case modelBeam:
+		return md.beamCapacity(m, sec, v, axis)
+	}
+	return column.FirstYield(m, axis)
 }
 
 // MarginModel returns the model with one output, "margin", equal to the

@@ -71,7 +71,7 @@ func (md *Model) Nominal() (*Nominal, error) {
 		if st.Axis != column.Both && st.Axis != a {
 			continue
 		}
-		res, _, err := md.capacity(&v, a)
+		res, ma, err := md.capacity(&v, a)
 		if err != nil {
 			return nil, fmt.Errorf("at nominal values, %s axis: %v", a, err)
 		}
@@ -80,7 +80,13 @@ func (md *Model) Nominal() (*Nominal, error) {
 		if n.Governs == "" || n.AxisCapacity[a] <= n.Capacity {
 			n.Capacity, n.Axis, n.Governs = n.AxisCapacity[a], a, res.Governs
 			n.CapacityMode, n.ModeSlenderness = res.Mode, n.RelSlenderness[a]
+			if md.perAxis {
+				n.Member = ma // with the imperfections of the governing axis
+			}
 		}
+	}
+	if md.perAxis && m.Props.It != 0 {
+		m = md.twistMember(m, &v) // Lcr/n, sway and equivalent imperfections
 	}
 	if err := md.nominalTwisting(n, &m); err != nil {
 		return nil, err

@@ -411,8 +411,9 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.checkModel()
 	p.checkSection()
 	if len(p.probs) == 0 {
-		p.checkClass()  // class.go
-		p.tableCurves() // curvechoice.go
+		p.checkClass()         // class.go
+		p.tableCurves()        // curvechoice.go
+		p.checkImperfections() // imperfections.go
 		p.twistingNotes()
 	}
 	return st
@@ -670,6 +671,7 @@ func (p *parser) imperfection(top *table) {
 	o := qopt{dim: Length, rel: true}
 	p.st.Bow = p.q(t, "bow", o)
 	p.st.Ecc = p.q(t, "eccentricity", o)
+	p.st.Sway = p.q(t, "sway", qopt{dim: Dimensionless, frac: true})
 	p.unknown(t)
 }
 
@@ -742,12 +744,15 @@ func (p *parser) capacity(top *table) {
 	if hasAlpha {
 		st.Alpha = alphas
 	}
-	if (hasCurve || hasAlpha) && st.Model != "curve" && st.Model != "" {
+	if imp, ok := p.choice(t, "imperfection", []string{"geometric", "equivalent"}); ok {
+		st.Imperfection = imp
+	}
+	if (hasCurve || hasAlpha) && st.Model != "curve" && st.Model != "" && st.Imperfection != "equivalent" {
 		key := "curve"
 		if hasAlpha {
 			key = "alpha"
 		}
-		p.errorf(t.key(key), "%s applies to model = \"curve\" only (the model is %q)", key, st.Model)
+		p.errorf(t.key(key), "%s applies to model = \"curve\" or imperfection = \"equivalent\" only (the model is %q)", key, st.Model)
 	}
 	// Without curve or alpha, model "curve" takes EN 1993-1-1 Table 6.2's
 	// (curvechoice.go).

@@ -24,6 +24,11 @@ type Quantity struct {
 	// Relative reports that the value (or the distribution's values) is a
 	// fraction of the member length of the same sample ("L/1000").
 	Relative bool
+	// Lcr reports that the value (or the distribution's values) is a
+	// fraction of the buckling length K L of the axis evaluated, in the
+	// same sample ("Lcr/1000"; see lcr.go). It is never turned into
+	// millimetres at parse time.
+	Lcr bool
 
 	// perLength reports that the quantity was written as L/n and turned
 	// into millimetres with the fixed member length.
@@ -50,6 +55,9 @@ func (q *Quantity) Unit() string {
 	if q.Relative {
 		return "L"
 	}
+	if q.Lcr {
+		return "Lcr"
+	}
 	return InternalUnit(q.Dim)
 }
 
@@ -73,7 +81,8 @@ func (n need) String() string {
 type qopt struct {
 	dim  Dim
 	need need
-	rel  bool // "L/n" allowed
+	rel  bool // "L/n" and "Lcr/n" allowed
+	frac bool // "a/b" allowed (an angle such as "1/200")
 	inf  bool // +inf allowed (rigid springs)
 }
 
@@ -82,6 +91,7 @@ type qopt struct {
 type pval struct {
 	v   float64
 	rel bool
+	lcr bool // a fraction of the buckling length K L
 }
 
 // scalar reads one number written as a TOML number or a string, reporting
@@ -107,6 +117,12 @@ func (p *parser) scalarAny(path string, v any, o qopt) (pval, bool) {
 		return pval{v: x * p.sys.Factor(o.dim)}, true
 	case string:
 		s := strings.TrimSpace(x)
+		if pv, done, ok := p.lcrForm(path, s, o); done {
+			return pv, ok
+		}
+		if pv, done, ok := p.fraction(path, s, o); done {
+			return pv, ok
+		}
 		if rest, ok := strings.CutPrefix(s, "L/"); ok || strings.HasPrefix(s, "L /") {
 			if !ok {
 				rest = strings.TrimPrefix(s, "L /")
@@ -147,6 +163,7 @@ func (p *parser) quantity(path string, v any, o qopt) *Quantity {
 		}
 		if spec.name == "fixed" {
 			q.Value, q.Relative = spec.params["value"].v, spec.params["value"].rel
+			q.Lcr = spec.params["value"].lcr
 			q.bare = bareTable(m, o)
 			if !p.checkFixed(path, q.Value, o) {
 				return nil
@@ -163,7 +180,7 @@ func (p *parser) quantity(path string, v any, o qopt) *Quantity {
 	if !ok {
 		return nil
 	}
-	q.Value, q.Relative = pv.v, pv.rel
+	q.Value, q.Relative, q.Lcr = pv.v, pv.rel, pv.lcr
 	q.bare = writtenBare(v, o)
 	if !p.checkFixed(path, q.Value, o) {
 		return nil

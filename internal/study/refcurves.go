@@ -190,6 +190,9 @@ func (md *Model) curveAbout(nom *Nominal, a column.Axis, n int, lamMax float64, 
 		if eval == nil {
 			res, m, err = md.capacity(&w, a)
 		} else if m, _, err = md.member(&w); err == nil {
+			if md.perAxis {
+				md.axisMember(&m, &w, a) // Lcr/n, equivalent and sway imperfections
+			}
 			res, err = eval(&m, a)
 		}
 		if err != nil {

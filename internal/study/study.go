@@ -33,6 +33,14 @@ type Study struct {
 	Shear    *Quantity
 	Ends     [2]EndSpec // indexed by column.Major, column.Minor
 	Bow, Ecc *Quantity  // nil when not given
+	// Sway is the initial out-of-plumb angle (rad, nil when not given);
+	// SwayAxes says about which axes the member sways (see sway.go).
+	Sway     *Quantity
+	SwayAxes [2]bool
+	// Imperfection is "geometric" (the bow and eccentricity as given, the
+	// default) or "equivalent" (the equivalent bow of the EN 1993-1-1
+	// buckling curve, see equivalent.go).
+	Imperfection string
 	// Capacity model.
 	Model        string // perry-robertson | secant | curve | beam-column
 	Axis         column.Axis
