@@ -27,7 +27,19 @@ func classText(n *study.Nominal) string {
 		if e.Name == "wall" && n.Section.Shape.String() == "CHS" {
 			ratio = "d/t"
 		}
-		fmt.Fprintf(&b, "    %-13s %-9s %s %6.1f  limits %.1f / %.1f / %.1f  class %d", e.Name, e.Kind, ratio, e.Ratio, e.Limits[0], e.Limits[1], e.Limits[2], e.Class)
+		lim := func(x float64) string { // angles have a class 3 limit only
+			if x == 0 {
+				return "-"
+			}
+			return fmt.Sprintf("%.1f", x)
+		}
+		switch e.Kind.String() {
+		case "leg":
+			ratio = "h/t"
+		case "legs":
+			ratio = "(b+h)/2t"
+		}
+		fmt.Fprintf(&b, "    %-13s %-9s %s %6.1f  limits %s / %s / %s  class %d", e.Name, e.Kind, ratio, e.Ratio, lim(e.Limits[0]), lim(e.Limits[1]), lim(e.Limits[2]), e.Class)
 		if e.Rho < 1 {
 			fmt.Fprintf(&b, ", rho %.3f (EN 1993-1-5 4.4)", e.Rho)
 		}

@@ -10,9 +10,11 @@ const (
 	Internal ElementKind = iota // internal compression part (both edges supported)
 	Outstand                    // outstand flange (one edge supported)
 	Tube                        // wall of a circular hollow section
+	Leg                         // leg of an angle, h/t (class 3 limit only)
+	LegPair                     // both legs of an angle, (b + h)/2t (class 3 limit only)
 )
 
-// String returns "internal", "outstand" or "tube".
+// String returns "internal", "outstand", "tube", "leg" or "legs".
 func (k ElementKind) String() string {
 	switch k {
 	case Internal:
@@ -21,6 +23,10 @@ func (k ElementKind) String() string {
 		return "outstand"
 	case Tube:
 		return "tube"
+	case Leg:
+		return "leg"
+	case LegPair:
+		return "legs"
 	}
 	return "kind(?)"
 }
@@ -46,8 +52,8 @@ type Element struct {
 // Classification is the class of a section in pure compression.
 type Classification struct {
 	// Elements are the section's compression parts (N of them; a solid
-	// or custom section has none).
-	Elements [2]Element
+	// or custom section has none; an angle has its two legs and the pair).
+	Elements [3]Element
 	N        int
 	// Class is the governing class, 1 to 4; 0 for a custom section, whose
 	// class strutrisk cannot know.
@@ -119,6 +125,12 @@ func (s Section) ClassifyProps(p Props, fy float64) (Props, Classification, erro
 		cl.Class = 1
 	case ShapeCustom:
 		return p, cl, nil
+	case ShapeAngle, ShapeChannel, ShapeTee:
+		classifyOpen(r, &cl)
+		if cl.Class == 4 {
+			effectiveOpen(r, &p, &cl)
+		}
+		return p, cl, nil
 	}
 	if cl.Class == 4 && r.Shape != ShapeCHS {
 		effective(r, &p, &cl)
@@ -137,6 +149,10 @@ func (cl *Classification) add(e *Element) {
 	case Tube:
 		e2 := cl.Eps * cl.Eps
 		e.Limits = [3]float64{50 * e2, 70 * e2, 90 * e2}
+	case Leg: // Table 5.2 gives angles a class 3 limit only
+		e.Limits = [3]float64{0, 0, 15 * cl.Eps}
+	case LegPair:
+		e.Limits = [3]float64{0, 0, 11.5 * cl.Eps}
 	}
 	e.Class, e.Rho = 4, 1
 	for i, lim := range e.Limits {
@@ -145,8 +161,8 @@ func (cl *Classification) add(e *Element) {
 			break
 		}
 	}
-	if e.Class == 4 && e.Kind != Tube {
-		e.Rho = PlateRho(e.Ratio, cl.Eps, e.Kind == Outstand)
+	if e.Class == 4 && e.Kind != Tube && e.Kind != LegPair {
+		e.Rho = PlateRho(e.Ratio, cl.Eps, e.Kind != Internal)
 	}
 	cl.Elements[cl.N] = *e
 	cl.N++

@@ -15,7 +15,7 @@ var errShell = errors.New("study: the circular hollow section is class 4 (d/t be
 // classifyOptions decides how the model finds the section's class.
 func (md *Model) classifyOptions(st *Study) {
 	switch st.Section.Shape {
-	case column.ShapeI, column.ShapeRHS, column.ShapeCHS:
+	case column.ShapeI, column.ShapeRHS, column.ShapeCHS, column.ShapeAngle, column.ShapeChannel, column.ShapeTee:
 		md.classify = true
 	}
 	yieldRandom := st.Yield != nil && st.Yield.Random()
