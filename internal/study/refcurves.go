@@ -132,7 +132,7 @@ func sameCurve(a, b RefCurve) bool {
 // refKinds lists the curve families of the slenderness picture about a.
 func (md *Model) refKinds(nom *Nominal, a column.Axis) []refKind {
 	st := md.Study
-	kinds := []refKind{{st.Model, st.Model, "", nil}}
+	kinds := []refKind{{"study: " + md.ownName(a), st.Model, "", nil}}
 	bow, ecc := nom.Member.Bow, nom.Member.Ecc
 	// An imperfection written as L/n is labelled so: it follows the length.
 	label := func(q *Quantity, x float64) string {
@@ -161,6 +161,20 @@ func (md *Model) refKinds(nom *Nominal, a column.Axis) []refKind {
 		}})
 	}
 	return kinds
+}
+
+// ownName names the study's own model about a for a legend: its EN
+// 1993-1-1 curve, the beam-column's limit, or the model's name.
+func (md *Model) ownName(a column.Axis) string {
+	switch st := md.Study; st.Model {
+	case "curve":
+		name, _, _ := md.ReferenceCurve(a)
+		return "EN 1993-1-1 curve " + name
+	case "beam-column":
+		return "beam-column, " + st.Limit
+	default:
+		return st.Model
+	}
 }
 
 // curveAbout evaluates eval (the study's own model when nil) for the
