@@ -29,7 +29,11 @@ func load(path string, stderr io.Writer) (*loaded, int) {
 			for _, p := range se.Problems {
 				fmt.Fprintf(stderr, "strutrisk: %s\n", p)
 			}
-			fmt.Fprintf(stderr, "strutrisk: %d problem%s in %s; nothing was run\n", len(se.Problems), plural(len(se.Problems)), path)
+			if se.Unlisted > 0 {
+				fmt.Fprintf(stderr, "strutrisk: %s\n", se.UnlistedLine())
+			}
+			n := len(se.Problems) + se.Unlisted
+			fmt.Fprintf(stderr, "strutrisk: %d problem%s in %s; nothing was run\n", n, plural(n), path)
 			return nil, exitInput
 		}
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", path, err)

@@ -79,3 +79,18 @@ func TestManyCases(t *testing.T) {
 		}
 	}
 }
+
+// TestManyProblemsCounted: a file of thousands of problems lists the first
+// fifty and counts them all.
+func TestManyProblemsCounted(t *testing.T) {
+	var b strings.Builder
+	b.WriteString(good)
+	for i := 0; i < 3000; i++ {
+		fmt.Fprintf(&b, "[nonsense%d]\n", i)
+	}
+	code, _, errs := invoke(t, "check", writeStudy(t, b.String()))
+	if code != exitInput || strings.Count(errs, "unknown key") != 50 ||
+		!strings.Contains(errs, "2950 more problems not listed") || !strings.Contains(errs, "3000 problems in") {
+		t.Errorf("exit %d, %d listed, stderr ends %q", code, strings.Count(errs, "unknown key"), errs[max(0, len(errs)-300):])
+	}
+}

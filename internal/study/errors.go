@@ -34,15 +34,30 @@ func (p Problem) String() string {
 // file cannot be used; all problems are listed, not only the first.
 type Error struct {
 	Problems []Problem
+	// Unlisted counts the problems found beyond the first maxProblems,
+	// which are not listed.
+	Unlisted int
 }
 
-// Error returns the problems, one per line.
+// Error returns the problems, one per line, and the count of those not
+// listed.
 func (e *Error) Error() string {
-	lines := make([]string, len(e.Problems))
+	lines := make([]string, len(e.Problems), len(e.Problems)+1)
 	for i, p := range e.Problems {
 		lines[i] = p.String()
 	}
+	if e.Unlisted > 0 {
+		lines = append(lines, e.UnlistedLine())
+	}
 	return strings.Join(lines, "\n")
+}
+
+// UnlistedLine says how many problems are not listed; empty when none.
+func (e *Error) UnlistedLine() string {
+	if e.Unlisted == 0 {
+		return ""
+	}
+	return fmt.Sprintf("%d more problems not listed (fix the first %d first)", e.Unlisted, len(e.Problems))
 }
 
 // editDistance is the Levenshtein distance of a and b.

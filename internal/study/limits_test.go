@@ -153,9 +153,8 @@ func TestProblemsCapped(t *testing.T) {
 	if !ok {
 		t.Fatalf("%v, want *Error", err)
 	}
-	last := e.Problems[len(e.Problems)-1].Msg
-	if len(e.Problems) != maxProblems+1 || !strings.Contains(last, "4950 more problems") {
-		t.Errorf("%d problems, last %q; want %d listed and the rest counted", len(e.Problems), last, maxProblems)
+	if len(e.Problems) != maxProblems || e.Unlisted != 5000-maxProblems || !strings.Contains(e.Error(), "\n4950 more problems not listed") {
+		t.Errorf("%d problems, %d unlisted; want %d listed and the rest counted", len(e.Problems), e.Unlisted, maxProblems)
 	}
 }
 

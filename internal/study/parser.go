@@ -43,14 +43,9 @@ type parser struct {
 // full reports that no more problems are listed.
 func (p *parser) full() bool { return len(p.probs) >= maxProblems }
 
-// problems returns the problems found, with a last line counting those
-// not listed.
-func (p *parser) problems() []Problem {
-	probs := withoutMissingMisspelt(p.probs)
-	if p.dropped > 0 {
-		probs = append(probs, Problem{File: p.file, Msg: fmt.Sprintf("%d more problems not listed (the first %d are above: fix them first)", p.dropped, maxProblems)})
-	}
-	return probs
+// problems returns the problems found as an *Error.
+func (p *parser) problems() *Error {
+	return &Error{Problems: withoutMissingMisspelt(p.probs), Unlisted: p.dropped}
 }
 
 func newParser(name string, data []byte) *parser {

@@ -166,15 +166,15 @@ func Parse(name string, data []byte) (*Study, error) {
 	p := newParser(name, data)
 	st := p.parse()
 	if len(p.probs) > 0 {
-		return nil, &Error{Problems: p.problems()}
+		return nil, p.problems()
 	}
 	st.File = name
 	st.SHA256 = hex.EncodeToString(sum[:])
 	st.src = newSource(p.raw, p.lines)
 	// Every variant at every swept value is checked now, so a run does
 	// not stop half way (see sweep.go).
-	if probs := st.checkCases(); len(probs) > 0 {
-		return nil, &Error{Problems: probs}
+	if e := st.checkCases(); e != nil {
+		return nil, e
 	}
 	return st, nil
 }

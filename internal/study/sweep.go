@@ -274,7 +274,7 @@ func (s *Study) Derive(v, i int) (*Study, error) {
 
 // checkCases reads every variant at every swept value (and each alone)
 // and returns their problems, each reported once.
-func (s *Study) checkCases() []Problem {
+func (s *Study) checkCases() *Error {
 	if s.Sweep == nil && len(s.Variants) == 0 {
 		return nil
 	}
@@ -287,9 +287,9 @@ func (s *Study) checkCases() []Problem {
 		if n > len(s.Variants) {
 			key, line = "sweep", s.src.parts["sweep"]["sweep"]
 		}
-		return []Problem{{File: s.File, Line: line, Key: key, Msg: fmt.Sprintf(
+		return &Error{Problems: []Problem{{File: s.File, Line: line, Key: key, Msg: fmt.Sprintf(
 			"%d cases (the study and %d variants, at %d swept values) are more than the %d a study may run: split it into several studies",
-			cases, len(s.Variants), n, MaxCases)}}
+			cases, len(s.Variants), n, MaxCases)}}}
 	}
 	var out []Problem
 	seen := map[string]bool{}
@@ -313,10 +313,10 @@ func (s *Study) checkCases() []Problem {
 			}
 		}
 	}
-	if more > 0 {
-		out = append(out, Problem{File: s.File, Msg: fmt.Sprintf("%d more problems not listed (the first %d are above: fix them first)", more, maxProblems)})
+	if len(out) == 0 {
+		return nil
 	}
-	return out
+	return &Error{Problems: out, Unlisted: more}
 }
 
 // Cases is the number of runs after the study's own: each variant, and
