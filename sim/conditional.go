@@ -197,6 +197,7 @@ func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc b
 			m2 += (e - mean) * (e - mean)
 		}
 		pf = mean
+		res.Replicates = est
 		se = math.Sqrt(m2 / float64(R-1) / float64(R))
 		cov := math.Inf(1)
 		if pf > 0 {

@@ -40,8 +40,14 @@ type Result struct {
 	// Outputs summarises the Model's outputs over the samples (for
 	// rare-event methods, over an auxiliary crude sample).
 	Outputs []OutputStats
-	// Convergence traces the estimate as evaluations grow.
+	// Convergence traces the estimate as evaluations grow; Trace says
+	// what its points are.
 	Convergence []ConvergencePoint
+	Trace       Trace
+	// Replicates are independent estimates of pf whose mean is Pf, when
+	// the method has them: the randomisations of conditional quasi-Monte
+	// Carlo (final round) or the independent runs of subset simulation.
+	Replicates []float64
 	// Kept is a bounded, reproducible subsample of evaluated points.
 	Kept *Samples
 	// Incomplete is set when the run was cancelled before it finished.
@@ -54,6 +60,19 @@ type Result struct {
 	// Warnings are diagnostics a reader should see.
 	Warnings []string
 }
+
+// Trace names what Result.Convergence holds.
+type Trace int
+
+const (
+	// TraceEstimates: the estimate of pf and its interval after a growing
+	// number of evaluations.
+	TraceEstimates Trace = iota
+	// TraceLevels: subset simulation's intermediate levels, the
+	// probabilities P(g <= b_k) of its falling thresholds b_k; only the
+	// last point is an estimate of pf.
+	TraceLevels
+)
 
 // ConvergencePoint is the estimate after a number of evaluations.
 type ConvergencePoint struct {

@@ -116,7 +116,7 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 		return workers[w]
 	}
 
-	res := &Result{Method: Subset, Confidence: cfg.Confidence}
+	res := &Result{Method: Subset, Confidence: cfg.Confidence, Trace: TraceLevels}
 	// Level 0: direct Monte Carlo in blocks.
 	nb := (N + subsetBlockSize - 1) / subsetBlockSize
 	nanCount := make([]int, nb)

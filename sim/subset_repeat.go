@@ -59,13 +59,21 @@ func subsetRepeat(ctx context.Context, sp *uSpace, s *Settings, first *Result) (
 		pf, cov = subsetCombine(runs)
 		conv = append(conv, subsetPoint(spent, pf, cov*cov, z))
 	}
+	if len(runs) == 1 && !incomplete {
+		// No second run fitted the budget (or it found no failure).
+		first.Evaluations = spent
+		return first, nil
+	}
 	res := &Result{Method: Subset, Confidence: cfg.Confidence, Evaluations: spent, Incomplete: incomplete}
 	res.Pf, res.PfCoV = pf, cov
 	last := conv[len(conv)-1]
 	res.PfCI = last.PfCI
 	res.Beta = BetaFromPf(pf)
 	res.BetaCI = [2]float64{BetaFromPf(res.PfCI[1]), BetaFromPf(res.PfCI[0])}
-	res.Convergence = conv
+	res.Convergence = conv // the combined estimate after each run
+	for _, r := range runs {
+		res.Replicates = append(res.Replicates, r.Pf)
+	}
 	res.Warnings = append(res.Warnings, first.Warnings...)
 	if len(runs) > 1 {
 		res.Warnings = append(res.Warnings, fmt.Sprintf("subset simulation: one run reached CoV %.3g, above the target %.3g, so %d independent runs of %d samples per level were combined (CoV %.3g)", first.PfCoV, cfg.TargetCoV, len(runs), levelSize, cov))

@@ -73,11 +73,50 @@ func TestSubsetWarnsWhenTheBudgetCannotReachTheTarget(t *testing.T) {
 	if r.Status != BudgetSpent || !r.Status.Trusted() {
 		t.Errorf("status %s (%s), want budget-spent", r.Status, r.StatusReason)
 	}
+	// No second run fits: the one run comes back whole, its levels kept.
+	if r.Trace != TraceLevels || len(r.Convergence) < 3 {
+		t.Errorf("trace %v with %d points, want the levels of the one run", r.Trace, len(r.Convergence))
+	}
 	found := false
 	for _, w := range r.Warnings {
 		found = found || w == r.StatusReason
 	}
 	if !found {
 		t.Errorf("no warning says the target was missed: %q", r.Warnings)
+	}
+}
+
+// TestReplicatesAndTrace: the methods say what their trace is and give
+// their independent estimates, whose mean is the estimate.
+func TestReplicatesAndTrace(t *testing.T) {
+	m, _ := linearNormalModel(t, 4, 4.5)
+	one, err := Run(context.Background(), m, &Settings{Method: Subset, Samples: 200_000, Seed: 5, AuxSamples: -1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if one.Trace != TraceLevels || len(one.Replicates) != 0 {
+		t.Errorf("one subset run: trace %v, %d replicates", one.Trace, len(one.Replicates))
+	}
+	rep, err := Run(context.Background(), m, &Settings{Method: Subset, Samples: 200_000, TargetCoV: 0.07, Seed: 5, AuxSamples: -1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	cqm, _ := normalRSModel(t, 100, 10, 50, 10)
+	cqm.Linear = &Linear{Index: 1, Split: func(x []float64) (float64, float64) { return x[0], 1 }}
+	cq, err := Run(context.Background(), cqm, &Settings{Method: ConditionalQMC, Samples: 4096, Seed: 5, AuxSamples: -1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, r := range []*Result{rep, cq} {
+		if r.Trace != TraceEstimates || len(r.Replicates) < 2 {
+			t.Fatalf("%s: trace %v, %d replicates", r.Method, r.Trace, len(r.Replicates))
+		}
+		mean := 0.0
+		for _, v := range r.Replicates {
+			mean += v / float64(len(r.Replicates))
+		}
+		if math.Abs(mean-r.Pf) > 1e-12*r.Pf {
+			t.Errorf("%s: mean of the replicates %.10g, pf %.10g", r.Method, mean, r.Pf)
+		}
 	}
 }

@@ -219,6 +219,9 @@ func (r *results) bundle() *report.Bundle {
 		Check:           l.checkRows(),
 		Defaults:        l.st.Defaults,
 		Convergence:     r.res.Convergence,
+		TraceKind:       r.res.Trace,
+		Replicates:      r.res.Replicates,
+		ReplicateName:   replicateName(r.res.Method),
 		Samples:         r.samplesInUnits(),
 		NominalCapacity: l.nom.Capacity,
 		TornadoOutput:   "margin g = capacity - demand (N)",
@@ -317,4 +320,15 @@ func (r *results) slendernessChart() *report.SlendernessChart {
 		}
 	}
 	return c
+}
+
+// replicateName names one of the independent estimates of a method.
+func replicateName(m sim.Method) string {
+	switch m {
+	case sim.ConditionalQMC:
+		return "randomisation"
+	case sim.Subset:
+		return "run"
+	}
+	return ""
 }

@@ -20,8 +20,16 @@ type Bundle struct {
 	// limit state g (N); NominalCapacity is marked on the histogram.
 	Capacity, Demand, Margin *sim.OutputStats
 	NominalCapacity          float64
-	// Convergence traces pf and its band against evaluations.
+	// Convergence traces pf and its band against evaluations; TraceKind says
+	// (TraceKind) what its points are (subset simulation's levels are not estimates).
 	Convergence []sim.ConvergencePoint
+	TraceKind   sim.Trace
+	// Replicates are independent estimates of pf whose mean is the
+	// estimate (sim.Result.Replicates); ReplicateName names one, e.g.
+	// "randomisation" or "run". With a trace of fewer than four points
+	// the convergence picture draws them instead.
+	Replicates    []float64
+	ReplicateName string
 	// Samples is the kept sample table, written as samples.csv.
 	Samples *sim.Samples
 	// Diagnostics are method facts (evaluations, CoV, FORM status, why the

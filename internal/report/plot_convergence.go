@@ -2,11 +2,14 @@ package report
 
 import (
 	"math"
+	"strings"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
+
+	"strutrisk/sim"
 )
 
 // decadeTicks marks a logarithmic axis of counts: powers of ten labelled in
@@ -83,6 +86,10 @@ func (exponentTicks) Ticks(min, max float64) []plot.Tick {
 // none along the way), the interval of the final estimate is drawn there
 // as a bar. The legend gives the final estimate and interval in figures.
 func convergenceFigure(b *Bundle) *figure {
+	if useReplicates(b) {
+		return replicatesFigure(b)
+	}
+	levels := b.TraceKind == sim.TraceLevels
 	var pts, lower, upper plotter.XYs
 	for _, c := range b.Convergence {
 		x := float64(c.Evaluations)
@@ -135,7 +142,12 @@ func convergenceFigure(b *Bundle) *figure {
 	if logAxis {
 		ylabel = "probability of failure pf (log scale)"
 	}
-	p := newPlot("Convergence of the estimate", "limit-state evaluations (log scale)", ylabel)
+	title := "Convergence of the estimate"
+	if levels {
+		title = "Levels of subset simulation"
+		ylabel = strings.Replace(ylabel, "probability of failure pf", "probability P(g ≤ b) of the level", 1)
+	}
+	p := newPlot(title, "limit-state evaluations (log scale)", ylabel)
 	addGrid(p, false)
 	// On a log axis the plotted values are log10(pf); a zero estimate (no
 	// failure yet) is left out and a zero lower bound drawn at the bottom.
@@ -214,9 +226,15 @@ func convergenceFigure(b *Bundle) *figure {
 			dot = sc
 		}
 	}
-	if dot != nil {
+	switch {
+	case levels && dot != nil:
+		p.Legend.Add("intermediate levels P(g ≤ b_k)", ln)
+		p.Legend.Add("estimate of pf (the last level, "+prob(last.Y)+")", dot)
+	case levels:
+		p.Legend.Add("intermediate levels P(g ≤ b_k)", ln)
+	case dot != nil:
 		p.Legend.Add("estimate of pf (final "+prob(last.Y)+")", ln, dot)
-	} else {
+	default:
 		p.Legend.Add("estimate of pf", ln)
 	}
 	if finalBar {
@@ -238,6 +256,9 @@ func convergenceFigure(b *Bundle) *figure {
 	}
 	p.X.Tick.Marker = decadeTicks{}
 	caption := "Estimate of the failure probability pf (dimensionless) and its 95% interval as the number of limit-state evaluations (log axis) grows. "
+	if levels {
+		caption = "Subset simulation does not refine one estimate as it goes: each point is the probability P(g ≤ b_k) of an intermediate level, the product of the conditional probabilities so far, as the threshold b_k falls towards 0 with each level of samples (log axis of evaluations). Only the last point, at b = 0, is the estimate of the failure probability pf (dimensionless). "
+	}
 	if logAxis {
 		caption += "The pf axis is logarithmic because the values span more than a decade"
 		if vmin <= 0 {
