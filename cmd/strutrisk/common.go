@@ -183,7 +183,7 @@ func (l *loaded) checkText() string {
 		st.Section.Name, n.Member.Props.A, n.Member.Length, n.Member.E, n.Member.Fy)
 	b.WriteString(classText(n)) // class.go
 	if st.Model != "curve" {
-		fmt.Fprintf(&b, "  bow %.2f mm, eccentricity %.2f mm (means of their magnitude)\n", math.Abs(n.Member.Bow), math.Abs(n.Member.Ecc))
+		fmt.Fprintf(&b, "  bow %.2f mm, eccentricity %.2f mm (means of their magnitude)%s\n", math.Abs(n.Member.Bow), math.Abs(n.Member.Ecc), imperfectionNote(st, n))
 	} else {
 		fmt.Fprintf(&b, "  imperfection factor alpha %.2f (major) / %.2f (minor)\n", n.Member.Alpha[0], n.Member.Alpha[1])
 	}
@@ -224,4 +224,31 @@ func (l *loaded) checkText() string {
 	}
 	fmt.Fprintf(&b, "\n%s\n", caution)
 	return b.String()
+}
+
+// imperfectionNote says what the nominal bow printed by check stands for
+// when it depends on the axis: the governing axis's, the equivalent
+// imperfection (with the study's bow in place of its geometric part), a
+// fraction of the buckling length, and the sway.
+func imperfectionNote(st *study.Study, n *study.Nominal) string {
+	var parts []string
+	if st.Imperfection == "equivalent" {
+		e := fmt.Sprintf("EN 1993-1-1 equivalent imperfection, alpha %.2f", n.Member.Alpha[n.Axis])
+		if st.Bow != nil {
+			e += ", with imperfection.bow for its geometric part"
+		}
+		parts = append(parts, e)
+	} else if st.Bow != nil && st.Bow.Lcr || st.Ecc != nil && st.Ecc.Lcr {
+		parts = append(parts, fmt.Sprintf("Lcr/n of K L = %.0f mm", n.Member.K[n.Axis]*n.Member.Length))
+	}
+	switch {
+	case st.Sway != nil && n.Member.Sway != 0:
+		parts = append(parts, fmt.Sprintf("sway 1/%.0f", 1/math.Abs(n.Member.Sway)))
+	case st.Sway != nil:
+		parts = append(parts, "no sway (braced about this axis)")
+	}
+	if len(parts) == 0 {
+		return ""
+	}
+	return "; " + n.Axis.String() + " axis: " + strings.Join(parts, "; ")
 }
