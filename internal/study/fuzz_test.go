@@ -3,6 +3,7 @@ package study
 import (
 	"os"
 	"path/filepath"
+	"strings"
 	"testing"
 
 	"github.com/BurntSushi/toml"
@@ -21,6 +22,15 @@ func FuzzLoad(f *testing.F) {
 	f.Add([]byte(base))
 	f.Add([]byte(`units = "kip-in"` + "\n" + base + "[[correlation]]\npair = [\"a\", \"b\"]\nrho = 0.5\n"))
 	f.Add([]byte("[member]\nlength = \"L/0\"\n"))
+	// Open sections and custom torsion keys (twisting.go).
+	for _, sec := range []string{
+		"shape = \"angle\"\ndepth = 100\nwidth = 60\nthickness = 8\nroot = 10\n",
+		"shape = \"tee\"\ndepth = 8\nwidth = 100\nflange = 8\nweb = 6\n",
+		"shape = \"channel\"\ndepth = 200\nwidth = 75\nflange = 11\nweb = 8\nthickness_loss = 6\n",
+		"shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\nit = 1e4\niw = \"1 cm6\"\ny0 = -30\nz0 = 1e308\n",
+	} {
+		f.Add([]byte(strings.Replace(base, "shape = \"CHS\"\ndiameter = 168.3\nthickness = 8\n", sec, 1)))
+	}
 	f.Add([]byte("x = { dist = \"normal\", mean = nan, sd = inf }\n"))
 	// The size and nesting limits (limits.go, nesting.go).
 	for _, in := range deepInputs() {

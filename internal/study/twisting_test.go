@@ -1,6 +1,7 @@
 package study
 
 import (
+	"fmt"
 	"math"
 	"testing"
 
@@ -65,5 +66,41 @@ dead = "300 kN"
 	md.Sim.G(x, out)
 	if !(out[OutCapacity] > low) {
 		t.Errorf("a stiffer shear modulus did not raise the capacity: %.6g, %.6g", out[OutCapacity], low)
+	}
+}
+
+// A custom section given the properties of an unequal angle (area,
+// second moments, fibre distances, it, iw and the shear centre as y0 and
+// z0, in cm units) buckles at the same critical load in the same mode as
+// the angle shape itself: the custom keys reach the mechanics with their
+// axes and units right.
+func TestCustomTorsionKeys(t *testing.T) {
+	sec := column.Section{Shape: column.ShapeAngle, Depth: 150, Width: 90, Thickness: 15} // class 3 at fy 235: no effective area
+	p, err := sec.Properties()
+	if err != nil {
+		t.Fatal(err)
+	}
+	study := func(section string) *Nominal {
+		text := "[member]\nlength = 1200\nends = \"pinned-pinned\"\n[member.section]\n" + section +
+			"[material]\nmodulus = 210000\nyield = 235\n[capacity]\nmodel = \"curve\"\ncurve = \"b\"\n[loads]\ndead = 100000\n"
+		md, err := Build(parse(t, text))
+		if err != nil {
+			t.Fatal(err)
+		}
+		n, err := md.Nominal()
+		if err != nil {
+			t.Fatal(err)
+		}
+		return n
+	}
+	angle := study("shape = \"angle\"\ndepth = 150\nwidth = 90\nthickness = 15\n")
+	custom := study(fmt.Sprintf("shape = \"custom\"\narea = \"%.10g cm2\"\ni_major = \"%.10g cm4\"\ni_minor = \"%.10g cm4\"\n"+
+		"c_major = %.10g\nc_minor = %.10g\nit = \"%.10g cm4\"\niw = \"%.10g cm6\"\ny0 = \"%.10g cm\"\nz0 = \"%.10g cm\"\n",
+		p.A/1e2, p.I[0]/1e4, p.I[1]/1e4, p.C[0], p.C[1], p.It/1e4, p.Iw/1e6, p.S[0]/10, p.S[1]/10))
+	if custom.Mode != column.ModeFlexuralTorsional || math.Abs(custom.Critical-angle.Critical) > 1e-8*angle.Critical {
+		t.Errorf("custom: N_cr %.10g (%v), angle %.10g (%v)", custom.Critical, custom.Mode, angle.Critical, angle.Mode)
+	}
+	if math.Abs(custom.Capacity-angle.Capacity) > 1e-8*angle.Capacity {
+		t.Errorf("custom capacity %.10g, angle %.10g", custom.Capacity, angle.Capacity)
 	}
 }
