@@ -26,7 +26,11 @@ func variantsFigure(b *Bundle) *figure {
 	}
 	var rows []row
 	if d.Beta != nil && len(d.PfCI) == 2 {
-		rows = append(rows, row{"study", b.StudyModel, float64(*d.Beta), sim.BetaFromPf(d.PfCI[1]), sim.BetaFromPf(d.PfCI[0])})
+		name := "study"
+		if b.StudyModel != "" {
+			name += " (" + b.StudyModel + ")"
+		}
+		rows = append(rows, row{name, b.StudyModel, float64(*d.Beta), sim.BetaFromPf(d.PfCI[1]), sim.BetaFromPf(d.PfCI[0])})
 	}
 	for _, v := range d.Variants {
 		rows = append(rows, row{v.Name, b.VariantModels[v.Name], float64(v.Beta), sim.BetaFromPf(v.PfCI[1]), sim.BetaFromPf(v.PfCI[0])})
@@ -83,9 +87,10 @@ func variantsFigure(b *Bundle) *figure {
 	}
 	span := math.Max(xmax-xmin, 0.2)
 	p.X.Min, p.X.Max = xmin-0.15*span, xmax+0.15*span
-	p.Y.Min, p.Y.Max = -0.6, float64(n)-0.4
+	// A free band above the rows holds the legend, clear of the target line.
+	p.Y.Min, p.Y.Max = -0.6, float64(n)+0.3
 	p.NominalY(names...)
 	p.Y.Tick.Label.Font.Size = 9
 	h := vg.Length(3.5+0.9*float64(n)) * vg.Centimeter
-	return &figure{Name: "variants", Caption: "Reliability index β (dimensionless) of the study and of each variant (bar: its 95% interval), all from the same random numbers; dashed: the target.", W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
+	return &figure{Name: "variants", Caption: "Reliability index β (dimensionless) of the study and of each variant (bar: its 95% interval), all from the same random numbers; dashed: the target. The colour is the capacity model's, the same in every picture; a second case of one model takes another mark.", W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
 }
