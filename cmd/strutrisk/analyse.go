@@ -48,7 +48,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	}
 	bar.stage("FORM")
 	r.form = res.FORM
-	if r.form == nil && len(m.Vars) > 0 {
+	if r.form == nil && len(m.Vars) > 0 && ctx.Err() == nil {
 		r.form, r.formErr = sim.FORMContext(ctx, m, r.l.md.FORMSettings())
 		if r.formErr != nil {
 			r.warnings = append(r.warnings, "form: "+r.formErr.Error())

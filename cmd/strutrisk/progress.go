@@ -69,12 +69,20 @@ func (p *progress) update(s sim.Progress) {
 	p.draw("\r" + progressLine(p.name, s, left, ok))
 }
 
+// stageHook, when set (by tests), is called as each step begins.
+var stageHook func(name string)
+
 // stage names the step that begins now ("main run", "FORM", "Sobol
 // indices"...).
 func (p *progress) stage(name string) {
 	p.mu.Lock()
-	defer p.mu.Unlock()
 	p.name, p.phaseStart = name, p.now()
+	p.mu.Unlock()
+	if stageHook != nil {
+		stageHook(name)
+	}
+	p.mu.Lock()
+	defer p.mu.Unlock()
 	if !p.on || p.now().Sub(p.start) < time.Second {
 		return
 	}

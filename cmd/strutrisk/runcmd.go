@@ -128,9 +128,9 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	defer folder.Close()
 	dir := folder.Path
 
-	ctx, sigs, stop := withSignals(baseContext(), stderr)
-	defer stop()
 	bar := newProgress(stderr, !o.json)
+	ctx, sigs, stop := withSignals(baseContext(), stderr, bar.phase)
+	defer stop()
 	settings.Progress = bar.update
 	bar.targetCoV = settings.TargetCoV
 	bar.stage("main run (" + string(settings.Method) + ")")
@@ -151,7 +151,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", st.File, err)
 		return exitInternal
 	}
-	r.incomplete = incompleteReason(ctx, r, sigs, bar.phase())
+	r.incomplete = incompleteReason(ctx, r, sigs)
 	b := r.bundle()
 	files, werr := report.Files(b, st.Output.Formats)
 	var paths []string
@@ -201,11 +201,12 @@ func validMethod(m string) bool {
 }
 
 // incompleteReason says why the run is not complete, or "" when it is.
-func incompleteReason(ctx context.Context, r *results, sigs *interrupt, phase string) string {
+func incompleteReason(ctx context.Context, r *results, sigs *interrupt) string {
 	switch {
 	case r.res.Incomplete:
 		return fmt.Sprintf("interrupted by %s after %d evaluations of the main run: the estimate is from the samples finished; the sensitivities, the reserve factor and any sweep or variant cases were not run", sigs.name(), r.res.Evaluations)
 	case ctx.Err() != nil:
+		phase := sigs.during()
 		if phase == "" {
 			phase = "the steps after the main run"
 		}

@@ -21,6 +21,8 @@ const (
 type interrupt struct {
 	mu  sync.Mutex
 	sig os.Signal
+	// phase is the step under way when it came.
+	phase string
 }
 
 // signalHook, when set (by tests), is called once the signal handlers are
@@ -29,9 +31,9 @@ var signalHook func(ctx context.Context)
 
 // withSignals returns a context derived from parent that SIGINT and
 // SIGTERM cancel, the record of which came, and a function that removes
-// the handlers. The first signal is told on stderr; after it the
+// the handlers; phase names the step under way. The first signal is told on stderr; after it the
 // handlers are removed, so a second one stops the process at once.
-func withSignals(parent context.Context, stderr io.Writer) (context.Context, *interrupt, func()) {
+func withSignals(parent context.Context, stderr io.Writer, phase func() string) (context.Context, *interrupt, func()) {
 	ctx, cancel := context.WithCancel(parent)
 	in := &interrupt{}
 	ch := make(chan os.Signal, 2)
@@ -42,7 +44,7 @@ func withSignals(parent context.Context, stderr io.Writer) (context.Context, *in
 		case s := <-ch:
 			signal.Stop(ch)
 			in.mu.Lock()
-			in.sig = s
+			in.sig, in.phase = s, phase()
 			in.mu.Unlock()
 			fmt.Fprintf(stderr, "\nstrutrisk: %s: stopping; what has finished will be written (a second signal stops at once, writing nothing)\n", in.name())
 			cancel()
@@ -77,4 +79,11 @@ func (in *interrupt) code() int {
 		return exitTerminated
 	}
 	return exitInterrupted
+}
+
+// during is the step under way when the signal came ("" if none came).
+func (in *interrupt) during() string {
+	in.mu.Lock()
+	defer in.mu.Unlock()
+	return in.phase
 }

@@ -84,3 +84,31 @@ func TestRunComplete(t *testing.T) {
 		}
 	}
 }
+
+// TestRunSignalAfterMainRun: a signal after the main run keeps its
+// estimate; the reason names the step that was under way.
+func TestRunSignalAfterMainRun(t *testing.T) {
+	var runCtx context.Context
+	signalHook = func(ctx context.Context) { runCtx = ctx }
+	stageHook = func(name string) {
+		if name == "FORM" {
+			syscall.Kill(os.Getpid(), syscall.SIGTERM)
+			<-runCtx.Done()
+		}
+	}
+	defer func() { signalHook, stageHook = nil, nil }()
+	code, out, errs := invoke(t, "run", writeStudy(t, stocky), "--out", t.TempDir(), "--method", "monte-carlo", "--samples", "100000", "--json")
+	if code != exitTerminated {
+		t.Errorf("exit %d, want %d\n%s", code, exitTerminated, errs)
+	}
+	var d report.Document
+	if err := json.Unmarshal([]byte(out), &d); err != nil {
+		t.Fatalf("stdout is not the document: %v", err)
+	}
+	if d.Complete || !strings.Contains(d.IncompleteReason, "during FORM") || !strings.Contains(d.IncompleteReason, "main estimate is complete") {
+		t.Errorf("complete %v, incomplete_reason %q: want false, naming FORM and the complete main estimate", d.Complete, d.IncompleteReason)
+	}
+	if d.Pf == nil || d.Evaluations == nil || *d.Evaluations != 100000 {
+		t.Errorf("the main estimate is missing or cut short: pf %v, evaluations %v", d.Pf, d.Evaluations)
+	}
+}
