@@ -127,6 +127,15 @@ func (s Section) ClassifyProps(p Props, fy float64) (Props, Classification, erro
 		return p, cl, nil
 	case ShapeAngle, ShapeChannel, ShapeTee:
 		classifyOpen(r, &cl)
+		if cl.Class == 4 && r.Shape == ShapeAngle {
+			// EN 1993-1-5 4.4(2) takes an angle's legs as outstands of
+			// width h: a class 4 angle (by either rule) reduces each leg
+			// by the rho of its h/t, 1 while lp <= 0.748.
+			for i := range 2 {
+				e := &cl.Elements[i]
+				e.Rho = PlateRho(e.Ratio, cl.Eps, true)
+			}
+		}
 		if cl.Class == 4 {
 			effectiveOpen(r, &p, &cl)
 		}
@@ -209,4 +218,17 @@ func effective(r Section, p *Props, cl *Classification) {
 		wx, wy = wy, wx
 	}
 	p.WEff = [2]float64{wx, wy}
+}
+
+// Reduced reports whether a part of the section has a reduction factor
+// rho below 1 (EN 1993-1-5 4.4): a class 4 section can still be fully
+// effective when its slenderest part is just past the class 3 limit (an
+// angle by the (b + h)/2t rule of EN 1993-1-1 Table 5.2).
+func (cl *Classification) Reduced() bool {
+	for _, e := range cl.Elements[:cl.N] {
+		if e.Rho < 1 {
+			return true
+		}
+	}
+	return false
 }

@@ -244,3 +244,63 @@ func TestClassifyNoAlloc(t *testing.T) {
 		t.Errorf("Classify allocates %g times", n)
 	}
 }
+
+// TestAngleReduced: a class 4 angle can be fully effective. EN 1993-1-5
+// 4.4(2) takes an angle's legs as outstands of width h: L 100x100x8 in
+// S235 has lp = 12.5 / (28.4 x 1 x sqrt(0.43)) = 0.671 <= 0.748, rho = 1,
+// though (b + h)/2t = 12.5 > 11.5 eps makes it class 4 (EN 1993-1-1 Table
+// 5.2); L 100x100x6 in S355 has lp = 16.67 / (28.4 x 0.814 x 0.656) =
+// 1.10, rho = (lp - 0.188)/lp^2 = 0.75; L 120x120x10 in S355 is class 4
+// by the pair rule alone (12 > 9.36) with h/t = 12 <= 15 eps = 12.2, and
+// its legs still take rho of lp = 0.80: 0.95.
+func TestAngleReduced(t *testing.T) {
+	eps := math.Sqrt(235.0 / 355)
+	rho := func(ht, eps float64) float64 {
+		lp := ht / (28.4 * eps * math.Sqrt(0.43))
+		if lp <= 0.748 {
+			return 1
+		}
+		return (lp - 0.188) / (lp * lp)
+	}
+	for _, c := range []struct {
+		name    string
+		sec     Section
+		fy      float64
+		rho     float64
+		reduced bool
+	}{
+		{"L100x100x8 S235", Section{Shape: ShapeAngle, Depth: 100, Width: 100, Thickness: 8, Root: 12}, 235, 1, false},
+		{"L100x100x6 S355", Section{Shape: ShapeAngle, Depth: 100, Width: 100, Thickness: 6, Root: 12}, 355, rho(100.0/6, eps), true},
+		{"L120x120x10 S355", Section{Shape: ShapeAngle, Depth: 120, Width: 120, Thickness: 10, Root: 13}, 355, rho(12, eps), true},
+	} {
+		p, cl, err := c.sec.Classify(c.fy)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if cl.Class != 4 || cl.Reduced() != c.reduced || math.Abs(cl.Elements[0].Rho-c.rho) > 1e-12 {
+			t.Errorf("%s: class %d, rho %.4f, reduced %v; want 4, %.4f, %v", c.name, cl.Class, cl.Elements[0].Rho, cl.Reduced(), c.rho, c.reduced)
+		}
+		if c.reduced == (p.AEff == 0 || p.AEff >= p.A) {
+			t.Errorf("%s: A_eff %g of A %g", c.name, p.AEff, p.A)
+		}
+	}
+}
+
+// TestBucklingCurveOpen: EN 1993-1-1:2005 Table 6.2 gives L-sections
+// curve b and U- and T-sections curve c, about both axes, any grade.
+func TestBucklingCurveOpen(t *testing.T) {
+	for _, c := range []struct {
+		sec  Section
+		want string
+	}{
+		{Section{Shape: ShapeAngle, Depth: 100, Width: 100, Thickness: 10}, "b"},
+		{Section{Shape: ShapeChannel, Depth: 200, Width: 75, Flange: 11.5, Web: 8.5}, "c"},
+		{Section{Shape: ShapeTee, Depth: 100, Width: 200, Flange: 10, Web: 6}, "c"},
+	} {
+		for _, a := range []Axis{Major, Minor} {
+			if got, _, err := BucklingCurve(c.sec, HotRolled, 460, a); err != nil || got != c.want {
+				t.Errorf("%s %s: curve %q (%v), want %q", c.sec.Shape, a, got, err, c.want)
+			}
+		}
+	}
+}

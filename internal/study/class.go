@@ -12,6 +12,15 @@ import (
 // class 4: its local buckling is shell buckling, which is not modelled.
 var errShell = errors.New("study: the circular hollow section is class 4 (d/t beyond 90 eps^2): shell buckling (EN 1993-1-6) is not modelled")
 
+// errOpen is the refusal of a sample whose angle, channel or tee is class
+// 4: its effective section's centroid shift is not modelled.
+var errOpen = errors.New("study: the open section is class 4: the shift of its effective centroid (EN 1993-1-1 6.3.3) is not modelled")
+
+// openShape reports an angle, a channel or a tee.
+func openShape(s column.Shape) bool {
+	return s == column.ShapeAngle || s == column.ShapeChannel || s == column.ShapeTee
+}
+
 // classifyOptions decides how the model finds the section's class.
 func (md *Model) classifyOptions(st *Study) {
 	switch st.Section.Shape {
@@ -44,6 +53,9 @@ func (md *Model) sectionProps(sec *column.Section, fy float64) (column.Props, er
 	}
 	if cl.Class == 4 && sec.Shape == column.ShapeCHS && !md.shellOK {
 		return p, errShell
+	}
+	if cl.Class == 4 && openShape(sec.Shape) && cl.Reduced() {
+		return p, errOpen
 	}
 	return p, nil
 }
@@ -93,17 +105,44 @@ func (p *parser) class4(sec column.Section, cl column.Classification) {
 		p.warnf("member.section: the CHS is class 4 (shell buckling, EN 1993-1-6, is not modelled): its whole area is taken as effective and capacity.model_factor must cover shell buckling")
 		return
 	}
+	if openShape(sec.Shape) && !cl.Reduced() {
+		p.warnf("member.section: the %s is class 4 (%s, EN 1993-1-1 Table 5.2), but every part is fully effective (rho = 1, EN 1993-1-5 4.4): the gross section is used", st.Section.Name, class4Parts(cl))
+		return
+	}
+	if openShape(sec.Shape) {
+		p.errorf("member.section", "the %s is class 4 (%s, EN 1993-1-1 Table 5.2): its effective section would shift its centroid (e_N of EN 1993-1-1 6.3.3), which strutrisk does not model. Choose a stockier section, or give it as custom with the effective area and second moments", st.Section.Name, class4Parts(cl))
+		return
+	}
 	if st.Model == "beam-column" && st.Limit == "ultimate" {
 		p.errorf("capacity.limit", "the section is class 4 (EN 1993-1-1 Table 5.2) and the ultimate beam-column follows the gross fibre section, not local buckling: use limit = \"first-yield\" (on the effective section) or model = \"curve\"")
 		return
 	}
+	p.warnf("member.section: class 4 at nominal values (%s, EN 1993-1-1 Table 5.2): every sample takes its effective area and moduli (EN 1993-1-5 4.4), not the gross section", class4Parts(cl))
+}
+
+// class4Parts names the class 4 parts of cl with their ratio and limit.
+func class4Parts(cl column.Classification) string {
 	var parts []string
 	for _, e := range cl.Elements[:cl.N] {
 		if e.Class == 4 {
-			parts = append(parts, fmt.Sprintf("%s c/t %.1f > %.1f", e.Name, e.Ratio, e.Limits[2]))
+			parts = append(parts, fmt.Sprintf("%s %s %.1f > %.1f", e.Name, RatioName(e.Kind), e.Ratio, e.Limits[2]))
 		}
 	}
-	p.warnf("member.section: class 4 at nominal values (%s, EN 1993-1-1 Table 5.2): every sample takes its effective area and moduli (EN 1993-1-5 4.4), not the gross section", strings.Join(parts, ", "))
+	return strings.Join(parts, ", ")
+}
+
+// RatioName is how the slenderness of a part of kind k is written: "c/t",
+// "d/t" for a tube, "h/t" for an angle's leg, "(b+h)/2t" for its legs.
+func RatioName(k column.ElementKind) string {
+	switch k {
+	case column.Tube:
+		return "d/t"
+	case column.Leg:
+		return "h/t"
+	case column.LegPair:
+		return "(b+h)/2t"
+	}
+	return "c/t"
 }
 
 // tailClass warns when the upper tails of the yield strength and of the
@@ -134,6 +173,10 @@ func (p *parser) tailClass(nominal int) {
 	switch {
 	case sec.Shape == column.ShapeCHS && st.ModelFactor == nil:
 		what = "are counted as failures: a class 4 CHS buckles as a shell (EN 1993-1-6), which is not modelled"
+	case openShape(sec.Shape) && cl.Reduced():
+		what = "are counted as failures: the centroid shift of a class 4 open section is not modelled"
+	case openShape(sec.Shape):
+		what = "stay fully effective (rho = 1)"
 	case st.Model == "beam-column" && st.Limit == "ultimate":
 		what = "are counted as failures: the ultimate beam-column cannot follow local buckling"
 	}

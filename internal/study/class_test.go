@@ -182,3 +182,23 @@ func TestThicknessLossMovesClass(t *testing.T) {
 		t.Errorf("warnings %q", st.Warnings)
 	}
 }
+
+// TestOpenClass4: a class 4 angle whose legs stay fully effective (EN
+// 1993-1-5 4.4(2), see column.TestAngleReduced) is used with a warning;
+// one whose legs are reduced is refused (its centroid shift, EN 1993-1-1
+// 6.3.3, is not modelled).
+func TestOpenClass4(t *testing.T) {
+	angle := func(thick, fy string) string {
+		s := strings.Replace(base, "shape = \"CHS\"\ndiameter = 168.3\nthickness = 8",
+			"shape = \"angle\"\ndepth = 100\nwidth = 100\nthickness = "+thick+"\nroot = 12", 1)
+		return strings.Replace(s, "yield = 355", "yield = "+fy, 1)
+	}
+	st := parse(t, angle("8", "235"))
+	if !strings.Contains(strings.Join(st.Warnings, "\n"), "fully effective") {
+		t.Errorf("L100x100x8 S235: warnings %q", st.Warnings)
+	}
+	_, err := Parse("t.toml", []byte(angle("6", "355")))
+	if err == nil || !strings.Contains(err.Error(), "member.section: the angle is class 4") {
+		t.Errorf("L100x100x6 S355: %v; want a refusal", err)
+	}
+}
