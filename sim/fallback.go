@@ -70,7 +70,7 @@ func crudeFallback(ctx context.Context, m *Model, t *Transform, s *Settings, f *
 	left := s.Samples - spent
 	if left < minFallbackSamples {
 		flagged.FORM = f
-		flagged.flag(status, fmt.Sprintf("%s: %s cannot be trusted, and the %d evaluations left of the budget are too few for plain Monte Carlo", why, flagged.Method, max(left, 0)))
+		flagged.flag(status, fmt.Sprintf("%s; plain Monte Carlo could not take over: only %d evaluations of the budget were left (give more samples)", why, max(left, 0)))
 		return flagged, nil
 	}
 	e := &crudeEngine{m: m, t: t, seed: s.Seed, stream: streamMC, n: left}
