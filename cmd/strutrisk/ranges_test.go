@@ -19,6 +19,8 @@ func TestHugeAndTinyValuesRefusedAtCheck(t *testing.T) {
 		{"model factor 1e300", good + "[capacity]\nmodel_factor = 1e300\n", "study.toml:20: capacity.model_factor: 1e+300 is outside the range a study may use for a plain number (1e-09 to 1e+06, or 0)"},
 		{"modulus 1e300", edit(10, "modulus = 1e300"), "study.toml:10: material.modulus: 1e+300 MPa is outside the range"},
 		{"bow L/1e-300", edit(13, `bow = "L/1e-300"`), "study.toml:13: imperfection.bow: L/1e-300 is more than the member length"},
+		{"lognormal mu 600", edit(11, `yield = { dist = "lognormal", mu = 600, sigma = 0.1 }`), "study.toml:11: material.yield: the median of the distribution, 3.77e+260 MPa, is outside the range"},
+		{"weibull shape 0.02", edit(16, `imposed = { dist = "weibull", shape = 0.02, scale = 1000 }`), "study.toml:16: loads.imposed: the distribution reaches 4.99e+81 N at its 1e-16 fractile"},
 		{"swept value", good + "[sweep]\nparameter = \"loads.dead.mean\"\nvalues = [100000, 1e300]\n", "study.toml:21: sweep.values[1]: 1e+300 N is outside the range"},
 		{"variant value", good + "[[variant]]\nname = \"huge\"\nset = { \"material.yield.mean\" = 1e100 }\n", `study.toml:21: material.yield: with the values of variant "huge": mean: 1e+100 MPa is outside the range`},
 	} {

@@ -415,6 +415,9 @@ func (p *parser) build(q *Quantity, o qopt) {
 		p.errorf(q.Path, "the distribution has no finite mean and spread: check its parameters")
 		return
 	}
+	if !p.distInRange(q, d, o) {
+		return
+	}
 	q.Dist = d
 }
 

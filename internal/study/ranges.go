@@ -86,3 +86,61 @@ func rangeHelp() string {
 	}
 	return s
 }
+
+// maxReach bounds the values a distribution takes out to the 1e-16
+// fractiles (eight standard normal units), which FORM, subset simulation
+// and importance sampling visit: products of a few such values stay
+// finite.
+const maxReach = 1e30
+
+// distInRange reports a distribution whose median lies outside the range
+// of its dimension, or whose far tails are not finite or beyond maxReach
+// (a lognormal with mu = 600, a Weibull of shape 0.02).
+func (p *parser) distInRange(q *Quantity, d interface {
+	Quantile(float64) float64
+	FromStdNormal(float64) float64
+}, o qopt) bool {
+	med := d.Quantile(0.5)
+	r, m := rangeOf(o.dim), math.Abs(med)
+	if q.Relative {
+		r = span{0, maxFraction}
+	}
+	if m != 0 && (m < r.lo || m > r.hi) {
+		p.errorf(q.Path, "the median of the distribution, %s, is outside the range a study may use for %s (%g to %g%s, or 0): check its parameters and their unit",
+			p.showShort(med, o.dim, q.Relative), o.dim, r.lo, r.hi, unitSuffix(o.dim, q.Relative))
+		return false
+	}
+	for _, u := range []float64{-8.3, 8.3} {
+		x := d.FromStdNormal(u)
+		if math.IsNaN(x) || math.Abs(x) > maxReach {
+			p.errorf(q.Path, "the distribution reaches %s at its 1e-16 fractile, beyond what can be computed with: check its parameters (a smaller spread, a shape nearer 1)", p.showShort(x, o.dim, q.Relative))
+			return false
+		}
+	}
+	return true
+}
+
+// showShort formats a value in the study's units with 3 digits, or as a
+// fraction of L.
+func (p *parser) showShort(v float64, d Dim, rel bool) string {
+	if rel {
+		return fmt.Sprintf("%.3g L", v)
+	}
+	u := p.sys.Unit(d)
+	x := v / p.sys.Factor(d)
+	if u == "" {
+		return fmt.Sprintf("%.3g", x)
+	}
+	return fmt.Sprintf("%.3g %s", x, u)
+}
+
+// unitSuffix is " mm" for a length, " L" for a fraction of the length.
+func unitSuffix(d Dim, rel bool) string {
+	switch {
+	case rel:
+		return " L"
+	case InternalUnit(d) == "":
+		return ""
+	}
+	return " " + InternalUnit(d)
+}
