@@ -104,9 +104,11 @@ func TestShortEqualAngleEndToEnd(t *testing.T) {
 func TestTwistingWarnings(t *testing.T) {
 	pr := strings.Replace(shortAngle, "model = \"curve\"\ncurve = \"b\"\n", "model = \"perry-robertson\"\n[imperfection]\nbow = \"L/1000\"\n", 1)
 	axis := strings.Replace(shortAngle, "curve = \"b\"\n", "curve = \"b\"\naxis = \"minor\"\n", 1)
+	beam := strings.Replace(strings.Replace(pr, "perry-robertson", "beam-column", 1), "length = 600", "length = 1100", 1)
 	for _, c := range []struct{ study, want string }{
 		{pr, "capacity.model: flexural-torsional buckling (1739 kN) governs the elastic critical load; the first-yield formula is applied"},
 		{axis, "capacity.axis: minor alone is checked, but flexural-torsional buckling at 1739 kN comes before"},
+		{beam, "capacity.model: flexural-torsional buckling at 1504 kN is within 25 % of the flexural critical load 1285 kN"},
 	} {
 		code, out, errs := invoke(t, "check", writeStudy(t, c.study))
 		if code != 0 || !strings.Contains(out, c.want) {

@@ -66,10 +66,14 @@ func (p *parser) twistingNotes() {
 	if st.Shear == nil {
 		p.defaultf("material.shear_modulus: not given; G = E / (2 (1 + 0.3)) for torsional buckling")
 	}
+	kN := func(x float64) string { return fmt.Sprintf("%.4g kN", x/1e3) }
 	if !cmode.Twists() {
+		if flex := ncr; st.Model == "beam-column" && st.Axis == column.Both && nt < 1.25*flex {
+			p.warnf("capacity.model: %s buckling at %s is within 25 %% of the flexural critical load %s at nominal values; the beam-column bends in one plane, and a sample in which the twisting mode comes first has no capacity (it counts as a failure): model \"curve\" checks both modes",
+				mode, kN(nt), kN(flex))
+		}
 		return
 	}
-	kN := func(x float64) string { return fmt.Sprintf("%.4g kN", x/1e3) }
 	switch {
 	case st.Axis != column.Both:
 		if e := column.Euler(&m, st.Axis); nt < e {
