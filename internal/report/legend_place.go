@@ -2,6 +2,7 @@ package report
 
 import (
 	"math"
+	"unicode/utf8"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
@@ -64,4 +65,31 @@ func placeLegend(p *plot.Plot, pts plotter.XYs, entries, longest int, xmax, ymax
 	if !c.top {
 		p.Legend.YOffs = vg.Points(6)
 	}
+}
+
+// legendLayout gathers what a plot draws and names in its legend, so
+// that the legend can then go where it hides the fewest points.
+type legendLayout struct {
+	pts   plotter.XYs
+	names []string
+}
+
+// add names thumbs in the legend of p and records the points drawn.
+func (l *legendLayout) add(p *plot.Plot, name string, pts plotter.XYs, thumbs ...plot.Thumbnailer) {
+	p.Legend.Add(name, thumbs...)
+	l.pts = append(l.pts, pts...)
+	l.names = append(l.names, name)
+}
+
+// place puts the legend of p, a picture of size w by h whose data area
+// starts at 0 on both axes (see placeLegend).
+func (l *legendLayout) place(p *plot.Plot, w, h vg.Length) {
+	xmax, ymax, longest := 0.0, 0.0, 0
+	for _, q := range l.pts {
+		xmax, ymax = math.Max(xmax, q.X), math.Max(ymax, q.Y)
+	}
+	for _, n := range l.names {
+		longest = max(longest, utf8.RuneCountInString(n))
+	}
+	placeLegend(p, l.pts, len(l.names), longest, xmax, ymax, w, h)
 }

@@ -1,9 +1,7 @@
 package report
 
 import (
-	"math"
 	"strings"
-	"unicode/utf8"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
@@ -33,11 +31,7 @@ func slendernessFigure(b *Bundle) *figure {
 	}
 	p := newPlot("Capacity against relative slenderness", "relative slenderness λ (–)", "capacity / squash load N/Ny (–)")
 	addGrid(p, true)
-	drawn := 0
-	// occupied are the points drawn, names the legend's entries: the
-	// legend goes where it hides the fewest points.
-	var occupied plotter.XYs
-	var names []string
+	var lg legendLayout
 	var cloud plotter.XYs
 	for _, c := range s.Cloud {
 		if finite(c[0]) && finite(c[1]) {
@@ -45,23 +39,45 @@ func slendernessFigure(b *Bundle) *figure {
 		}
 	}
 	if len(cloud) > 0 {
-		sc, err := plotter.NewScatter(cloud)
-		if err == nil {
+		if sc, err := plotter.NewScatter(cloud); err == nil {
 			sc.GlyphStyle = draw.GlyphStyle{Color: faded(colSafe, 0x66), Radius: vg.Points(1.3), Shape: draw.CircleGlyph{}}
 			p.Add(sc)
-			p.Legend.Add("sampled members", sc)
-			occupied, names = append(occupied, cloud...), append(names, "sampled members")
-			drawn++
+			lg.add(p, "sampled members", cloud, sc)
 		}
 	}
-	var notes []string
+	notes := addModelCurves(p, &lg, s.Curves)
+	if m := s.Member; finite(m[0]) && finite(m[1]) && (m[0] != 0 || m[1] != 0) {
+		pt := plotter.XYs{{X: m[0], Y: m[1]}}
+		if sc, err := plotter.NewScatter(pt); err == nil {
+			sc.GlyphStyle = draw.GlyphStyle{Color: colFailure, Radius: vg.Points(4.5), Shape: draw.CrossGlyph{}}
+			p.Add(sc)
+			lg.add(p, "this member (nominal)", pt, sc)
+		}
+	}
+	if len(lg.names) == 0 {
+		return nil
+	}
+	p.X.Min, p.Y.Min = 0, 0
+	w, h := 16*vg.Centimeter, 10*vg.Centimeter
+	lg.place(p, w, h)
+	caption := ""
+	if len(notes) > 0 {
+		caption = " " + strings.Join(notes, " ")
+	}
+	return &figure{Name: "slenderness", Caption: "Capacity as a fraction of the squash load, N/Ny, against relative slenderness λ (both dimensionless): the deterministic curve of each capacity model about each axis the study checks (the minor axis's marked with rings), each model in one colour and line style in every picture, the sampled members (cloud) and the nominal member (cross)." + caption, W: w, H: h, Plots: []*plot.Plot{p}}
+}
+
+// addModelCurves draws curves in their models' styles (modelStyle), the
+// minor axis's marked with rings when both axes are drawn, and returns
+// the curves' notes for the caption.
+func addModelCurves(p *plot.Plot, lg *legendLayout, curves []Curve) (notes []string) {
 	axes := map[string]bool{}
-	for _, c := range s.Curves {
-		if c.Axis != "" {
+	for _, c := range curves {
+		if c.Axis == "major" || c.Axis == "minor" {
 			axes[c.Axis] = true
 		}
 	}
-	for _, c := range s.Curves {
+	for _, c := range curves {
 		xy := finiteXYs(c.X, c.Y)
 		if len(xy) < 2 {
 			continue
@@ -75,7 +91,6 @@ func slendernessFigure(b *Bundle) *figure {
 		thumbs := []plot.Thumbnailer{ln}
 		p.Add(ln)
 		if c.Axis == "minor" && len(axes) > 1 {
-			// The minor axis's curves carry rings, in their model's style.
 			var marks plotter.XYs
 			for k := 4; k < len(xy); k += 6 {
 				marks = append(marks, xy[k])
@@ -90,39 +105,10 @@ func slendernessFigure(b *Bundle) *figure {
 		if name == "" {
 			name = "capacity model"
 		}
-		p.Legend.Add(name, thumbs...)
-		occupied, names = append(occupied, xy...), append(names, name)
+		lg.add(p, name, xy, thumbs...)
 		if c.Note != "" {
 			notes = append(notes, name+": "+c.Note+".")
 		}
-		drawn++
 	}
-	if m := s.Member; finite(m[0]) && finite(m[1]) && (m[0] != 0 || m[1] != 0) {
-		sc, err := plotter.NewScatter(plotter.XYs{{X: m[0], Y: m[1]}})
-		if err == nil {
-			sc.GlyphStyle = draw.GlyphStyle{Color: colFailure, Radius: vg.Points(4.5), Shape: draw.CrossGlyph{}}
-			p.Add(sc)
-			p.Legend.Add("this member (nominal)", sc)
-			occupied, names = append(occupied, plotter.XY{X: m[0], Y: m[1]}), append(names, "this member (nominal)")
-			drawn++
-		}
-	}
-	if drawn == 0 {
-		return nil
-	}
-	p.X.Min, p.Y.Min = 0, 0
-	xmax, ymax, longest := 0.0, 0.0, 0
-	for _, q := range occupied {
-		xmax, ymax = math.Max(xmax, q.X), math.Max(ymax, q.Y)
-	}
-	for _, n := range names {
-		longest = max(longest, utf8.RuneCountInString(n))
-	}
-	w, h := 16*vg.Centimeter, 10*vg.Centimeter
-	placeLegend(p, occupied, len(names), longest, xmax, ymax, w, h)
-	caption := ""
-	if len(notes) > 0 {
-		caption = " " + strings.Join(notes, " ")
-	}
-	return &figure{Name: "slenderness", Caption: "Capacity as a fraction of the squash load, N/Ny, against relative slenderness λ (both dimensionless): the deterministic curve of each capacity model about each axis the study checks (the minor axis's marked with rings), each model in one colour and line style in every picture, the sampled members (cloud) and the nominal member (cross)." + caption, W: w, H: h, Plots: []*plot.Plot{p}}
+	return notes
 }
