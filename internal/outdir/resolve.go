@@ -2,6 +2,7 @@ package outdir
 
 import (
 	"fmt"
+	"os"
 	"path/filepath"
 	"strings"
 	"unicode"
@@ -42,9 +43,41 @@ func Resolve(r Request) (string, error) {
 		if filepath.Clean(d) == "." {
 			return "", &ErrDir{fmt.Sprintf("%q is the study's own folder: strutrisk replaces its output folder as a whole, so name a sub-folder (e.g. \"out/bay3\") or give --out", r.Dir)}
 		}
-		return filepath.Join(filepath.Dir(r.StudyFile), d), nil
+		p := filepath.Join(filepath.Dir(r.StudyFile), d)
+		if !insideAfterLinks(filepath.Dir(r.StudyFile), p) {
+			return "", &ErrDir{fmt.Sprintf("%q leaves the study's folder through a symbolic link: [output] dir is a folder inside it; to write elsewhere give --out", r.Dir)}
+		}
+		return p, nil
 	}
 	return filepath.Join("out", SafeName(r.StudyFile)), nil
+}
+
+// insideAfterLinks says whether the path p, lexically inside the folder
+// base, stays inside it once the symbolic links of its existing part are
+// followed. Where the file system cannot tell, it says yes: the lexical
+// check stands.
+func insideAfterLinks(base, p string) bool {
+	rb, err := filepath.EvalSymlinks(base)
+	if err != nil {
+		return true
+	}
+	q := p
+	for {
+		if _, err := os.Lstat(q); err == nil {
+			break
+		}
+		up := filepath.Dir(q)
+		if up == q {
+			return true
+		}
+		q = up
+	}
+	rq, err := filepath.EvalSymlinks(q)
+	if err != nil {
+		return true
+	}
+	rel, err := filepath.Rel(rb, rq)
+	return err == nil && (rel == "." || filepath.IsLocal(rel))
 }
 
 // maxName bounds the length of a default folder name, in bytes.

@@ -2,6 +2,7 @@ package outdir
 
 import (
 	"errors"
+	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -58,5 +59,30 @@ func TestResolve(t *testing.T) {
 				t.Errorf("Resolve = %q, %v; want an *ErrDir saying %q and naming --out", got, err, c.bad)
 			}
 		})
+	}
+}
+
+// TestResolveLink: a dir that leaves the study's folder through a
+// symbolic link inside it is refused like "../x".
+func TestResolveLink(t *testing.T) {
+	studies, elsewhere := t.TempDir(), t.TempDir()
+	if err := os.Symlink(elsewhere, filepath.Join(studies, "link")); err != nil {
+		t.Skipf("no symbolic links here: %v", err)
+	}
+	os.Mkdir(filepath.Join(studies, "real"), 0o755)
+	study := filepath.Join(studies, "s.toml")
+	for _, c := range []struct {
+		dir string
+		ok  bool
+	}{
+		{"link/x", false},
+		{"link", false},
+		{"real/x", true},
+		{"new/deeper", true},
+	} {
+		_, err := Resolve(Request{StudyFile: study, Dir: c.dir})
+		if c.ok != (err == nil) || (err != nil && !strings.Contains(err.Error(), "symbolic link")) {
+			t.Errorf("dir %q: %v", c.dir, err)
+		}
 	}
 }
