@@ -259,6 +259,7 @@ func (r *results) bundle() *report.Bundle {
 		{Key: "why", Value: r.res.Reason},
 		{Key: "evaluations", Value: fmt.Sprint(r.res.Evaluations)},
 		{Key: "cov of pf", Value: fmt.Sprintf("%.3g", r.res.PfCoV)},
+		{Key: "status", Value: statusText(r.res)},
 		{Key: "seed", Value: fmt.Sprint(r.settings.Seed)},
 	}
 	if r.form != nil {
@@ -331,4 +332,16 @@ func replicateName(m sim.Method) string {
 		return "run"
 	}
 	return ""
+}
+
+// statusText is the trust status of res with its reason, for the report.
+func statusText(res *sim.Result) string {
+	s := res.Status.String()
+	if !res.Status.Trusted() {
+		s += " (no verdict is drawn)"
+	}
+	if res.StatusReason != "" && res.Status != sim.Converged {
+		s += ": " + res.StatusReason
+	}
+	return s
 }

@@ -205,8 +205,11 @@ func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings
 	if res.Incomplete {
 		return nil, "", fmt.Errorf("interrupted")
 	}
-	if !res.Status.Trusted() {
+	switch {
+	case !res.Status.Trusted():
 		status = "the estimate of this case cannot be trusted: " + res.StatusReason
+	case res.Status == sim.FewFailures:
+		status = res.StatusReason
 	}
 	pt = &report.Point{Pf: res.Pf, Beta: report.Index(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]}}
 	if i >= 0 {

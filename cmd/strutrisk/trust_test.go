@@ -234,3 +234,23 @@ func TestRunFORMInterrupted(t *testing.T) {
 		}
 	}
 }
+
+// TestSweepCaseFewFailuresWarns: a swept case whose plain-sampling
+// estimate rests on fewer than 10 failures says so (the stocky strut at
+// 900 kN has beta about 5.4, pf about 4e-8, by the lognormal closed form
+// given with stocky in run_test.go, so 3000 samples see no failure).
+func TestSweepCaseFewFailuresWarns(t *testing.T) {
+	study := writeStudy(t, stocky+"[sweep]\nparameter = \"loads.axial.mean\"\nvalues = [\"900 kN\", \"1500 kN\"]\n")
+	code, out, errs := invoke(t, "run", study, "--json", "--out", t.TempDir(), "--method", "monte-carlo", "--samples", "3000")
+	var d report.Document
+	if err := json.Unmarshal([]byte(out), &d); err != nil {
+		t.Fatalf("exit %d, no document: %v\n%s", code, err, errs)
+	}
+	for _, w := range d.Warnings {
+		if strings.Contains(w, "900") && strings.Contains(w, "failed samples of 3000") {
+			t.Log(w)
+			return
+		}
+	}
+	t.Errorf("no warning about the few failures of the 900 kN case: %q", d.Warnings)
+}
