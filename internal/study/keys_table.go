@@ -104,6 +104,16 @@ var keyTables = []*TableInfo{
 		{Name: "permanent", Takes: "list of load names", Default: "the loads named dead, permanent, self_weight, superimposed_dead",
 			Meaning: "The permanent loads; every other load is variable."},
 	}},
+	{Path: "code_check", Meaning: "The deterministic code check beside beta (EN 1993-1-1 6.3.1, EN 1990 6.10) at characteristic values: recommended factors by default; the National Annex may differ.", Keys: []KeyInfo{
+		{Name: "gamma_m0", Takes: "number (1 to 2)", Default: "1.0 (EN 1993-1-1 6.1 note 2B, recommended)", Meaning: "The partial factor of the cross-section resistance N_c,Rd."},
+		{Name: "gamma_m1", Takes: "number (1 to 2)", Default: "1.0 (EN 1993-1-1 6.1 note 2B, recommended)", Meaning: "The partial factor of the buckling resistance N_b,Rd."},
+		{Name: "gamma_g", Takes: "number (1 to 2)", Default: "1.35 (EN 1990 Table A1.2(B), recommended)", Meaning: "The factor of unfavourable permanent loads (favourable ones take 1.0)."},
+		{Name: "gamma_q", Takes: "number (1 to 2)", Default: "1.5 (EN 1990 Table A1.2(B), recommended)", Meaning: "The factor of unfavourable variable loads (favourable ones take 0)."},
+		{Name: "psi_0", Takes: "number (0 to 1)", Default: "0.7 (EN 1990 Table A1.1, imposed loads)", Meaning: "The combination factor of the accompanying variable loads (expression 6.10)."},
+		{Name: "characteristic", Takes: "table of random input paths and quantities, e.g. { \"loads.imposed\" = \"150 kN\" }",
+			Default: "5 % fractile of the yield, mean of permanent loads and of the rest, 98 % fractile of annual maxima of variable loads",
+			Meaning: "Characteristic values the study sets instead of those taken from the distributions."},
+	}},
 	{Path: "measurements", Meaning: "Test results that update a distribution of the study (EN 1990 Annex D).", Keys: []KeyInfo{
 		{Name: "yield", Takes: "table", Meaning: "Updates material.yield."},
 		{Name: "modulus", Takes: "table", Meaning: "Updates material.modulus."},

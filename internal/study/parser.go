@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"path/filepath"
+	"slices"
 	"sort"
 	"strings"
 
@@ -357,6 +358,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.loads(top)
 	p.capacity(top)
 	p.target(top)
+	p.codeCheck(top) // codecheck_keys.go
 	p.analysis(top)
 	p.sensitivity(top)
 	if st.Model == "beam-column" && (top.m["sensitivity"] == nil || !hasKey(top.m["sensitivity"], "sobol")) {
@@ -846,6 +848,13 @@ func (p *parser) profile(key string, v any) []float64 {
 func (p *parser) target(top *table) {
 	t := p.sub(top, "target")
 	if t == nil {
+		// No [target]: the loads with permanent names are still
+		// permanent for characteristic values and the code check.
+		for _, q := range p.st.Loads {
+			if slices.Contains(permanentNames, strings.TrimPrefix(q.Path, "loads.")) {
+				p.st.PermanentLoads = append(p.st.PermanentLoads, q.Path)
+			}
+		}
 		return
 	}
 	p.targetBeta(t) // targetsource.go

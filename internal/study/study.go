@@ -72,6 +72,10 @@ type Study struct {
 	ReserveOn      string
 	PermanentLoads []string
 
+	// CodeCheck holds the partial factors of the deterministic code check
+	// ([code_check], see codecheck.go).
+	CodeCheck CodeCheckSpec
+
 	// Measurements are the test results that updated quantities of the
 	// study (see measure.go).
 	Measurements []*Measurement

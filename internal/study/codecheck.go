@@ -1,0 +1,255 @@
+package study
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"strutrisk/internal/assess"
+	"strutrisk/internal/column"
+)
+
+// CodeCheckSpec holds the partial factors of [code_check] (defaults: the
+// recommended values, see assess.GammaM0...) and the characteristic
+// values the study sets itself.
+type CodeCheckSpec struct {
+	GammaM0, GammaM1, GammaG, GammaQ, Psi0 float64
+	// Characteristic holds characteristic values given in the study, by
+	// the random input's path (N, mm, MPa).
+	Characteristic map[string]float64
+}
+
+// CheckInput is one input of the code check at its characteristic value.
+type CheckInput struct {
+	Path, Unit string
+	Value      float64
+	Basis      string
+}
+
+// CodeCheck is the deterministic check of EN 1993-1-1:2005 6.2.4 and
+// 6.3.1 at characteristic values with partial factors: the design
+// resistance against the design load of EN 1990 expression 6.10. All
+// forces in N, stresses in MPa, areas in mm2.
+type CodeCheck struct {
+	GammaM0, GammaM1 float64
+	Factors          assess.LoadFactors
+	// Inputs are the characteristic values used: every random input and
+	// every load, in the order of the file.
+	Inputs []CheckInput
+	// Fy is the characteristic yield strength, EffectiveArea A (A_eff of a
+	// class 4 section at Fy) and Class the section's class (0: custom).
+	Fy, EffectiveArea float64
+	Class             int
+	// Curve is the buckling curve of the governing mode ("" when an
+	// imperfection factor was given), Alpha its imperfection factor and
+	// CurveFrom where it came from.
+	Curve     string
+	Alpha     float64
+	CurveFrom string
+	// Axis and Mode are those of the governing buckling resistance,
+	// Critical its elastic critical load, RelSlenderness
+	// sqrt(A_eff fy / N_cr) and Chi the reduction factor of eq. (6.49).
+	Axis                     column.Axis
+	Mode                     column.Mode
+	Critical, RelSlenderness float64
+	Chi                      float64
+	CrossSection, Buckling   float64 // N_c,Rd (6.10, 6.11), N_b,Rd (6.47)
+	Resistance               float64 // the smaller of the two
+	Loads                    []assess.Load
+	Combination              assess.Combination
+	EffectFactor             float64
+	DesignLoad, Utilisation  float64
+	Notes                    []string
+}
+
+// CodeCheck makes the deterministic code check of the study: every input
+// at its characteristic value (Characteristic, or the value of [code_check]
+// characteristic), the resistance by EN 1993-1-1 6.3.1 whatever the
+// study's capacity model, with the buckling curve of the study (capacity.
+// curve or alpha) or of EN 1993-1-1 Table 6.2, the design load by EN 1990
+// 6.10 times the effect factor's characteristic value (its mean). The
+// model factor is not applied: gamma_M1 stands for it.
+func (md *Model) CodeCheck() (*CodeCheck, error) {
+	st := md.Study
+	cs := st.CodeCheck
+	c := &CodeCheck{GammaM0: cs.GammaM0, GammaM1: cs.GammaM1, Factors: assess.LoadFactors{GammaG: cs.GammaG, GammaQ: cs.GammaQ, Psi0: cs.Psi0}}
+	v, char := md.characteristicValues(c)
+	m, sec, err := md.member(&v)
+	if err == nil {
+		err = m.Validate(column.Both)
+	}
+	if err != nil {
+		return nil, fmt.Errorf("at characteristic values: %v", err)
+	}
+	if err := md.checkCurves(c, &m); err != nil {
+		return nil, err
+	}
+	c.Fy, c.EffectiveArea = m.Fy, m.Props.EffectiveArea()
+	if _, cl, err := sec.Classify(m.Fy); err == nil {
+		c.Class = cl.Class
+	}
+	if err := md.checkBuckling(c, &m); err != nil {
+		return nil, err
+	}
+	c.CrossSection = c.EffectiveArea * c.Fy / c.GammaM0
+	c.Buckling = c.Chi * c.EffectiveArea * c.Fy / c.GammaM1
+	c.Resistance = math.Min(c.CrossSection, c.Buckling)
+	for _, q := range st.Loads {
+		c.Loads = append(c.Loads, assess.Load{Name: q.Path, Characteristic: char[q], Permanent: md.isPermanent(q)})
+	}
+	if c.Combination, err = assess.DesignLoad(c.Loads, c.Factors); err != nil {
+		return nil, err
+	}
+	c.EffectFactor = v[fEffect]
+	c.DesignLoad = c.EffectFactor * c.Combination.Design
+	if c.Resistance > 0 {
+		c.Utilisation = c.DesignLoad / c.Resistance
+	}
+	c.Notes = md.checkNotes()
+	return c, nil
+}
+
+// characteristicValues sets every input of an evaluation at its
+// characteristic value and lists the random ones and the loads in c.
+func (md *Model) characteristicValues(c *CodeCheck) (values, map[*Quantity]float64) {
+	st := md.Study
+	v := md.base
+	char := map[*Quantity]float64{}
+	for i, b := range md.binds {
+		q := md.quantity(i)
+		ch := md.Characteristic(i)
+		if x, ok := st.CodeCheck.Characteristic[q.Path]; ok {
+			ch = assess.Characteristic{Value: x, Basis: "code_check.characteristic"}
+		}
+		char[q] = ch.Value
+		md.set(&v, b, ch.Value)
+	}
+	for _, q := range st.Quantities {
+		x, random := char[q]
+		switch {
+		case random:
+			basis := md.Characteristic(md.index(q)).Basis
+			if _, ok := st.CodeCheck.Characteristic[q.Path]; ok {
+				basis = "code_check.characteristic"
+			}
+			if q == st.Bow || q == st.Ecc || q == st.Sway || q == st.ModelFactor {
+				continue // not in the code check
+			}
+			c.Inputs = append(c.Inputs, CheckInput{Path: q.Path, Unit: q.Unit(), Value: x, Basis: basis})
+		case md.isLoad(q):
+			char[q] = q.Value
+			c.Inputs = append(c.Inputs, CheckInput{Path: q.Path, Unit: q.Unit(), Value: q.Value, Basis: "fixed"})
+		}
+	}
+	return v, char
+}
+
+// index returns the variable index of a random quantity.
+func (md *Model) index(q *Quantity) int {
+	for i, v := range md.Sim.Vars {
+		if v.Name == q.Path {
+			return i
+		}
+	}
+	return -1
+}
+
+// checkCurves gives m the imperfection factor of each axis: the study's
+// curve or alpha, else EN 1993-1-1 Table 6.2's.
+func (md *Model) checkCurves(c *CodeCheck, m *column.Member) error {
+	st := md.Study
+	for a := column.Major; a <= column.Minor; a++ {
+		if st.Alpha[a] != nil {
+			continue // m.Alpha[a] holds its value
+		}
+		name, _, err := st.Table62(a)
+		if err != nil {
+			if st.Section.Shape == column.ShapeCustom {
+				return errors.New("a custom section has no buckling curve in EN 1993-1-1 Table 6.2: give capacity.curve for the code check")
+			}
+			return err
+		}
+		m.Alpha[a] = curveAlpha(name)
+	}
+	return nil
+}
+
+// checkBuckling finds the governing buckling resistance chi A_eff fy of
+// EN 1993-1-1 6.3.1 over the checked axes and, with both axes, the modes
+// that twist (6.3.1.4), with its curve, critical load and slenderness.
+func (md *Model) checkBuckling(c *CodeCheck, m *column.Member) error {
+	st := md.Study
+	best := math.Inf(1)
+	pick := func(n float64, a column.Axis, mode column.Mode, ncr float64) {
+		if n <= best {
+			best, c.Axis, c.Mode, c.Critical = n, a, mode, ncr
+		}
+	}
+	for a := column.Major; a <= column.Minor; a++ {
+		if st.Axis != column.Both && st.Axis != a {
+			continue
+		}
+		res, err := column.Curve(m, a)
+		if err != nil {
+			return fmt.Errorf("code check, %s axis: %v", a, err)
+		}
+		pick(res.N, a, res.Mode, column.Euler(m, a))
+	}
+	if st.Axis == column.Both && m.Props.It != 0 {
+		res, err := column.Twisting(m, column.GovernsCurve)
+		if err != nil {
+			return fmt.Errorf("code check, torsional mode: %v", err)
+		}
+		ncr, _ := column.TwistingLoad(m)
+		pick(res.N, column.Minor, res.Mode, ncr)
+	}
+	np := c.EffectiveArea * c.Fy
+	c.Chi = best / np
+	c.RelSlenderness = math.Sqrt(np / c.Critical)
+	c.Alpha = m.Alpha[c.Axis]
+	c.Curve, c.CurveFrom = md.curveOf(c.Axis)
+	return nil
+}
+
+// curveOf names the buckling curve of axis a and where it came from.
+func (md *Model) curveOf(a column.Axis) (curve, from string) {
+	st := md.Study
+	if st.Alpha[a] != nil {
+		if st.Curve[a] != "" {
+			return st.Curve[a], "capacity.curve"
+		}
+		return "", "capacity.alpha"
+	}
+	name, row, err := st.Table62(a)
+	if err != nil {
+		return "", ""
+	}
+	return name, "EN 1993-1-1 Table 6.2: " + row
+}
+
+// checkNotes are what a reader of the code check must know about this
+// study.
+func (md *Model) checkNotes() []string {
+	st := md.Study
+	notes := []string{"Recommended partial factors unless the study sets them; the National Annex may differ."}
+	if st.Ecc != nil || st.Sway != nil || st.Model == "beam-column" {
+		notes = append(notes, "The code check is the axial buckling resistance of EN 1993-1-1 6.3.1 only: end eccentricity, sway and bending (the 6.3.3 interaction) are not in it.")
+	}
+	if st.ModelFactor != nil {
+		notes = append(notes, "The model factor of the reliability model is not applied: gamma_M1 stands for the model uncertainty of the buckling curve.")
+	}
+	return notes
+}
+
+// Rule states the combination rule of the design load in words.
+func (c *CodeCheck) Rule() string {
+	s := fmt.Sprintf("EN 1990 6.10: gamma_G %g on permanent loads, gamma_Q %g on the leading variable load", c.Factors.GammaG, c.Factors.GammaQ)
+	if c.Combination.Leading != "" {
+		s += " (" + c.Combination.Leading + ")"
+	}
+	s += fmt.Sprintf(", gamma_Q psi_0 = %g x %g on the others; favourable loads 1.0 (permanent) or 0 (variable)", c.Factors.GammaQ, c.Factors.Psi0)
+	if c.EffectFactor != 1 {
+		s += fmt.Sprintf("; times the effect factor %g", c.EffectFactor)
+	}
+	return s
+}

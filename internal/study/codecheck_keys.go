@@ -1,0 +1,95 @@
+package study
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+
+	"strutrisk/internal/assess"
+)
+
+// codeCheck reads [code_check]: the partial factors of the code check
+// (the recommended values of EN 1993-1-1 and EN 1990 when not given,
+// listed under the defaults) and the characteristic values the study
+// sets.
+func (p *parser) codeCheck(top *table) {
+	cs := &p.st.CodeCheck
+	*cs = CodeCheckSpec{GammaM0: assess.GammaM0, GammaM1: assess.GammaM1, GammaG: assess.GammaG, GammaQ: assess.GammaQ, Psi0: assess.Psi0}
+	t := p.sub(top, "code_check")
+	var defaulted []string
+	for _, f := range []struct {
+		key      string
+		to       *float64
+		min, max float64
+		source   string
+	}{
+		{"gamma_m0", &cs.GammaM0, 1, 2, "EN 1993-1-1 6.1 note 2B"},
+		{"gamma_m1", &cs.GammaM1, 1, 2, "EN 1993-1-1 6.1 note 2B"},
+		{"gamma_g", &cs.GammaG, 1, 2, "EN 1990 Table A1.2(B)"},
+		{"gamma_q", &cs.GammaQ, 1, 2, "EN 1990 Table A1.2(B)"},
+		{"psi_0", &cs.Psi0, 0, 1, "EN 1990 Table A1.1, imposed loads"},
+	} {
+		x, ok := p.number(t, f.key)
+		if _, given := t.get(f.key); !given {
+			defaulted = append(defaulted, fmt.Sprintf("%s = %g (%s)", f.key, *f.to, f.source))
+			continue
+		}
+		if !ok {
+			continue // reported by number
+		}
+		if x < f.min || x > f.max {
+			p.errorf(t.key(f.key), "%s = %g is outside %g to %g", f.key, x, f.min, f.max)
+			continue
+		}
+		*f.to = x
+	}
+	if len(defaulted) > 0 {
+		p.defaultf("code_check: %s: recommended values; the National Annex may differ", strings.Join(defaulted, ", "))
+	}
+	if t != nil {
+		p.checkCharacteristic(t)
+		p.unknown(t)
+	}
+}
+
+// checkCharacteristic reads code_check.characteristic: a table of random
+// inputs' paths and their characteristic values.
+func (p *parser) checkCharacteristic(t *table) {
+	v, ok := t.get("characteristic")
+	if !ok {
+		return
+	}
+	key := t.key("characteristic")
+	m, ok := v.(map[string]any)
+	if !ok {
+		p.errorf(key, "must be a table of input paths and values, e.g. characteristic = { \"loads.imposed\" = \"150 kN\" }, not %s", tomlType(v))
+		return
+	}
+	paths := make([]string, 0, len(m))
+	for k := range m {
+		paths = append(paths, k)
+	}
+	sort.Strings(paths)
+	for _, path := range paths {
+		at := key + "." + path
+		q := p.byPath[path]
+		switch {
+		case q == nil:
+			p.errorf(at, "%q is not an input of the study: write the path in quotes, e.g. \"loads.imposed\" = \"150 kN\"", path)
+			continue
+		case q.spec == nil && q.Dist == nil:
+			p.errorf(at, "%s is fixed: its value is its characteristic value, so leave it out here", path)
+			continue
+		}
+		o := p.opts[q]
+		o.rel, o.frac = false, false
+		x, ok := p.scalar(at, m[path], o)
+		if !ok {
+			continue
+		}
+		if p.st.CodeCheck.Characteristic == nil {
+			p.st.CodeCheck.Characteristic = map[string]float64{}
+		}
+		p.st.CodeCheck.Characteristic[path] = x.v
+	}
+}
