@@ -17,6 +17,7 @@ type loaded struct {
 	st  *study.Study
 	md  *study.Model
 	nom *study.Nominal
+	cc  *report.CodeCheck // nil when it could not be made
 }
 
 // load reads, checks and builds the study at path, printing problems to
@@ -54,7 +55,12 @@ func load(path string, stderr io.Writer) (*loaded, int) {
 	// A model outside its ground (L/n with K != 1, residual stresses left
 	// out): warnings with the size of the effect.
 	st.Warnings = append(st.Warnings, md.Adequacy(nom)...)
-	return &loaded{st: st, md: md, nom: nom}, exitOK
+	cc, why := codeCheck(md) // codecheck.go
+	if why != "" {
+		// Not a doubt about a result: the check is absent, and says why.
+		st.Defaults = append(st.Defaults, why)
+	}
+	return &loaded{st: st, md: md, nom: nom, cc: cc}, exitOK
 }
 
 func plural(n int) string {
@@ -88,7 +94,8 @@ func (l *loaded) baseDocument() *report.Document {
 			Mode:                n.Mode.String(),
 			CapacityMode:        n.CapacityMode.String(),
 		},
-		Warnings: append([]string{}, st.Warnings...),
+		CodeCheck: l.cc,
+		Warnings:  append([]string{}, st.Warnings...),
 	}
 	if st.HasTarget {
 		t := st.Target
@@ -209,7 +216,8 @@ func (l *loaded) checkText() string {
 		fmt.Fprintf(&b, "Target reliability index %.2f: `strutrisk run` estimates whether it is met\n", st.Target)
 	}
 	b.WriteString(targetCheckText(st) + measureText(st)) // reserve.go, measure.go
-	b.WriteString(casesCheckText(st))                    // sweep.go
+	b.WriteString(report.CodeCheckText(l.cc))
+	b.WriteString(casesCheckText(st)) // sweep.go
 	if len(st.Defaults) > 0 {
 		fmt.Fprintf(&b, "\nDefaults that apply:\n")
 		for _, d := range st.Defaults {

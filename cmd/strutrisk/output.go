@@ -35,6 +35,13 @@ func (r *results) summary(dir string, files []string) string {
 		fmt.Fprintf(&w, "                     (inf: none of the %d evaluations failed; beta is only known to be above %s: see the warnings)\n", res.Evaluations, betaText(res.BetaCI[0]))
 	}
 	w.WriteString(r.targetSummary(d))
+	for i, l := range report.WrapText(report.CodeCheckLine(d.CodeCheck), 76) {
+		label := ""
+		if i == 0 {
+			label = "code check"
+		}
+		fmt.Fprintf(&w, "  %-18s %s\n", label, l)
+	}
 	if res.Method == sim.FORMMethod {
 		fmt.Fprintf(&w, "  method             %s, %d evaluations\n", res.Method, res.Evaluations)
 	} else {

@@ -42,6 +42,9 @@ type Document struct {
 
 	GoverningAxis string `json:"governing_axis,omitempty"`
 
+	// CodeCheck is the deterministic code check beside beta (codecheck.go).
+	CodeCheck *CodeCheck `json:"code_check,omitempty"`
+
 	Nominal  *Nominal  `json:"nominal,omitempty"`
 	Capacity *Summary  `json:"capacity,omitempty"`
 	Demand   *Summary  `json:"demand,omitempty"`

@@ -57,6 +57,9 @@ code{font-size:.9em}
 {{if .Influence}}<p>Most influential inputs: {{.Influence}}. {{.RankingNote}}</p>{{end}}
 {{if .Target}}<h3 id="target">Margin against the target</h3>
 <table>{{range .Target}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{end}}
+{{if .CodeCheck}}<h3 id="code-check">Code check beside β</h3>
+<p>The deterministic check of EN 1993-1-1 6.3.1 at characteristic values with partial factors; the recommended factors may differ by National Annex.</p>
+<table>{{range .CodeCheck}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{end}}
 {{with .Picture "capacity-demand"}}{{template "fig" .}}{{end}}
 {{with .Picture "margin"}}{{template "fig" .}}{{end}}
 {{if .Warnings}}<h3>Warnings</h3><ul>{{range .Warnings}}<li>{{.}}</li>{{end}}</ul>{{end}}

@@ -33,6 +33,11 @@ func Markdown(b *Bundle) string {
 		w.WriteString("### Margin against the target\n\n")
 		mdKV(&w, v.Target)
 	}
+	if len(v.CodeCheck) > 0 {
+		w.WriteString("### Code check beside beta\n\n")
+		w.WriteString("The deterministic check of EN 1993-1-1 6.3.1 at characteristic values with partial factors; the recommended factors may differ by National Annex.\n\n")
+		mdKV(&w, v.CodeCheck)
+	}
 	if len(v.Warnings) > 0 {
 		w.WriteString("Warnings:\n\n")
 		for _, s := range v.Warnings {

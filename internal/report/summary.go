@@ -57,6 +57,13 @@ func SummaryText(b *Bundle) string {
 			line("", "about %s evaluations would decide it", thousands(int64(*t.SamplesToDecide)))
 		}
 	}
+	for i, l := range WrapText(CodeCheckLine(d.CodeCheck), 72) {
+		label := ""
+		if i == 0 {
+			label = "code check"
+		}
+		line(label, "%s", l)
+	}
 	if d.ReserveFactor != nil {
 		line("reserve factor", "%s (load factor at which the target is just met)", f2(*d.ReserveFactor))
 	}

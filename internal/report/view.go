@@ -46,6 +46,7 @@ type view struct {
 	Updates     []updateRow
 	Measured    []measuredRow // see target.go
 	Target      []KV          // the target check and the reserve
+	CodeCheck   []KV          // the code check beside beta (codecheck.go)
 	Diagnostics []KV
 	Warnings    []string
 	Notes       []string
@@ -242,6 +243,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		v.Variants = append(v.Variants, pointRow{p.Name, prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta))})
 	}
 	v.Target, v.Measured = targetRows(&d), measuredRows(&d)
+	v.CodeCheck = CodeCheckRows(d.CodeCheck)
 	for k, u := range b.Updates {
 		r := updateRow{Variable: u.Variable, Unit: u.Unit, N: strconv.Itoa(len(u.Data)), Picture: "update-" + strconv.Itoa(k+1)}
 		if u.Prior != nil {
