@@ -31,6 +31,7 @@ func FuzzLoad(f *testing.F) {
 	} {
 		f.Add([]byte(strings.Replace(base, "shape = \"CHS\"\ndiameter = 168.3\nthickness = 8\n", sec, 1)))
 	}
+	f.Add([]byte(strings.NewReplacer(`ends = "pinned-pinned"`, `ends = "fixed-free"`, `bow = "L/1000"`, "bow = \"Lcr/1000\"\nsway = \"1/200\"\neccentricity = \"Lcr/500\"").Replace(base) + "[capacity]\nimperfection = \"equivalent\"\n"))
 	f.Add([]byte("x = { dist = \"normal\", mean = nan, sd = inf }\n"))
 	// The size and nesting limits (limits.go, nesting.go).
 	for _, in := range deepInputs() {

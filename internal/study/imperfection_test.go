@@ -259,3 +259,39 @@ func TestEquivalentTwistingMatchesCurve(t *testing.T) {
 		}
 	}
 }
+
+// A sweep over Lcr/n values keeps them fractions of the buckling length:
+// labelled so, and each derived case reads its value as Lcr/n (a range
+// written back as "Lcr/..."), so the case's capacity is that of the study
+// written with the value.
+func TestSweepLcr(t *testing.T) {
+	for _, sweep := range []string{
+		"[sweep]\nparameter = \"imperfection.bow\"\nvalues = [\"Lcr/1000\", \"Lcr/500\"]\n",
+		"[sweep]\nparameter = \"imperfection.bow\"\nfrom = \"Lcr/1000\"\nto = \"Lcr/500\"\nsteps = 2\n",
+	} {
+		r := strings.NewReplacer("%LENGTH%", "3000", "%ENDS%", `ends = "fixed-free"`, "%IMPERFECTION%", `bow = "Lcr/700"`, "%CAPACITY%", `model = "perry-robertson"`)
+		st := parse(t, r.Replace(hColumn)+sweep)
+		if got := st.Sweep.Label(); got != "imperfection.bow (fraction of Lcr)" {
+			t.Errorf("label %q", got)
+		}
+		for i, n := range []string{"1000", "500"} {
+			d, err := st.Derive(-1, i)
+			if err != nil {
+				t.Fatal(err)
+			}
+			md, err := Build(d)
+			if err != nil {
+				t.Fatal(err)
+			}
+			want := hStudy(t, "3000", `ends = "fixed-free"`, `bow = "Lcr/`+n+`"`, `model = "perry-robertson"`)
+			if c, w := nominalCapacity(t, md), nominalCapacity(t, want); math.Abs(c-w) > 1e-9*w {
+				t.Errorf("%s: case %d capacity %.9g, study with Lcr/%s %.9g", strings.SplitN(sweep, "\n", 3)[2], i, c, n, w)
+			}
+		}
+	}
+	r := strings.NewReplacer("%LENGTH%", "3000", "%ENDS%", `ends = "fixed-free"`, "%IMPERFECTION%", `bow = "Lcr/700"`, "%CAPACITY%", `model = "perry-robertson"`)
+	_, err := Parse("t.toml", []byte(r.Replace(hColumn)+"[sweep]\nparameter = \"imperfection.bow\"\nvalues = [\"Lcr/1000\", \"L/500\"]\n"))
+	if err == nil || !strings.Contains(err.Error(), "mix Lcr/n with L/n") {
+		t.Errorf("mixed sweep: %v", err)
+	}
+}

@@ -23,6 +23,7 @@ type Sweep struct {
 
 	dim Dim
 	rel bool
+	lcr bool // values written Lcr/n: fractions of the buckling length
 	// raw are the values as put into the study document.
 	raw []any
 }
@@ -34,6 +35,9 @@ func (s *Sweep) Unit() string {
 	if s.rel {
 		return "fraction of L"
 	}
+	if s.lcr {
+		return "fraction of Lcr"
+	}
 	return InternalUnit(s.dim)
 }
 
@@ -44,6 +48,8 @@ func (s *Sweep) Label() string {
 	switch {
 	case s.rel:
 		return s.Parameter + " (fraction of L)"
+	case s.lcr:
+		return s.Parameter + " (fraction of Lcr)"
 	case InternalUnit(s.dim) == "":
 		return s.Parameter
 	}
@@ -111,11 +117,15 @@ func (p *parser) sweep(top *table) {
 		p.required(t, "values", "the values to sweep, e.g. values = [\"3 m\", \"4 m\"], or from, to and steps")
 	}
 	for i, q := range sw.Values {
+		if i > 0 && q.Lcr != sw.Values[0].Lcr {
+			p.errorf(q.Path, "the swept values mix Lcr/n with L/n or values with a unit: write all of them one way")
+			break
+		}
 		if i > 0 && q.Relative != sw.Values[0].Relative {
 			p.errorf(q.Path, "the swept values mix L/n and values with a unit: write all of them one way")
 			break
 		}
-		sw.rel = q.Relative
+		sw.rel, sw.lcr = q.Relative, q.Lcr
 	}
 	p.st.Sweep = sw
 }
@@ -138,7 +148,7 @@ func (p *parser) sweepList(t *table, sw *Sweep, o qopt) {
 		if !ok {
 			continue
 		}
-		sw.Values = append(sw.Values, &Quantity{Path: key, Line: p.line(key), Dim: o.dim, Value: pv.v, Relative: pv.rel})
+		sw.Values = append(sw.Values, &Quantity{Path: key, Line: p.line(key), Dim: o.dim, Value: pv.v, Relative: pv.rel, Lcr: pv.lcr})
 		sw.raw = append(sw.raw, x)
 	}
 }
@@ -181,6 +191,10 @@ func (p *parser) sweepRange(t *table, sw *Sweep, o qopt) {
 	if !good {
 		return
 	}
+	if ends[0].lcr != ends[1].lcr {
+		p.errorf(t.key("to"), "from and to mix Lcr/n with L/n or a value with a unit: write both one way")
+		return
+	}
 	if ends[0].rel != ends[1].rel {
 		p.errorf(t.key("to"), "from and to mix L/n and a value with a unit: write both one way")
 		return
@@ -189,7 +203,7 @@ func (p *parser) sweepRange(t *table, sw *Sweep, o qopt) {
 		p.errorf(t.key("scale"), "a log scale needs positive from and to")
 		return
 	}
-	rel := ends[0].rel
+	rel, lcr := ends[0].rel, ends[0].lcr
 	line := p.line(t.key("from"))
 	for i := 0; i < int(n); i++ {
 		f := float64(i) / (n - 1)
@@ -202,12 +216,15 @@ func (p *parser) sweepRange(t *table, sw *Sweep, o qopt) {
 		if i == int(n)-1 {
 			v = ends[1].v // exactly as written
 		}
-		sw.Values = append(sw.Values, &Quantity{Path: t.key("from"), Line: line, Dim: o.dim, Value: v, Relative: rel})
-		// Written back as the study would write it: L/n, or a bare
+		sw.Values = append(sw.Values, &Quantity{Path: t.key("from"), Line: line, Dim: o.dim, Value: v, Relative: rel, Lcr: lcr})
+		// Written back as the study would write it: L/n, Lcr/n, or a bare
 		// number in the study's units.
-		if rel {
+		switch {
+		case rel:
 			sw.raw = append(sw.raw, "L/"+strconv.FormatFloat(1/v, 'g', -1, 64))
-		} else {
+		case lcr:
+			sw.raw = append(sw.raw, "Lcr/"+strconv.FormatFloat(1/v, 'g', -1, 64))
+		default:
 			sw.raw = append(sw.raw, v/p.sys.Factor(o.dim))
 		}
 	}
