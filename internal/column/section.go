@@ -51,6 +51,7 @@ func (s Section) Properties() (Props, error) {
 		a, ix, iy, cx, cy = r.Area, r.IMajor, r.IMinor, r.CMajor, r.CMinor
 	}
 	var p Props
+	p.It, p.Iw = r.torsion(iy) // iy bends the width: an I's flanges about the web
 	if iy > ix {
 		ix, iy, cx, cy = iy, ix, cy, cx
 		p.Angle = math.Pi / 2
@@ -58,7 +59,6 @@ func (s Section) Properties() (Props, error) {
 	p.A = a
 	p.I = [2]float64{ix, iy}
 	p.CSide = [2][2]float64{{cx, cx}, {cy, cy}}
-	p.It, p.Iw = r.torsion(p.I[Minor])
 	if r.Shape == ShapeCustom {
 		p.S = r.ShearCentre
 	}

@@ -18,7 +18,7 @@ func (s Section) drawn() (drawn, bool) {
 
 // torsion returns the St Venant torsion constant It and the warping
 // constant Iw of the doubly symmetric and the custom shapes; iz is the
-// minor second moment.
+// second moment that bends the width (about the web of an I section).
 //
 //	I:     It = (2 b tf^3 + (h - tf) tw^3)/3, the thin-wall sum of b t^3/3
 //	       over the flanges and the web midline (root fillets neglected);

@@ -23,6 +23,10 @@ func TestTorsionConstants(t *testing.T) {
 	}{
 		// (2*150*10.7^3 + (300 - 10.7)*7.1^3)/3 = (367512.3 + 103539.6)/3
 		{"IPE 300", Section{Shape: ShapeI, Depth: 300, Width: 150, Flange: 10.7, Web: 7.1, Root: 15}, 157017.3, 125.9e9, 0.005},
+		// flanges wider than the depth: the major axis is the web's, and Iw
+		// still takes the flanges' I about the web, (2*10*300^3 + 80*8^3)/12 =
+		// 45003413.3, times (100 - 10)^2/4; It = (2*300*10^3 + 90*8^3)/3
+		{"wide I 100x300", Section{Shape: ShapeI, Depth: 100, Width: 300, Flange: 10, Web: 8}, 215360, 45003413.33 * 2025, 1e-6},
 		// ((100 - 5) + (100 - 5)) * 10^3 / 3
 		{"L 100x100x10", Section{Shape: ShapeAngle, Depth: 100, Width: 100, Thickness: 10, Root: 12}, 63333.33, -1, 1e-6},
 		// (2*(75 - 4.25)*11.5^3 + (200 - 11.5)*8.5^3)/3 = (215184.9 + 115781.8)/3
