@@ -37,7 +37,7 @@ func TestRankingOneFunction(t *testing.T) {
 			t.Errorf("%s: most influential line %q, want %q", name, m, want)
 		}
 		flat := strings.Join(strings.Fields(s), " ")
-		for _, q := range []string{"FORM importance alpha^2 answers whose scatter decides failure", "the total Sobol index answers what share of the margin's variance"} {
+		for _, q := range []string{"FORM importance alpha^2 answers whose scatter drives failure", "the total Sobol index answers what share of the margin's variance"} {
 			if !strings.Contains(flat, q) {
 				t.Errorf("%s: no sentence on which ranking answers which question (%q):\n%s", name, q, s)
 			}

@@ -27,8 +27,7 @@ func ExampleSummaryText() {
 	//   reserve factor           0.93 (load factor at which the target is just met)
 	//   method                   conditional-qmc, 17 502 evaluations, seed 1
 	//   most influential         loads.imposed (0.62), capacity.model_factor (0.1), material.yield (0.09)  [by FORM importance alpha^2]
-	//   rankings                 FORM importance alpha^2 answers whose scatter decides failure at the
-	//                            most likely failure point (what is worth measuring or specifying
-	//                            better).
+	//   rankings                 FORM importance alpha^2 answers whose scatter drives failure at the most
+	//                            likely failure point (what to measure).
 	//   caution                  These results depend on the stated inputs and models; they support, and never replace, the judgement of a licensed engineer and the local codes.
 }

@@ -118,15 +118,15 @@ func RankingNote(d *Document) string {
 	}
 	var parts []string
 	if formRanks(d) {
-		parts = append(parts, "FORM importance α² answers whose scatter decides failure at the most likely failure point (what is worth measuring or specifying better)")
+		parts = append(parts, "FORM importance α² answers whose scatter drives failure at the most likely failure point (what to measure)")
 	}
 	if len(d.Tornado) > 0 {
-		parts = append(parts, "the tornado answers how far the result moves when one input is fixed at a low or a high fractile")
+		parts = append(parts, "the tornado answers how far the result moves with one input fixed at a low or high fractile")
 	}
 	if len(d.Sobol) > 0 {
 		p := "the total Sobol index answers what share of the margin's variance an input explains over its whole range, mostly far from failure"
 		if formRanks(d) {
-			p += ", so it can rank an input lower than FORM does"
+			p += ", hence its different order"
 		}
 		parts = append(parts, p)
 	}

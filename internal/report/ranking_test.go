@@ -22,7 +22,7 @@ func TestRankInputs(t *testing.T) {
 		first   string
 		note    []string
 	}{
-		{"FORM", &Document{FORM: form, Sobol: sobol}, measureFORM, "loads.imposed", []string{"The rankings answer different questions", "FORM importance α² answers", "so it can rank an input lower than FORM does"}},
+		{"FORM", &Document{FORM: form, Sobol: sobol}, measureFORM, "loads.imposed", []string{"The rankings answer different questions", "FORM importance α² answers", "hence its different order"}},
 		{"FORM not converged", &Document{FORM: &unconverged, Sobol: sobol}, measureSobol, "material.yield", []string{"The total Sobol index answers"}},
 		{"tornado only", &Document{Tornado: []Tornado{{Variable: "a", Low: 0, High: 1}, {Variable: "b", Low: 3, High: 0}}}, measureTornado, "b", []string{"The tornado answers how far"}},
 	} {
