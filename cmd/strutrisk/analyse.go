@@ -157,10 +157,13 @@ func (r *results) document() *report.Document {
 			d.GoverningAxis = res.Axis.String()
 		}
 	}
+	d.Warnings = append(d.Warnings, r.warnings...)
 	if r.incomplete != "" {
 		d.Complete, d.IncompleteReason = false, r.incomplete
+		if !res.Incomplete { // that case has its warning already
+			d.Warnings = append(d.Warnings, "incomplete: "+r.incomplete)
+		}
 	}
-	d.Warnings = append(d.Warnings, r.warnings...)
 	if r.sobolMsg != "" {
 		d.Warnings = append(d.Warnings, "sobol: "+r.sobolMsg)
 	}

@@ -5,6 +5,7 @@ import (
 	"encoding/json"
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"syscall"
 	"testing"
@@ -107,6 +108,9 @@ func TestRunSignalAfterMainRun(t *testing.T) {
 	}
 	if d.Complete || !strings.Contains(d.IncompleteReason, "during FORM") || !strings.Contains(d.IncompleteReason, "main estimate is complete") {
 		t.Errorf("complete %v, incomplete_reason %q: want false, naming FORM and the complete main estimate", d.Complete, d.IncompleteReason)
+	}
+	if !slices.ContainsFunc(d.Warnings, func(w string) bool { return strings.HasPrefix(w, "incomplete: ") }) {
+		t.Errorf("no warning says the run is incomplete (the summary and report show the warnings): %q", d.Warnings)
 	}
 	if d.Pf == nil || d.Evaluations == nil || *d.Evaluations != 100000 {
 		t.Errorf("the main estimate is missing or cut short: pf %v, evaluations %v", d.Pf, d.Evaluations)
