@@ -49,10 +49,10 @@ var keyTables = []*TableInfo{
 		{Name: "thickness_loss", Takes: "quantity (length)", Default: "0",
 			Meaning: "Corrosion loss from every face (not on custom): I sections, angles, channels and tees lose it on every face, RHS and CHS on the outside."},
 		{Name: "fabrication", Takes: "text", Choices: []string{"hot-rolled", "welded", "cold-formed", "hot-finished"},
-			Default: "welded (I), cold-formed (RHS, CHS), hot-rolled (rect, round)",
-			Meaning: "How the section is made (not on custom): I hot-rolled or welded; RHS cold-formed, hot-finished or welded (a box); CHS cold-formed or hot-finished. It picks the EN 1993-1-1 Table 6.2 buckling curve and the RHS corner radii."},
+			Default: "welded (I), cold-formed (RHS, CHS), hot-rolled (rect, round, angle, channel, tee)",
+			Meaning: "How the section is made (not on custom): I hot-rolled or welded; RHS cold-formed, hot-finished or welded (a box); CHS cold-formed or hot-finished; solids, angles, channels and tees hot-rolled. It picks the EN 1993-1-1 Table 6.2 buckling curve and the RHS corner radii."},
 		{Name: "radius", Takes: "quantity (length)", Default: "by fabrication: cold-formed 2t to 3t (EN 10219-2), hot-finished 1.5t (EN 10210-2), welded 0",
-			Meaning: "Outer corner radius (RHS); the inner one is radius - thickness. It enters the area, second moments and the flat widths of the section class."},
+			Meaning: "Outer corner radius (RHS); the inner one is radius - thickness (the defaults: cold-formed t to 2t, hot-finished t). It enters the area, second moments and the flat widths of the section class."},
 	}},
 	{Path: "material", Meaning: "The material.", Keys: []KeyInfo{
 		{Name: "modulus", Takes: "quantity (stress)", Required: true, Meaning: "The elastic modulus."},
