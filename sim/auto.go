@@ -73,7 +73,7 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 			alt.Evaluations += res.Evaluations
 			return finish(alt, fmt.Sprintf("%s: conditional quasi-Monte Carlo reached only CoV %.2g within the budget, so importance sampling around the design point was used", formNote, res.PfCoV)), nil
 		}
-		res.Warnings = append(res.Warnings, fmt.Sprintf("conditional quasi-Monte Carlo reached CoV %.2g, above the target %.2g, and importance sampling did no better; treat pf as an order of magnitude", res.PfCoV, target))
+		res.flag(BudgetSpent, fmt.Sprintf("conditional quasi-Monte Carlo reached CoV %.2g, above the target %.2g, and importance sampling did no better; treat pf as an order of magnitude", res.PfCoV, target)) // assess adds it to the warnings
 		return finish(res, reason), nil
 	}
 

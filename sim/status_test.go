@@ -146,3 +146,23 @@ func TestFORMNotConvergedIsNotTrusted(t *testing.T) {
 		t.Errorf("FORM converged %v (%s): status %s", r.FORM.Converged, r.FORM.Status, r.Status)
 	}
 }
+
+// TestAssessKeepsTheMethodsReason: a method that flags its own result
+// (auto's conditional quasi-Monte Carlo short of its target) keeps its
+// reason, and the reader gets it once as a warning, not twice in other
+// words.
+func TestAssessKeepsTheMethodsReason(t *testing.T) {
+	r := &Result{Method: ConditionalQMC, Pf: 1e-4, PfCoV: 0.2}
+	r.flag(BudgetSpent, "the method's own words")
+	assess(r, 0.05)
+	if r.Status != BudgetSpent || r.StatusReason != "the method's own words" || len(r.Warnings) != 1 || r.Warnings[0] != r.StatusReason {
+		t.Errorf("status %s (%q), warnings %q", r.Status, r.StatusReason, r.Warnings)
+	}
+	// A worse status found by assess replaces a milder one.
+	r = &Result{Method: ConditionalQMC, Pf: 1e-4, PfCoV: 0.9}
+	r.flag(BudgetSpent, "short of the target")
+	assess(r, 0.05)
+	if r.Status != Imprecise || r.Status.Trusted() {
+		t.Errorf("CoV 0.9: status %s", r.Status)
+	}
+}
