@@ -39,10 +39,11 @@ func (md *Model) checkedAxes() []column.Axis {
 	return []column.Axis{column.Major, column.Minor}
 }
 
-// lengthFraction warns when q is written L/n and a checked axis has K != 1.
+// lengthFraction warns when q is written L/n and a checked axis has K != 1
+// (not for a bow updated by measurements: that is the member's own bow).
 func (md *Model) lengthFraction(q *Quantity, n *Nominal) string {
-	if q == nil || !(q.perLength || q.Relative) || md.model == modelCurve {
-		return ""
+	if q == nil || !(q.perLength || q.Relative) || md.model == modelCurve || q.update != nil {
+		return "" // a measured bow is the member's own, over its length
 	}
 	var ks []string
 	ratio := 0.0
