@@ -21,7 +21,7 @@ func codeCheck(md *study.Model) (*report.CodeCheck, string) {
 		Yield: c.Fy, EffectiveArea: c.EffectiveArea, SectionClass: c.Class,
 		Characteristic: map[string]float64{}, CharacteristicBasis: map[string]string{}, CharacteristicUnits: map[string]string{},
 		LoadFactors: map[string]float64{}, LeadingLoad: c.Combination.Leading, EffectFactor: c.EffectFactor,
-		Combination: c.Rule(), Notes: c.Notes,
+		Combination: c.Rule(), Notes: c.Notes, AxialOnly: c.AxialOnly,
 	}
 	for _, in := range c.Inputs {
 		r.Characteristic[in.Path], r.CharacteristicBasis[in.Path], r.CharacteristicUnits[in.Path] = in.Value, in.Basis, in.Unit

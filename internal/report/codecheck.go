@@ -59,6 +59,22 @@ type CodeCheck struct {
 	// know (the National Annex may differ...).
 	Combination string   `json:"combination"`
 	Notes       []string `json:"notes,omitempty"`
+	// AxialOnly is true when the member also bends (end eccentricity,
+	// sway, the beam-column model) and the check leaves the bending out:
+	// its utilisation is then no verdict.
+	AxialOnly bool `json:"axial_only,omitempty"`
+}
+
+// verdictOf says whether the check is satisfied, or why it gives no
+// verdict.
+func verdictOf(c *CodeCheck) string {
+	switch {
+	case c.AxialOnly:
+		return "no verdict: axial buckling only, the bending of the member is not checked"
+	case c.Utilisation <= 1:
+		return "satisfied (utilisation at most 1)"
+	}
+	return "NOT satisfied (utilisation above 1)"
 }
 
 // CodeCheckRows formats the code check for reading, one key and value a
@@ -67,10 +83,7 @@ func CodeCheckRows(c *CodeCheck) []KV {
 	if c == nil {
 		return nil
 	}
-	verdict := "satisfied (utilisation at most 1)"
-	if !(c.Utilisation <= 1) {
-		verdict = "NOT satisfied (utilisation above 1)"
-	}
+	verdict := verdictOf(c)
 	curve := fmt.Sprintf("alpha %s", fixed(c.ImperfectionFactor, 2))
 	if c.Curve != "" {
 		curve = fmt.Sprintf("curve %s (alpha %s)", c.Curve, fixed(c.ImperfectionFactor, 2))
@@ -125,10 +138,7 @@ func CodeCheckLine(c *CodeCheck) string {
 	if c == nil {
 		return ""
 	}
-	verdict := "satisfied"
-	if !(c.Utilisation <= 1) {
-		verdict = "NOT satisfied"
-	}
+	verdict := verdictOf(c)
 	return fmt.Sprintf("utilisation %s, %s: N_Ed %s / N_Rd %s at characteristic values (EN 1993-1-1 6.3.1, EN 1990 6.10; gamma_M0 %s, gamma_M1 %s, gamma_G %s, gamma_Q %s, psi_0 %s). Recommended factors unless set: the National Annex may differ.",
 		fixed(c.Utilisation, 3), verdict, kN(c.DesignLoad), kN(c.Resistance), sig(c.GammaM0, 3), sig(c.GammaM1, 3), sig(c.GammaG, 3), sig(c.GammaQ, 3), sig(c.Psi0, 2))
 }

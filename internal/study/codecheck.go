@@ -59,7 +59,11 @@ type CodeCheck struct {
 	Combination              assess.Combination
 	EffectFactor             float64
 	DesignLoad, Utilisation  float64
-	Notes                    []string
+	// AxialOnly reports that the member also bends (end eccentricity,
+	// sway, or the beam-column model): the check leaves the bending out,
+	// so its utilisation is no verdict.
+	AxialOnly bool
+	Notes     []string
 }
 
 // CodeCheck makes the deterministic code check of the study: every input
@@ -88,12 +92,18 @@ func (md *Model) CodeCheck() (*CodeCheck, error) {
 	if _, cl, err := sec.Classify(m.Fy); err == nil {
 		c.Class = cl.Class
 	}
+	if c.Class == 4 && sec.Shape == column.ShapeCHS {
+		return nil, errors.New("the CHS is class 4 at the characteristic yield: its shell buckling (EN 1993-1-6) is not in this check")
+	}
 	if err := md.checkBuckling(c, &m); err != nil {
 		return nil, err
 	}
 	c.CrossSection = c.EffectiveArea * c.Fy / c.GammaM0
 	c.Buckling = c.Chi * c.EffectiveArea * c.Fy / c.GammaM1
 	c.Resistance = math.Min(c.CrossSection, c.Buckling)
+	if !(c.Resistance > 0) || math.IsInf(c.Resistance, 0) {
+		return nil, fmt.Errorf("the design resistance %g N is not a positive number", c.Resistance)
+	}
 	for _, q := range st.Loads {
 		c.Loads = append(c.Loads, assess.Load{Name: q.Path, Characteristic: char[q], Permanent: md.isPermanent(q)})
 	}
@@ -105,6 +115,7 @@ func (md *Model) CodeCheck() (*CodeCheck, error) {
 	if c.Resistance > 0 {
 		c.Utilisation = c.DesignLoad / c.Resistance
 	}
+	c.AxialOnly = st.Ecc != nil || st.Sway != nil || st.Model == "beam-column"
 	c.Notes = md.checkNotes()
 	return c, nil
 }
@@ -233,7 +244,7 @@ func (md *Model) checkNotes() []string {
 	st := md.Study
 	notes := []string{"Recommended partial factors unless the study sets them; the National Annex may differ."}
 	if st.Ecc != nil || st.Sway != nil || st.Model == "beam-column" {
-		notes = append(notes, "The code check is the axial buckling resistance of EN 1993-1-1 6.3.1 only: end eccentricity, sway and bending (the 6.3.3 interaction) are not in it.")
+		notes = append(notes, "The member also bends (end eccentricity, sway or the beam-column model), but this is the axial buckling resistance of EN 1993-1-1 6.3.1 only: the 6.3.3 interaction with bending is not checked, so the utilisation is no verdict.")
 	}
 	if st.ModelFactor != nil {
 		notes = append(notes, "The model factor of the reliability model is not applied: gamma_M1 stands for the model uncertainty of the buckling curve.")

@@ -157,3 +157,109 @@ func TestCodeCheckKeys(t *testing.T) {
 		}
 	}
 }
+
+// TestCodeCheckRefusals: the code check gives no verdict for a member that
+// also bends (its 6.3.3 interaction is not made) and is not made for a
+// class 4 CHS (d/t = 500 / 4 = 125 beyond 90 eps^2 = 90 * 235 / 355 = 59.6,
+// EN 1993-1-1 Table 5.2: shell buckling, EN 1993-1-6).
+func TestCodeCheckRefusals(t *testing.T) {
+	bent := he200b + "yield = 235\n[imperfection]\neccentricity = 10\n" + curveBC + "[loads]\ndead = 400000\n"
+	straight := strings.Replace(bent, "[imperfection]\neccentricity = 10\n", "", 1)
+	for _, c := range []struct {
+		text string
+		want bool
+	}{{bent, true}, {straight, false}} {
+		md, err := Build(parse(t, c.text))
+		if err != nil {
+			t.Fatal(err)
+		}
+		cc, err := md.CodeCheck()
+		if err != nil {
+			t.Fatal(err)
+		}
+		if cc.AxialOnly != c.want {
+			t.Errorf("axial only %v, want %v (notes %q)", cc.AxialOnly, c.want, cc.Notes)
+		}
+	}
+	chs := `[member]
+length = 3000
+ends = "pinned-pinned"
+[member.section]
+shape = "CHS"
+diameter = 500
+thickness = 4
+[material]
+modulus = 210000
+yield = 355
+[imperfection]
+bow = "L/1000"
+[capacity]
+model_factor = 0.8
+[loads]
+dead = 400000
+`
+	md, err := Build(parse(t, chs))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if _, err := md.CodeCheck(); err == nil || !strings.Contains(err.Error(), "class 4") {
+		t.Errorf("class 4 CHS: %v, want a refusal", err)
+	}
+}
+
+// TestCodeCheckClass4: a welded I 600 x 300 x 20 flanges x 6 web, S355,
+// 5 m pinned, whose web is class 4 in compression: c/t = 560 / 6 = 93.3
+// beyond 42 eps = 34.2 (EN 1993-1-1 Table 5.2, eps = sqrt(235 / 355)). By
+// EN 1993-1-5 4.4 (internal element, psi = 1, k_sigma = 4), computed here
+// by hand:
+//
+//	lambda_p = (c/t) / (28.4 eps sqrt(4)) = 2.020
+//	rho = (lambda_p - 0.055 (3 + psi)) / lambda_p^2 = 0.441          (4.2)
+//	A_eff = 2 * 300 * 20 + rho * 560 * 6 = 13 482 mm2
+//
+// and EN 1993-1-1 6.3.1 with A_eff: lambda = sqrt(A_eff fy / N_cr)
+// (6.51), N_cr of the gross section about z, curve c (welded I, tf <= 40
+// mm, Table 6.2), N_b,Rd = chi A_eff fy.
+func TestCodeCheckClass4(t *testing.T) {
+	text := `[member]
+length = 5000
+ends = "pinned-pinned"
+[member.section]
+shape = "I"
+fabrication = "welded"
+depth = 600
+width = 300
+flange = 20
+web = 6
+[material]
+modulus = 210000
+yield = 355
+[capacity]
+model = "curve"
+[loads]
+dead = 1000000
+`
+	md, err := Build(parse(t, text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	cc, err := md.CodeCheck()
+	if err != nil {
+		t.Fatal(err)
+	}
+	eps := math.Sqrt(235.0 / 355)
+	lp := 560.0 / 6 / (28.4 * eps * 2)
+	rho := (lp - 0.22) / lp / lp
+	aeff := 12000 + rho*560*6
+	iz := 2*20*300.0*300*300/12 + 560*6.0*6*6/12
+	ncr := math.Pi * math.Pi * 210000 * iz / 5000 / 5000
+	lam := math.Sqrt(aeff * 355 / ncr)
+	phi := 0.5 * (1 + 0.49*(lam-0.2) + lam*lam)
+	chi := 1 / (phi + math.Sqrt(phi*phi-lam*lam))
+	if cc.Class != 4 || math.Abs(cc.EffectiveArea/aeff-1) > 1e-6 {
+		t.Errorf("class %d A_eff %.6g, want 4 and %.6g", cc.Class, cc.EffectiveArea, aeff)
+	}
+	if math.Abs(cc.RelSlenderness/lam-1) > 1e-6 || math.Abs(cc.Resistance/(chi*aeff*355)-1) > 1e-6 || cc.Curve != "c" {
+		t.Errorf("lambda %.6g N_Rd %.6g curve %q, want %.6g %.6g c", cc.RelSlenderness, cc.Resistance, cc.Curve, lam, chi*aeff*355)
+	}
+}
