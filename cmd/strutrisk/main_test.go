@@ -142,6 +142,8 @@ func TestBadStudies(t *testing.T) {
 		{"custom iw without it", sec("shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\niw = 1e9\n"), []string{"study.toml:5: member.section: section: a warping constant or shear-centre position needs the torsion constant it too"}},
 		{"negative it", sec("shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\nit = -1\n"), []string{"study.toml:12: member.section.it:", "must be zero or positive"}},
 		{"negative shear modulus", edit(10, "modulus = 200000\nshear_modulus = -80000"), []string{"study.toml:11: material.shear_modulus: a stress must be positive"}},
+		{"ultimate beam-column on a tee", sec("shape = \"tee\"\ndepth = 150\nwidth = 150\nflange = 12\nweb = 12\n") + "[capacity]\nmodel = \"beam-column\"\nlimit = \"ultimate\"\n",
+			[]string{"study.toml:23: capacity.limit: the ultimate beam-column has no fibre section for a tee", "1 problem in"}},
 		{"beam-column on a twisting angle", strings.Replace(sec("shape = \"angle\"\ndepth = 100\nwidth = 100\nthickness = 10\n"), "length = 2000", "length = 600", 1) + "[capacity]\nmodel = \"beam-column\"\n",
 			[]string{"study.toml:21: capacity.model: the lowest elastic critical load is flexural-torsional buckling", "use model \"curve\""}},
 		// Imperfections in the buckling mode, sway and the equivalent imperfection (lcr.go, imperfections.go).
