@@ -55,6 +55,10 @@ type Section struct {
 	It, Iw        float64
 	ShearCentre   [2]float64
 	ThicknessLoss float64
+	// EffArea is the effective area of a class 4 custom section (mm^2,
+	// EN 1993-1-5 4.4, given by the user); 0 means fully effective. See
+	// Section.Classify.
+	EffArea float64
 }
 
 // Props are the properties of a section, per axis indexed by Major and

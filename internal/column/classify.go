@@ -124,6 +124,7 @@ func (s Section) ClassifyProps(p Props, fy float64) (Props, Classification, erro
 	case ShapeRect, ShapeRound:
 		cl.Class = 1
 	case ShapeCustom:
+		customEffective(r, &p, &cl)
 		return p, cl, nil
 	case ShapeAngle, ShapeChannel, ShapeTee:
 		classifyOpen(r, &cl)
@@ -231,4 +232,21 @@ func (cl *Classification) Reduced() bool {
 		}
 	}
 	return false
+}
+
+// customEffective gives a custom section with a stated effective area
+// EffArea below its area class 4: AEff = EffArea and, as a conservative
+// simplification, WEff = W (AEff/A)^2 about each axis (an effective
+// section keeps at least the share AEff/A of its modulus when its
+// reduced parts lie at its edges, as for an RHS, and about (AEff/A)^2 for
+// the minor axis of an I whose flange tips go; the square covers both).
+// Without an effective area a custom section stays unclassified.
+func customEffective(r Section, p *Props, cl *Classification) {
+	if !(r.EffArea > 0 && r.EffArea < p.A) {
+		return
+	}
+	cl.Class = 4
+	f := r.EffArea / p.A
+	p.AEff = r.EffArea
+	p.WEff = [2]float64{p.W[Major] * f * f, p.W[Minor] * f * f}
 }

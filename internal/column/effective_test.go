@@ -39,3 +39,22 @@ func TestClass4BeamColumn(t *testing.T) {
 		t.Errorf("ultimate beam-column on class 4: %v, want a refusal", err)
 	}
 }
+
+// TestCustomEffective: a custom section's stated effective area makes it
+// class 4 with WEff = W (A_eff/A)^2 (the conservative simplification of
+// customEffective); without one it stays unclassified and fully effective.
+func TestCustomEffective(t *testing.T) {
+	s := Section{Shape: ShapeCustom, Area: 4000, IMajor: 3e7, IMinor: 1e7, CMajor: 150, CMinor: 100, EffArea: 3000}
+	p, cl, err := s.Classify(355)
+	if err != nil {
+		t.Fatal(err)
+	}
+	f := 0.75 * 0.75
+	if cl.Class != 4 || p.AEff != 3000 || math.Abs(p.WEff[Major]-2e5*f) > 1e-6 || math.Abs(p.WEff[Minor]-1e5*f) > 1e-6 {
+		t.Errorf("class %d, A_eff %g, W_eff %v; want 4, 3000, [%g %g]", cl.Class, p.AEff, p.WEff, 2e5*f, 1e5*f)
+	}
+	s.EffArea = 0
+	if p, cl, _ := s.Classify(355); cl.Class != 0 || p.AEff != 0 {
+		t.Errorf("no effective area: class %d, A_eff %g; want 0, 0", cl.Class, p.AEff)
+	}
+}

@@ -220,6 +220,9 @@ func (s Section) check() error {
 			pos("extreme-fibre distance (major)", s.CMajor), pos("extreme-fibre distance (minor)", s.CMinor)); err != nil {
 			return err
 		}
+		if !(s.EffArea >= 0 && s.EffArea <= s.Area) {
+			return sectionError(fmt.Sprintf("effective area %g mm^2 must be zero or positive and at most the area %g mm^2", s.EffArea, s.Area))
+		}
 		if s.IMinor > s.IMajor {
 			return sectionError(fmt.Sprintf("second moment about the minor axis %g mm^4 exceeds the major %g mm^4 (the major axis is the stiffer one; swap them)", s.IMinor, s.IMajor))
 		}

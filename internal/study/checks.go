@@ -312,6 +312,8 @@ func sectionField(sec *column.Section, key string) *float64 {
 		return &sec.Iw
 	case "y0":
 		return &sec.ShearCentre[column.Major]
+	case "effective_area":
+		return &sec.EffArea
 	case "z0":
 		return &sec.ShearCentre[column.Minor]
 	}

@@ -26,6 +26,8 @@ func (md *Model) classifyOptions(st *Study) {
 	switch st.Section.Shape {
 	case column.ShapeI, column.ShapeRHS, column.ShapeCHS, column.ShapeAngle, column.ShapeChannel, column.ShapeTee:
 		md.classify = true
+	case column.ShapeCustom: // its stated effective area (class 4)
+		md.classify = st.Section.Dims["effective_area"] != nil
 	}
 	yieldRandom := st.Yield != nil && st.Yield.Random()
 	md.propsDynamic = md.secRandom || md.classify && yieldRandom
@@ -67,8 +69,8 @@ func (md *Model) sectionProps(sec *column.Section, fy float64) (column.Props, er
 func (p *parser) checkClass() {
 	st := p.st
 	if st.Section.Dims == nil || st.Yield == nil || st.Section.Shape == column.ShapeCustom {
-		if st.Section.Shape == column.ShapeCustom {
-			p.defaultf("member.section: a custom section is not classified (EN 1993-1-1 Table 5.2); its whole area is taken as effective (class 1 to 3): for a class 4 section give the effective area as area")
+		if st.Section.Shape == column.ShapeCustom && st.Section.Dims["effective_area"] == nil {
+			p.defaultf("member.section: a custom section is not classified (EN 1993-1-1 Table 5.2); its whole area is taken as effective (class 1 to 3): for a class 4 section give effective_area")
 		}
 		return
 	}

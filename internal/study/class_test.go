@@ -202,3 +202,37 @@ func TestOpenClass4(t *testing.T) {
 		t.Errorf("L100x100x6 S355: %v; want a refusal", err)
 	}
 }
+
+// TestCustomEffectiveArea: a custom section with effective_area is class
+// 4 and the curve model takes chi A_eff fy at sqrt(A_eff fy / Ncr) (EN
+// 1993-1-1 6.3.1.1 and 6.3.1.2), here with the gross A = 4000 mm2, A_eff
+// = 3000 mm2, I = 2e7 mm4 on 4 m, curve b.
+func TestCustomEffectiveArea(t *testing.T) {
+	text := strings.Replace(base, "shape = \"CHS\"\ndiameter = 168.3\nthickness = 8",
+		"shape = \"custom\"\narea = 4000\ni_major = 2e7\ni_minor = 2e7\nc_major = 100\nc_minor = 100\neffective_area = 3000", 1)
+	text = strings.Replace(text, "length = 3000", "length = 4000", 1)
+	text = strings.Replace(text, "[imperfection]\nbow = \"L/1000\"\n", "[capacity]\nmodel = \"curve\"\ncurve = \"b\"\n", 1)
+	st := parse(t, text)
+	md, err := Build(st)
+	if err != nil {
+		t.Fatal(err)
+	}
+	n, err := md.Nominal()
+	if err != nil {
+		t.Fatal(err)
+	}
+	ncr := math.Pi * math.Pi * 205000 * 2e7 / (4000 * 4000)
+	lam := math.Sqrt(3000 * 355 / ncr)
+	phi := 0.5 * (1 + 0.34*(lam-0.2) + lam*lam)
+	want := 3000 * 355 / (phi + math.Sqrt(phi*phi-lam*lam))
+	if n.Class.Class != 4 || n.EffectiveArea != 3000 || math.Abs(n.Capacity-want) > 1e-9*want {
+		t.Errorf("class %d, A_eff %g, capacity %.1f kN; want 4, 3000, %.1f kN", n.Class.Class, n.EffectiveArea, n.Capacity/1e3, want/1e3)
+	}
+	if strings.Contains(strings.Join(st.Defaults, "\n"), "custom section is not classified") {
+		t.Errorf("defaults still say the custom section is not classified: %q", st.Defaults)
+	}
+	bad := strings.Replace(text, "effective_area = 3000", "effective_area = 5000", 1)
+	if _, err := Parse("t.toml", []byte(bad)); err == nil || !strings.Contains(err.Error(), "effective area 5000") {
+		t.Errorf("effective_area above the area: %v", err)
+	}
+}

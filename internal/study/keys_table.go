@@ -46,6 +46,8 @@ var keyTables = []*TableInfo{
 			Meaning: "Shear centre from the centroid along the major (y-y) axis (custom; needs it; EN 1993-1-3 6.2.3 notation)."},
 		{Name: "z0", Takes: "quantity (length, either sign)", Default: "0",
 			Meaning: "Shear centre from the centroid along the minor (z-z) axis (custom; needs it)."},
+		{Name: "effective_area", Takes: "quantity (area)", Default: "the area (fully effective)",
+			Meaning: "Effective area of a class 4 custom section (EN 1993-1-5 4.4): the capacity models take it as A_eff, with the elastic moduli scaled by (A_eff/A)^2 (a conservative simplification)."},
 		{Name: "thickness_loss", Takes: "quantity (length)", Default: "0",
 			Meaning: "Corrosion loss from every face (not on custom): I sections, angles, channels and tees lose it on every face, RHS and CHS on the outside."},
 		{Name: "fabrication", Takes: "text", Choices: []string{"hot-rolled", "welded", "cold-formed", "hot-finished"},

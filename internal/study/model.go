@@ -33,7 +33,7 @@ const (
 
 // secKeys are the section dimensions in field order.
 var secKeys = [...]string{"depth", "width", "flange", "web", "root", "thickness", "diameter", "area", "i_major", "i_minor", "c_major", "c_minor", "thickness_loss",
-	"radius", "it", "iw", "y0", "z0"}
+	"radius", "it", "iw", "y0", "z0", "effective_area"}
 
 const nFields = fSec0 + len(secKeys)
 
@@ -406,6 +406,8 @@ func sectionPtr(s *column.Section, i int) *float64 {
 		return &s.ShearCentre[column.Major]
 	case 17:
 		return &s.ShearCentre[column.Minor]
+	case 18:
+		return &s.EffArea
 	}
 	return nil
 }

@@ -544,7 +544,7 @@ var sectionKeys = map[string]struct {
 	"CHS":     {2, []string{"diameter", "thickness"}, []string{"thickness_loss"}},
 	"rect":    {3, []string{"depth", "width"}, []string{"thickness_loss"}},
 	"round":   {4, []string{"diameter"}, []string{"thickness_loss"}},
-	"custom":  {5, []string{"area", "i_major", "i_minor", "c_major", "c_minor"}, []string{"it", "iw", "y0", "z0"}},
+	"custom":  {5, []string{"area", "i_major", "i_minor", "c_major", "c_minor"}, []string{"it", "iw", "y0", "z0", "effective_area"}},
 	"angle":   {6, []string{"depth", "width", "thickness"}, []string{"root", "thickness_loss"}},
 	"channel": {7, []string{"depth", "width", "flange", "web"}, []string{"thickness_loss"}},
 	"tee":     {8, []string{"depth", "width", "flange", "web"}, []string{"thickness_loss"}},
@@ -561,6 +561,7 @@ var sectionDims = map[string]qopt{
 	"radius":         {dim: Length, need: nonNegative},
 	"it":             {dim: SecondMoment, need: nonNegative}, "iw": {dim: Warping, need: nonNegative},
 	"y0": {dim: Length}, "z0": {dim: Length},
+	"effective_area": {dim: Area, need: positive},
 }
 
 func (p *parser) section(member *table) {
