@@ -116,6 +116,15 @@ var keyTables = []*TableInfo{
 			Default: "5 % fractile of the yield, mean of permanent loads and of the rest, 98 % fractile of annual maxima of variable loads",
 			Meaning: "Characteristic values the study sets instead of those taken from the distributions."},
 	}},
+	{Path: "record", Meaning: "The filing head of the reports: shown at the head of the HTML, text and Markdown reports and in results.json (record). Text on one line each.", Keys: []KeyInfo{
+		{Name: "project", Takes: "text", Default: "none", Meaning: "The project or job the study belongs to."},
+		{Name: "member", Takes: "text", Default: "none", Meaning: "The member assessed, e.g. \"column C4, grid B/3, level 2\"."},
+		{Name: "prepared_by", Takes: "text", Default: "none", Meaning: "Who prepared the study."},
+		{Name: "checked_by", Takes: "text", Default: "none", Meaning: "Who checked it."},
+		{Name: "date", Takes: "text or a TOML date (2026-12-05)", Default: "none", Meaning: "The date of this revision."},
+		{Name: "revision", Takes: "text", Default: "none", Meaning: "The revision, e.g. \"B\"."},
+		{Name: "notes", Takes: "text", Default: "none", Meaning: "A remark for the file, one line."},
+	}},
 	{Path: "measurements", Meaning: "Test results that update a distribution of the study (EN 1990 Annex D).", Keys: []KeyInfo{
 		{Name: "yield", Takes: "table", Meaning: "Updates material.yield."},
 		{Name: "modulus", Takes: "table", Meaning: "Updates material.modulus."},

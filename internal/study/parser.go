@@ -359,6 +359,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.capacity(top)
 	p.target(top)
 	p.codeCheck(top) // codecheck_keys.go
+	p.record(top)    // record.go
 	p.analysis(top)
 	p.sensitivity(top)
 	if st.Model == "beam-column" && (top.m["sensitivity"] == nil || !hasKey(top.m["sensitivity"], "sobol")) {

@@ -17,7 +17,12 @@ type Study struct {
 	// File is the study's name as given to Load; SHA256 is the hex digest
 	// of its bytes.
 	File, SHA256 string
-	Title        string
+	// Data is the study file byte for byte, as SHA256 was taken of it
+	// (the HTML report embeds it).
+	Data  []byte
+	Title string
+	// Record is the filing head of [record] (record.go).
+	Record Record
 	// Units is the unit system of bare numbers ("N-mm", "kN-m", "kip-in").
 	Units System
 
@@ -174,6 +179,7 @@ func Parse(name string, data []byte) (*Study, error) {
 	}
 	st.File = name
 	st.SHA256 = hex.EncodeToString(sum[:])
+	st.Data = data
 	st.src = newSource(p.raw, p.lines)
 	// Every variant at every swept value is checked now, so a run does
 	// not stop half way (see sweep.go).

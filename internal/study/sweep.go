@@ -285,7 +285,7 @@ func (s *Study) Derive(v, i int) (*Study, error) {
 	if len(probs) > 0 {
 		return nil, &Error{Problems: probs}
 	}
-	st.File, st.SHA256 = s.File, s.SHA256
+	st.File, st.SHA256, st.Data = s.File, s.SHA256, s.Data
 	return st, nil
 }
 
