@@ -10,6 +10,9 @@ type Bundle struct {
 	Doc *Document
 	// StudyFile is the path of the study as the user gave it.
 	StudyFile string
+	// StudyText is the study file byte for byte (the bytes of
+	// Doc.InputSHA256): the HTML report embeds it, collapsed.
+	StudyText []byte
 	// Inputs lists every input of the study, random or not.
 	Inputs []Input
 	// Check is the deterministic check at nominal values.

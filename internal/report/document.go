@@ -8,6 +8,9 @@ type Document struct {
 	ToolVersion string `json:"tool_version"`
 	InputSHA256 string `json:"input_sha256"`
 	Units       string `json:"units"` // always "N-mm-MPa"
+	// Record is the filing head of the study ([record]); absent when the
+	// study has none.
+	Record *Record `json:"record,omitempty"`
 	// Complete is always written: true when the command finished
 	// everything it set out to do, false when a signal stopped it, and
 	// then IncompleteReason says what is missing.

@@ -41,11 +41,32 @@ figure{margin:1.2rem 0}figure svg{width:100%;max-width:48rem;height:auto}#fig-sw
 .caution{border-left:4px solid #c0392b;padding:.5rem .9rem;background:#fbf3f2}
 .side{display:flex;flex-wrap:wrap;gap:2rem}.muted{color:#666;font-size:.9rem}
 code{font-size:.9em}
+table.record th{width:9rem}
+details.study{margin:.8rem 0}details.study summary{cursor:pointer}
+pre.study{background:#f7f7f7;border:1px solid #e2e2e2;padding:.6rem .8rem;font-size:.82rem;line-height:1.35;white-space:pre-wrap;overflow-wrap:anywhere}
+.print-only{display:none}
+@page{size:A4;margin:16mm 15mm 18mm 15mm;
+@bottom-left{content:"{{.Title}}";font:8pt "Liberation Sans",Arial,sans-serif;color:#555}
+@bottom-right{content:"page " counter(page) " of " counter(pages);font:8pt "Liberation Sans",Arial,sans-serif;color:#555}}
+@media print{
+body{max-width:none;margin:0;padding:0;font-size:9.5pt;line-height:1.35}
+h1{font-size:15pt;margin-top:0}h2{font-size:12pt;margin-top:1.2rem}h3{font-size:10.5pt}
+h2,h3{break-after:avoid}
+table,figure,tr,.caution,.verdict{break-inside:avoid}
+table{font-size:8.5pt}
+figure svg{max-width:100%}
+.side{display:block}
+details.study{display:none}
+.print-only{display:block}
+pre.study{break-inside:auto;font-size:7.5pt}
+a{color:inherit;text-decoration:none}
+}
 </style>
 </head>
 <body>
 <header>
 <h1>{{.Title}}</h1>
+{{if .Record}}<table class="record">{{range .Record}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{end}}
 <p class="muted">Reliability study of a compression member{{if .StudyFile}} · study file <code>{{.StudyFile}}</code>{{end}}{{if .ToolVersion}} · strutrisk {{.ToolVersion}}{{end}}</p>
 <p class="caution">{{.Caution}}</p>
 </header>
@@ -175,6 +196,12 @@ code{font-size:.9em}
 <tr><th>units of the result document</th><td>{{if .Units}}{{.Units}}{{else}}N-mm-MPa{{end}}</td></tr>
 </table>
 <p class="muted">The same study file, seed and tool version give the same numbers, whatever the number of workers.</p>
+{{if .StudyText}}<details class="study"><summary>The study file as run (SHA-256 <code>{{.InputSHA}}</code>)</summary>
+<pre class="study">{{.StudyText}}</pre>
+</details>
+<div class="print-only"><h3>The study file as run</h3>
+<p class="muted">SHA-256 <code>{{.InputSHA}}</code></p>
+<pre class="study">{{.StudyText}}</pre></div>{{end}}
 </section>
 
 <section id="cautions">

@@ -15,6 +15,7 @@ func Markdown(b *Bundle) string {
 	v := makeView(b, nil, nil)
 	var w strings.Builder
 	fmt.Fprintf(&w, "# %s\n\n", mdText(v.Title))
+	mdKV(&w, v.Record)
 	fmt.Fprintf(&w, "> %s\n\n", v.Caution)
 
 	w.WriteString("## Result\n\n")

@@ -28,6 +28,9 @@ func SummaryText(b *Bundle) string {
 		fmt.Fprintf(&w, "  %-24s %s\n", label, fmt.Sprintf(format, args...))
 	}
 	f2 := func(x float64) string { return fixed(x, 2) }
+	for _, r := range RecordRows(d.Record) {
+		line(r.Key, "%s", r.Value)
+	}
 	if n := d.Nominal; n != nil {
 		line("nominal capacity", "%s (%s axis, K = %s, relative slenderness %s)", kN(n.Capacity), n.Axis, fixed(n.K, 3), fixed(n.RelativeSlenderness, 3))
 	}

@@ -13,6 +13,10 @@ import (
 // and Markdown writers so that both carry the same facts.
 type view struct {
 	Title, StudyFile, ToolVersion, InputSHA, Seed, Units string
+	// Record is the filing head ([record]), StudyText the study file as
+	// run (record.go).
+	Record    []KV
+	StudyText string
 
 	Result       []KV
 	Verdict      string
@@ -81,6 +85,8 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		StudyFile:   b.StudyFile,
 		ToolVersion: d.ToolVersion,
 		InputSHA:    d.InputSHA256,
+		Record:      RecordRows(d.Record),
+		StudyText:   string(b.StudyText),
 		Units:       d.Units,
 		Defaults:    b.Defaults,
 		Diagnostics: b.Diagnostics,
