@@ -218,6 +218,7 @@ func (r *results) bundle() *report.Bundle {
 	b := &report.Bundle{
 		Doc:             r.document(),
 		StudyFile:       l.st.File,
+		StudyText:       l.st.Data,
 		Inputs:          l.inputs(),
 		Check:           l.checkRows(),
 		Defaults:        l.st.Defaults,

@@ -78,6 +78,7 @@ func (l *loaded) baseDocument() *report.Document {
 		Title:         st.Title,
 		ToolVersion:   version,
 		InputSHA256:   st.SHA256,
+		Record:        recordDoc(st.Record),
 		Units:         "N-mm-MPa",
 		Complete:      true,
 		GoverningAxis: a.String(),
@@ -259,4 +260,14 @@ func imperfectionNote(st *study.Study, n *study.Nominal) string {
 		return ""
 	}
 	return "; " + n.Axis.String() + " axis: " + strings.Join(parts, "; ")
+}
+
+// recordDoc is the study's [record] for the result document; nil when the
+// study has none.
+func recordDoc(r study.Record) *report.Record {
+	if r.Empty() {
+		return nil
+	}
+	return &report.Record{Project: r.Project, Member: r.Member, PreparedBy: r.PreparedBy,
+		CheckedBy: r.CheckedBy, Date: r.Date, Revision: r.Revision, Notes: r.Notes}
 }

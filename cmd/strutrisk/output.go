@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"math"
+	"path/filepath"
 	"strings"
 
 	"strutrisk/internal/report"
@@ -15,6 +16,9 @@ func (r *results) summary(dir string, files []string) string {
 	d := r.document()
 	res := r.res
 	fmt.Fprintf(&w, "%s\n", d.Title)
+	for _, kv := range report.RecordRows(d.Record) {
+		fmt.Fprintf(&w, "  %-18s %s\n", kv.Key, kv.Value)
+	}
 	n := r.l.nom
 	fmt.Fprintf(&w, "  nominal capacity   %.1f kN (%s, %s), demand at mean loads %.1f kN, utilisation %.2f\n",
 		n.Capacity/1e3, governingText(n), n.Governs, n.Demand/1e3, n.Utilisation)
@@ -71,6 +75,11 @@ func (r *results) summary(dir string, files []string) string {
 	}
 	if len(files) > 0 {
 		fmt.Fprintf(&w, "  results in         %s/ (%d files: results.json, samples.csv, summary.txt, ...)\n", dir, len(files))
+	}
+	for _, f := range files {
+		if filepath.Base(f) == "report.html" {
+			fmt.Fprintf(&w, "  report             %s\n", f)
+		}
 	}
 	fmt.Fprintf(&w, "\n%s\n", caution)
 	return w.String()
