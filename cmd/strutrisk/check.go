@@ -14,7 +14,10 @@ const checkHelp = `Usage: strutrisk check STUDY.toml [--json]
 Validates a study file and prints the deterministic picture at nominal
 values, without sampling: section properties per axis, slenderness and
 relative slenderness, Euler load, the K used, the capacity and which axis
-and limit govern it, and the utilisation under the mean loads. Every
+and limit govern it, the utilisation under the mean loads, and the code
+check beside beta (EN 1993-1-1 6.3.1 at characteristic values, the EN 1990
+6.10 design load, partial factors of [code_check]: recommended values by
+default, the National Annex may differ). Every
 problem in the file is listed with its line; the exit status is then 2.
 
 Flags:

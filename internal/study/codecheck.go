@@ -126,43 +126,28 @@ func (md *Model) characteristicValues(c *CodeCheck) (values, map[*Quantity]float
 	st := md.Study
 	v := md.base
 	char := map[*Quantity]float64{}
+	basis := map[*Quantity]string{}
 	for i, b := range md.binds {
 		q := md.quantity(i)
 		ch := md.Characteristic(i)
 		if x, ok := st.CodeCheck.Characteristic[q.Path]; ok {
 			ch = assess.Characteristic{Value: x, Basis: "code_check.characteristic"}
 		}
-		char[q] = ch.Value
+		char[q], basis[q] = ch.Value, ch.Basis
 		md.set(&v, b, ch.Value)
 	}
 	for _, q := range st.Quantities {
-		x, random := char[q]
 		switch {
-		case random:
-			basis := md.Characteristic(md.index(q)).Basis
-			if _, ok := st.CodeCheck.Characteristic[q.Path]; ok {
-				basis = "code_check.characteristic"
-			}
-			if q == st.Bow || q == st.Ecc || q == st.Sway || q == st.ModelFactor {
-				continue // not in the code check
-			}
-			c.Inputs = append(c.Inputs, CheckInput{Path: q.Path, Unit: q.Unit(), Value: x, Basis: basis})
+		case q == st.Bow || q == st.Ecc || q == st.Sway || q == st.ModelFactor:
+			// not in the code check
+		case q.Random():
+			c.Inputs = append(c.Inputs, CheckInput{Path: q.Path, Unit: q.Unit(), Value: char[q], Basis: basis[q]})
 		case md.isLoad(q):
 			char[q] = q.Value
 			c.Inputs = append(c.Inputs, CheckInput{Path: q.Path, Unit: q.Unit(), Value: q.Value, Basis: "fixed"})
 		}
 	}
 	return v, char
-}
-
-// index returns the variable index of a random quantity.
-func (md *Model) index(q *Quantity) int {
-	for i, v := range md.Sim.Vars {
-		if v.Name == q.Path {
-			return i
-		}
-	}
-	return -1
 }
 
 // checkCurves gives m the imperfection factor of each axis: the study's
