@@ -27,7 +27,7 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 	if target == 0 {
 		target = autoTargetCoV
 	}
-	f, ferr := FORMContext(ctx, m, nil)
+	f, ferr := FORMContext(ctx, m, s.FORM)
 	var formEvals int64
 	formOK := ferr == nil && f != nil && f.Converged
 	if ferr == nil && f != nil {

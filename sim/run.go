@@ -42,6 +42,10 @@ type Settings struct {
 	// default 20000, negative for none. Its evaluations are not counted in
 	// Result.Evaluations.
 	AuxSamples int64
+	// FORM are the settings of every FORM analysis Run makes: the form
+	// method, the design-point search that starts auto and importance
+	// sampling. Nil means the defaults of FORMSettings.
+	FORM *FORMSettings
 }
 
 // Defaults of Settings.
@@ -170,7 +174,7 @@ func interruptedResult(m Method, evals int64) *Result {
 
 // runFORM wraps a FORM analysis as a Result.
 func runFORM(ctx context.Context, m *Model, s *Settings) (*Result, error) {
-	f, err := FORMContext(ctx, m, nil)
+	f, err := FORMContext(ctx, m, s.FORM)
 	if ctx.Err() != nil {
 		res := interruptedResult(FORMMethod, 0)
 		if f != nil {

@@ -49,7 +49,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	bar.stage("FORM")
 	r.form = res.FORM
 	if r.form == nil && len(m.Vars) > 0 && ctx.Err() == nil {
-		r.form, r.formErr = sim.FORMContext(ctx, m, r.l.md.FORMSettings())
+		r.form, r.formErr = sim.FORMContext(ctx, m, s.FORM)
 		if r.formErr != nil {
 			r.warnings = append(r.warnings, "form: "+r.formErr.Error())
 		}
@@ -63,7 +63,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 		bar.stage("tornado")
 		// FORM betas per bar, unless each evaluation is a numerical analysis.
 		withFORM := l.st.Model != "beam-column"
-		base, rows, err := sim.Tornado(margin, &sim.TornadoSettings{Low: sens.TornadoLow, High: sens.TornadoHigh, Output: 0, FORM: withFORM})
+		base, rows, err := sim.Tornado(margin, &sim.TornadoSettings{Low: sens.TornadoLow, High: sens.TornadoHigh, Output: 0, FORM: withFORM, FORMSettings: s.FORM})
 		if err != nil {
 			r.warnings = append(r.warnings, "tornado: "+err.Error())
 		} else {

@@ -46,7 +46,7 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 	}
 	t := &targetRun{added: math.NaN()}
 	bar.stage("reserve factor (FORM)")
-	rv, err := l.md.Reserve(ctx, st.Target, nil)
+	rv, err := l.md.Reserve(ctx, st.Target, s.FORM)
 	if err != nil {
 		t.notes = append(t.notes, "no reserve factor: "+err.Error())
 		return t
@@ -84,7 +84,7 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 			t.notes = append(t.notes, fmt.Sprintf("after %d sampling runs the sampled beta at the reserve factor is %.3f, not the target: the factor is approximate", maxConfirm, res.Beta))
 			break
 		}
-		f, b, _, err := l.md.FactorFor(ctx, st.Target+d, nil)
+		f, b, _, err := l.md.FactorFor(ctx, st.Target+d, s.FORM)
 		if err != nil {
 			t.notes = append(t.notes, "the reserve factor could not be corrected for the offset of FORM: "+err.Error())
 			break
@@ -97,7 +97,7 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 		}
 	}
 	if d != 0 && rv.AddedErr == nil {
-		if a, _, err := l.md.AddedFor(ctx, st.Target+d, nil); err == nil {
+		if a, _, err := l.md.AddedFor(ctx, st.Target+d, s.FORM); err == nil {
 			t.added = a
 		} else {
 			t.notes = append(t.notes, "no largest added load after the correction: "+err.Error())

@@ -97,13 +97,13 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "strutrisk: %s: --require-target given but the study has no [target] beta\n", st.File)
 		return exitInput
 	}
-	settings := sim.Settings{
+	settings := l.md.SimSettings(sim.Settings{
 		Method:    st.Analysis.Method,
 		Samples:   st.Analysis.Samples,
 		TargetCoV: st.Analysis.TargetCoV,
 		Seed:      st.Analysis.Seed,
 		Workers:   o.workers,
-	}
+	})
 	if st.Model == "beam-column" {
 		// Each evaluation is a numerical analysis: describe the capacity
 		// and demand from a smaller auxiliary sample.

@@ -183,8 +183,9 @@ func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings
 		return nil, "", fmt.Errorf("nothing in it is uncertain")
 	}
 	// A variant may set its own [analysis] keys (a cheaper method for an
-	// expensive model); the rest is the main run's.
-	settings := *s
+	// expensive model); the rest is the main run's, but for the settings
+	// of its own capacity model.
+	settings := md.SimSettings(*s)
 	a, b := cs.Analysis, st.Analysis
 	if a.Method != b.Method {
 		settings.Method = a.Method

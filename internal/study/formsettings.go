@@ -17,3 +17,13 @@ func (md *Model) FORMSettings() *sim.FORMSettings {
 	}
 	return nil
 }
+
+// SimSettings returns s with the settings that belong to the study's
+// capacity model put in: Settings.FORM from FORMSettings, so that the
+// form method, auto and importance sampling all search with the step the
+// model needs. Every sim.Run of a study's model takes its settings from
+// here.
+func (md *Model) SimSettings(s sim.Settings) sim.Settings {
+	s.FORM = md.FORMSettings()
+	return s
+}
