@@ -85,6 +85,8 @@ func TestBadStudies(t *testing.T) {
 		want        []string // fragments of stderr, e.g. "study.toml:11: material.yield:"
 	}{
 		{"fabrication for the shape", edit(8, "width = 50\nfabrication = \"welded\""), []string{"study.toml:9: member.section.fabrication: a rect section cannot be \"welded\": use \"hot-rolled\""}},
+		{"effective_area above the area", strings.Replace(good, "shape = \"rect\"\ndepth = 100\nwidth = 50", "shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\neffective_area = 6000", 1), []string{"study.toml:12: member.section.effective_area: effective_area 6000 mm2 is larger than area 5000 mm2"}},
+		{"effective_area on a rect", edit(8, "width = 50\neffective_area = 4000"), []string{"study.toml:9: member.section.effective_area: shape rect does not take effective_area"}},
 		{"fabrication unknown", edit(8, "width = 50\nfabrication = \"rolled\""), []string{"study.toml:9: member.section.fabrication: \"rolled\" is not a choice"}},
 		{"radius on a rect", edit(8, "width = 50\nradius = 5"), []string{"study.toml:9: member.section.radius: shape rect does not take radius"}},
 		{"radius negative", edit(6, "shape = \"RHS\"\nthickness = 5\nradius = -1"), []string{"study.toml:8: member.section.radius:"}},

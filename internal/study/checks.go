@@ -221,6 +221,10 @@ func (p *parser) checkSection() {
 	sec := st.Section.at(func(q *Quantity) float64 { return nominalValue(q, 0) })
 	if st.Section.Shape == column.ShapeCustom {
 		imaj, imin := st.Section.Dims["i_major"], st.Section.Dims["i_minor"]
+		if ea, a := st.Section.Dims["effective_area"], st.Section.Dims["area"]; ea != nil && a != nil && nominalValue(ea, 0) > nominalValue(a, 0) {
+			p.errorf(ea.Path, "effective_area %g mm2 is larger than area %g mm2: give the effective area of the class 4 section, at most its area", nominalValue(ea, 0), nominalValue(a, 0))
+			return
+		}
 		if imaj != nil && imin != nil && nominalValue(imin, 0) > nominalValue(imaj, 0) {
 			p.errorf(imin.Path, "i_minor is larger than i_major: the major axis is the stiffer one, swap them (and c_major, c_minor)")
 			return

@@ -232,7 +232,7 @@ func TestCustomEffectiveArea(t *testing.T) {
 		t.Errorf("defaults still say the custom section is not classified: %q", st.Defaults)
 	}
 	bad := strings.Replace(text, "effective_area = 3000", "effective_area = 5000", 1)
-	if _, err := Parse("t.toml", []byte(bad)); err == nil || !strings.Contains(err.Error(), "effective area 5000") {
+	if _, err := Parse("t.toml", []byte(bad)); err == nil || !strings.Contains(err.Error(), "member.section.effective_area: effective_area 5000 mm2 is larger than area 4000 mm2") {
 		t.Errorf("effective_area above the area: %v", err)
 	}
 }
