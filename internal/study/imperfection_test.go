@@ -295,3 +295,20 @@ func TestSweepLcr(t *testing.T) {
 		t.Errorf("mixed sweep: %v", err)
 	}
 }
+
+// One evaluation with per-axis imperfections (Lcr/n, sway, the equivalent
+// imperfection, the twisting modes) does not allocate.
+func TestImperfectionsNoAlloc(t *testing.T) {
+	for _, c := range []struct{ imp, capacity string }{
+		{"bow = { dist = \"normal\", mean = \"Lcr/1000\", sd = \"Lcr/3000\" }\nsway = \"1/200\"", `model = "perry-robertson"`},
+		{"bow = { dist = \"normal\", mean = \"Lcr/1000\", sd = \"Lcr/3000\" }", "imperfection = \"equivalent\""},
+		{"", "imperfection = \"equivalent\""},
+	} {
+		md := hStudy(t, "3000", `ends = "fixed-free"`, c.imp, c.capacity)
+		x := medians(md)
+		out := make([]float64, 2)
+		if n := testing.AllocsPerRun(100, func() { md.Sim.G(x, out) }); n != 0 {
+			t.Errorf("%s / %s: %g allocations per evaluation", c.imp, c.capacity, n)
+		}
+	}
+}
