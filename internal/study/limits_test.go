@@ -92,6 +92,11 @@ profile = [0.0, 1.0, [2.0][0], 1.0, 0.0]
 // limits, a flat file of unknown keys allocated 430 times its size and a
 // 31-deep header 330 times.
 func TestLoaderAllocations(t *testing.T) {
+	if raceOn {
+		// The race detector's shadow bookkeeping adds allocations of its
+		// own; the plain test run (CI runs both) checks the bound.
+		t.Skip("allocation ratios are measured without the race detector")
+	}
 	n := 20000
 	keys := func(prefix string, sep string) string {
 		var b strings.Builder
