@@ -186,6 +186,9 @@ func (l *loaded) checkText() string {
 	var b strings.Builder
 	st, n := l.st, l.nom
 	fmt.Fprintf(&b, "%s\n", st.Title)
+	for _, kv := range report.RecordRows(recordDoc(st.Record)) {
+		fmt.Fprintf(&b, "  %-12s %s\n", kv.Key, kv.Value)
+	}
 	fmt.Fprintf(&b, "study %s (bare numbers in %s); values below in N, mm, MPa and kN\n\n", st.File, st.Units.Name)
 	fmt.Fprintf(&b, "Nominal member: %s section, A = %.0f mm2, L = %.0f mm, E = %.0f MPa, fy = %.1f MPa\n",
 		st.Section.Name, n.Member.Props.A, n.Member.Length, n.Member.E, n.Member.Fy)

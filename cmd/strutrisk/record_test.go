@@ -97,4 +97,8 @@ func TestCheckJSONRecord(t *testing.T) {
 	if _, ok := raw["record"]; ok {
 		t.Errorf("a study without [record] has a record in its document")
 	}
+	code, out, errs := invoke(t, "check", writeStudy(t, recordStudy))
+	if code != 0 || !strings.HasPrefix(out, "test strut\n  project      Warehouse B & annex <refurb>\n  member       column C4, grid B/3\n") {
+		t.Errorf("check (exit %d %s) does not open with the record:\n%s", code, errs, out)
+	}
 }

@@ -54,6 +54,7 @@ h1{font-size:15pt;margin-top:0}h2{font-size:12pt;margin-top:1.2rem}h3{font-size:
 h2,h3{break-after:avoid}
 table,figure,tr,.caution,.verdict{break-inside:avoid}
 table{font-size:8.5pt}
+table.record th,table.record td{padding:.1rem .6rem}
 figure svg{max-width:100%}
 .side{display:block}
 details.study{display:none}
