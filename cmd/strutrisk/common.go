@@ -104,6 +104,7 @@ func (l *loaded) baseDocument() *report.Document {
 	}
 	d.Target = baseTarget(st)            // reserve.go
 	d.Measurements = measurementsDoc(st) // measure.go
+	d.LoadPeriods = loadPeriodsDoc(st)   // period.go
 	return d
 }
 
@@ -220,6 +221,7 @@ func (l *loaded) checkText() string {
 		fmt.Fprintf(&b, "Target reliability index %.2f: `strutrisk run` estimates whether it is met\n", st.Target)
 	}
 	b.WriteString(targetCheckText(st) + measureText(st)) // reserve.go, measure.go
+	b.WriteString(loadPeriodText(st))                    // period.go
 	b.WriteString(report.CodeCheckText(l.cc))
 	b.WriteString(casesCheckText(st)) // sweep.go
 	if len(st.Defaults) > 0 {

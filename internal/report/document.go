@@ -42,6 +42,10 @@ type Document struct {
 	Target *TargetCheck `json:"target,omitempty"`
 	// Measurements are the updates of inputs from test results.
 	Measurements []Measurement `json:"measurements,omitempty"`
+	// LoadPeriods says, per load that gives a period, what its
+	// distribution describes and how it was converted to the reference
+	// period (see LoadPeriod).
+	LoadPeriods []LoadPeriod `json:"load_periods,omitempty"`
 
 	GoverningAxis string `json:"governing_axis,omitempty"`
 

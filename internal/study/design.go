@@ -15,11 +15,13 @@ import (
 //   - the yield strength: its 5 % fractile (a strength);
 //   - the modulus: its mean (a stiffness, EN 1990 4.2);
 //   - a permanent load: its mean (EN 1990 4.1.2, small variability);
-//   - a variable load: the 98 % fractile of its annual maxima. The
-//     distribution is taken to describe maxima over the reference period
-//     of n years ([target] reference_period, 1 year when none is given),
-//     with independent years, so the annual maxima have the distribution
-//     F^(1/n) and the value is F^-1(0.98^n);
+//   - a variable load: the 98 % fractile of its annual maxima. Its
+//     distribution describes maxima over n years (Quantity.MaximaYears:
+//     the load's own period when given and not converted, else the
+//     reference period, else 1 year), with independent years, so the
+//     annual maxima have the distribution F^(1/n) and the value is
+//     F^-1(0.98^n). A point-in-time load has no maxima: its own 98 %
+//     fractile is taken, and the basis says so;
 //   - geometric inputs (length, section, K, end springs, bow,
 //     eccentricity, thickness loss), the model and the effect factor:
 //     their mean, the nominal value (bow and eccentricity: the mean of
@@ -34,9 +36,9 @@ func (md *Model) Characteristic(i int) assess.Characteristic {
 	case q == st.Bow || q == st.Ecc:
 		return assess.Characteristic{Value: meanMagnitude(d), Basis: "mean of the magnitude"}
 	case md.isLoad(q) && !md.isPermanent(q):
-		n := st.ReferenceYears
-		if !(n > 0) {
-			n = 1
+		n := q.MaximaYears(st.ReferenceYears)
+		if n == 0 {
+			return assess.Characteristic{Value: d.Quantile(0.98), Basis: "98 % fractile of the point-in-time value (period = point-in-time: no annual maxima given)"}
 		}
 		basis := "98 % fractile of annual maxima"
 		if n != 1 {

@@ -17,6 +17,11 @@ type distSpec struct {
 	set     []string // the parameter set used, in canonical order
 	params  map[string]pval
 	written string // "mean 205 GPa, cov 0.03"
+	// period is what a load's distribution describes ("" when not given,
+	// PointInTime, or a duration such as "1 year"), periodYears it in
+	// years (0 unless a duration).
+	period      string
+	periodYears float64
 }
 
 // distSets lists, per distribution, its complete parameter sets; optional
@@ -75,14 +80,24 @@ func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
 	for _, k := range distOptional[name] {
 		allowed[k] = true
 	}
+	if o.period {
+		allowed["period"] = true
+	}
 	spec := &distSpec{name: name, params: map[string]pval{}}
 	given := map[string]bool{}
 	bad := false
 	for _, k := range sortedKeys(m) {
+		kp := path + "." + k
 		if k == "dist" {
 			continue
 		}
-		kp := path + "." + k
+		if k == "period" {
+			var ok bool
+			if spec.period, spec.periodYears, ok = p.loadPeriod(kp, m[k], o); !ok {
+				bad = true
+			}
+			continue
+		}
 		if !allowed[k] {
 			msg := fmt.Sprintf("%s takes %s", name, allowedList(sets, distOptional[name]))
 			if near, ok := nearest(k, sortedKeys(allowed)); ok {
@@ -155,6 +170,9 @@ func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
 		if v, ok := m[k]; ok {
 			w = append(w, fmt.Sprintf("%s %v", k, v))
 		}
+	}
+	if spec.period != "" {
+		w = append(w, "period "+spec.period)
 	}
 	spec.written = strings.Join(w, ", ")
 	if !p.checkParams(path, spec, o) {

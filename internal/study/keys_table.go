@@ -89,6 +89,8 @@ var keyTables = []*TableInfo{
 	{Path: "loads", Meaning: "Axial loads, summed; compression positive.", Keys: []KeyInfo{
 		{Name: "effect_factor", Takes: "quantity (number)", Default: "1", Meaning: "Multiplies the sum of the loads: the uncertainty of the load effect."},
 		{Name: "<name>", Takes: "quantity (force)", Required: true, Meaning: "An axial load under a name of your choice (at least one), e.g. dead, imposed."},
+		{Name: "<name>.period", Takes: "text inside the load's distribution table: a duration (\"1 year\") or \"point-in-time\"", Default: "maxima over the reference period",
+			Meaning: "What a variable load's distribution describes: maxima over the period, converted to target.reference_period (gumbel exactly: location + scale ln n; others by F^n, n = reference period / period), or the value at an arbitrary point in time."},
 	}},
 	{Path: "correlation", Array: true, Meaning: "A correlation between two random variables (Nataf).", Keys: []KeyInfo{
 		{Name: "pair", Takes: "list of two variable paths", Required: true, Meaning: "The two random variables, by path, e.g. [\"material.yield\", \"material.modulus\"]."},

@@ -398,6 +398,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 			p.build(q, p.opts[q])
 		}
 	}
+	p.loadPeriods() // period.go
 	if len(p.probs) > 0 {
 		return st
 	}
@@ -695,7 +696,7 @@ func (p *parser) loads(top *table) {
 			p.errorf(t.key(k), "unknown key in [loads]; did you mean loads.%s? (if it is a load, name it differently)", near)
 			continue
 		}
-		if q := p.q(t, k, qopt{dim: Force}); q != nil {
+		if q := p.q(t, k, qopt{dim: Force, period: true}); q != nil {
 			p.st.Loads = append(p.st.Loads, q)
 		}
 	}

@@ -42,6 +42,17 @@ type Quantity struct {
 	// study's unit system gave it one (see plausible.go).
 	bare bool
 
+	// Period is what a load's distribution describes: "" when not given
+	// (maxima over the reference period), PointInTime, or a duration as
+	// read ("1 year"); PeriodYears is it in years, 0 unless a duration.
+	Period      string
+	PeriodYears float64
+	// MaximaN is the n of the conversion of a load's maxima to the
+	// reference period (Dist = Written^n, see period.go), 0 when none was
+	// made; Written is then the distribution as written.
+	MaximaN float64
+	Written sim.Dist
+
 	// spec is the distribution as parsed, before it is built.
 	spec *distSpec
 }
@@ -84,6 +95,9 @@ type qopt struct {
 	rel  bool // "L/n" and "Lcr/n" allowed
 	frac bool // "a/b" allowed (an angle such as "1/200")
 	inf  bool // +inf allowed (rigid springs)
+	// period: the distribution may say the period it describes (a
+	// variable load, see period.go).
+	period bool
 }
 
 // pval is one parsed number: a value in N, mm, MPa, or a fraction of the
@@ -172,6 +186,7 @@ func (p *parser) quantity(path string, v any, o qopt) *Quantity {
 		}
 		q.bare = bareTable(m, o)
 		q.spec = spec
+		q.Period, q.PeriodYears = spec.period, spec.periodYears
 		q.DistName = spec.name
 		q.Params = spec.written
 		return q
