@@ -46,6 +46,7 @@ details.study{margin:.8rem 0}details.study summary{cursor:pointer}
 pre.study{background:#f7f7f7;border:1px solid #e2e2e2;padding:.6rem .8rem;font-size:.82rem;line-height:1.35;white-space:pre-wrap;overflow-wrap:anywhere}
 .print-only{display:none}
 @page{size:A4;margin:16mm 15mm 18mm 15mm;
+@top-left{content:""}@top-center{content:""}@top-right{content:""}@bottom-center{content:""}
 @bottom-left{content:"{{.Title}}";font:8pt "Liberation Sans",Arial,sans-serif;color:#555}
 @bottom-right{content:"page " counter(page) " of " counter(pages);font:8pt "Liberation Sans",Arial,sans-serif;color:#555}}
 @media print{

@@ -62,6 +62,11 @@ func TestPrintPDF(t *testing.T) {
 		if want := "page " + strconv.Itoa(i+1) + " of " + strconv.Itoa(n); !strings.Contains(p, want) {
 			t.Errorf("page %d lacks %q in its margin", i+1, want)
 		}
+		// The browser's own header (date, title) and footer (the file's
+		// address) give way to the style sheet's margin boxes.
+		if strings.Contains(p, "file:") || i > 0 && strings.Count(p, b.Doc.Title) != 1 {
+			t.Errorf("page %d carries the browser's header or footer:\n%s", i+1, p)
+		}
 	}
 	first := pages[0]
 	for _, w := range []string{b.Doc.Title, "Warehouse B & annex <refurb>", "B. Checker", "2026-12-05", words(Caution, 10), "Target NOT met"} {
@@ -103,8 +108,8 @@ func TestPrintPDF(t *testing.T) {
 }
 
 // printPDF writes the HTML report of b and prints it to PDF with Chromium
-// (its own header and footer off: the page numbers must come from the
-// report's style sheet).
+// as a user would, its own header and footer left on: the report's
+// margin boxes must replace them.
 func printPDF(t *testing.T, chromium string, b *Bundle) (pdf []byte, path string) {
 	t.Helper()
 	page, err := HTML(b)
@@ -121,7 +126,7 @@ func printPDF(t *testing.T, chromium string, b *Bundle) (pdf []byte, path string
 	defer cancel()
 	cmd := exec.CommandContext(ctx, chromium, "--headless", "--no-sandbox", "--disable-gpu",
 		"--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run",
-		"--no-pdf-header-footer", "--user-data-dir="+filepath.Join(dir, "profile"), "--print-to-pdf="+out, "file://"+in)
+		"--user-data-dir="+filepath.Join(dir, "profile"), "--print-to-pdf="+out, "file://"+in)
 	cmd.WaitDelay = 10 * time.Second
 	if msg, err := cmd.CombinedOutput(); err != nil {
 		t.Fatalf("chromium: %v\n%s", err, msg)
