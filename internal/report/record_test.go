@@ -85,3 +85,22 @@ func TestStudyEmbedded(t *testing.T) {
 		t.Errorf("no study text, yet a study block")
 	}
 }
+
+// TestPrintFooterTitle: the title in the print footer (a CSS string) is
+// escaped: a quote or a closing style tag in it ends nothing.
+func TestPrintFooterTitle(t *testing.T) {
+	b := recordBundle()
+	b.Doc.Title = `Bay "3" </style><b>x`
+	page, err := HTML(b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	h := string(page)
+	style := h[strings.Index(h, "<style>"):strings.Index(h, "</style>")]
+	if !strings.Contains(style, `@bottom-left{content:"Bay \22 3\22  \3c\2fstyle\3e\3c b\3ex"`) {
+		t.Errorf("the footer's title is not escaped as a CSS string:\n%s", style[strings.Index(style, "@page"):])
+	}
+	if strings.Count(h, "</style>") != 1 {
+		t.Errorf("the title closes the style sheet")
+	}
+}
