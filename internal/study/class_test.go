@@ -158,6 +158,11 @@ func TestTable62Warning(t *testing.T) {
 	if !strings.Contains(w, "minor axis takes curve \"b\", less severe than EN 1993-1-1 Table 6.2 curve \"c\"") || strings.Contains(w, "major axis takes") {
 		t.Errorf("warnings %q; want one for the minor axis only", st.Warnings)
 	}
+	// Only the major axis checked: the minor axis's curve is not used.
+	st = parse(t, h+"[capacity]\nmodel = \"curve\"\ncurve = \"b\"\naxis = \"major\"\n")
+	if w := strings.Join(st.Warnings, "\n"); strings.Contains(w, "less severe") {
+		t.Errorf("axis major: warnings %q; want none on the curve", st.Warnings)
+	}
 	st = parse(t, h+"[capacity]\nmodel = \"curve\"\n")
 	if st.Curve != [2]string{"b", "c"} || !strings.Contains(strings.Join(st.Defaults, "\n"), "capacity.curve: not given; EN 1993-1-1 Table 6.2") {
 		t.Errorf("curves %v, defaults %q", st.Curve, st.Defaults)

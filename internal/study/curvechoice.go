@@ -42,7 +42,10 @@ func (p *parser) tableCurves() {
 		}
 		table := curveAlpha(c)
 		alpha := nominalValue(given, 0)
-		if alpha < table {
+		// An axis the study does not check (capacity.axis) takes no
+		// curve, so a milder one there is no concern.
+		checked := st.Axis == column.Both || st.Axis == a
+		if alpha < table && checked {
 			name := "alpha"
 			if st.Curve[a] != "" {
 				name = "curve \"" + st.Curve[a] + "\""
