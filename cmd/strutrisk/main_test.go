@@ -239,13 +239,15 @@ func TestNewPassesCheck(t *testing.T) {
 	}
 }
 
-// TestDemoStudiesCheck: every study in studies/ passes check.
+// TestDemoStudiesCheck: every study in studies/ (and the benchmark input
+// in studies/bench/) passes check.
 func TestDemoStudiesCheck(t *testing.T) {
 	files, _ := filepath.Glob(filepath.Join("..", "..", "studies", "*.toml"))
-	if len(files) == 0 {
+	bench, _ := filepath.Glob(filepath.Join("..", "..", "studies", "bench", "*.toml"))
+	if len(files) == 0 || len(bench) == 0 {
 		t.Fatal("no demo studies found")
 	}
-	for _, f := range files {
+	for _, f := range append(files, bench...) {
 		if code, _, errs := invoke(t, "check", f); code != 0 {
 			t.Errorf("%s: exit %d\n%s", f, code, errs)
 		}
