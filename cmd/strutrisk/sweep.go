@@ -346,15 +346,7 @@ func caseBeta(pt *report.Point) string {
 // relSlendernessAbout is the nominal relative slenderness of the study at
 // swept value i about axis a (NaN if it cannot be found).
 func relSlendernessAbout(st *study.Study, i int, a column.Axis) float64 {
-	cs, err := st.Derive(-1, i)
-	if err != nil {
-		return math.NaN()
-	}
-	md, err := study.Build(cs)
-	if err != nil {
-		return math.NaN()
-	}
-	n, err := md.Nominal()
+	n, err := sweptNominal(st, i)
 	if err != nil {
 		return math.NaN()
 	}
@@ -364,19 +356,24 @@ func relSlendernessAbout(st *study.Study, i int, a column.Axis) float64 {
 // relSlenderness is the nominal relative slenderness of the study at
 // swept value i about its governing axis (NaN if it cannot be found).
 func relSlenderness(st *study.Study, i int) float64 {
-	cs, err := st.Derive(-1, i)
-	if err != nil {
-		return math.NaN()
-	}
-	md, err := study.Build(cs)
-	if err != nil {
-		return math.NaN()
-	}
-	n, err := md.Nominal()
+	n, err := sweptNominal(st, i)
 	if err != nil {
 		return math.NaN()
 	}
 	return n.ModeSlenderness
+}
+
+// sweptNominal is the study at swept value i at nominal values.
+func sweptNominal(st *study.Study, i int) (*study.Nominal, error) {
+	cs, err := st.Derive(-1, i)
+	if err != nil {
+		return nil, err
+	}
+	md, err := study.Build(cs)
+	if err != nil {
+		return nil, err
+	}
+	return md.Nominal()
 }
 
 // casesCheckText lists the sweep and the variants for check, with the
