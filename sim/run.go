@@ -141,7 +141,8 @@ func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
 	case Auto:
 		res, err = auto(ctx, m, t, &cfg)
 	default:
-		return nil, fmt.Errorf("sim: unknown method %q (want one of auto, monte-carlo, latin-hypercube, conditional-qmc, form, importance, subset)", cfg.Method)
+		_, err := ParseMethod(string(cfg.Method))
+		return nil, fmt.Errorf("sim: %w", err)
 	}
 	if err != nil {
 		return nil, err

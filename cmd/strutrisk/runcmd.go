@@ -7,6 +7,7 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"strings"
 
 	"strutrisk/internal/report"
 	"strutrisk/sim"
@@ -52,7 +53,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	fs.StringVar(&o.out, "out", "", "write results into `DIR`, replacing it as a whole (default: [output] dir, else out/<study file name>)")
 	fs.Uint64Var(&o.seed, "seed", 0, "seed of every random stream (`N`; default: [analysis] seed)")
 	fs.Int64Var(&o.samples, "samples", 0, "at most `N` model evaluations (default: [analysis] samples)")
-	fs.StringVar(&o.method, "method", "", "estimator `M`: auto, monte-carlo, latin-hypercube, form, importance, subset, conditional-qmc")
+	fs.StringVar(&o.method, "method", "", "estimator `M`: "+strings.Join(sim.MethodNames(), ", "))
 	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
 	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
 	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
@@ -71,9 +72,11 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	o.set = map[string]bool{}
 	fs.Visit(func(f *flag.Flag) { o.set[f.Name] = true })
-	if o.set["method"] && !validMethod(o.method) {
-		fmt.Fprintf(stderr, "strutrisk run: --method %q is not a method: use auto, monte-carlo, latin-hypercube, form, importance, subset or conditional-qmc\n", o.method)
-		return exitInput
+	if o.set["method"] {
+		if _, err := sim.ParseMethod(o.method); err != nil {
+			fmt.Fprintf(stderr, "strutrisk run: --method: %v\n", err)
+			return exitInput
+		}
 	}
 	if o.set["samples"] && (o.samples < 1 || o.samples > 1e10) {
 		fmt.Fprintf(stderr, "strutrisk run: --samples %d must be between 1 and 1e10\n", o.samples)
@@ -190,14 +193,6 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		return exitTarget
 	}
 	return exitOK
-}
-
-func validMethod(m string) bool {
-	switch sim.Method(m) {
-	case sim.Auto, sim.MonteCarlo, sim.LatinHypercube, sim.FORMMethod, sim.Importance, sim.Subset, sim.ConditionalQMC:
-		return true
-	}
-	return false
 }
 
 // incompleteReason says why the run is not complete, or "" when it is.

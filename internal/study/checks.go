@@ -16,7 +16,12 @@ func shapeOf(i int) column.Shape {
 		column.ShapeAngle, column.ShapeChannel, column.ShapeTee}[i]
 }
 
-func methodOf(s string) sim.Method { return sim.Method(s) }
+// methodOf returns the method named s, a choice the key registry (which
+// lists sim.Methods) has already accepted.
+func methodOf(s string) sim.Method {
+	m, _ := sim.ParseMethod(s)
+	return m
+}
 
 func endsK(name string) (float64, error) { return column.EndsK(name) }
 

@@ -1,5 +1,7 @@
 package study
 
+import "strutrisk/sim"
+
 // keyTables is the registry of the study file's tables and keys: the one
 // list the parser checks names and choices against and `strutrisk help
 // keys` prints. A new key is a row here and its reading in the parser.
@@ -140,7 +142,7 @@ var keyTables = []*TableInfo{
 		{Name: "cov", Takes: "number", Meaning: "A known coefficient of variation (instead of prior_dof)."},
 	}},
 	{Path: "analysis", Meaning: "The estimator and its budget.", Keys: []KeyInfo{
-		{Name: "method", Takes: "text", Choices: []string{"auto", "monte-carlo", "latin-hypercube", "form", "importance", "subset", "conditional-qmc"},
+		{Name: "method", Takes: "text", Choices: sim.MethodNames(),
 			Default: "auto", Meaning: "The estimator of the probability of failure."},
 		{Name: "samples", Takes: "whole number (1 to 1e10)", Default: "1000000", Meaning: "At most this many evaluations."},
 		{Name: "target_cov", Takes: "number (0 to 1)", Default: "0.05", Meaning: "Sampling stops once the coefficient of variation of pf is this."},
