@@ -111,6 +111,12 @@ type Member struct {
 	// G is the shear modulus for torsional buckling; 0 takes
 	// E / (2 (1 + 0.3)), steel's Poisson ratio.
 	G float64
+	// Kind is the material (Steel, the zero value, Stainless, Aluminium or
+	// Timber). Lambda0 is the plateau of its buckling curves, the relative
+	// slenderness up to which chi = 1 (see MaterialCurve); it is read for
+	// every kind but Steel, whose plateau is 0.2 (EN 1993-1-1 6.3.1.2).
+	Kind    Kind
+	Lambda0 float64
 }
 
 // Result is a capacity: the axial resistance N (N), the axis that governs

@@ -63,18 +63,27 @@ func Curve(m *Member, axis Axis) (Result, error) {
 // slenderness sqrt(A_eff fy / Ncr) (EN 1993-1-1:2005 eqs. 6.48 and 6.50).
 func curve(m *Member, a Axis) float64 {
 	lam := relSlenderness(m, a)
-	return m.Props.EffectiveArea() * m.Fy * curveChi(lam, m.Alpha[a])
+	return m.Props.EffectiveArea() * m.Fy * ReductionFactor(lam, m.Alpha[a], m.plateau())
 }
 
-// curveChi is the reduction factor of EN 1993-1-1:2005 eq. (6.49).
-func curveChi(lam, alpha float64) float64 {
-	if lam <= 0.2 {
+// ReductionFactor is the reduction factor chi of the Ayrton-Perry buckling
+// curves with the plateau lam0 that every material of strutrisk uses
+// (EN 1993-1-1:2005 eq. 6.49 with lam0 = 0.2; EN 1993-1-4:2006 eq. 5.2;
+// EN 1999-1-1:2007 eq. 6.49; EN 1995-1-1:2004 eqs. 6.25 to 6.29 with
+// alpha = beta_c and lam0 = 0.3, where chi is k_c):
+//
+//	chi = 1 / (Phi + sqrt(Phi^2 - lam^2)) <= 1
+//	Phi = 0.5 [1 + alpha (lam - lam0) + lam^2]
+//
+// and chi = 1 for lam <= lam0.
+func ReductionFactor(lam, alpha, lam0 float64) float64 {
+	if lam <= lam0 {
 		return 1
 	}
 	if lam > 1e150 { // lam^2 would overflow; chi -> 1/lam^2
 		return 1 / lam / lam
 	}
-	phi := 0.5 * (1 + alpha*(lam-0.2) + lam*lam)
+	phi := 0.5 * (1 + alpha*(lam-lam0) + lam*lam)
 	chi := 1 / (phi + math.Sqrt(phi*phi-lam*lam))
 	return math.Min(chi, 1)
 }

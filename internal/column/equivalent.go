@@ -7,9 +7,10 @@ import "math"
 // member about axis a, for the imperfection factor alpha of its buckling
 // curve:
 //
-//	e0 = alpha (lam - 0.2) W/A   (0 for lam <= 0.2)
+//	e0 = alpha (lam - lam0) W/A   (0 for lam <= lam0)
 //
-// with lam the relative slenderness about a (eq. 6.50; 6.51 with A_eff),
+// with lam0 the plateau of the member's material (0.2 for steel, see
+// Member.Kind and MaterialCurve), lam the relative slenderness about a (eq. 6.50; 6.51 with A_eff),
 // W = I/c the elastic section modulus and A the area of Props (W_eff and
 // A_eff for a class 4 section). This is the
 // generalised imperfection behind the buckling curves of EN 1993-1-1:2005
@@ -25,11 +26,11 @@ import "math"
 // The member is not checked (see Member.Validate); a negative or NaN
 // alpha gives 0.
 func EquivalentBow(m *Member, a Axis, alpha float64) float64 {
-	lam := RelativeSlenderness(m, a)
-	if !(lam > 0.2) || !(alpha > 0) {
+	lam, lam0 := RelativeSlenderness(m, a), m.plateau()
+	if !(lam > lam0) || !(alpha > 0) {
 		return 0
 	}
-	return alpha * (lam - 0.2) * bowPerEta(&m.Props, a)
+	return alpha * (lam - lam0) * bowPerEta(&m.Props, a)
 }
 
 // bowPerEta is the bow whose relative bending stress e A/W is 1 about a:
@@ -63,11 +64,11 @@ func EquivalentTwistingBow(m *Member, alpha float64) float64 {
 		return 0
 	}
 	ncr, _ := TwistingLoad(m)
-	lam := math.Sqrt(m.Props.EffectiveArea() * m.Fy / ncr)
-	if !(lam > 0.2) {
+	lam, lam0 := math.Sqrt(m.Props.EffectiveArea()*m.Fy/ncr), m.plateau()
+	if !(lam > lam0) {
 		return 0
 	}
-	return alpha * (lam - 0.2) * bowPerEta(&m.Props, TwistingAxis(&m.Props))
+	return alpha * (lam - lam0) * bowPerEta(&m.Props, TwistingAxis(&m.Props))
 }
 
 // CalibrationBow is the initial bow, as a fraction of the buckling length,

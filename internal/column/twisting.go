@@ -45,7 +45,7 @@ func twisting(m *Member, governs string) Result {
 	ae := p.EffectiveArea()
 	rho := ae * m.Fy / ncr // lam_T^2
 	if governs == GovernsCurve {
-		res.N = ae * m.Fy * curveChi(math.Sqrt(rho), m.Alpha[Minor])
+		res.N = ae * m.Fy * ReductionFactor(math.Sqrt(rho), m.Alpha[Minor], m.plateau())
 		return res
 	}
 	a := TwistingAxis(p)

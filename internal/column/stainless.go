@@ -1,0 +1,99 @@
+package column
+
+import (
+	"errors"
+	"math"
+)
+
+// RambergOsgood is the compound (two-stage) Ramberg-Osgood stress-strain
+// law of stainless steel, EN 1993-1-4:2006+A1:2015 Annex C (eqs. C.1 and
+// C.2) after Rasmussen (J. Constr. Steel Res. 59, 2003):
+//
+//	eps = s/E + 0.002 (s/fy)^n                               s <= fy
+//	eps = 0.002 + fy/E + (s - fy)/Ey + eu ((s - fy)/(fu - fy))^m   fy < s <= fu
+//
+// with Ey = E / (1 + 0.002 n E / fy) the tangent modulus at fy,
+// m = 1 + 3.5 fy/fu and eu = 1 - fy/fu. Fy is the 0.2 % proof stress.
+// The law is odd (compression mirrors tension) and, beyond the strain at
+// fu, the stress stays at fu.
+type RambergOsgood struct {
+	E, Fy, Fu, N float64
+}
+
+// ErrRambergOsgood reports a law whose parameters cannot describe a
+// stress-strain curve.
+var ErrRambergOsgood = errors.New("column: Ramberg-Osgood law needs E > 0, 0 < fy < fu and n >= 1, all finite")
+
+// Validate checks the parameters of the law.
+func (r *RambergOsgood) Validate() error {
+	if !positive(r.E) || !positive(r.Fy) || !positive(r.Fu) || !(r.Fu > r.Fy) || !(r.N >= 1 && r.N <= 1e3) {
+		return ErrRambergOsgood
+	}
+	return nil
+}
+
+// ey is the tangent modulus at fy (Annex C, eq. C.3).
+func (r *RambergOsgood) ey() float64 { return r.E / (1 + 0.002*r.N*r.E/r.Fy) }
+
+// Strain returns the strain at stress s (|s| at most Fu).
+func (r *RambergOsgood) Strain(s float64) float64 {
+	a := math.Abs(s)
+	var e float64
+	if a <= r.Fy {
+		e = a/r.E + 0.002*math.Pow(a/r.Fy, r.N)
+	} else {
+		a = math.Min(a, r.Fu)
+		m := 1 + 3.5*r.Fy/r.Fu
+		eu := 1 - r.Fy/r.Fu
+		e = 0.002 + r.Fy/r.E + (a-r.Fy)/r.ey() + eu*math.Pow((a-r.Fy)/(r.Fu-r.Fy), m)
+	}
+	return math.Copysign(e, s)
+}
+
+// Compliance returns d(strain)/d(stress) at stress s, the inverse of the
+// tangent modulus.
+func (r *RambergOsgood) Compliance(s float64) float64 {
+	a := math.Abs(s)
+	if a <= r.Fy {
+		return 1/r.E + 0.002*r.N/r.Fy*math.Pow(a/r.Fy, r.N-1)
+	}
+	if a >= r.Fu {
+		return math.Inf(1)
+	}
+	m := 1 + 3.5*r.Fy/r.Fu
+	eu := 1 - r.Fy/r.Fu
+	d := r.Fu - r.Fy
+	return 1/r.ey() + eu*m/d*math.Pow((a-r.Fy)/d, m-1)
+}
+
+// Stress returns the stress at strain eps and the tangent modulus there
+// (0 beyond the strain at Fu), inverting Strain by Newton's method kept
+// inside a bracket. It does not allocate.
+func (r *RambergOsgood) Stress(eps float64) (s, et float64) {
+	a := math.Abs(eps)
+	if a >= r.Strain(r.Fu) {
+		return math.Copysign(r.Fu, eps), 0
+	}
+	lo, hi := 0.0, math.Min(r.Fu, r.E*a)
+	x := hi
+	for range 100 {
+		f := r.Strain(x) - a
+		if math.Abs(f) <= 1e-14*math.Max(a, 1e-12) {
+			break
+		}
+		if f > 0 {
+			hi = x
+		} else {
+			lo = x
+		}
+		nx := x - f/r.Compliance(x)
+		if !(nx > lo && nx < hi) {
+			nx = 0.5 * (lo + hi)
+		}
+		if nx == x {
+			break
+		}
+		x = nx
+	}
+	return math.Copysign(x, eps), 1 / r.Compliance(x)
+}
