@@ -106,6 +106,17 @@ type BeamOptions struct {
 	// Fibres is the approximate number of fibres of the section in the
 	// ultimate limit (0: about 50).
 	Fibres int
+	// Bending, with Load > 0, adds end moments and a uniform lateral load
+	// about Bending.Axis that grow with the axial load: at an axial load
+	// N they are Bending's moments and load times N/Load, so the load
+	// factor of a study is the returned capacity over Load (the capacity
+	// of the other axis has no bending). The end moments act on the ends
+	// of the analysed member (K L when pinned, L with springs), the first
+	// at end 0.
+	Bending Bending
+	// Load is the axial load (N) that goes with Bending; 0 leaves the
+	// member without bending.
+	Load float64
 }
 
 // Defaults of BeamOptions.
@@ -133,6 +144,7 @@ var (
 	errBeamCustom   = errors.New("column: the ultimate beam-column limit needs a section with dimensions; a custom section (area and second moments only) has no fibres: use the first-yield limit")
 	errBeamClass4   = errors.New("column: the ultimate beam-column limit uses the gross fibre section and cannot follow the local buckling of a class 4 section (Props.AEff set): use the first-yield limit or the buckling curve, which take the effective section")
 	errBeamOpen     = errors.New("column: the ultimate beam-column limit has no fibre section for an angle, channel or tee (their bending and twisting interact): use the first-yield limit or the curve model")
+	errBeamBending  = errors.New("column: beam-column bending needs finite end moments and lateral load and a positive, finite axial Load that they go with")
 	errBeamNoPeak   = errors.New("column: beam-column ultimate analysis did not converge to a peak load; try more elements or check the member's inputs")
 )
 
@@ -273,6 +285,16 @@ func bcCheck(m *Member, axis Axis, o *BeamOptions) error {
 	if !bcPositive(m.E) || !bcPositive(m.Fy) || !bcPositive(m.Length) || !bcPositive(m.Props.A) ||
 		!bcFinite(m.Bow) || !bcFinite(m.Ecc) || !bcFinite(m.Sway) {
 		return errBeamMember
+	}
+	if b := &o.Bending; !b.Zero() {
+		switch {
+		case b.Axis != Major && b.Axis != Minor:
+			return ErrBendingAxis
+		case !bcFinite(b.Top) || !bcFinite(b.Bottom) || !bcFinite(b.Lateral) || !bcPositive(o.Load):
+			return errBeamBending
+		case m.Sway != 0:
+			return ErrBendingSway
+		}
 	}
 	if o.Limit != FirstYieldLimit && o.Limit != UltimateLimit {
 		return errBeamLimit

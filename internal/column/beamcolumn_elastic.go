@@ -20,6 +20,9 @@ type bcWork struct {
 	kb0, gb0 []float64   // assembled band of K (with springs and constraints) and G
 	band     []float64   // K - N G, then its factors
 	f0       []float64   // load vector per unit N: G y0 plus the end moments of the eccentricity
+	fx       []float64   // load vector per unit N of the bending (BeamOptions.Bending)
+	bma, bmb float64     // end moments of the bending per unit N (mm), at x = 0 and x = l
+	bq       float64     // lateral load of the bending per unit N (1/mm)
 	v        []float64   // deflection per unit N
 	y0v, y0s []float64   // initial bow at the nodes: offsets and slopes
 	sp, sq   []float64   // spline workspace
@@ -127,7 +130,11 @@ func (w *bcWork) setup(m *Member, a Axis, o *BeamOptions, ei, area, wel float64)
 	// Initial bow and its direction, which the eccentricity follows.
 	sign := w.bow(m, a, o)
 	w.ecc = sign * math.Abs(m.Ecc)
-	w.imperfect = w.ecc != 0
+	w.bma, w.bmb, w.bq = 0, 0, 0
+	if b := &o.Bending; o.Load > 0 && b.Axis == a && !b.Zero() {
+		w.bma, w.bmb, w.bq = b.Bottom/o.Load, b.Top/o.Load, b.Lateral/o.Load
+	}
+	w.imperfect = w.ecc != 0 || w.bma != 0 || w.bmb != 0 || w.bq != 0
 	for i := range w.y0v {
 		if w.y0v[i] != 0 {
 			w.imperfect = true
@@ -266,7 +273,7 @@ func (w *bcWork) moment(n float64) (float64, int) {
 	best, at := -1.0, 0
 	for i := 0; i < w.nn; i++ {
 		t := float64(i) / float64(w.nel)
-		m := math.Abs(w.ecc + w.y0v[i] + n*w.v[2*i] + a0*(1-t) + b0*t)
+		m := math.Abs(w.ecc + w.y0v[i] + n*w.v[2*i] + a0*(1-t) + b0*t + w.primary(t))
 		if m > best {
 			best, at = m, i
 		}
@@ -290,9 +297,10 @@ func (w *bcWork) elementMax(el int, n, a0, b0 float64) float64 {
 	s1 := w.y0s[el] + n*w.v[2*el+1]
 	y2 := w.y0v[el+1] + n*w.v[2*el+2]
 	s2 := w.y0s[el+1] + n*w.v[2*el+3]
-	lin := (b0 - a0) * h / w.l
-	c0 := s1*h + lin
-	c1 := -6*y1 - 4*h*s1 + 6*y2 - 2*h*s2
+	lin := (b0 - a0 + w.bmb - w.bma) * h / w.l
+	x1 := float64(el) * h // the primary moment of the lateral load is quadratic
+	c0 := s1*h + lin + w.bq*h*(w.l-2*x1)/2
+	c1 := -6*y1 - 4*h*s1 + 6*y2 - 2*h*s2 - w.bq*h*h
 	c2 := 6*y1 + 3*h*s1 - 6*y2 + 3*h*s2
 	best := 0.0
 	eval := func(xi float64) {
@@ -302,7 +310,7 @@ func (w *bcWork) elementMax(el int, n, a0, b0 float64) float64 {
 		x2, x3 := xi*xi, xi*xi*xi
 		y := y1*(1-3*x2+2*x3) + s1*h*(xi-2*x2+x3) + y2*(3*x2-2*x3) + s2*h*(x3-x2)
 		t := (float64(el) + xi) / float64(w.nel)
-		if m := math.Abs(w.ecc + y + a0*(1-t) + b0*t); m > best {
+		if m := math.Abs(w.ecc + y + a0*(1-t) + b0*t + w.primary(t)); m > best {
 			best = m
 		}
 	}
@@ -415,4 +423,34 @@ func (w *bcWork) widest() int {
 		}
 	}
 	return at
+}
+
+// primary returns the first-order moment per unit load of the bending's
+// end moments and lateral load on the simply supported member, at the
+// fraction t of the analysis length.
+func (w *bcWork) primary(t float64) float64 {
+	x := t * w.l
+	return w.bma*(1-t) + w.bmb*t + w.bq*x*(w.l-x)/2
+}
+
+// setupBending fills fx with the nodal loads per unit load of the
+// bending: the end moments on the end rotations (in the sign of the
+// eccentricity's) and the consistent nodal loads of the uniform lateral
+// load, q h/2 and +-q h^2/12 per element (e.g. Przemieniecki, Theory of
+// Matrix Structural Analysis, ch. 5).
+func (w *bcWork) setupBending() {
+	w.fx = bcGrow(w.fx, w.ndof)
+	clear(w.fx)
+	w.fx[1] += w.bma
+	w.fx[w.ndof-1] -= w.bmb
+	if q := w.bq; q != 0 {
+		h := w.h
+		for el := 0; el < w.nel; el++ {
+			d := w.fx[2*el : 2*el+4]
+			d[0] += q * h / 2
+			d[1] += q * h * h / 12
+			d[2] += q * h / 2
+			d[3] -= q * h * h / 12
+		}
+	}
 }

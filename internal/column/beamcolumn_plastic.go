@@ -128,6 +128,10 @@ func (w *bcWork) setupLoad() {
 	}
 	w.f0[1] += w.ecc
 	w.f0[w.ndof-1] -= w.ecc
+	w.setupBending()
+	for i, f := range w.fx {
+		w.f0[i] += f
+	}
 }
 
 // plasticInit sizes and resets the plastic state: no load, no
@@ -298,6 +302,10 @@ func (w *bcWork) increment(target float64, load bool) (bool, int) {
 		pl.r[n-1] += pl.pt * w.ecc
 		pl.gv[1] -= w.ecc
 		pl.gv[n-1] += w.ecc
+		for i, f := range w.fx { // end moments and lateral load (BeamOptions.Bending)
+			pl.r[i] -= pl.pt * f
+			pl.gv[i] -= f
+		}
 		if !math.IsInf(w.ka, 1) {
 			pl.r[1] += w.ka * pl.wt[1]
 			pl.kt[bcBand*1] += w.ka
