@@ -55,7 +55,7 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 
 	// Conditional QMC needs one point per replicate at least; a smaller
 	// budget goes to the other estimators.
-	if why := linearUsable(m, t); why == "" && s.Samples >= int64(s.Replicates) {
+	if why := linearUsable(m, t); why == "" && s.Samples >= int64(s.replicates()) {
 		res, err := conditionalQMC(ctx, m, t, s)
 		if err != nil {
 			return nil, err

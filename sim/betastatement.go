@@ -9,9 +9,13 @@ import (
 // and returns "" for a finite one. Beta is -Inf when every evaluation
 // failed and +Inf when none did: either way the estimate only bounds pf
 // (by PfCI) and beta (by BetaCI), and a printed "-inf" or "inf" without
-// this statement reads as a result.
+// this statement reads as a result. It returns "" too when a warning of
+// the method already says so, so that a caller can add it to the warnings
+// as it stands.
 func (r *Result) BetaStatement() string {
 	switch {
+	case r.boundStated:
+		return ""
 	case math.IsInf(r.Beta, -1):
 		return fmt.Sprintf("beta is -inf: every one of the %d evaluations failed, so pf is only known to be above %.3g (beta below %.3g); a member that fails at practically any values of its inputs is far more often a mistake in the inputs (a unit, a load) than a real case: check them before reading anything else",
 			r.Evaluations, r.PfCI[0], r.BetaCI[1])

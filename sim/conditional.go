@@ -56,7 +56,7 @@ func conditionalProb(d Dist, h, c float64) float64 {
 
 // conditionalQMC estimates pf = E[P(g < 0 | rest)] where the Linear input
 // is integrated exactly through its distribution and the rest is drawn by
-// randomised quasi-Monte Carlo: s.Replicates independent Owen-scrambled
+// randomised quasi-Monte Carlo: s.replicates() independent Owen-scrambled
 // Sobol' sequences of 2^k points each, k growing until the budget is spent
 // or the CoV target is met (checked after each doubling). The standard
 // error is that of the mean of the replicate estimates, and the interval a
@@ -74,7 +74,7 @@ func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc b
 	idx := m.Linear.Index
 	dj := m.Vars[idx].Dist
 	nvar := t.Dim()
-	R := s.Replicates
+	R := s.replicates()
 	perRep := s.Samples / int64(R)
 	if perRep < 1 {
 		return nil, unsuitedf("sim: conditional-qmc needs at least %d samples (one per replicate), got %d", R, s.Samples)
@@ -107,6 +107,7 @@ func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc b
 
 	sums := make([][]float64, R) // per replicate, per chunk
 	res := &Result{Method: ConditionalQMC, Confidence: s.Confidence}
+	tr := newTracer(s, res)
 	var done, prev int64
 	var pf, se float64
 	for n := n0; n <= maxN; n *= 2 {
@@ -204,10 +205,8 @@ func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc b
 			cov = se / pf
 		}
 		ci := TInterval(pf, se, R-1, s.Confidence)
-		res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: done, Pf: pf, PfCI: ci, PfCoV: cov})
-		if s.Progress != nil {
-			s.Progress(Progress{Done: done, Total: int64(R) * maxN, Pf: pf, CoV: cov})
-		}
+		tr.point(ConvergencePoint{Evaluations: done, Pf: pf, PfCI: ci, PfCoV: cov})
+		tr.report(Progress{Done: done, Total: int64(R) * maxN, Pf: pf, CoV: cov})
 		if s.TargetCoV > 0 && cov <= s.TargetCoV {
 			break
 		}

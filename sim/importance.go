@@ -106,6 +106,7 @@ func importanceRun(ctx context.Context, sp *uSpace, points []DesignPoint, s *Set
 
 	var tot2 isBlock
 	res := &Result{Method: Importance, Confidence: cfg.Confidence}
+	tr := newTracer(&cfg, res)
 	stride := max(1, nb/100)
 	z := distuv.UnitNormal.Quantile(0.5 + cfg.Confidence/2)
 	merge := func(b int) bool {
@@ -119,12 +120,10 @@ func importanceRun(ctx context.Context, sp *uSpace, points []DesignPoint, s *Set
 		pf, cov := isEstimate(&tot2)
 		if (b+1)%stride == 0 || b == nb-1 {
 			lo, hi := isInterval(pf, cov, z)
-			res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: tot2.n, Pf: pf, PfCI: [2]float64{lo, hi}, PfCoV: cov})
+			tr.point(ConvergencePoint{Evaluations: tot2.n, Pf: pf, PfCI: [2]float64{lo, hi}, PfCoV: cov})
 		}
-		if cfg.Progress != nil {
-			cfg.Progress(Progress{Done: tot2.n, Total: cfg.Samples, Pf: pf, CoV: cov})
-		}
-		if cfg.TargetCoV > 0 && tot2.fails >= 10 && cov <= cfg.TargetCoV {
+		tr.report(Progress{Done: tot2.n, Total: cfg.Samples, Pf: pf, CoV: cov})
+		if cfg.TargetCoV > 0 && tot2.fails >= cfg.isMinFailures() && cov <= cfg.TargetCoV {
 			return false
 		}
 		// Degenerate weights do not recover: stop early and leave the

@@ -138,6 +138,7 @@ func (e *crudeEngine) run(ctx context.Context, s *Settings, method Method) (*Res
 	}
 	nb := numBlocks(e.n)
 	res := &Result{Method: method, Confidence: s.Confidence}
+	tr := newTracer(s, res)
 
 	// Block 0 is the pilot: it is evaluated first, alone, and fixes the
 	// histogram ranges for every output.
@@ -180,14 +181,14 @@ func (e *crudeEngine) run(ctx context.Context, s *Settings, method Method) (*Res
 		cov := binomialCoV(pf, tot.n)
 		if tot.blocks == nextConv || tot.blocks == nb {
 			ci := binomialInterval(tot.fails, tot.n, s.Confidence)
-			res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: tot.n, Pf: pf, PfCI: ci, PfCoV: cov})
+			tr.point(ConvergencePoint{Evaluations: tot.n, Pf: pf, PfCI: ci, PfCoV: cov})
 			nextConv *= 2
 		}
 		if s.TargetCoV > 0 && tot.fails > 0 && cov <= s.TargetCoV {
 			done = true
 		}
-		if s.Progress != nil && (tot.blocks%progressEvery == 0 || done || tot.blocks == nb) {
-			s.Progress(Progress{Done: tot.n, Total: e.n, Pf: pf, CoV: cov})
+		if tr.watching() && (tot.blocks%progressEvery == 0 || done || tot.blocks == nb) {
+			tr.report(Progress{Done: tot.n, Total: e.n, Pf: pf, CoV: cov})
 		}
 	}
 	merge(blk0)
@@ -207,11 +208,12 @@ func (e *crudeEngine) run(ctx context.Context, s *Settings, method Method) (*Res
 	res.Beta = BetaFromPf(res.Pf)
 	res.BetaCI = BetaInterval(res.PfCI)
 	if last := res.Convergence; len(last) == 0 || last[len(last)-1].Evaluations != tot.n {
-		res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: tot.n, Pf: res.Pf, PfCI: res.PfCI, PfCoV: res.PfCoV})
+		tr.point(ConvergencePoint{Evaluations: tot.n, Pf: res.Pf, PfCI: res.PfCI, PfCoV: res.PfCoV})
 	}
 	res.Outputs = e.outputs(tot.stats)
 	if tot.fails == 0 && !res.Incomplete {
 		// A point estimate of zero says little: state what the samples do show.
+		res.boundStated = true
 		res.Warnings = append(res.Warnings, fmt.Sprintf("no failure in %d samples: pf is only known to be below %.3g and beta above %.3g (the ends of their intervals); beta itself is unbounded; give more samples, or use importance or subset simulation", tot.n, res.PfCI[1], res.BetaCI[0]))
 	}
 	if nan := tot.stats[e.nout].nan; nan > 0 {

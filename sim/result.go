@@ -59,6 +59,9 @@ type Result struct {
 	StatusReason string
 	// Warnings are diagnostics a reader should see.
 	Warnings []string
+	// boundStated is set when a warning of the method already says that
+	// no sample failed and pf is only bounded (BetaStatement is then "").
+	boundStated bool
 }
 
 // Trace names what Result.Convergence holds.

@@ -31,10 +31,17 @@ type Settings struct {
 	// Keep is the number of sample points kept in Result.Kept; default
 	// 2000, negative for none.
 	Keep int
-	// Progress, if not nil, is called from time to time (never concurrently).
+	// Progress, if not nil, is called from time to time (never
+	// concurrently); Observer receives the same and the convergence trace.
 	Progress func(Progress)
+	// Observer, if not nil, follows the run: its progress and each point
+	// of its convergence trace.
+	Observer Observer
 	// Replicates is the number of independent randomisations of
 	// conditional quasi-Monte Carlo; default 16.
+	//
+	// Deprecated: set ConditionalQMC.Replicates, which wins when both are
+	// given.
 	Replicates int
 	// AuxSamples is the size of the crude sample that describes the
 	// outputs when the estimator's own samples cannot (conditional
@@ -46,6 +53,12 @@ type Settings struct {
 	// method, the design-point search that starts auto and importance
 	// sampling. Nil means the defaults of FORMSettings.
 	FORM *FORMSettings
+	// Importance, Subset and ConditionalQMC are the settings of those
+	// estimators wherever Run uses them, auto included. Nil means their
+	// defaults.
+	Importance     *ImportanceSettings
+	Subset         *SubsetSettings
+	ConditionalQMC *ConditionalQMCSettings
 }
 
 // Defaults of Settings.
@@ -80,9 +93,6 @@ func (s *Settings) withDefaults() Settings {
 	if c.Keep == 0 {
 		c.Keep = DefaultKeep
 	}
-	if c.Replicates == 0 {
-		c.Replicates = DefaultReplicates
-	}
 	if c.AuxSamples == 0 {
 		c.AuxSamples = DefaultAuxSamples
 	}
@@ -97,10 +107,8 @@ func (s *Settings) check() error {
 		return fmt.Errorf("sim: Confidence must be in (0, 1), got %v", s.Confidence)
 	case s.TargetCoV < 0 || math.IsNaN(s.TargetCoV):
 		return fmt.Errorf("sim: TargetCoV must be zero or positive, got %v", s.TargetCoV)
-	case s.Replicates < 2:
-		return fmt.Errorf("sim: Replicates must be at least 2, got %d", s.Replicates)
 	}
-	return nil
+	return s.checkMethods()
 }
 
 // Run estimates the failure probability of m with the method of s (nil s

@@ -88,11 +88,11 @@ type ssWorker struct {
 }
 
 // subsetRun is subset simulation in standard normal space with levelSize
-// samples per level (a multiple of 10; 0 for subsetLevelSize(s.Samples)).
+// samples per level (a multiple of 10; 0 for s.subsetLevel()).
 func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Result, error) {
 	cfg := rareDefaults(s)
 	n := sp.dim
-	N := subsetLevelSize(cfg.Samples)
+	N := cfg.subsetLevel()
 	if levelSize > 0 {
 		N = levelSize / 10 * 10
 	}
@@ -117,6 +117,7 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 	}
 
 	res := &Result{Method: Subset, Confidence: cfg.Confidence, Trace: TraceLevels}
+	tr := newTracer(&cfg, res)
 	// Level 0: direct Monte Carlo in blocks.
 	nb := (N + subsetBlockSize - 1) / subsetBlockSize
 	nanCount := make([]int, nb)
@@ -203,10 +204,8 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 		} else {
 			delta2 += (1 - subsetP0) / (subsetP0 * float64(N)) * (1 + subsetGamma(G, nc, ns, b, subsetP0))
 		}
-		res.Convergence = append(res.Convergence, subsetPoint(evals, pf, delta2, z))
-		if cfg.Progress != nil {
-			cfg.Progress(Progress{Done: evals, Total: cfg.Samples, Pf: pf, CoV: math.Sqrt(delta2)})
-		}
+		tr.point(subsetPoint(evals, pf, delta2, z))
+		tr.report(Progress{Done: evals, Total: cfg.Samples, Pf: pf, CoV: math.Sqrt(delta2)})
 
 		seeds := idx[:nc] // the nc smallest
 		lam := lambda
@@ -244,7 +243,7 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 	}
 	res.Beta = BetaFromPf(pf)
 	res.BetaCI = [2]float64{BetaFromPf(res.PfCI[1]), BetaFromPf(res.PfCI[0])}
-	res.Convergence = append(res.Convergence, ConvergencePoint{Evaluations: evals, Pf: pf, PfCI: res.PfCI, PfCoV: res.PfCoV})
+	tr.point(ConvergencePoint{Evaluations: evals, Pf: pf, PfCI: res.PfCI, PfCoV: res.PfCoV})
 	return res, nil
 }
 

@@ -22,7 +22,7 @@ func subsetRepeat(ctx context.Context, sp *uSpace, s *Settings, first *Result) (
 	if cfg.TargetCoV <= 0 || first.Incomplete || !(first.Pf > 0) || !(first.PfCoV > cfg.TargetCoV) {
 		return first, nil
 	}
-	levelSize := subsetLevelSize(cfg.Samples)
+	levelSize := cfg.subsetLevel()
 	per := first.Evaluations
 	runs := []*Result{first}
 	spent := first.Evaluations
@@ -35,10 +35,14 @@ func subsetRepeat(ctx context.Context, sp *uSpace, s *Settings, first *Result) (
 		rs := cfg
 		rs.Seed = cfg.Seed ^ (k * 0x9e3779b97f4a7c15) // an independent stream per run
 		rs.Samples = cfg.Samples - spent
-		if p := cfg.Progress; p != nil {
+		// A further run reports its progress as part of the whole; its
+		// own levels are not the result's trace.
+		outer := newTracer(&cfg, nil)
+		rs.Progress, rs.Observer = nil, nil
+		if outer.watching() {
 			done := spent
 			rs.Progress = func(q Progress) {
-				p(Progress{Done: done + q.Done, Total: cfg.Samples, Pf: q.Pf, CoV: q.CoV})
+				outer.report(Progress{Done: done + q.Done, Total: cfg.Samples, Pf: q.Pf, CoV: q.CoV})
 			}
 		}
 		r, err := subsetRun(ctx, sp, &rs, levelSize)
@@ -58,6 +62,9 @@ func subsetRepeat(ctx context.Context, sp *uSpace, s *Settings, first *Result) (
 		runs = append(runs, r)
 		pf, cov = subsetCombine(runs)
 		conv = append(conv, subsetPoint(spent, pf, cov*cov, z))
+		if cfg.Observer != nil {
+			cfg.Observer.Point(Subset, conv[len(conv)-1])
+		}
 	}
 	if len(runs) == 1 && !incomplete {
 		// No second run fitted the budget (or it found no failure).

@@ -1,0 +1,75 @@
+package sim
+
+import "fmt"
+
+// ImportanceSettings control importance sampling, whether it runs as the
+// importance method or under auto. The zero value means the defaults.
+type ImportanceSettings struct {
+	// MinFailures is the number of failed samples needed before the
+	// target CoV may stop sampling; default 10 (common practice: a CoV
+	// estimated from fewer failures is itself unreliable).
+	MinFailures int
+}
+
+// SubsetSettings control subset simulation, whether it runs as the subset
+// method or under auto. The zero value means the defaults.
+type SubsetSettings struct {
+	// LevelSize is the number of samples per level, rounded down to a
+	// multiple of 10 and at least 100; default Samples/6 within
+	// [500, 10000].
+	LevelSize int
+}
+
+// ConditionalQMCSettings control conditional quasi-Monte Carlo, whether it
+// runs as the conditional-qmc method or under auto. The zero value means
+// the defaults.
+type ConditionalQMCSettings struct {
+	// Replicates is the number of independent randomisations; default
+	// Settings.Replicates, else 16.
+	Replicates int
+}
+
+// DefaultISMinFailures is the default of ImportanceSettings.MinFailures.
+const DefaultISMinFailures = 10
+
+// isMinFailures returns the failures importance sampling needs before it
+// may stop at the target CoV.
+func (s *Settings) isMinFailures() int64 {
+	if s.Importance != nil && s.Importance.MinFailures > 0 {
+		return int64(s.Importance.MinFailures)
+	}
+	return DefaultISMinFailures
+}
+
+// subsetLevel returns the samples per level of subset simulation for the
+// budget of s.
+func (s *Settings) subsetLevel() int {
+	if s.Subset != nil && s.Subset.LevelSize > 0 {
+		return s.Subset.LevelSize / 10 * 10
+	}
+	return subsetLevelSize(s.Samples)
+}
+
+// replicates returns the randomisations of conditional quasi-Monte Carlo.
+func (s *Settings) replicates() int {
+	if s.ConditionalQMC != nil && s.ConditionalQMC.Replicates != 0 {
+		return s.ConditionalQMC.Replicates
+	}
+	if s.Replicates != 0 {
+		return s.Replicates
+	}
+	return DefaultReplicates
+}
+
+// checkMethods checks the per-method settings of s.
+func (s *Settings) checkMethods() error {
+	switch {
+	case s.replicates() < 2:
+		return fmt.Errorf("sim: ConditionalQMC.Replicates must be at least 2, got %d", s.replicates())
+	case s.Importance != nil && s.Importance.MinFailures < 0:
+		return fmt.Errorf("sim: Importance.MinFailures must be zero (default) or positive, got %d", s.Importance.MinFailures)
+	case s.Subset != nil && s.Subset.LevelSize != 0 && s.Subset.LevelSize < 100:
+		return fmt.Errorf("sim: Subset.LevelSize must be zero (default) or at least 100, got %d", s.Subset.LevelSize)
+	}
+	return nil
+}
