@@ -213,6 +213,9 @@ func (l *loaded) checkText() string {
 		fmt.Fprintf(&b, " (model factor %.3g included)", n.ModelFactor)
 	}
 	fmt.Fprintf(&b, "\nDemand at mean loads %.1f kN", n.Demand/1e3)
+	if st.Combination != nil {
+		b.WriteString(" (the combination case of the largest mean load)")
+	}
 	if n.EffectFactor != 1 {
 		fmt.Fprintf(&b, " (effect factor %.3g included)", n.EffectFactor)
 	}
@@ -222,6 +225,7 @@ func (l *loaded) checkText() string {
 	}
 	b.WriteString(targetCheckText(st) + measureText(st)) // reserve.go, measure.go
 	b.WriteString(loadPeriodText(st))                    // period.go
+	b.WriteString(st.CombinationText())
 	b.WriteString(report.CodeCheckText(l.cc))
 	b.WriteString(casesCheckText(st)) // sweep.go
 	if len(st.Defaults) > 0 {

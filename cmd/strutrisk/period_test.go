@@ -53,3 +53,24 @@ func TestCheckLoadPeriods(t *testing.T) {
 		t.Errorf("bad period: exit %d, %s", code, errs)
 	}
 }
+
+// TestCheckCombinationCases: with two random variable loads check lists
+// Turkstra's cases, each load leading once with the other at its
+// companion (the companion as given, or a load's maxima over its own
+// period).
+func TestCheckCombinationCases(t *testing.T) {
+	text := strings.Replace(edit(16, `imposed = { dist = "gumbel", mean = "80 kN", cov = 0.3, period = "1 year", companion = { dist = "gamma", mean = "25 kN", cov = 0.6 } }`+"\n"+
+		`wind = { dist = "lognormal", mean = "20 kN", cov = 0.3, period = "1 year" }`),
+		"beta = 3.8", "beta = 3.8\nreference_period = \"50 years\"", 1)
+	p := writeStudy(t, text)
+	code, out, errs := invoke(t, "check", p)
+	if code != 0 {
+		t.Fatalf("check exit %d:\n%s", code, errs)
+	}
+	for _, w := range []string{"Load combination (turkstra's rule", "case imposed: loads.imposed at its reference-period maximum",
+		"loads.wind.companion: lognormal", "case wind:", "loads.imposed.companion: gamma", "the combination case of the largest mean load"} {
+		if !strings.Contains(out, w) {
+			t.Errorf("check output lacks %q:\n%s", w, out)
+		}
+	}
+}

@@ -138,7 +138,7 @@ func (md *Model) characteristicValues(c *CodeCheck) (values, map[*Quantity]float
 	}
 	for _, q := range st.Quantities {
 		switch {
-		case q == st.Bow || q == st.Ecc || q == st.Sway || q == st.ModelFactor:
+		case q == st.Bow || q == st.Ecc || q == st.Sway || q == st.ModelFactor || st.companion(q):
 			// not in the code check
 		case q.Random():
 			c.Inputs = append(c.Inputs, CheckInput{Path: q.Path, Unit: q.Unit(), Value: char[q], Basis: basis[q]})

@@ -55,7 +55,7 @@ func (md *Model) isLoad(q *Quantity) bool {
 			return true
 		}
 	}
-	return false
+	return md.Study.companion(q)
 }
 
 func (md *Model) isPermanent(q *Quantity) bool {

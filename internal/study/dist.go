@@ -22,6 +22,12 @@ type distSpec struct {
 	// years (0 unless a duration).
 	period      string
 	periodYears float64
+	// companion and repetitions are what a variable load says for load
+	// combinations (combination.go): the distribution it takes while
+	// another load leads, and its number of independent pulses in the
+	// reference period.
+	companion   *Quantity
+	repetitions int
 }
 
 // distSets lists, per distribution, its complete parameter sets; optional
@@ -82,6 +88,8 @@ func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
 	}
 	if o.period {
 		allowed["period"] = true
+		allowed["companion"] = true
+		allowed["repetitions"] = true
 	}
 	spec := &distSpec{name: name, params: map[string]pval{}}
 	given := map[string]bool{}
@@ -94,6 +102,12 @@ func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
 		if k == "period" {
 			var ok bool
 			if spec.period, spec.periodYears, ok = p.loadPeriod(kp, m[k], o); !ok {
+				bad = true
+			}
+			continue
+		}
+		if o.period && (k == "companion" || k == "repetitions") {
+			if !p.combinationKey(spec, kp, k, m[k], o) { // combination.go
 				bad = true
 			}
 			continue
@@ -173,6 +187,9 @@ func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
 	}
 	if spec.period != "" {
 		w = append(w, "period "+spec.period)
+	}
+	if spec.repetitions > 0 {
+		w = append(w, fmt.Sprintf("repetitions %d", spec.repetitions))
 	}
 	spec.written = strings.Join(w, ", ")
 	if !p.checkParams(path, spec, o) {

@@ -93,6 +93,15 @@ var keyTables = []*TableInfo{
 		{Name: "<name>", Takes: "quantity (force)", Required: true, Meaning: "An axial load under a name of your choice (at least one), e.g. dead, imposed."},
 		{Name: "<name>.period", Takes: "text inside the load's distribution table: a duration (\"1 year\") or \"point-in-time\"", Default: "maxima over the reference period",
 			Meaning: "What a variable load's distribution describes: maxima over the period, converted to target.reference_period (gumbel exactly: location + scale ln n; others by F^n, n = reference period / period), or the value at an arbitrary point in time."},
+		{Name: "<name>.companion", Takes: "quantity (force) inside the load's distribution table, e.g. companion = { dist = \"gamma\", mean = \"40 kN\", cov = 0.6 }",
+			Default: "one pulse (with repetitions), the point-in-time distribution, the maxima over the load's own period, else its reference-period maximum with a warning",
+			Meaning: "With two or more random variable loads: the distribution the load takes while another load leads (Turkstra's rule; see [combination])."},
+		{Name: "<name>.repetitions", Takes: "whole number (1 to 1,000,000) inside the load's distribution table", Default: "none",
+			Meaning: "The load's independent values (pulses) in the reference period: the distribution is of one pulse, its maximum over the reference period that of the largest of the pulses (F^n)."},
+	}},
+	{Path: "combination", Meaning: "How two or more random variable loads combine: each case has one load at its reference-period maximum, the others at their companions; the member fails when any case fails.", Keys: []KeyInfo{
+		{Name: "rule", Takes: "text", Choices: []string{"turkstra"}, Default: "turkstra",
+			Meaning: "turkstra: one case per variable load leading, the union of the cases (series system)."},
 	}},
 	{Path: "correlation", Array: true, Meaning: "A correlation between two random variables (Nataf).", Keys: []KeyInfo{
 		{Name: "pair", Takes: "list of two variable paths", Required: true, Meaning: "The two random variables, by path, e.g. [\"material.yield\", \"material.modulus\"]."},

@@ -35,7 +35,11 @@ const (
 var secKeys = [...]string{"depth", "width", "flange", "web", "root", "thickness", "diameter", "area", "i_major", "i_minor", "c_major", "c_minor", "thickness_loss",
 	"radius", "it", "iw", "y0", "z0", "effective_area"}
 
-const nFields = fSec0 + len(secKeys)
+// fCase0 is the first of MaxCombined fields, the sum of the combined
+// loads of each combination case (see combination_model.go).
+const fCase0 = fSec0 + len(secKeys)
+
+const nFields = fCase0 + MaxCombined
 
 // values holds one evaluation's inputs.
 type values [nFields]float64
@@ -78,6 +82,10 @@ type Model struct {
 	k                                            [2]float64
 	model                                        int
 	beam                                         beamOpts
+	// cases is the number of load combination cases (0: the loads add
+	// up); only, when not 0, is 1 + the one case the limit state takes
+	// (see combination_model.go).
+	cases, only int
 }
 
 // Capacity models.
@@ -110,8 +118,18 @@ func targets(st *Study) map[*Quantity][]int {
 	add(st.Sway, fSway)
 	add(st.ModelFactor, fModel)
 	add(st.EffectFactor, fEffect)
+	c := st.Combination
 	for _, q := range st.Loads {
-		add(q, fLoads)
+		if !c.combined(q) {
+			add(q, fLoads)
+		}
+	}
+	if c != nil {
+		for i, cs := range c.Cases {
+			for _, q := range cs.Loads {
+				add(q, fCase0+i)
+			}
+		}
 	}
 	for a := range 2 {
 		e := st.Ends[a]
@@ -141,6 +159,14 @@ func Build(st *Study) (*Model, error) {
 	isLoad := map[*Quantity]bool{}
 	for _, q := range st.Loads {
 		isLoad[q] = true
+	}
+	if c := st.Combination; c != nil {
+		md.cases = len(c.Cases)
+		for _, cs := range c.Cases {
+			for _, q := range cs.Loads {
+				isLoad[q] = true
+			}
+		}
 	}
 	place := func(q *Quantity) {
 		if seen[q] {
@@ -253,6 +279,9 @@ func Build(st *Study) (*Model, error) {
 // largest spread that is correlated with nothing: g = h - c x_j with c the
 // effect factor.
 func (md *Model) linear() {
+	if md.cases > 0 {
+		return // the smallest margin over the cases is not linear in a load
+	}
 	corr := map[string]bool{}
 	for _, c := range md.Study.Corr {
 		corr[c.A], corr[c.B] = true, true
@@ -311,7 +340,7 @@ func (md *Model) g(x, out []float64) float64 {
 // set of inputs. A member the mechanics cannot evaluate (a sample outside
 // the physical range) has no capacity.
 func (md *Model) eval(v *values) (capacity, demand float64) {
-	demand = v[fEffect] * v[fLoads]
+	demand = md.demand(v)
 	res, _, err := md.capacity(v, md.Study.Axis)
 	if err != nil || !(res.N >= 0) {
 		return 0, demand

@@ -51,7 +51,7 @@ func (md *Model) Nominal() (*Nominal, error) {
 	st := md.Study
 	v := md.nominalValues()
 	n := &Nominal{ModelFactor: v[fModel], EffectFactor: v[fEffect]}
-	n.Demand = v[fEffect] * v[fLoads]
+	n.Demand = md.demand(&v)
 	m, sec, err := md.member(&v)
 	if err != nil {
 		return nil, fmt.Errorf("at nominal values: %v", err)

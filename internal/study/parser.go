@@ -358,8 +358,9 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.loads(top)
 	p.capacity(top)
 	p.target(top)
-	p.codeCheck(top) // codecheck_keys.go
-	p.record(top)    // record.go
+	p.combinationTable(top) // combination.go
+	p.codeCheck(top)        // codecheck_keys.go
+	p.record(top)           // record.go
 	p.analysis(top)
 	p.sensitivity(top)
 	if st.Model == "beam-column" && (top.m["sensitivity"] == nil || !hasKey(top.m["sensitivity"], "sobol")) {
@@ -399,6 +400,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 		}
 	}
 	p.loadPeriods() // period.go
+	p.combine()     // combination.go
 	if len(p.probs) > 0 {
 		return st
 	}

@@ -56,6 +56,10 @@ func (p *parser) loadPeriod(key string, v any, o qopt) (string, float64, bool) {
 func (p *parser) loadPeriods() {
 	st := p.st
 	for _, q := range st.Loads {
+		if q.Repetitions > 0 {
+			p.convertPulses(q) // combination.go
+			continue
+		}
 		if q.Period == "" {
 			continue
 		}
@@ -69,7 +73,7 @@ func (p *parser) loadPeriods() {
 		}
 		if q.Period == PointInTime {
 			if st.HasTarget && st.ReferenceYears > 0 {
-				p.warnf("%s (line %d): period = point-in-time: one point-in-time value is not the maximum over the reference period of %s, so the failure probability is that of an arbitrary point in time, not of the reference period (load combination rules are not applied yet)",
+				p.warnf("%s (line %d): period = point-in-time: one point-in-time value is not the maximum over the reference period of %s, so the failure probability is that of an arbitrary point in time, not of the reference period (give repetitions = n, its number of independent values in the reference period, to take its maximum)",
 					key, p.line(key), assess.YearsText(st.ReferenceYears))
 			}
 			continue
@@ -121,6 +125,10 @@ func isPermanentPath(st *Study, path string) bool {
 // converted; 1 when ref is not known either, 0 for a point-in-time load.
 func (q *Quantity) MaximaYears(ref float64) float64 {
 	switch {
+	case q.Repetitions > 0 && ref > 0:
+		return ref // maxima of its pulses over the reference period
+	case q.Repetitions > 0:
+		return 1
 	case q.Period == PointInTime:
 		return 0
 	case q.PeriodYears > 0 && q.MaximaN == 0:

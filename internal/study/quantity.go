@@ -52,6 +52,12 @@ type Quantity struct {
 	// made; Written is then the distribution as written.
 	MaximaN float64
 	Written sim.Dist
+	// Companion is the distribution (or value) a variable load takes in
+	// the combination cases another load leads (nil: see combination.go);
+	// Repetitions is its number of independent pulses in the reference
+	// period, 0 when not given.
+	Companion   *Quantity
+	Repetitions int
 
 	// spec is the distribution as parsed, before it is built.
 	spec *distSpec
@@ -176,6 +182,10 @@ func (p *parser) quantity(path string, v any, o qopt) *Quantity {
 			return nil
 		}
 		if spec.name == "fixed" {
+			if spec.companion != nil || spec.repetitions > 0 {
+				p.errorf(path, "companion and repetitions apply to a random variable load: give the load a distribution, or remove them")
+				return nil
+			}
 			q.Value, q.Relative = spec.params["value"].v, spec.params["value"].rel
 			q.Lcr = spec.params["value"].lcr
 			q.bare = bareTable(m, o)
@@ -187,6 +197,7 @@ func (p *parser) quantity(path string, v any, o qopt) *Quantity {
 		q.bare = bareTable(m, o)
 		q.spec = spec
 		q.Period, q.PeriodYears = spec.period, spec.periodYears
+		q.Companion, q.Repetitions = spec.companion, spec.repetitions
 		q.DistName = spec.name
 		q.Params = spec.written
 		return q

@@ -131,7 +131,7 @@ func (md *Model) FactorFor(ctx context.Context, beta float64, fs *sim.FORMSettin
 // runs from taking away the whole mean load to adding a thousand times it.
 func (md *Model) AddedFor(ctx context.Context, beta float64, fs *sim.FORMSettings) (added float64, calls int, err error) {
 	nv := md.nominalValues()
-	unit := math.Abs(nv[fLoads])
+	unit := math.Abs(nv[fLoads] + md.caseLoad(&nv))
 	if unit == 0 {
 		unit = 1e3
 	}

@@ -77,6 +77,10 @@ type Study struct {
 	ReserveOn      string
 	PermanentLoads []string
 
+	// Combination is how two or more random variable loads combine (see
+	// combination.go); nil with fewer.
+	Combination *Combination
+
 	// CodeCheck holds the partial factors of the deterministic code check
 	// ([code_check], see codecheck.go).
 	CodeCheck CodeCheckSpec

@@ -109,5 +109,15 @@ func (s *Study) ReserveLoads() []*Quantity {
 			out = append(out, q)
 		}
 	}
+	if c := s.Combination; c != nil {
+		// The companions of the combination cases are variable loads too.
+		for _, cs := range c.Cases {
+			for _, q := range cs.Loads {
+				if c.owns(q) {
+					out = append(out, q)
+				}
+			}
+		}
+	}
 	return out
 }
