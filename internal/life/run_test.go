@@ -227,3 +227,28 @@ func TestSampledSecondLoad(t *testing.T) {
 		t.Errorf("year 10: pf %.5g, quadrature %.5g (off by %.2g %%, cov %.2g)", got.Pf, want, 100*d, got.CoV)
 	}
 }
+
+// TestFirstBelow checks the year the annual beta first falls below a
+// target and its bracket, on points made by hand.
+func TestFirstBelow(t *testing.T) {
+	r := Result{Points: []Point{
+		{Year: 1, Pf: 1e-5, CoV: 0.01},
+		{Year: 2, Pf: 3e-5, CoV: 0.2},  // 2 sd reach 4.2e-5 > 4e-5: may be below
+		{Year: 3, Pf: 5e-5, CoV: 0.2},  // below; 2 sd down 3e-5: not with confidence
+		{Year: 4, Pf: 9e-5, CoV: 0.05}, // below with confidence
+	}}
+	target := -distuv.UnitNormal.Quantile(4e-5)
+	c := r.FirstBelow(target)
+	if c != (Crossing{Year: 3, Earliest: 2, Latest: 4}) {
+		t.Errorf("crossing %+v, want year 3 between 2 and 4", c)
+	}
+	if c.Resolved(r) {
+		t.Errorf("a bracket of years 2 to 4 over yearly steps is not resolved")
+	}
+	if c := r.FirstBelow(5); c != (Crossing{Year: 1, Earliest: 1, Latest: 1}) || !c.Resolved(r) {
+		t.Errorf("target 5: crossing %+v, want year 1 resolved", c)
+	}
+	if c := r.FirstBelow(3); c != (Crossing{}) || !c.Resolved(r) {
+		t.Errorf("target 3: crossing %+v, want none", c)
+	}
+}

@@ -176,6 +176,15 @@ var keyTables = []*TableInfo{
 		{Name: "set", Takes: "table of key paths and values", Required: true,
 			Meaning: "The keys the variant changes, e.g. { \"imperfection.bow\" = \"L/500\" }; \"unset\" removes a key."},
 	}},
+	{Path: "life", Meaning: "The remaining life under corrosion: the section loses d(t) = r t^b from every face on top of member.section.thickness_loss, t in years from now (ISO 9224's law); the annual beta and the cumulative pf over the years, under the annual maxima of the variable loads.", Keys: []KeyInfo{
+		{Name: "years", Takes: "whole number of years, or a duration (\"30 years\")", Required: true, Meaning: "The horizon: the member is followed from now to the end of this year."},
+		{Name: "step", Takes: "whole number of years, or a duration", Default: "1 year",
+			Meaning: "The years between evaluations of the resistance; each year of a step takes the resistance at the step's end (on the safe side)."},
+		{Name: "corrosion_rate", Takes: "quantity (length)", Required: true, Meaning: "r: the loss from every face in the first year, e.g. \"0.05 mm\"; a distribution for an uncertain rate."},
+		{Name: "corrosion_exponent", Takes: "quantity (number)", Default: "1 (linear, on the safe side of ISO 9224's exponents below 1)",
+			Meaning: "b of d(t) = r t^b; a distribution for an uncertain exponent."},
+		{Name: "samples", Takes: "whole number (100 to 1e7)", Default: "20000", Meaning: "The number of member paths sampled, each followed through every year."},
+	}},
 	{Path: "output", Meaning: "Where the results go.", Keys: []KeyInfo{
 		{Name: "dir", Takes: "text (a folder)", Default: "out/<study name>", Meaning: "The output folder."},
 		{Name: "formats", Takes: "list of text", Choices: []string{"html", "json", "csv", "svg", "png", "txt"}, Default: "html, json, csv, svg, png",

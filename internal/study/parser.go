@@ -361,6 +361,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.combinationTable(top) // combination.go
 	p.codeCheck(top)        // codecheck_keys.go
 	p.record(top)           // record.go
+	p.life(top)             // life.go
 	p.analysis(top)
 	p.sensitivity(top)
 	if st.Model == "beam-column" && (top.m["sensitivity"] == nil || !hasKey(top.m["sensitivity"], "sobol")) {
@@ -401,6 +402,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	}
 	p.loadPeriods() // period.go
 	p.combine()     // combination.go
+	p.lifeBuild()   // life.go
 	if len(p.probs) > 0 {
 		return st
 	}
@@ -409,6 +411,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 		return st
 	}
 	p.correlation(top)
+	p.lifeCorrelation() // life.go
 	p.checkModel()
 	p.checkSection()
 	if len(p.probs) == 0 {

@@ -23,6 +23,9 @@ type Study struct {
 	Title string
 	// Record is the filing head of [record] (record.go).
 	Record Record
+	// Life is the remaining life under corrosion ([life]), nil when the
+	// study has no [life] table (see life.go).
+	Life *LifeSpec
 	// Units is the unit system of bare numbers ("N-mm", "kN-m", "kip-in").
 	Units System
 

@@ -1,0 +1,153 @@
+package study
+
+import (
+	"errors"
+	"math"
+
+	"strutrisk/internal/life"
+	"strutrisk/sim"
+)
+
+// lossField is the field of member.section.thickness_loss.
+var lossField = func() int {
+	for i, k := range secKeys {
+		if k == "thickness_loss" {
+			return fSec0 + i
+		}
+	}
+	panic("study: no thickness_loss field")
+}()
+
+// lifeModel evaluates the study's member at a time of its remaining
+// life: the inputs of a path are the study's random inputs but the
+// variable loads, then the loss law's random parameters.
+type lifeModel struct {
+	md   Model // a copy whose section is rebuilt at every evaluation
+	keep []int // the binds of the path's inputs, in their order
+	// rate and exp are the path indices of r and b (-1: fixed at rateV,
+	// expV).
+	rate, exp   int
+	rateV, expV float64
+}
+
+// lifeCopy returns a copy of md that rebuilds the section, its class and
+// spring-derived K at every evaluation, so that a loss added to the
+// sample's thickness_loss takes effect. Its demand leaves out the load
+// combination cases: the remaining life adds the annual maxima of the
+// variable loads itself.
+func (md *Model) lifeCopy() Model {
+	c := *md
+	c.secRandom, c.propsDynamic = true, true
+	c.kDynamic = md.springs[0] || md.springs[1]
+	c.cases, c.only = 0, 0
+	return c
+}
+
+// LifeProblem returns the remaining life of the study ([life]) as a
+// problem of the life package: the limit state of a path in a year is
+// g = capacity - effect factor x (loads other than the random variable
+// ones) - effect factor x (sum of the variable loads' annual maxima), the
+// capacity of the section that has lost thickness_loss + r t^b.
+func (md *Model) LifeProblem(workers int) (life.Problem, error) {
+	st := md.Study
+	ls := st.Life
+	if ls == nil {
+		return life.Problem{}, errors.New("study: no [life] table")
+	}
+	lm := &lifeModel{md: md.lifeCopy(), rate: -1, exp: -1, expV: 1}
+	annual := map[string]sim.Dist{}
+	for _, a := range ls.Annual {
+		annual[a.Path] = a.Dist
+	}
+	var vars, ann []sim.Variable
+	for i, v := range md.Sim.Vars {
+		if d, ok := annual[v.Name]; ok && md.binds[i].add {
+			ann = append(ann, sim.Variable{Name: v.Name, Dist: d, Unit: v.Unit})
+			continue
+		}
+		if st.Combination.owns(md.quantity(i)) {
+			continue // a companion of a combination case: not used
+		}
+		lm.keep = append(lm.keep, i)
+		vars = append(vars, v)
+	}
+	add := func(q *Quantity, idx *int, fixed *float64) {
+		switch {
+		case q == nil:
+		case q.Random():
+			*idx = len(vars)
+			vars = append(vars, sim.Variable{Name: q.Path, Dist: q.Dist, Unit: q.Unit()})
+		default:
+			*fixed = q.Value
+		}
+	}
+	add(ls.Rate, &lm.rate, &lm.rateV)
+	add(ls.Exponent, &lm.exp, &lm.expV)
+	return life.Problem{
+		Vars: vars, Corr: md.Sim.Corr, Annual: ann,
+		Ends:  LifeEnds(ls.Years, ls.Step),
+		Split: lm.split,
+		Paths: ls.Paths, Seed: st.Analysis.Seed, Workers: workers,
+	}, nil
+}
+
+// LifeEnds are the years evaluated: every step years, and the horizon.
+func LifeEnds(years, step int) []int {
+	var ends []int
+	for y := step; y < years; y += step {
+		ends = append(ends, y)
+	}
+	return append(ends, years)
+}
+
+// split is the limit state of the path x at t years from now.
+func (lm *lifeModel) split(x []float64, t float64) (h, c float64) {
+	md := &lm.md
+	v := md.base
+	for j, i := range lm.keep {
+		md.set(&v, md.binds[i], x[j])
+	}
+	r, b := lm.rateV, lm.expV
+	if lm.rate >= 0 {
+		r = x[lm.rate]
+	}
+	if lm.exp >= 0 {
+		b = x[lm.exp]
+	}
+	v[lossField] += r * math.Pow(t, b)
+	capacity, demand := md.eval(&v)
+	return capacity - demand, v[fEffect]
+}
+
+// LifeLoss returns the nominal loss from every face at t years from now:
+// the nominal thickness_loss plus d(t) at the means of r and b.
+func (md *Model) LifeLoss(t float64) float64 {
+	v := md.nominalValues()
+	ls := md.Study.Life
+	if ls == nil {
+		return v[lossField]
+	}
+	r, b := meanOf(ls.Rate, 0), meanOf(ls.Exponent, 1)
+	return v[lossField] + r*math.Pow(t, b)
+}
+
+// LifeCapacity returns the capacity (model factor included) at nominal
+// values with the nominal loss of t years from now, and the nominal
+// demand.
+func (md *Model) LifeCapacity(t float64) (capacity, demand float64) {
+	v := md.nominalValues()
+	v[lossField] = md.LifeLoss(t)
+	c := md.lifeCopy()
+	return c.eval(&v)
+}
+
+// meanOf is the mean of q, def when q is nil.
+func meanOf(q *Quantity, def float64) float64 {
+	switch {
+	case q == nil:
+		return def
+	case q.Random():
+		return q.Dist.Mean()
+	}
+	return q.Value
+}
