@@ -154,55 +154,11 @@ func (p *parser) measuredLcr(at string, q *Quantity, pv pval, val *float64, leng
 	return true
 }
 
-// bothAxes evaluates both axes of a member whose imperfections differ by
-// axis, each with its own (axisMember), and the modes that twist the
-// section with the imperfections of column.TwistingAxis, as the column
-// models do with Both: the weaker governs, a tie reports minor (and the
-// twisting mode over a flexural one). It returns the member of the mode
-// that governs.
-func (md *Model) bothAxes(m column.Member, sec column.Section, v *values) (column.Result, column.Member, error) {
-	mj := m
-	md.axisMember(&mj, v, column.Major)
-	rj, err := md.evaluate(&mj, sec, v, column.Major)
-	if err != nil {
-		return rj, mj, err
-	}
-	mn := m
-	md.axisMember(&mn, v, column.Minor)
-	res, err := md.evaluate(&mn, sec, v, column.Minor)
-	if err != nil {
-		return res, mn, err
-	}
-	best := mn
-	if rj.N < res.N {
-		res, best = rj, mj
-	}
-	if m.Props.It == 0 || md.model == modelBeam {
-		return res, best, nil
-	}
-	mt := md.twistMember(m, v)
-	governs := column.GovernsFirstYield
-	if md.model == modelCurve {
-		governs = column.GovernsCurve
-	}
-	rt, err := column.Twisting(&mt, governs)
-	if err != nil {
-		return rt, mt, err
-	}
-	if rt.N <= res.N {
-		return rt, mt, nil
-	}
-	return res, best, nil
-}
-
 // twistMember returns m with the imperfections the modes that twist the
 // section take: those of column.TwistingAxis, and the equivalent bow of
 // the twisting modes with capacity.imperfection = "equivalent".
 func (md *Model) twistMember(m column.Member, v *values) column.Member {
-	md.axisMember(&m, v, column.TwistingAxis(&m.Props))
-	if md.equivalent && md.model != modelCurve {
-		m.Bow = md.twistingBow(&m, v)
-	}
+	md.twistInPlace(&m, v)
 	return m
 }
 

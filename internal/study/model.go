@@ -2,7 +2,6 @@ package study
 
 import (
 	"errors"
-	"math"
 
 	"strutrisk/internal/column"
 	"strutrisk/sim"
@@ -341,7 +340,9 @@ func (md *Model) g(x, out []float64) float64 {
 // the physical range) has no capacity.
 func (md *Model) eval(v *values) (capacity, demand float64) {
 	demand = md.demand(v)
-	res, _, err := md.capacity(v, md.Study.Axis)
+	var m column.Member
+	var buf column.Section
+	res, err := md.capacityInto(v, md.Study.Axis, &m, &buf)
 	if err != nil || !(res.N >= 0) {
 		return 0, demand
 	}
@@ -350,50 +351,10 @@ func (md *Model) eval(v *values) (capacity, demand float64) {
 
 // member assembles the column member of one set of inputs.
 func (md *Model) member(v *values) (column.Member, column.Section, error) {
-	m := column.Member{E: v[fE], G: v[fG], Fy: v[fFy], Length: v[fLength], Bow: v[fBow], Ecc: v[fEcc]}
-	if md.relBow {
-		m.Bow *= m.Length
-	}
-	if md.relEcc {
-		m.Ecc *= m.Length
-	}
-	sec := md.sec
-	if md.secRandom {
-		for i := range secKeys {
-			if f := sectionPtr(&sec, i); f != nil {
-				*f = v[fSec0+i]
-			}
-		}
-		corners(&sec, md.radiusGiven, md.Study.Section.Fabrication)
-	}
-	if md.propsDynamic {
-		p, err := md.sectionProps(&sec, m.Fy)
-		if err != nil {
-			return m, sec, err
-		}
-		m.Props = p
-	} else {
-		m.Props = md.props
-	}
-	for a := range 2 {
-		switch {
-		case !md.springs[a]:
-			m.K[a] = v[fK0+a]
-		case md.kDynamic:
-			k, err := md.springK(v, &m.Props, a)
-			if err != nil {
-				return m, sec, err
-			}
-			m.K[a] = k
-		default:
-			m.K[a] = md.k[a]
-		}
-	}
-	m.Alpha = [2]float64{v[fAlpha0], v[fAlpha1]}
-	if md.model == modelCurve {
-		m.Bow, m.Ecc = 0, 0
-	}
-	return m, sec, nil
+	var m column.Member
+	var buf column.Section
+	sec, err := md.memberInto(v, &m, &buf)
+	return m, *sec, err
 }
 
 // sectionPtr is sectionField by index, without the string switch.
@@ -448,33 +409,19 @@ func (md *Model) springK(v *values, p *column.Props, a int) (float64, error) {
 // capacity evaluates the capacity model (without the model factor). With
 // axis Both it returns the member of the governing axis.
 func (md *Model) capacity(v *values, axis column.Axis) (column.Result, column.Member, error) {
-	m, sec, err := md.member(v)
-	if err != nil {
-		return column.Result{}, m, err
-	}
-	var res column.Result
-	switch {
-	case !md.perAxis:
-		res, err = md.evaluate(&m, sec, v, axis)
-	case axis != column.Both:
-		md.axisMember(&m, v, axis)
-		res, err = md.evaluate(&m, sec, v, axis)
-	default:
-		res, m, err = md.bothAxes(m, sec, v)
-	}
-	if err == nil && (math.IsNaN(res.N) || math.IsInf(res.N, 0)) {
-		err = errors.New("study: capacity is not a number")
-	}
+	var m column.Member
+	var buf column.Section
+	res, err := md.capacityInto(v, axis, &m, &buf)
 	return res, m, err
 }
 
 // evaluate runs the study's capacity model on the member.
-func (md *Model) evaluate(m *column.Member, sec column.Section, v *values, axis column.Axis) (column.Result, error) {
+func (md *Model) evaluate(m *column.Member, sec *column.Section, v *values, axis column.Axis) (column.Result, error) {
 	switch md.model {
 	case modelCurve:
 		return column.Curve(m, axis)
 	case modelBeam:
-		return md.beamCapacity(m, sec, v, axis)
+		return md.beamCapacity(m, *sec, v, axis)
 	}
 	return column.FirstYield(m, axis)
 }

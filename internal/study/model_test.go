@@ -126,7 +126,7 @@ func TestGDoesNotAllocate(t *testing.T) {
 	if n := testing.AllocsPerRun(100, func() { md.Sim.G(x, out) }); n != 0 {
 		t.Errorf("springs: %v allocations per evaluation", n)
 	}
-	for _, name := range []string{"retrofit-column.toml", "eccentric-strut.toml", "rare-event.toml"} {
+	for _, name := range []string{"retrofit-column.toml", "eccentric-strut.toml", "rare-event.toml", "imperfection-comparison.toml", "bench/reference-strut.toml"} {
 		md := loadDemo(t, name)
 		x := medians(md)
 		out := make([]float64, 2)
