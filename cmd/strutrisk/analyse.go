@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"strutrisk/internal/report"
+	"strutrisk/internal/study"
 	"strutrisk/sim"
 )
 
@@ -23,7 +24,8 @@ type results struct {
 	sobolMsg string
 	sobolCap []sim.SobolIndex // of the capacity; sobol is of the margin
 	warnings []string
-	target   *targetRun // reserve factor and its confirmation (reserve.go)
+	target   *targetRun      // reserve factor and its confirmation (reserve.go)
+	combined *study.Combined // the load combination cases (combination.go)
 	// incomplete, when not empty, says why the run is not complete.
 	incomplete string
 	cases      *cases // sweep and variants (sweep.go)
@@ -56,6 +58,12 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	}
 	if r.form != nil && !r.form.Converged {
 		r.warnings = append(r.warnings, "form: the design-point search did not converge ("+r.form.Status+"); its beta and importance are indicative only")
+	}
+	if l.st.Combination != nil && ctx.Err() == nil {
+		bar.stage("load combination cases")
+		var warns []string
+		r.combined, warns = runCombination(ctx, l, s.FORM)
+		r.warnings = append(r.warnings, warns...)
 	}
 	sens := l.st.Sensitivity
 	margin := l.md.MarginModel()
@@ -116,6 +124,7 @@ func (r *results) document() *report.Document {
 	trusted := res.Status.Trusted()
 	d.Trusted = &trusted
 	r.fillTarget(d) // verdict (absent when undecided) and reserve
+	fillCombination(d, r.combined)
 	for _, o := range res.Outputs {
 		switch o.Name {
 		case "capacity":

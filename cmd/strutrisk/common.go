@@ -102,9 +102,10 @@ func (l *loaded) baseDocument() *report.Document {
 		t := st.Target
 		d.TargetBeta = &t
 	}
-	d.Target = baseTarget(st)            // reserve.go
-	d.Measurements = measurementsDoc(st) // measure.go
-	d.LoadPeriods = loadPeriodsDoc(st)   // period.go
+	d.Target = baseTarget(st)                          // reserve.go
+	d.Measurements = measurementsDoc(st)               // measure.go
+	d.LoadPeriods = loadPeriodsDoc(st)                 // period.go
+	d.Combination, d.Combinations = combinationDoc(st) // combination.go
 	return d
 }
 

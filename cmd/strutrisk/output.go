@@ -46,6 +46,13 @@ func (r *results) summary(dir string, files []string) string {
 		}
 		fmt.Fprintf(&w, "  %-18s %s\n", label, l)
 	}
+	for i, l := range report.WrapText(report.CombinationLine(d), 76) {
+		label := ""
+		if i == 0 {
+			label = "load combination"
+		}
+		fmt.Fprintf(&w, "  %-18s %s\n", label, l)
+	}
 	if res.Method == sim.FORMMethod {
 		fmt.Fprintf(&w, "  method             %s, %d evaluations\n", res.Method, res.Evaluations)
 	} else {

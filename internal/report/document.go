@@ -46,6 +46,10 @@ type Document struct {
 	// distribution describes and how it was converted to the reference
 	// period (see LoadPeriod).
 	LoadPeriods []LoadPeriod `json:"load_periods,omitempty"`
+	// Combination and Combinations are the load combination of two or
+	// more random variable loads and its cases (combination.go).
+	Combination  *Combination      `json:"combination,omitempty"`
+	Combinations []CombinationCase `json:"combinations,omitempty"`
 
 	GoverningAxis string `json:"governing_axis,omitempty"`
 

@@ -83,6 +83,8 @@ a{color:inherit;text-decoration:none}
 {{if .CodeCheck}}<h3 id="code-check">Code check beside β</h3>
 <p>The deterministic check of EN 1993-1-1 6.3.1 at characteristic values with partial factors; the recommended factors may differ by National Annex.</p>
 <table>{{range .CodeCheck}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{end}}
+{{if .Combination}}<h3 id="combination">Load combination</h3>
+<table>{{range .Combination}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{end}}
 {{with .Picture "capacity-demand"}}{{template "fig" .}}{{end}}
 {{with .Picture "margin"}}{{template "fig" .}}{{end}}
 {{if .Warnings}}<h3>Warnings</h3><ul>{{range .Warnings}}<li>{{.}}</li>{{end}}</ul>{{end}}

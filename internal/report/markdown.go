@@ -39,6 +39,10 @@ func Markdown(b *Bundle) string {
 		w.WriteString("The deterministic check of EN 1993-1-1 6.3.1 at characteristic values with partial factors; the recommended factors may differ by National Annex.\n\n")
 		mdKV(&w, v.CodeCheck)
 	}
+	if len(v.Combination) > 0 {
+		w.WriteString("### Load combination\n\n")
+		mdKV(&w, v.Combination)
+	}
 	if len(v.Warnings) > 0 {
 		w.WriteString("Warnings:\n\n")
 		for _, s := range v.Warnings {

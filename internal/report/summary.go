@@ -67,6 +67,13 @@ func SummaryText(b *Bundle) string {
 		}
 		line(label, "%s", l)
 	}
+	for i, l := range WrapText(CombinationLine(&d), 72) {
+		label := ""
+		if i == 0 {
+			label = "load combination"
+		}
+		line(label, "%s", l)
+	}
 	if d.ReserveFactor != nil {
 		line("reserve factor", "%s (load factor at which the target is just met)", f2(*d.ReserveFactor))
 	}

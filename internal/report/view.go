@@ -51,6 +51,7 @@ type view struct {
 	Measured    []measuredRow // see target.go
 	Target      []KV          // the target check and the reserve
 	CodeCheck   []KV          // the code check beside beta (codecheck.go)
+	Combination []KV          // the load combination cases (combination.go)
 	Diagnostics []KV
 	Warnings    []string
 	Notes       []string
@@ -250,6 +251,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	}
 	v.Target, v.Measured = targetRows(&d), measuredRows(&d)
 	v.CodeCheck = CodeCheckRows(d.CodeCheck)
+	v.Combination = CombinationRows(&d)
 	for k, u := range b.Updates {
 		r := updateRow{Variable: u.Variable, Unit: u.Unit, N: strconv.Itoa(len(u.Data)), Picture: "update-" + strconv.Itoa(k+1)}
 		if u.Prior != nil {
