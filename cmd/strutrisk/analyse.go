@@ -70,7 +70,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	if sens.Tornado && len(m.Vars) > 0 && ctx.Err() == nil {
 		bar.stage("tornado")
 		// FORM betas per bar, unless each evaluation is a numerical analysis.
-		withFORM := l.st.Model != "beam-column"
+		withFORM := !l.st.ModelTraits().Expensive
 		base, rows, err := sim.Tornado(margin, &sim.TornadoSettings{Low: sens.TornadoLow, High: sens.TornadoHigh, Output: 0, FORM: withFORM, FORMSettings: s.FORM})
 		if err != nil {
 			r.warnings = append(r.warnings, "tornado: "+err.Error())
@@ -244,13 +244,13 @@ func (r *results) bundle() *report.Bundle {
 		SobolCapacity:   r.sobolCap,
 		Updates:         updates(l.st),
 		ByMagnitude:     l.md.ByMagnitude(),
-		StudyModel:      l.st.Model,
+		StudyModel:      l.st.Model.String(),
 		VariantModels:   map[string]string{},
 	}
 	for v, va := range l.st.Variants {
 		b.VariantModels[va.Name] = caseModel(l.st, v)
 	}
-	if l.st.Model != "beam-column" {
+	if !l.st.ModelTraits().Expensive {
 		b.TornadoBeta = r.tornado
 	}
 	for i := range r.res.Outputs {
@@ -317,7 +317,7 @@ func (r *results) slendernessChart() *report.SlendernessChart {
 	c.Member = [2]float64{n.ModeSlenderness, n.Capacity / n.ModelFactor / (m.Props.EffectiveArea() * m.Fy)}
 	kept := r.res.Kept
 	limit := 500
-	if r.l.st.Model == "beam-column" {
+	if r.l.st.ModelTraits().Expensive {
 		limit = 0 // each point would be a numerical analysis
 	}
 	if kept != nil {

@@ -16,7 +16,7 @@ const slowRun = time.Minute
 // than slowRun, returns a warning with the expected time and what to do
 // instead; else "".
 func beamTimeNote(l *loaded, s *sim.Settings) string {
-	if l.st.Model != "beam-column" {
+	if !l.st.ModelTraits().Expensive {
 		return ""
 	}
 	switch s.Method {
@@ -36,9 +36,9 @@ func beamTimeNote(l *loaded, s *sim.Settings) string {
 	if total < slowRun {
 		return ""
 	}
-	return fmt.Sprintf("beam-column: one evaluation takes about %s here, so %d samples on %d workers could take up to %s (less if the target cov is reached first); "+
+	return fmt.Sprintf("%s: one evaluation takes about %s here, so %d samples on %d workers could take up to %s (less if the target cov is reached first); "+
 		"for a quicker answer use --method form or --method subset, or lower analysis.samples",
-		per.Round(10*time.Microsecond), n, workers, total.Round(time.Second))
+		l.st.Model, per.Round(10*time.Microsecond), n, workers, total.Round(time.Second))
 }
 
 // evalTime is the mean time of k evaluations of m at the means of its

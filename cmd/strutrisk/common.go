@@ -195,7 +195,7 @@ func (l *loaded) checkText() string {
 	fmt.Fprintf(&b, "Nominal member: %s section, A = %.0f mm2, L = %.0f mm, E = %.0f MPa, fy = %.1f MPa\n",
 		st.Section.Name, n.Member.Props.A, n.Member.Length, n.Member.E, n.Member.Fy)
 	b.WriteString(classText(n)) // class.go
-	if st.Model != "curve" {
+	if !st.ModelTraits().Curve {
 		fmt.Fprintf(&b, "  bow %.2f mm, eccentricity %.2f mm (means of their magnitude)%s\n", math.Abs(n.Member.Bow), math.Abs(n.Member.Ecc), imperfectionNote(st, n))
 	} else {
 		fmt.Fprintf(&b, "  imperfection factor alpha %.2f (major) / %.2f (minor)\n", n.Member.Alpha[0], n.Member.Alpha[1])

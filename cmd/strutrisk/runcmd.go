@@ -107,7 +107,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		Seed:      st.Analysis.Seed,
 		Workers:   o.workers,
 	})
-	if st.Model == "beam-column" {
+	if st.ModelTraits().Expensive {
 		// Each evaluation is a numerical analysis: describe the capacity
 		// and demand from a smaller auxiliary sample.
 		settings.AuxSamples = 2000

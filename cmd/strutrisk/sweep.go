@@ -124,13 +124,13 @@ func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *c
 // baseName says briefly what the study itself assumes, to tell it from
 // its variants.
 func baseName(st *study.Study) string {
-	switch st.Model {
-	case "curve":
-		return "curve " + st.Curve[0]
-	case "beam-column":
-		return "beam-column " + st.Limit
+	if st.ModelTraits().Curve {
+		return st.Model.String() + " " + st.Curve[0]
 	}
-	return st.Model
+	if opts := st.ModelTraits().Options; opts != "" {
+		return st.Model.String() + " " + opts
+	}
+	return st.Model.String()
 }
 
 // caseName names a case for progress lines and warnings.
@@ -250,13 +250,13 @@ func lamVaries(lam []float64) bool {
 // caseModel is the capacity model of variant v of st (-1: the study).
 func caseModel(st *study.Study, v int) string {
 	if v < 0 {
-		return st.Model
+		return st.Model.String()
 	}
 	cs, err := st.Derive(v, -1)
 	if err != nil {
 		return ""
 	}
-	return cs.Model
+	return cs.Model.String()
 }
 
 // summary is the compact table of the cases for the terminal.

@@ -7,7 +7,7 @@ import "strutrisk/internal/report"
 // failing member), or at the nominal member when FORM found none. Other
 // models have no trace.
 func (r *results) addTrace(b *report.Bundle) {
-	if r.l.st.Model != "beam-column" {
+	if !r.l.md.Traces() {
 		return
 	}
 	var x []float64

@@ -46,3 +46,19 @@ func ParseAxis(name string) (Axis, error) {
 	}
 	return 0, fmt.Errorf("column: unknown axis %q (want major, minor or both)", name)
 }
+
+// BeamLimitNames returns the study-file names of the beam-column limits
+// (BeamLimit.String), in the order of their constants.
+func BeamLimitNames() []string {
+	return []string{FirstYieldLimit.String(), UltimateLimit.String()}
+}
+
+// ResidualNames returns the study-file names of the residual stress
+// patterns (Residual.String), in the order of their constants.
+func ResidualNames() []string {
+	var names []string
+	for r := ResidualNone; r <= ResidualColdFormed; r++ {
+		names = append(names, r.String())
+	}
+	return names
+}

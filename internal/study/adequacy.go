@@ -42,7 +42,7 @@ func (md *Model) checkedAxes() []column.Axis {
 // lengthFraction warns when q is written L/n and a checked axis has K != 1
 // (not for a bow updated by measurements: that is the member's own bow).
 func (md *Model) lengthFraction(q *Quantity, n *Nominal) string {
-	if q == nil || !(q.perLength || q.Relative) || md.model == modelCurve || q.update != nil {
+	if q == nil || !(q.perLength || q.Relative) || md.curve || q.update != nil {
 		return "" // a measured bow is the member's own, over its length
 	}
 	var ks []string
@@ -74,15 +74,8 @@ func (md *Model) residualAdequacy(n *Nominal) string {
 	if st.Imperfection == "equivalent" || !ok {
 		return ""
 	}
-	var what string
-	switch {
-	case st.Model == "perry-robertson" || st.Model == "secant":
-		what = "model " + st.Model + " (first yield with a geometric imperfection alone)"
-	case st.Model == "beam-column" && st.Limit == "first-yield":
-		what = "the first-yield beam-column (a geometric imperfection alone)"
-	case st.Model == "beam-column" && st.Residual == "none":
-		what = "the ultimate beam-column without residual stresses"
-	default:
+	what := st.ModelTraits().NoResidual
+	if what == "" {
 		return ""
 	}
 	own, curve, ult, c := md.referenceCapacities(residual)
@@ -147,7 +140,7 @@ func (md *Model) referenceCapacities(residual column.Residual) (own, curve, ult 
 			md.axisMember(&mu, &v, a)
 		}
 		opt := column.BeamOptions{Limit: column.UltimateLimit, Residual: residual, Profile: md.Study.Profile}
-		if md.model == modelCurve {
+		if md.curve {
 			mu.Bow, mu.Ecc = 0, 0
 		}
 		for b := range 2 {

@@ -192,27 +192,8 @@ func isCorrelated(path string, corr []sim.Correlation) bool {
 // checkModel checks what the capacity model needs from the rest of the
 // study.
 func (p *parser) checkModel() {
-	st := p.st
-	switch st.Model {
-	case "perry-robertson":
-		if st.Bow == nil && st.Sway == nil && st.Imperfection != "equivalent" {
-			p.errorf("imperfection.bow", "missing: model perry-robertson needs an initial bow, e.g. [imperfection] bow = \"Lcr/1000\", or [capacity] imperfection = \"equivalent\" (or choose another capacity.model)")
-		}
-	case "secant":
-		if st.Ecc == nil {
-			p.errorf("imperfection.eccentricity", "missing: model secant needs a load eccentricity, e.g. [imperfection] eccentricity = \"10 mm\"")
-		}
-	case "curve":
-		if st.Bow != nil || st.Ecc != nil {
-			p.warnf("capacity.model: the buckling curve already contains the imperfections; imperfection.bow and imperfection.eccentricity are ignored")
-		}
-	case "beam-column":
-		if st.Bow == nil && st.Ecc == nil && len(st.Profile) == 0 && st.Sway == nil && st.Imperfection != "equivalent" {
-			p.errorf("imperfection.bow", "missing: model beam-column needs a bow, an eccentricity or capacity.profile")
-		}
-		if len(st.Profile) > 0 && st.Bow != nil {
-			p.warnf("capacity.profile: the measured profile replaces imperfection.bow")
-		}
+	if p.st.Model != nil {
+		p.st.Model.check(p)
 	}
 }
 

@@ -115,7 +115,7 @@ func (p *parser) class4(sec column.Section, cl column.Classification) {
 		p.errorf("member.section", "the %s is class 4 (%s, EN 1993-1-1 Table 5.2): its effective section would shift its centroid (e_N of EN 1993-1-1 6.3.3), which strutrisk does not model. Choose a stockier section, or give it as custom with the effective area and second moments", st.Section.Name, class4Parts(cl))
 		return
 	}
-	if st.Model == "beam-column" && st.Limit == "ultimate" {
+	if st.ModelTraits().Ultimate {
 		p.errorf("capacity.limit", "the section is class 4 (EN 1993-1-1 Table 5.2) and the ultimate beam-column follows the gross fibre section, not local buckling: use limit = \"first-yield\" (on the effective section) or model = \"curve\"")
 		return
 	}
@@ -179,7 +179,7 @@ func (p *parser) tailClass(nominal int) {
 		what = "are counted as failures: the centroid shift of a class 4 open section is not modelled"
 	case openShape(sec.Shape):
 		what = "stay fully effective (rho = 1)"
-	case st.Model == "beam-column" && st.Limit == "ultimate":
+	case st.ModelTraits().Ultimate:
 		what = "are counted as failures: the ultimate beam-column cannot follow local buckling"
 	}
 	p.warnf("member.section: class %d at nominal values, but class 4 at the 0.999 fractiles of the yield strength and the thickness loss: such samples %s", nominal, what)

@@ -115,7 +115,7 @@ func (md *Model) CodeCheck() (*CodeCheck, error) {
 	if c.Resistance > 0 {
 		c.Utilisation = c.DesignLoad / c.Resistance
 	}
-	c.AxialOnly = st.Ecc != nil || st.Sway != nil || st.Model == "beam-column"
+	c.AxialOnly = st.Ecc != nil || st.Sway != nil || st.ModelTraits().Bending
 	c.Notes = md.checkNotes()
 	return c, nil
 }
@@ -228,7 +228,7 @@ func (md *Model) curveOf(a column.Axis) (curve, from string) {
 func (md *Model) checkNotes() []string {
 	st := md.Study
 	notes := []string{"Recommended partial factors unless the study sets them; the National Annex may differ."}
-	if st.Ecc != nil || st.Sway != nil || st.Model == "beam-column" {
+	if st.Ecc != nil || st.Sway != nil || st.ModelTraits().Bending {
 		notes = append(notes, "The member also bends (end eccentricity, sway or the beam-column model), but this is the axial buckling resistance of EN 1993-1-1 6.3.1 only: the 6.3.3 interaction with bending is not checked, so the utilisation is no verdict.")
 	}
 	if st.ModelFactor != nil {

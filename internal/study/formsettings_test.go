@@ -29,7 +29,7 @@ func TestSimSettingsByModel(t *testing.T) {
 		if err != nil {
 			t.Fatalf("%s: %v", c.name, err)
 		}
-		if md.Study.Model != c.model {
+		if md.Study.Model.String() != c.model {
 			t.Fatalf("%s: the study text builds model %q", c.name, md.Study.Model)
 		}
 		in := sim.Settings{Method: sim.Importance, Samples: 1234, Seed: 9, FORM: &sim.FORMSettings{Step: 0.5}}

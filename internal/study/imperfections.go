@@ -28,10 +28,10 @@ func (p *parser) checkEquivalent() {
 	st := p.st
 	const key = "capacity.imperfection"
 	switch {
-	case st.Model == "curve":
+	case st.ModelTraits().Curve:
 		p.errorf(key, "the buckling curve already carries its equivalent imperfection: use model = \"perry-robertson\" with imperfection = \"equivalent\", or remove imperfection")
 		return
-	case st.Model == "beam-column" && st.Limit == "ultimate":
+	case st.ModelTraits().Ultimate:
 		p.errorf(key, "the equivalent imperfection stands for the bow and the residual stresses in a first-yield check; the ultimate beam-column takes them apart: use limit = \"first-yield\", or imperfection = \"geometric\" with a bow and residual_stress")
 		return
 	}
@@ -74,7 +74,7 @@ func (p *parser) checkEquivalent() {
 func (p *parser) checkSway() {
 	st := p.st
 	q := st.Sway
-	if st.Model == "curve" {
+	if st.ModelTraits().Curve {
 		p.errorf(q.Path, "a sway imperfection needs a first-yield model (perry-robertson, secant) or the beam-column: the buckling curve has no place for the sway moment")
 		return
 	}

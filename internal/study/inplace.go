@@ -60,7 +60,7 @@ func (md *Model) memberInto(v *values, m *column.Member, buf *column.Section) (*
 		}
 	}
 	m.Alpha = [2]float64{v[fAlpha0], v[fAlpha1]}
-	if md.model == modelCurve {
+	if md.curve {
 		m.Bow, m.Ecc = 0, 0
 	}
 	return sec, nil
@@ -124,14 +124,14 @@ func (md *Model) bothAxes(m *column.Member, sec *column.Section, v *values) (col
 	} else {
 		best.from(m)
 	}
-	if m.Props.It == 0 || md.model == modelBeam {
+	if m.Props.It == 0 || md.kernel == kernelBeam {
 		best.to(m)
 		return res, nil
 	}
 	base.to(m)
 	md.twistInPlace(m, v)
 	governs := column.GovernsFirstYield
-	if md.model == modelCurve {
+	if md.curve {
 		governs = column.GovernsCurve
 	}
 	rt, err := column.Twisting(m, governs)
@@ -146,7 +146,7 @@ func (md *Model) bothAxes(m *column.Member, sec *column.Section, v *values) (col
 // section (see twistMember).
 func (md *Model) twistInPlace(m *column.Member, v *values) {
 	md.axisMember(m, v, column.TwistingAxis(&m.Props))
-	if md.equivalent && md.model != modelCurve {
+	if md.equivalent && !md.curve {
 		m.Bow = md.twistingBow(m, v)
 	}
 }

@@ -1,6 +1,9 @@
 package study
 
-import "strutrisk/sim"
+import (
+	"strutrisk/internal/column"
+	"strutrisk/sim"
+)
 
 // keyTables is the registry of the study file's tables and keys: the one
 // list the parser checks names and choices against and `strutrisk help
@@ -72,16 +75,16 @@ var keyTables = []*TableInfo{
 			Meaning: "The initial out-of-plumb angle phi of a member whose ends sway (ends fixed-free or K above 1), EN 1993-1-1 5.3.2(3); give phi itself (phi0 alpha_h alpha_m)."},
 	}},
 	{Path: "capacity", Meaning: "The capacity model.", Keys: []KeyInfo{
-		{Name: "model", Takes: "text", Choices: []string{"perry-robertson", "secant", "curve", "beam-column"}, Default: "perry-robertson",
+		{Name: "model", Takes: "text", Choices: modelNames(), Default: defaultModel.String(),
 			Meaning: "How the capacity is computed."},
 		{Name: "axis", Takes: "text", Choices: []string{"both", "major", "minor"}, Default: "both",
 			Meaning: "The axes checked; with both each sample takes the weaker."},
 		{Name: "curve", Takes: "text (a0 a b c d), once or { major, minor }", Default: "per axis from EN 1993-1-1 Table 6.2 (shape, fabrication, h/b, tf, grade); custom sections must give it",
 			Meaning: "The buckling curve of EN 1993-1-1 Table 6.1 (model curve, or imperfection equivalent); a warning says when it is less severe than Table 6.2's."},
 		{Name: "alpha", Takes: "quantity (number), once or { major, minor }", Meaning: "The imperfection factor, instead of curve (model curve)."},
-		{Name: "limit", Takes: "text", Choices: []string{"first-yield", "ultimate"}, Default: "first-yield",
+		{Name: "limit", Takes: "text", Choices: column.BeamLimitNames(), Default: column.FirstYieldLimit.String(),
 			Meaning: "Where the beam-column stops (model beam-column)."},
-		{Name: "residual_stress", Takes: "text", Choices: []string{"none", "hot-rolled", "welded", "cold-formed"}, Default: "none",
+		{Name: "residual_stress", Takes: "text", Choices: column.ResidualNames(), Default: column.ResidualNone.String(),
 			Meaning: "The residual stress pattern (model beam-column, limit ultimate)."},
 		{Name: "profile", Takes: "list of lengths (3 or more)", Meaning: "Measured bow offsets at equal spacing along the member (model beam-column)."},
 		{Name: "model_factor", Takes: "quantity (number)", Default: "1", Meaning: "Multiplies the capacity: the model's uncertainty."},

@@ -101,7 +101,7 @@ func (p *parser) resolveLcr(q *Quantity) bool {
 // the equivalent bow of capacity.imperfection = "equivalent", and the sway
 // about an axis whose ends sway.
 func (md *Model) axisMember(m *column.Member, v *values, a column.Axis) {
-	if md.model == modelCurve {
+	if md.curve {
 		return // the curve carries its own imperfection
 	}
 	lcr := m.K[a] * m.Length

@@ -79,20 +79,14 @@ type Model struct {
 	springs                                      [2]bool
 	kDynamic                                     bool // spring K depends on random inputs
 	k                                            [2]float64
-	model                                        int
-	beam                                         beamOpts
+	kernel                                       kernel // of the capacity model
+	curve                                        bool   // the model is a buckling curve
+	beam                                         column.BeamOptions
 	// cases is the number of load combination cases (0: the loads add
 	// up); only, when not 0, is 1 + the one case the limit state takes
 	// (see combination_model.go).
 	cases, only int
 }
-
-// Capacity models.
-const (
-	modelFirstYield = iota
-	modelCurve
-	modelBeam
-)
 
 // Outputs of the model, in the order of Model.Sim.Outputs.
 const (
@@ -254,14 +248,10 @@ func Build(st *Study) (*Model, error) {
 			}
 		}
 	}
-	switch st.Model {
-	case "curve":
-		md.model = modelCurve
-	case "beam-column":
-		md.model = modelBeam
+	md.kernel = st.Model.kernel()
+	md.curve = st.ModelTraits().Curve
+	if md.kernel == kernelBeam {
 		md.beam = beamOptions(st)
-	default:
-		md.model = modelFirstYield
 	}
 	m := &sim.Model{
 		Vars:    vars,
@@ -415,12 +405,12 @@ func (md *Model) capacity(v *values, axis column.Axis) (column.Result, column.Me
 	return res, m, err
 }
 
-// evaluate runs the study's capacity model on the member.
+// evaluate runs the kernel of the study's capacity model on the member.
 func (md *Model) evaluate(m *column.Member, sec *column.Section, v *values, axis column.Axis) (column.Result, error) {
-	switch md.model {
-	case modelCurve:
+	switch md.kernel {
+	case kernelCurve:
 		return column.Curve(m, axis)
-	case modelBeam:
+	case kernelBeam:
 		return md.beamCapacity(m, *sec, v, axis)
 	}
 	return column.FirstYield(m, axis)

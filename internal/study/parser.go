@@ -364,11 +364,11 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.life(top)             // life.go
 	p.analysis(top)
 	p.sensitivity(top)
-	if st.Model == "beam-column" && (top.m["sensitivity"] == nil || !hasKey(top.m["sensitivity"], "sobol")) {
+	if st.ModelTraits().Expensive && (top.m["sensitivity"] == nil || !hasKey(top.m["sensitivity"], "sobol")) {
 		// Sobol indices need tens of thousands of evaluations: too slow for
-		// the numerical beam-column unless asked for.
+		// a numerical model unless asked for.
 		st.Sensitivity.Sobol = false
-		p.defaultf("sensitivity.sobol: off for model beam-column unless asked for (each evaluation is a numerical analysis)")
+		p.defaultf("sensitivity.sobol: off for model %s unless asked for (each evaluation is a numerical analysis)", st.Model)
 	}
 	p.output(top)
 	p.sweep(top)
@@ -717,12 +717,11 @@ func (p *parser) capacity(top *table) {
 	if t == nil {
 		t = &table{path: "capacity", m: map[string]any{}, used: map[string]bool{}}
 	}
-	models := choicesOf("capacity", "model")
-	if m, ok := p.choice(t, "model", models); ok {
-		st.Model = m
+	if m, ok := p.choice(t, "model", choicesOf("capacity", "model")); ok {
+		st.Model = modelNamed(m)
 	} else if _, given := t.m["model"]; !given {
-		st.Model = "perry-robertson"
-		p.defaultf("capacity.model: not given; perry-robertson is used")
+		st.Model = defaultModel
+		p.defaultf("capacity.model: not given; %s is used", defaultModel)
 	}
 	if a, ok := p.choice(t, "axis", choicesOf("capacity", "axis")); ok {
 		st.Axis = map[string]column.Axis{"major": column.Major, "minor": column.Minor, "both": column.Both}[a]
@@ -752,45 +751,17 @@ func (p *parser) capacity(top *table) {
 	if imp, ok := p.choice(t, "imperfection", []string{"geometric", "equivalent"}); ok {
 		st.Imperfection = imp
 	}
-	if (hasCurve || hasAlpha) && st.Model != "curve" && st.Model != "" && st.Imperfection != "equivalent" {
+	if (hasCurve || hasAlpha) && st.Model != nil && !st.ModelTraits().Curve && st.Imperfection != "equivalent" {
 		key := "curve"
 		if hasAlpha {
 			key = "alpha"
 		}
-		p.errorf(t.key(key), "%s applies to model = \"curve\" or imperfection = \"equivalent\" only (the model is %q)", key, st.Model)
+		p.errorf(t.key(key), "%s applies to model = %q or imperfection = \"equivalent\" only (the model is %q)", key, bucklingCurve{}, st.Model)
 	}
 	// Without curve or alpha, model "curve" takes EN 1993-1-1 Table 6.2's
 	// (curvechoice.go).
 
-	if l, ok := p.choice(t, "limit", choicesOf("capacity", "limit")); ok {
-		st.Limit = l
-	}
-	if r, ok := p.choice(t, "residual_stress", choicesOf("capacity", "residual_stress")); ok {
-		st.Residual = r
-	}
-	if v, ok := t.get("profile"); ok {
-		st.Profile = p.profile(t.key("profile"), v)
-	}
-	for _, k := range []string{"limit", "residual_stress", "profile"} {
-		if _, given := t.m[k]; given && st.Model != "beam-column" && st.Model != "" {
-			p.errorf(t.key(k), "%s applies to model = \"beam-column\" only (the model is %q)", k, st.Model)
-		}
-	}
-	if st.Model == "beam-column" {
-		if st.Limit == "" {
-			st.Limit = "first-yield"
-			if _, given := t.m["limit"]; !given {
-				p.defaultf("capacity.limit: not given; the beam-column stops at first yield")
-			}
-		}
-		if st.Limit == "first-yield" && st.Residual != "" && st.Residual != "none" {
-			p.errorf(t.key("residual_stress"), "residual stresses act only with limit = \"ultimate\"")
-		}
-		if st.Limit == "ultimate" && st.Residual == "" {
-			st.Residual = "none"
-			p.defaultf("capacity.residual_stress: not given; no residual stresses")
-		}
-	}
+	p.modelOptions(t) // capmodel.go
 	p.unknown(t)
 }
 
@@ -946,7 +917,7 @@ func (p *parser) sensitivity(top *table) {
 	t := p.sub(top, "sensitivity")
 	if t == nil {
 		p.defaultf("sensitivity: not given; tornado between the 5 %% and 95 %% fractiles")
-		if p.st.Model != "beam-column" {
+		if !p.st.ModelTraits().Expensive {
 			p.defaultf("sensitivity.sobol: not given; Sobol indices from 2048 samples")
 		}
 		return

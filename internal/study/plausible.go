@@ -47,10 +47,10 @@ func (md *Model) plausibleRange(q *Quantity, n *Nominal) (plausible, bool) {
 		return plausible{lo: MinSteelYield, hi: MaxSteelYield, what: "the yield strength of structural steel"}, true
 	case q == st.Modulus:
 		return plausible{lo: 1e3, hi: 400e3, what: "an elastic modulus"}, true
-	case q == st.Bow && st.Model != "curve":
+	case q == st.Bow && !st.ModelTraits().Curve:
 		return plausible{lo: 0, hi: L / BowDivisor, what: fmt.Sprintf("L/%d = %s", BowDivisor, lengthText(L/BowDivisor)),
 			advice: fmt.Sprintf("a bow that large is damage, not a straightness tolerance (those are near L/1000): was L/%d meant, or a bow in mm?", 10*BowDivisor)}, true
-	case q == st.Ecc && st.Model != "curve":
+	case q == st.Ecc && !st.ModelTraits().Curve:
 		return plausible{lo: 0, hi: L / 5, what: "L/5 = " + lengthText(L/5), hintOnly: true}, true
 	}
 	for k, d := range st.Section.Dims {

@@ -10,9 +10,9 @@ import (
 // RefCurve is a deterministic capacity curve N / (A fy) against relative
 // slenderness about one axis.
 type RefCurve struct {
-	// Name labels the curve for a legend; Model is the capacity model it
-	// is drawn with ("perry-robertson", "secant", "curve", "beam-column"),
-	// so that a picture can style every curve of one model alike.
+	// Name labels the curve for a legend; Model is the name of the
+	// capacity model it is drawn with (capmodel.go), so that a picture
+	// can style every curve of one model alike.
 	Name, Model string
 	// Note says where the curve comes from, for a caption (the row of EN
 	// 1993-1-1 Table 6.2 for a buckling curve); "" when the name says it.
@@ -39,7 +39,7 @@ func (md *Model) axes() []column.Axis {
 // not cover (custom) takes curve "b", labelled as a reference only.
 func (md *Model) ReferenceCurve(a column.Axis) (name, row string, alpha float64) {
 	st := md.Study
-	if st.Model == "curve" {
+	if md.curve {
 		v := md.nominalValues()
 		alpha = v[fAlpha0+int(a)]
 		if st.Curve[a] != "" {
@@ -132,7 +132,7 @@ func sameCurve(a, b RefCurve) bool {
 // refKinds lists the curve families of the slenderness picture about a.
 func (md *Model) refKinds(nom *Nominal, a column.Axis) []refKind {
 	st := md.Study
-	kinds := []refKind{{"study: " + md.ownName(a), st.Model, "", nil}}
+	kinds := []refKind{{"study: " + md.ownName(a), st.Model.String(), "", nil}}
 	bow, ecc := nom.Member.Bow, nom.Member.Ecc
 	// An imperfection written as L/n is labelled so: it follows the length.
 	label := func(q *Quantity, x float64) string {
@@ -141,21 +141,21 @@ func (md *Model) refKinds(nom *Nominal, a column.Axis) []refKind {
 		}
 		return fmt.Sprintf("%.3g mm", x)
 	}
-	if bow > 0 && st.Model != "perry-robertson" {
-		kinds = append(kinds, refKind{"perry-robertson, bow " + label(st.Bow, bow), "perry-robertson", "", func(m *column.Member, a column.Axis) (column.Result, error) {
+	if pr := (perryRobertson{}); bow > 0 && st.Model != pr {
+		kinds = append(kinds, refKind{pr.String() + ", bow " + label(st.Bow, bow), pr.String(), "", func(m *column.Member, a column.Axis) (column.Result, error) {
 			m.Ecc = 0
 			return column.PerryRobertson(m, a)
 		}})
 	}
-	if ecc > 0 && st.Model != "secant" {
-		kinds = append(kinds, refKind{"secant, e = " + label(st.Ecc, ecc), "secant", "", func(m *column.Member, a column.Axis) (column.Result, error) {
+	if sc := (secant{}); ecc > 0 && st.Model != sc {
+		kinds = append(kinds, refKind{sc.String() + ", e = " + label(st.Ecc, ecc), sc.String(), "", func(m *column.Member, a column.Axis) (column.Result, error) {
 			m.Bow = 0
 			return column.Secant(m, a)
 		}})
 	}
-	if st.Model != "curve" {
+	if !md.curve {
 		name, row, alpha := md.ReferenceCurve(a)
-		kinds = append(kinds, refKind{"EN 1993-1-1 curve " + name, "curve", row, func(m *column.Member, a column.Axis) (column.Result, error) {
+		kinds = append(kinds, refKind{"EN 1993-1-1 curve " + name, bucklingCurve{}.String(), row, func(m *column.Member, a column.Axis) (column.Result, error) {
 			m.Alpha[a] = alpha
 			return column.Curve(m, a)
 		}})
@@ -164,17 +164,18 @@ func (md *Model) refKinds(nom *Nominal, a column.Axis) []refKind {
 }
 
 // ownName names the study's own model about a for a legend: its EN
-// 1993-1-1 curve, the beam-column's limit, or the model's name.
+// 1993-1-1 curve, or the model's name and options ("beam-column,
+// ultimate").
 func (md *Model) ownName(a column.Axis) string {
-	switch st := md.Study; st.Model {
-	case "curve":
+	st := md.Study
+	if md.curve {
 		name, _, _ := md.ReferenceCurve(a)
 		return "EN 1993-1-1 curve " + name
-	case "beam-column":
-		return "beam-column, " + st.Limit
-	default:
-		return st.Model
 	}
+	if opts := st.ModelTraits().Options; opts != "" {
+		return st.Model.String() + ", " + opts
+	}
+	return st.Model.String()
 }
 
 // curveAbout evaluates eval (the study's own model when nil) for the

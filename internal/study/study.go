@@ -49,15 +49,15 @@ type Study struct {
 	// default) or "equivalent" (the equivalent bow of the EN 1993-1-1
 	// buckling curve, see equivalent.go).
 	Imperfection string
-	// Capacity model.
-	Model        string // perry-robertson | secant | curve | beam-column
+	// Model is the capacity model (capmodel.go).
+	Model        CapacityModel
 	Axis         column.Axis
-	Alpha        [2]*Quantity // model "curve"
-	Curve        [2]string    // curve letters when given by name
-	Limit        string       // beam-column: first-yield | ultimate
-	Residual     string       // beam-column: none | hot-rolled | welded | cold-formed
-	Profile      []float64    // beam-column: measured bow offsets (mm)
-	ModelFactor  *Quantity    // nil means 1
+	Alpha        [2]*Quantity     // a buckling curve's (Traits.Curve)
+	Curve        [2]string        // curve letters when given by name
+	Limit        column.BeamLimit // beam-column: its limit state
+	Residual     column.Residual  // beam-column: its residual stresses
+	Profile      []float64        // beam-column: measured bow offsets (mm)
+	ModelFactor  *Quantity        // nil means 1
 	Loads        []*Quantity
 	EffectFactor *Quantity // nil means 1
 	Corr         []sim.Correlation

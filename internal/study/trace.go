@@ -1,18 +1,22 @@
 package study
 
 import (
-	"errors"
+	"fmt"
 
 	"strutrisk/internal/column"
 )
+
+// Traces reports whether the study's capacity model has a load-deflection
+// path to trace (TraceAt): the numerical beam-column's kernel.
+func (md *Model) Traces() bool { return md.kernel == kernelBeam }
 
 // TraceAt follows the numerical beam-column of a beam-column study at the
 // physical point x (one value per variable of Sim; nil for the nominal
 // member): the load-deflection path and the deflected shape at the limit
 // of the governing axis.
 func (md *Model) TraceAt(x []float64) (*column.Trace, error) {
-	if md.model != modelBeam {
-		return nil, errors.New("study: a trace needs capacity.model = \"beam-column\"")
+	if md.kernel != kernelBeam {
+		return nil, fmt.Errorf("study: a trace needs capacity.model = %q", beamColumn{})
 	}
 	v := md.nominalValues()
 	if x != nil {

@@ -19,14 +19,14 @@ func (md *Model) nominalTwisting(n *Nominal, m *column.Member) error {
 	if st.Axis != column.Both || m.Props.It == 0 {
 		return nil
 	}
-	if md.model == modelBeam {
+	if md.kernel == kernelBeam {
 		if n.Mode.Twists() {
 			return fmt.Errorf("at nominal values: %v", column.ErrTwisting)
 		}
 		return nil
 	}
 	governs := column.GovernsFirstYield
-	if md.model == modelCurve {
+	if md.curve {
 		governs = column.GovernsCurve
 	}
 	res, err := column.Twisting(m, governs)
@@ -50,7 +50,7 @@ func (p *parser) twistingNotes() {
 	st := p.st
 	switch st.Section.Shape {
 	case column.ShapeAngle, column.ShapeChannel, column.ShapeTee:
-		if st.Model == "beam-column" && st.Limit == "ultimate" {
+		if st.ModelTraits().Ultimate {
 			key := "capacity.limit"
 			p.errorf(key, "the ultimate beam-column has no fibre section for a%s %s (its bending and twisting interact): use limit = \"first-yield\" or model = \"curve\"",
 				map[bool]string{true: "n", false: ""}[st.Section.Name == "angle"], st.Section.Name)
@@ -77,7 +77,7 @@ func (p *parser) twistingNotes() {
 	}
 	kN := func(x float64) string { return fmt.Sprintf("%.4g kN", x/1e3) }
 	if !cmode.Twists() {
-		if flex := ncr; st.Model == "beam-column" && st.Axis == column.Both && nt < 1.25*flex {
+		if flex := ncr; st.ModelTraits().Planar && st.Axis == column.Both && nt < 1.25*flex {
 			p.warnf("capacity.model: %s buckling at %s is within 25 %% of the flexural critical load %s at nominal values; the beam-column bends in one plane, and a sample in which the twisting mode comes first has no capacity (it counts as a failure): model \"curve\" checks both modes",
 				mode, kN(nt), kN(flex))
 		}
@@ -89,10 +89,10 @@ func (p *parser) twistingNotes() {
 			p.warnf("capacity.axis: %s alone is checked, but %s buckling at %s comes before the %s axis's Euler load %s; use axis = \"both\" to check it",
 				st.Axis, mode, kN(nt), st.Axis, kN(e))
 		}
-	case st.Model == "beam-column":
+	case st.ModelTraits().Planar:
 		p.errorf(p.modelKey(), "the lowest elastic critical load is %s buckling at %s (flexural: %s); the beam-column bends in one plane and cannot follow it: use model \"curve\" (EN 1993-1-1 6.3.1.4) or \"perry-robertson\"",
 			mode, kN(ncr), kN(math.Min(column.Euler(&m, column.Major), column.Euler(&m, column.Minor))))
-	case st.Model != "curve":
+	case !st.ModelTraits().Curve:
 		p.warnf("capacity.model: %s buckling (%s) governs the elastic critical load; the first-yield formula is applied to it through its relative slenderness sqrt(A fy / N_cr) with the bow of the axis with the larger e c / r^2, a generalisation outside the formula's ground (exact for flexure only); EN 1993-1-1 6.3.1.4 checks this mode by the buckling curve (model \"curve\")",
 			mode, kN(ncr))
 	}
