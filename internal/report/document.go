@@ -56,6 +56,15 @@ type Document struct {
 	// CodeCheck is the deterministic code check beside beta (codecheck.go).
 	CodeCheck *CodeCheck `json:"code_check,omitempty"`
 
+	// Life is the remaining life under corrosion ([life], life.go): one
+	// point per evaluated year; LifeEnd the first year whose annual beta
+	// is below the annual target, absent when the horizon is reached (or
+	// sampling error leaves the year in doubt: LifeBasis.Resolved false);
+	// LifeBasis how it was computed and judged.
+	Life      []LifePoint `json:"life,omitempty"`
+	LifeEnd   *int        `json:"life_end,omitempty"`
+	LifeBasis *LifeBasis  `json:"life_basis,omitempty"`
+
 	Nominal  *Nominal  `json:"nominal,omitempty"`
 	Capacity *Summary  `json:"capacity,omitempty"`
 	Demand   *Summary  `json:"demand,omitempty"`

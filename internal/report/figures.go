@@ -21,6 +21,7 @@ func figures(b *Bundle) (figs []*figure, skipped []error) {
 		{"slenderness", func() *figure { return slendernessFigure(b) }},
 		{"sweep", func() *figure { return sweepFigure(b) }},
 		{"variants", func() *figure { return variantsFigure(b) }},
+		{"life", func() *figure { return lifeFigure(b) }},
 		{"beam-column", func() *figure { return traceFigure(b) }},
 	}
 	for k, u := range b.Updates {

@@ -166,6 +166,16 @@ a{color:inherit;text-decoration:none}
 {{end}}</table>{{end}}
 </section>{{end}}
 
+{{if .Life}}<section id="life">
+<h2>Remaining life under corrosion</h2>
+{{if .LifeVerdict}}<p class="verdict">{{.LifeVerdict}}</p>{{end}}
+<table>{{range .Life}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>
+{{with .Picture "life"}}{{template "fig" .}}{{end}}
+{{with .LifeTable}}<table><tr>{{range .Head}}<th>{{.}}</th>{{end}}</tr>
+{{range .Rows}}<tr>{{range .}}<td class="n">{{.}}</td>{{end}}</tr>
+{{end}}</table>{{end}}
+</section>{{end}}
+
 {{if .Updates}}<section id="updates">
 <h2>Updating from measurements</h2>
 <table><tr><th>input</th><th>prior</th><th>updated</th><th>unit of the mean or median</th><th>number of measurements</th></tr>

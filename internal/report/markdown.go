@@ -166,6 +166,16 @@ func Markdown(b *Bundle) string {
 			mdTable(&w, []string{t.head, "pf (–)", "95% interval of pf (–)", "β (–)"}, rows)
 		}
 	}
+	if len(v.Life) > 0 {
+		w.WriteString("## Remaining life under corrosion\n\n")
+		if v.LifeVerdict != "" {
+			fmt.Fprintf(&w, "**%s**\n\n", mdText(v.LifeVerdict))
+		}
+		mdKV(&w, v.Life)
+		if t := v.LifeTable; t != nil {
+			mdTable(&w, t.Head, t.Rows)
+		}
+	}
 	if len(v.Updates) > 0 {
 		w.WriteString("## Updating from measurements\n\n")
 		rows = rows[:0]

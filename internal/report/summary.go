@@ -77,6 +77,13 @@ func SummaryText(b *Bundle) string {
 	if d.ReserveFactor != nil {
 		line("reserve factor", "%s (load factor at which the target is just met)", f2(*d.ReserveFactor))
 	}
+	for i, l := range WrapText(plainGreek.Replace(LifeVerdict(&d)), 72) {
+		label := ""
+		if i == 0 {
+			label = "remaining life"
+		}
+		line(label, "%s", l)
+	}
 	if d.Method != "" {
 		s := d.Method
 		if d.Evaluations != nil {

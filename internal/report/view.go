@@ -52,6 +52,10 @@ type view struct {
 	Target      []KV          // the target check and the reserve
 	CodeCheck   []KV          // the code check beside beta (codecheck.go)
 	Combination []KV          // the load combination cases (combination.go)
+	// LifeVerdict, Life and LifeTable are the remaining life (life.go).
+	LifeVerdict string
+	Life        []KV
+	LifeTable   *table
 	Diagnostics []KV
 	Warnings    []string
 	Notes       []string
@@ -252,6 +256,10 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	v.Target, v.Measured = targetRows(&d), measuredRows(&d)
 	v.CodeCheck = CodeCheckRows(d.CodeCheck)
 	v.Combination = CombinationRows(&d)
+	v.LifeVerdict, v.Life = LifeVerdict(&d), LifeRows(&d)
+	if head, rows := LifeTable(&d, 60); len(rows) > 0 {
+		v.LifeTable = &table{Head: head, Rows: rows}
+	}
 	for k, u := range b.Updates {
 		r := updateRow{Variable: u.Variable, Unit: u.Unit, N: strconv.Itoa(len(u.Data)), Picture: "update-" + strconv.Itoa(k+1)}
 		if u.Prior != nil {
