@@ -60,7 +60,8 @@ type Model struct {
 
 	base       values
 	binds      []binding
-	relBow     bool // bow and eccentricity are fractions of the length
+	feeds      feeds // binds flattened (feed.go)
+	relBow     bool  // bow and eccentricity are fractions of the length
 	relEcc     bool
 	lcrBow     bool // bow and eccentricity are fractions of the buckling length
 	lcrEcc     bool
@@ -260,6 +261,7 @@ func Build(st *Study) (*Model, error) {
 		Outputs: []string{"capacity", "demand"},
 	}
 	md.Sim = m
+	md.feeds = feedsOf(md.binds, -1)
 	md.linear()
 	return md, nil
 }
@@ -286,15 +288,12 @@ func (md *Model) linear() {
 		return
 	}
 	j := best
+	fs := feedsOf(md.binds, j)
 	md.Sim.Linear = &sim.Linear{
 		Index: j,
 		Split: func(x []float64) (h, c float64) {
 			v := md.base
-			for i, b := range md.binds {
-				if i != j {
-					md.set(&v, b, x[i])
-				}
-			}
+			fs.fill(&v, x)
 			capacity, demand := md.eval(&v)
 			return capacity - demand, v[fEffect]
 		},
@@ -314,9 +313,7 @@ func (md *Model) set(v *values, b binding, x float64) {
 // g is the limit state of the sim.Model.
 func (md *Model) g(x, out []float64) float64 {
 	v := md.base
-	for i, b := range md.binds {
-		md.set(&v, b, x[i])
-	}
+	md.feeds.fill(&v, x)
 	capacity, demand := md.eval(&v)
 	if out != nil {
 		out[OutCapacity] = capacity
