@@ -19,8 +19,9 @@ type Crossing struct {
 }
 
 // Resolved reports whether sampling error leaves the crossing year in
-// doubt by no more than one evaluation step (or there is no crossing in
-// doubt).
+// doubt by at most two evaluation steps (the bracket then says by how
+// much), or there is no crossing in doubt. A crossing bracketed beyond
+// the horizon, or more widely, is not resolved: no verdict may be drawn.
 func (c Crossing) Resolved(r Result) bool {
 	if c.Earliest == c.Latest {
 		return true
@@ -28,12 +29,13 @@ func (c Crossing) Resolved(r Result) bool {
 	if c.Earliest == 0 || c.Latest == 0 {
 		return false
 	}
-	for k, pt := range r.Points {
-		if pt.Year == c.Earliest {
-			return k+1 < len(r.Points) && r.Points[k+1].Year >= c.Latest
+	n := 0
+	for _, pt := range r.Points {
+		if pt.Year >= c.Earliest && pt.Year < c.Latest {
+			n++
 		}
 	}
-	return false
+	return n <= 2
 }
 
 // FirstBelow finds where the annual beta of r first falls below target.

@@ -242,8 +242,14 @@ func TestFirstBelow(t *testing.T) {
 	if c != (Crossing{Year: 3, Earliest: 2, Latest: 4}) {
 		t.Errorf("crossing %+v, want year 3 between 2 and 4", c)
 	}
-	if c.Resolved(r) {
-		t.Errorf("a bracket of years 2 to 4 over yearly steps is not resolved")
+	if !c.Resolved(r) {
+		t.Errorf("a bracket of years 2 to 4 over yearly steps is within two steps: resolved")
+	}
+	if c := (Crossing{Year: 2, Earliest: 1, Latest: 4}); c.Resolved(r) {
+		t.Errorf("a bracket of years 1 to 4 over yearly steps is three steps wide: not resolved")
+	}
+	if c := (Crossing{Year: 3, Earliest: 2, Latest: 0}); c.Resolved(r) {
+		t.Errorf("a bracket reaching beyond the horizon is not resolved")
 	}
 	if c := r.FirstBelow(5); c != (Crossing{Year: 1, Earliest: 1, Latest: 1}) || !c.Resolved(r) {
 		t.Errorf("target 5: crossing %+v, want year 1 resolved", c)

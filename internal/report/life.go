@@ -53,8 +53,9 @@ type LifeBasis struct {
 	// EndRange brackets the year the annual beta falls below the target
 	// by the sampling error: the first year it may be below, the first
 	// year it is below with confidence (0: not up to the horizon).
-	// Resolved is false when that bracket is wider than one step: then
-	// life_end is left out and no verdict is drawn.
+	// Resolved is false when that bracket is wider than two steps or
+	// reaches beyond the horizon: then life_end is left out and no
+	// verdict is drawn.
 	EndRange []int `json:"end_range,omitempty"`
 	Resolved bool  `json:"resolved"`
 }
@@ -80,11 +81,20 @@ func LifeVerdict(d *Document) string {
 	case d.LifeEnd != nil && *d.LifeEnd == first.Year:
 		return fmt.Sprintf("The annual β is below the annual target β = %s already in year %d.", fixed(*lb.TargetBeta, 2), *d.LifeEnd)
 	case d.LifeEnd != nil:
-		return fmt.Sprintf("The annual β falls below the annual target β = %s in year %d: the remaining life is %d years.",
-			fixed(*lb.TargetBeta, 2), *d.LifeEnd, *d.LifeEnd-1)
+		return fmt.Sprintf("The annual β falls below the annual target β = %s in year %d%s: the remaining life is %d years.",
+			fixed(*lb.TargetBeta, 2), *d.LifeEnd, bracketText(lb.EndRange), *d.LifeEnd-1)
 	}
 	return fmt.Sprintf("The annual β stays above the annual target β = %s up to the horizon of %d years (%s in year %d).",
 		fixed(*lb.TargetBeta, 2), lb.Years, BetaText(float64(last.Beta)), last.Year)
+}
+
+// bracketText writes the sampling bracket of the end of life, "" when it
+// is one year.
+func bracketText(r []int) string {
+	if len(r) != 2 || r[0] == r[1] {
+		return ""
+	}
+	return fmt.Sprintf(" (sampling error: year %d to %d)", r[0], r[1])
 }
 
 // endText writes one end of the bracket: a year, or "beyond the horizon".

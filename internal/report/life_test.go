@@ -78,6 +78,7 @@ func TestLifeVerdicts(t *testing.T) {
 		want string
 	}{
 		{"crossing", func() {}, "falls below the annual target β = 4.20 in year 9: the remaining life is 8 years"},
+		{"bracket", func() { d.LifeBasis.EndRange = []int{8, 10} }, "in year 9 (sampling error: year 8 to 10): the remaining life is 8 years"},
 		{"horizon", func() { d.LifeEnd = nil; d.LifeBasis.EndRange = nil }, "stays above the annual target β = 4.20 up to the horizon of 30 years"},
 		{"unresolved", func() { d.LifeEnd = nil; d.LifeBasis.Resolved = false; d.LifeBasis.EndRange = []int{7, 0} },
 			"Not resolved: sampling error puts the year the annual β falls below the target β = 4.20 between year 7 and beyond the horizon"},
