@@ -1,14 +1,11 @@
 package main
 
 import (
-	"io"
 	"math"
 	"os"
 	"path/filepath"
 	"strings"
 	"testing"
-
-	"strutrisk/sim"
 )
 
 // beamGood is the good study on the numerical beam-column at first yield.
@@ -50,35 +47,5 @@ func TestRunBeamColumn(t *testing.T) {
 				t.Errorf("no picture of the beam-column trace: %v", err)
 			}
 		})
-	}
-}
-
-// TestBeamTimeNote checks the warning of a long beam-column run: it names
-// the expected time and the quicker methods, and stays quiet for FORM,
-// for small budgets and for the closed forms.
-func TestBeamTimeNote(t *testing.T) {
-	l, code := load(writeStudy(t, strings.Replace(beamGood, "first-yield", "ultimate", 1)), io.Discard)
-	if code != exitOK {
-		t.Fatal("load failed")
-	}
-	s := sim.Settings{Method: sim.MonteCarlo, Samples: 1e9, Workers: 2}
-	note := beamTimeNote(l, &s)
-	for _, want := range []string{"one evaluation takes about", "1000000000 samples on 2 workers", "--method form", "--method subset"} {
-		if !strings.Contains(note, want) {
-			t.Errorf("note %q lacks %q", note, want)
-		}
-	}
-	s.Method = sim.FORMMethod
-	if n := beamTimeNote(l, &s); n != "" {
-		t.Errorf("FORM: note %q", n)
-	}
-	s = sim.Settings{Method: sim.MonteCarlo, Samples: 10, Workers: 2}
-	if n := beamTimeNote(l, &s); n != "" {
-		t.Errorf("10 samples: note %q", n)
-	}
-	pr, _ := load(writeStudy(t, good), io.Discard)
-	s.Samples = 1e10
-	if n := beamTimeNote(pr, &s); n != "" {
-		t.Errorf("perry-robertson: note %q", n)
 	}
 }

@@ -5,6 +5,7 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"strutrisk/internal/analysis"
 
 	"strutrisk/internal/outdir"
 )
@@ -28,7 +29,7 @@ func checkCmd(args []string, stdout, stderr io.Writer) int {
 	asJSON := fs.Bool("json", false, "print the result document (without sampling fields) as JSON on standard output")
 	pos, help, err := parseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, checkHelp+flagHelp(fs)+"\n"+caution+"\n")
+		fmt.Fprint(stdout, checkHelp+flagHelp(fs)+"\n"+analysis.Caution+"\n")
 		return exitOK
 	}
 	if err != nil {
@@ -43,12 +44,12 @@ func checkCmd(args []string, stdout, stderr io.Writer) int {
 	if code != exitOK {
 		return code
 	}
-	if _, err := outdir.Resolve(outdir.Request{StudyFile: pos[0], Dir: l.st.Output.Dir}); err != nil {
+	if _, err := outdir.Resolve(outdir.Request{StudyFile: pos[0], Dir: l.Study.Output.Dir}); err != nil {
 		// Not a problem of the study itself: --out can stand in for it.
-		l.st.Warnings = append(l.st.Warnings, fmt.Sprintf("output.dir (line %d): %v; `strutrisk run` refuses it unless --out is given", l.st.Output.DirLine, err))
+		l.Study.Warnings = append(l.Study.Warnings, fmt.Sprintf("output.dir (line %d): %v; `strutrisk run` refuses it unless --out is given", l.Study.Output.DirLine, err))
 	}
 	if *asJSON {
-		out, err := json.MarshalIndent(l.baseDocument(), "", "  ")
+		out, err := json.MarshalIndent(l.BaseDocument(), "", "  ")
 		if err != nil {
 			fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 			return exitInternal
@@ -56,6 +57,6 @@ func checkCmd(args []string, stdout, stderr io.Writer) int {
 		stdout.Write(append(out, '\n'))
 		return exitOK
 	}
-	fmt.Fprint(stdout, l.checkText())
+	fmt.Fprint(stdout, l.CheckText())
 	return exitOK
 }

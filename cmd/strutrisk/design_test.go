@@ -2,7 +2,6 @@ package main
 
 import (
 	"encoding/json"
-	"io"
 	"math"
 	"os"
 	"path/filepath"
@@ -12,7 +11,6 @@ import (
 	"gonum.org/v1/gonum/stat/distuv"
 
 	"strutrisk/internal/report"
-	"strutrisk/sim"
 )
 
 // TestRunDesignValuesClosedForm: the stocky strut (run_test.go) has R = A
@@ -141,29 +139,6 @@ func TestRunDesignValuesNoTarget(t *testing.T) {
 	for k, x := range f.DesignPoint {
 		if math.Abs(f.DesignValues[k]/x-1) > 1e-5 {
 			t.Errorf("%s: design value %.9g, design point %.9g", k, f.DesignValues[k], x)
-		}
-	}
-}
-
-// TestDesignValuesNotConverged: a design point FORM did not converge to
-// gives no design values, and the document says why.
-func TestDesignValuesNotConverged(t *testing.T) {
-	l, code := load(writeStudy(t, stocky), io.Discard)
-	if code != exitOK {
-		t.Fatal("stocky does not load")
-	}
-	n := len(l.md.Sim.Vars)
-	p := sim.DesignPoint{Beta: 3, U: make([]float64, n), X: l.md.Medians(), Alpha: make([]float64, n), Importance: make([]float64, n)}
-	p.Alpha[0] = 1
-	for _, converged := range []bool{false, true} {
-		r := &results{l: l, form: &sim.FORMResult{Beta: 3, Points: []sim.DesignPoint{p}, Converged: converged}}
-		ff := &report.FORM{}
-		r.fillDesign(ff)
-		if got := len(ff.DesignValues) > 0; got != converged {
-			t.Errorf("converged %v: design values given %v", converged, got)
-		}
-		if !converged && !strings.Contains(ff.DesignNote, "did not converge") {
-			t.Errorf("no note on the missing design values: %q", ff.DesignNote)
 		}
 	}
 }

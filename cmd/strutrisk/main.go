@@ -32,10 +32,12 @@ import (
 	"io"
 	"os"
 	"runtime/debug"
+
+	"strutrisk/internal/analysis"
 )
 
 // version is the tool version written into every result document.
-const version = "0.1.0"
+const version = analysis.Version
 
 // Exit statuses.
 const (
@@ -44,10 +46,6 @@ const (
 	exitInput    = 2
 	exitInternal = 3
 )
-
-const caution = `Caution: results depend entirely on the inputs and models stated in the
-study. strutrisk supports, and never replaces, the judgement of a licensed
-engineer and the codes that apply where the structure stands.`
 
 const usage = `strutrisk estimates how likely a column or strut is to fail, and which
 uncertainty drives that, from a study file (TOML).
@@ -64,7 +62,7 @@ Exit status: 0 done (target met or not), 1 target not met with
 --require-target, 2 bad input, 3 internal failure (or the results could
 not be written), 130 interrupted by Ctrl-C (SIGINT), 143 by SIGTERM.
 
-` + caution + "\n"
+` + analysis.Caution + "\n"
 
 func main() {
 	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))

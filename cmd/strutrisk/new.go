@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"io"
 	"strings"
+	"strutrisk/internal/analysis"
 )
 
 //go:embed starter.toml
@@ -22,7 +23,7 @@ func newCmd(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("new", flag.ContinueOnError)
 	pos, help, err := parseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, newHelp+"\n"+caution+"\n")
+		fmt.Fprint(stdout, newHelp+"\n"+analysis.Caution+"\n")
 		return exitOK
 	}
 	if err != nil {

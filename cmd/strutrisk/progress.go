@@ -72,9 +72,9 @@ func (p *progress) update(s sim.Progress) {
 // stageHook, when set (by tests), is called as each step begins.
 var stageHook func(name string)
 
-// stage names the step that begins now ("main run", "FORM", "Sobol
+// Stage names the step that begins now ("main run", "FORM", "Sobol
 // indices"...).
-func (p *progress) stage(name string) {
+func (p *progress) Stage(name string) {
 	p.mu.Lock()
 	p.name, p.phaseStart = name, p.now()
 	p.mu.Unlock()
@@ -95,8 +95,8 @@ func (p *progress) stage(name string) {
 	p.draw(line)
 }
 
-// startCase names case k (from 1) of n, described by what.
-func (p *progress) startCase(k, n int, what string) {
+// StartCase names case k (from 1) of n, described by what.
+func (p *progress) StartCase(k, n int, what string) {
 	p.mu.Lock()
 	now := p.now()
 	if p.caseN > 0 {
@@ -104,7 +104,7 @@ func (p *progress) startCase(k, n int, what string) {
 	}
 	p.caseK, p.caseN, p.caseStart = k, n, now
 	p.mu.Unlock()
-	p.stage(fmt.Sprintf("case %d of %d: %s", k, n, what))
+	p.Stage(fmt.Sprintf("case %d of %d: %s", k, n, what))
 }
 
 // recentCases is how many of the last cases casesLeft averages: cases

@@ -9,6 +9,7 @@ import (
 	"io"
 	"strings"
 
+	"strutrisk/internal/analysis"
 	"strutrisk/internal/report"
 	"strutrisk/sim"
 )
@@ -59,7 +60,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
 	pos, help, err := parseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+caution+"\n")
+		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+analysis.Caution+"\n")
 		return exitOK
 	}
 	if err != nil {
@@ -91,8 +92,8 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	if code != exitOK {
 		return code
 	}
-	st := l.st
-	if len(l.md.Sim.Vars) == 0 {
+	st := l.Study
+	if len(l.Model.Sim.Vars) == 0 {
 		fmt.Fprintf(stderr, "strutrisk: %s: nothing in the study is uncertain: give at least one quantity a distribution, or use `strutrisk check` for the deterministic picture\n", st.File)
 		return exitInput
 	}
@@ -100,18 +101,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "strutrisk: %s: --require-target given but the study has no [target] beta\n", st.File)
 		return exitInput
 	}
-	settings := l.md.SimSettings(sim.Settings{
-		Method:    st.Analysis.Method,
-		Samples:   st.Analysis.Samples,
-		TargetCoV: st.Analysis.TargetCoV,
-		Seed:      st.Analysis.Seed,
-		Workers:   o.workers,
-	})
-	if st.ModelTraits().Expensive {
-		// Each evaluation is a numerical analysis: describe the capacity
-		// and demand from a smaller auxiliary sample.
-		settings.AuxSamples = 2000
-	}
+	settings := l.Settings(o.workers)
 	if o.set["method"] {
 		settings.Method = sim.Method(o.method)
 	}
@@ -121,7 +111,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	if o.set["seed"] {
 		settings.Seed = o.seed
 	}
-	if note := beamTimeNote(l, &settings); note != "" {
+	if note := analysis.BeamTimeNote(l, &settings); note != "" {
 		fmt.Fprintf(stderr, "strutrisk: %s: %s\n", st.File, note)
 	}
 	folder, code := prepareOutput(pos[0], st, o.out, stderr)
@@ -136,15 +126,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	defer stop()
 	settings.Progress = bar.update
 	bar.targetCoV = settings.TargetCoV
-	bar.stage("main run (" + string(settings.Method) + ")")
-	r, err := analyse(ctx, l, &settings, bar)
-	if err == nil && !r.res.Incomplete {
-		// The main result stays the study itself; sweep and variants
-		// follow with the same settings (sweep.go).
-		if r.cases = runCases(ctx, l, &settings, bar); r.cases != nil {
-			r.warnings = append(r.warnings, r.cases.warnings...)
-		}
-	}
+	r, err := analysis.Run(ctx, l, &settings, bar)
 	bar.done()
 	if errors.Is(err, sim.ErrUnsuited) {
 		fmt.Fprintf(stderr, "strutrisk: %s: %v: choose another --method (auto picks one that fits)\n", st.File, err)
@@ -154,8 +136,8 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", st.File, err)
 		return exitInternal
 	}
-	r.incomplete = incompleteReason(ctx, r, sigs)
-	b := r.bundle()
+	r.Incomplete = incompleteReason(ctx, r, sigs)
+	b := r.Bundle()
 	files, werr := report.Files(b, st.Output.Formats)
 	var paths []string
 	if werr == nil {
@@ -169,7 +151,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		}
 		stdout.Write(append(out, '\n'))
 	} else {
-		fmt.Fprint(stdout, r.summary(dir, paths))
+		fmt.Fprint(stdout, r.Summary(dir, paths))
 	}
 	if werr != nil {
 		// The results are on standard output; say they are nowhere else.
@@ -177,13 +159,13 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		return exitInternal
 	}
 	switch {
-	case r.incomplete != "":
-		fmt.Fprintf(stderr, "strutrisk: %s; the results in %s are marked \"complete\": false\n", r.incomplete, dir)
+	case r.Incomplete != "":
+		fmt.Fprintf(stderr, "strutrisk: %s; the results in %s are marked \"complete\": false\n", r.Incomplete, dir)
 		return sigs.code()
 	case o.requireTarget && b.Doc.MeetsTarget == nil:
 		// Undecided counts as not met: the target must be shown to be met.
 		why := "undecided at this sample size (give more samples or a smaller target_cov)"
-		if t := b.Doc.Target; t != nil && t.Reason != "" && !r.res.Status.Trusted() {
+		if t := b.Doc.Target; t != nil && t.Reason != "" && !r.Estimate.Status.Trusted() {
 			why = "undecided: " + t.Reason
 		}
 		fmt.Fprintf(stderr, "strutrisk: the target reliability index %.2f is not shown to be met: %s\n", *b.Doc.TargetBeta, why)
@@ -196,10 +178,10 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 }
 
 // incompleteReason says why the run is not complete, or "" when it is.
-func incompleteReason(ctx context.Context, r *results, sigs *interrupt) string {
+func incompleteReason(ctx context.Context, r *analysis.Result, sigs *interrupt) string {
 	switch {
-	case r.res.Incomplete:
-		return fmt.Sprintf("interrupted by %s after %d evaluations of the main run: the estimate is from the samples finished; the sensitivities, the reserve factor and any sweep or variant cases were not run", sigs.name(), r.res.Evaluations)
+	case r.Estimate.Incomplete:
+		return fmt.Sprintf("interrupted by %s after %d evaluations of the main run: the estimate is from the samples finished; the sensitivities, the reserve factor and any sweep or variant cases were not run", sigs.name(), r.Estimate.Evaluations)
 	case ctx.Err() != nil:
 		phase := sigs.during()
 		if phase == "" {

@@ -1,9 +1,8 @@
-package main
+package analysis
 
 import (
 	"errors"
 	"fmt"
-	"io"
 	"math"
 	"strings"
 
@@ -12,43 +11,29 @@ import (
 	"strutrisk/internal/study"
 )
 
-// loaded is a checked study with its model and nominal picture.
-type loaded struct {
-	st  *study.Study
-	md  *study.Model
-	nom *study.Nominal
-	cc  *report.CodeCheck // nil when it could not be made
+// Loaded is a checked study with its model and nominal picture.
+type Loaded struct {
+	Study     *study.Study
+	Model     *study.Model
+	Nominal   *study.Nominal
+	CodeCheck *report.CodeCheck // nil when it could not be made
 }
 
-// load reads, checks and builds the study at path, printing problems to
-// stderr. A non-zero status means stop.
-func load(path string, stderr io.Writer) (*loaded, int) {
+// Load reads, checks and builds the study at path. The problems of the
+// file come as a *study.Error; a section or nominal member that cannot be
+// built comes as an error that names the key.
+func Load(path string) (*Loaded, error) {
 	st, err := study.Load(path)
 	if err != nil {
-		var se *study.Error
-		if errors.As(err, &se) {
-			for _, p := range se.Problems {
-				fmt.Fprintf(stderr, "strutrisk: %s\n", p)
-			}
-			if se.Unlisted > 0 {
-				fmt.Fprintf(stderr, "strutrisk: %s\n", se.UnlistedLine())
-			}
-			n := len(se.Problems) + se.Unlisted
-			fmt.Fprintf(stderr, "strutrisk: %d problem%s in %s; nothing was run\n", n, plural(n), path)
-			return nil, exitInput
-		}
-		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", path, err)
-		return nil, exitInput
+		return nil, err
 	}
 	md, err := study.Build(st)
 	if err != nil {
-		fmt.Fprintf(stderr, "strutrisk: %s: member.section: %v\n", path, err)
-		return nil, exitInput
+		return nil, fmt.Errorf("member.section: %v", err)
 	}
 	nom, err := md.Nominal()
 	if err != nil {
-		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", path, err)
-		return nil, exitInput
+		return nil, errors.New(err.Error())
 	}
 	// Valid but probably not meant (a unit, a digit): warnings.
 	st.Warnings = append(st.Warnings, md.Plausibility(nom)...)
@@ -60,23 +45,16 @@ func load(path string, stderr io.Writer) (*loaded, int) {
 		// Not a doubt about a result: the check is absent, and says why.
 		st.Defaults = append(st.Defaults, why)
 	}
-	return &loaded{st: st, md: md, nom: nom, cc: cc}, exitOK
+	return &Loaded{Study: st, Model: md, Nominal: nom, CodeCheck: cc}, nil
 }
 
-func plural(n int) string {
-	if n == 1 {
-		return ""
-	}
-	return "s"
-}
-
-// baseDocument is the result document without sampling fields.
-func (l *loaded) baseDocument() *report.Document {
-	st, n := l.st, l.nom
+// BaseDocument is the result document without sampling fields.
+func (l *Loaded) BaseDocument() *report.Document {
+	st, n := l.Study, l.Nominal
 	a := n.Axis
 	d := &report.Document{
 		Title:         st.Title,
-		ToolVersion:   version,
+		ToolVersion:   Version,
 		InputSHA256:   st.SHA256,
 		Record:        recordDoc(st.Record),
 		Units:         "N-mm-MPa",
@@ -95,7 +73,7 @@ func (l *loaded) baseDocument() *report.Document {
 			Mode:                n.Mode.String(),
 			CapacityMode:        n.CapacityMode.String(),
 		},
-		CodeCheck: l.cc,
+		CodeCheck: l.CodeCheck,
 		Warnings:  append([]string{}, st.Warnings...),
 	}
 	if st.HasTarget {
@@ -110,8 +88,8 @@ func (l *loaded) baseDocument() *report.Document {
 }
 
 // checkRows is the deterministic check, per axis.
-func (l *loaded) checkRows() []report.CheckRow {
-	n := l.nom
+func (l *Loaded) checkRows() []report.CheckRow {
+	n := l.Nominal
 	m := &n.Member
 	row := func(q, unit string, f func(a column.Axis) string) report.CheckRow {
 		return report.CheckRow{Quantity: q, Major: f(column.Major), Minor: f(column.Minor), Unit: unit}
@@ -121,7 +99,7 @@ func (l *loaded) checkRows() []report.CheckRow {
 		row("second moment of area I", "mm4", func(a column.Axis) string { return g(m.Props.I[a]) }),
 		row("radius of gyration r", "mm", func(a column.Axis) string { return fmt.Sprintf("%.1f", m.Props.R[a]) }),
 		row("elastic modulus W", "mm3", func(a column.Axis) string { return g(m.Props.W[a]) }),
-		row("effective length factor K ("+kLabel(l.st)+")", "", func(a column.Axis) string { return fmt.Sprintf("%.3f", m.K[a]) }),
+		row("effective length factor K ("+kLabel(l.Study)+")", "", func(a column.Axis) string { return fmt.Sprintf("%.3f", m.K[a]) }),
 		row("slenderness K L / r", "", func(a column.Axis) string { return fmt.Sprintf("%.1f", n.Slenderness[a]) }),
 		row("relative slenderness", "", func(a column.Axis) string { return fmt.Sprintf("%.3f", n.RelSlenderness[a]) }),
 		row("Euler load", "kN", func(a column.Axis) string { return fmt.Sprintf("%.1f", n.Euler[a]/1e3) }),
@@ -161,9 +139,9 @@ func kHow(st *study.Study, a int) string {
 }
 
 // inputs lists every input of the study for the report.
-func (l *loaded) inputs() []report.Input {
+func (l *Loaded) inputs() []report.Input {
 	var in []report.Input
-	for _, q := range l.st.Quantities {
+	for _, q := range l.Study.Quantities {
 		r := report.Input{Name: q.Path, Unit: q.Unit()}
 		if q.Random() {
 			r.Dist, r.Params = q.DistName, q.Params
@@ -183,10 +161,10 @@ func (l *loaded) inputs() []report.Input {
 	return in
 }
 
-// checkText is the deterministic check as a person reads it.
-func (l *loaded) checkText() string {
+// CheckText is the deterministic check as a person reads it.
+func (l *Loaded) CheckText() string {
 	var b strings.Builder
-	st, n := l.st, l.nom
+	st, n := l.Study, l.Nominal
 	fmt.Fprintf(&b, "%s\n", st.Title)
 	for _, kv := range report.RecordRows(recordDoc(st.Record)) {
 		fmt.Fprintf(&b, "  %-12s %s\n", kv.Key, kv.Value)
@@ -227,7 +205,7 @@ func (l *loaded) checkText() string {
 	b.WriteString(targetCheckText(st) + measureText(st)) // reserve.go, measure.go
 	b.WriteString(loadPeriodText(st))                    // period.go
 	b.WriteString(st.CombinationText())
-	b.WriteString(report.CodeCheckText(l.cc))
+	b.WriteString(report.CodeCheckText(l.CodeCheck))
 	b.WriteString(casesCheckText(st)) // sweep.go
 	if len(st.Defaults) > 0 {
 		fmt.Fprintf(&b, "\nDefaults that apply:\n")
@@ -241,7 +219,7 @@ func (l *loaded) checkText() string {
 			fmt.Fprintf(&b, "  - %s\n", w)
 		}
 	}
-	fmt.Fprintf(&b, "\n%s\n", caution)
+	fmt.Fprintf(&b, "\n%s\n", Caution)
 	return b.String()
 }
 

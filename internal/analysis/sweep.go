@@ -1,4 +1,4 @@
-package main
+package analysis
 
 import (
 	"context"
@@ -41,8 +41,8 @@ func caseSettings(s *sim.Settings) sim.Settings {
 
 // runCases runs every variant at the study's values and at every swept
 // value. It returns nil when the study has neither.
-func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *cases {
-	st := l.st
+func runCases(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *cases {
+	st := l.Study
 	if st.Sweep == nil && len(st.Variants) == 0 {
 		return nil
 	}
@@ -51,7 +51,7 @@ func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *c
 	if sw := st.Sweep; sw != nil {
 		n = len(sw.Values)
 		c.label, c.params = sw.Label(), sw.Parameter
-		c.lamAxis = l.nom.Axis
+		c.lamAxis = l.Nominal.Axis
 		for i, q := range sw.Values {
 			c.values = append(c.values, q.Value)
 			c.lam = append(c.lam, relSlendernessAbout(st, i, c.lamAxis))
@@ -78,7 +78,7 @@ func runCases(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *c
 			}
 			done++
 			name := caseName(st, v, i)
-			bar.startCase(done, total, caseLabel(st, v, i))
+			obs.StartCase(done, total, caseLabel(st, v, i))
 			pt, warns, err := runCase(ctx, st, v, i, &settings)
 			for _, x := range warns {
 				if !seen[x] {

@@ -1,4 +1,4 @@
-package main
+package analysis
 
 import (
 	"strutrisk/sim"
@@ -9,15 +9,15 @@ import (
 // a random length is multiplied by the sampled length) and every column
 // name followed by its unit, e.g. "material.yield (MPa)", or "(-)" for a
 // dimensionless one. The kept table itself is left as the engine wrote it.
-func (r *results) samplesInUnits() *sim.Samples {
-	kept := r.res.Kept
+func (r *Result) samplesInUnits() *sim.Samples {
+	kept := r.Estimate.Kept
 	if kept == nil {
 		return nil
 	}
-	md := r.l.md
+	md := r.l.Model
 	nv := len(md.Sim.Vars)
-	units := make(map[string]string, len(r.l.st.Quantities))
-	for _, q := range r.l.st.Quantities {
+	units := make(map[string]string, len(r.l.Study.Quantities))
+	for _, q := range r.l.Study.Quantities {
 		u := q.Unit()
 		if q.Relative || q.Lcr {
 			u = "mm"

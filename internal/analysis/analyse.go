@@ -1,4 +1,4 @@
-package main
+package analysis
 
 import (
 	"context"
@@ -11,11 +11,12 @@ import (
 	"strutrisk/sim"
 )
 
-// results are everything run computed.
-type results struct {
-	l        *loaded
+// Result is everything a run computed.
+type Result struct {
+	l        *Loaded
 	settings sim.Settings
-	res      *sim.Result
+	// Estimate is the main run's.
+	Estimate *sim.Result
 	form     *sim.FORMResult
 	formErr  error
 	base     float64
@@ -26,20 +27,60 @@ type results struct {
 	warnings []string
 	target   *targetRun      // reserve factor and its confirmation (reserve.go)
 	combined *study.Combined // the load combination cases (combination.go)
-	// incomplete, when not empty, says why the run is not complete.
-	incomplete string
+	// Incomplete, when not empty, says why the run is not complete.
+	Incomplete string
 	cases      *cases // sweep and variants (sweep.go)
 }
 
+// Settings are the study's [analysis] settings for sim, with those of its
+// capacity model; workers 0 takes every core.
+func (l *Loaded) Settings(workers int) sim.Settings {
+	st := l.Study
+	s := l.Model.SimSettings(sim.Settings{
+		Method:    st.Analysis.Method,
+		Samples:   st.Analysis.Samples,
+		TargetCoV: st.Analysis.TargetCoV,
+		Seed:      st.Analysis.Seed,
+		Workers:   workers,
+	})
+	if st.ModelTraits().Expensive {
+		// Each evaluation is a numerical analysis: describe the capacity
+		// and demand from a smaller auxiliary sample.
+		s.AuxSamples = 2000
+	}
+	return s
+}
+
+// Run runs the study of l with settings s: the estimate, FORM, the
+// sensitivity measures and the reserve factor, then, when the main run is
+// complete, every case of its sweep and variants with the same settings.
+// obs, when not nil, is told of each step. An error means no estimate; an
+// interrupted run returns what finished, its Estimate marked Incomplete.
+func Run(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Result, error) {
+	if obs == nil {
+		obs = quiet{}
+	}
+	obs.Stage("main run (" + string(s.Method) + ")")
+	r, err := analyse(ctx, l, s, obs)
+	if err == nil && !r.Estimate.Incomplete {
+		// The main result stays the study itself; sweep and variants
+		// follow with the same settings (sweep.go).
+		if r.cases = runCases(ctx, l, s, obs); r.cases != nil {
+			r.warnings = append(r.warnings, r.cases.warnings...)
+		}
+	}
+	return r, err
+}
+
 // analyse runs the estimate and the sensitivity measures.
-func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*results, error) {
-	r := &results{l: l, settings: *s}
-	m := l.md.Sim
+func analyse(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Result, error) {
+	r := &Result{l: l, settings: *s}
+	m := l.Model.Sim
 	res, err := sim.Run(ctx, m, s)
 	if err != nil {
 		return nil, err
 	}
-	r.res = res
+	r.Estimate = res
 	r.warnings = append(r.warnings, res.Warnings...)
 	if st := res.BetaStatement(); st != "" && !res.Incomplete && !hasPrefix(res.Warnings, "no failure") {
 		r.warnings = append(r.warnings, st) // sampling already says "no failure"
@@ -48,7 +89,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 		r.warnings = append(r.warnings, fmt.Sprintf("incomplete: the run was interrupted after %d evaluations; the estimate is from the samples finished", res.Evaluations))
 		return r, nil
 	}
-	bar.stage("FORM")
+	obs.Stage("FORM")
 	r.form = res.FORM
 	if r.form == nil && len(m.Vars) > 0 && ctx.Err() == nil {
 		r.form, r.formErr = sim.FORMContext(ctx, m, s.FORM)
@@ -59,18 +100,18 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 	if r.form != nil && !r.form.Converged {
 		r.warnings = append(r.warnings, "form: the design-point search did not converge ("+r.form.Status+"); its beta and importance are indicative only")
 	}
-	if l.st.Combination != nil && ctx.Err() == nil {
-		bar.stage("load combination cases")
+	if l.Study.Combination != nil && ctx.Err() == nil {
+		obs.Stage("load combination cases")
 		var warns []string
 		r.combined, warns = runCombination(ctx, l, s.FORM)
 		r.warnings = append(r.warnings, warns...)
 	}
-	sens := l.st.Sensitivity
-	margin := l.md.MarginModel()
+	sens := l.Study.Sensitivity
+	margin := l.Model.MarginModel()
 	if sens.Tornado && len(m.Vars) > 0 && ctx.Err() == nil {
-		bar.stage("tornado")
+		obs.Stage("tornado")
 		// FORM betas per bar, unless each evaluation is a numerical analysis.
-		withFORM := !l.st.ModelTraits().Expensive
+		withFORM := !l.Study.ModelTraits().Expensive
 		base, rows, err := sim.Tornado(margin, &sim.TornadoSettings{Low: sens.TornadoLow, High: sens.TornadoHigh, Output: 0, FORM: withFORM, FORMSettings: s.FORM})
 		if err != nil {
 			r.warnings = append(r.warnings, "tornado: "+err.Error())
@@ -79,7 +120,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 		}
 	}
 	if sens.Sobol && len(m.Vars) > 1 && ctx.Err() == nil {
-		bar.stage("Sobol indices")
+		obs.Stage("Sobol indices")
 		idx, err := sim.Sobol(ctx, margin, &sim.SobolSettings{Samples: sens.SobolSamples, Seed: s.Seed, Output: 0, Workers: s.Workers})
 		if err != nil {
 			r.warnings = append(r.warnings, "sobol: "+err.Error())
@@ -88,7 +129,7 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 			r.sobolMsg = sim.SobolIndependenceWarning(margin)
 		}
 		if k := outputIndex(m, "capacity"); k >= 0 && ctx.Err() == nil {
-			bar.stage("Sobol indices of the capacity")
+			obs.Stage("Sobol indices of the capacity")
 			idx, err := sim.Sobol(ctx, m, &sim.SobolSettings{Samples: sens.SobolSamples, Seed: s.Seed, Output: k, Workers: s.Workers})
 			if err != nil {
 				r.warnings = append(r.warnings, "sobol of the capacity: "+err.Error())
@@ -98,15 +139,15 @@ func analyse(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) (*r
 		}
 	}
 	if ctx.Err() == nil {
-		r.target = runTarget(ctx, l, s, bar)
+		r.target = runTarget(ctx, l, s, obs)
 	}
 	return r, nil
 }
 
-// document fills the complete result document.
-func (r *results) document() *report.Document {
-	d := r.l.baseDocument()
-	res := r.res
+// Document fills the complete result document.
+func (r *Result) Document() *report.Document {
+	d := r.l.BaseDocument()
+	res := r.Estimate
 	d.Method = string(res.Method)
 	seed := r.settings.Seed
 	d.Seed = &seed
@@ -137,19 +178,19 @@ func (r *results) document() *report.Document {
 		p := f.Points[0]
 		conv := f.Converged
 		ff := &report.FORM{Beta: f.Beta, Pf: f.Pf, DesignPoint: map[string]float64{}, Importance: map[string]float64{}, Converged: &conv}
-		for i, v := range r.l.md.Sim.Vars {
-			ff.DesignPoint[v.Name] = r.l.md.InUnits(i, p.X[i], p.X) // L/n in mm
+		for i, v := range r.l.Model.Sim.Vars {
+			ff.DesignPoint[v.Name] = r.l.Model.InUnits(i, p.X[i], p.X) // L/n in mm
 			ff.Importance[v.Name] = p.Importance[i]
 		}
 		r.fillDesign(ff) // design.go
 		d.FORM = ff
 	}
-	med := r.l.md.Medians()
+	med := r.l.Model.Medians()
 	for _, t := range r.tornado {
 		lo, hi := t.LowValue, t.HighValue
-		for i, v := range r.l.md.Sim.Vars {
+		for i, v := range r.l.Model.Sim.Vars {
 			if v.Name == t.Variable { // the others at their medians; L/n in mm
-				lo, hi = r.l.md.InUnits(i, lo, med), r.l.md.InUnits(i, hi, med)
+				lo, hi = r.l.Model.InUnits(i, lo, med), r.l.Model.InUnits(i, hi, med)
 			}
 		}
 		d.Tornado = append(d.Tornado, report.Tornado{Variable: t.Variable, LowValue: lo, HighValue: hi, Low: t.Low, High: t.High})
@@ -162,15 +203,15 @@ func (r *results) document() *report.Document {
 	}
 	if f := r.form; f != nil && f.Converged && len(f.Points) > 0 {
 		// The axis that governs at the most probable failure point.
-		if res, _, _, err := r.l.md.At(f.Points[0].X); err == nil {
+		if res, _, _, err := r.l.Model.At(f.Points[0].X); err == nil {
 			d.GoverningAxis = res.Axis.String()
 		}
 	}
 	d.Warnings = append(d.Warnings, r.warnings...)
-	if r.incomplete != "" {
-		d.Complete, d.IncompleteReason = false, r.incomplete
+	if r.Incomplete != "" {
+		d.Complete, d.IncompleteReason = false, r.Incomplete
 		if !res.Incomplete { // that case has its warning already
-			d.Warnings = append(d.Warnings, "incomplete: "+r.incomplete)
+			d.Warnings = append(d.Warnings, "incomplete: "+r.Incomplete)
 		}
 	}
 	if r.sobolMsg != "" {
@@ -221,40 +262,40 @@ func summaryOf(o sim.OutputStats) *report.Summary {
 	return s
 }
 
-// bundle is everything the report draws from.
-func (r *results) bundle() *report.Bundle {
+// Bundle is everything the report draws from.
+func (r *Result) Bundle() *report.Bundle {
 	l := r.l
 	b := &report.Bundle{
-		Doc:             r.document(),
-		StudyFile:       l.st.File,
-		StudyText:       l.st.Data,
+		Doc:             r.Document(),
+		StudyFile:       l.Study.File,
+		StudyText:       l.Study.Data,
 		Inputs:          l.inputs(),
 		Check:           l.checkRows(),
-		Defaults:        l.st.Defaults,
-		Convergence:     r.res.Convergence,
-		TraceKind:       r.res.Trace,
-		Replicates:      r.res.Replicates,
-		ReplicateName:   replicateName(r.res.Method),
+		Defaults:        l.Study.Defaults,
+		Convergence:     r.Estimate.Convergence,
+		TraceKind:       r.Estimate.Trace,
+		Replicates:      r.Estimate.Replicates,
+		ReplicateName:   replicateName(r.Estimate.Method),
 		Samples:         r.samplesInUnits(),
-		NominalCapacity: l.nom.Capacity,
+		NominalCapacity: l.Nominal.Capacity,
 		TornadoOutput:   "margin g = capacity - demand (N)",
 		TornadoBase:     r.base,
 		SobolOutput:     "margin g = capacity - demand",
 		SobolNote:       r.sobolMsg,
 		SobolCapacity:   r.sobolCap,
-		Updates:         updates(l.st),
-		ByMagnitude:     l.md.ByMagnitude(),
-		StudyModel:      l.st.Model.String(),
+		Updates:         updates(l.Study),
+		ByMagnitude:     l.Model.ByMagnitude(),
+		StudyModel:      l.Study.Model.String(),
 		VariantModels:   map[string]string{},
 	}
-	for v, va := range l.st.Variants {
-		b.VariantModels[va.Name] = caseModel(l.st, v)
+	for v, va := range l.Study.Variants {
+		b.VariantModels[va.Name] = caseModel(l.Study, v)
 	}
-	if !l.st.ModelTraits().Expensive {
+	if !l.Study.ModelTraits().Expensive {
 		b.TornadoBeta = r.tornado
 	}
-	for i := range r.res.Outputs {
-		o := &r.res.Outputs[i]
+	for i := range r.Estimate.Outputs {
+		o := &r.Estimate.Outputs[i]
 		switch o.Name {
 		case "capacity":
 			b.Capacity = o
@@ -268,18 +309,18 @@ func (r *results) bundle() *report.Bundle {
 	r.cases.fill(b)
 	r.addTrace(b)
 	b.Diagnostics = []report.KV{
-		{Key: "method", Value: string(r.res.Method)},
-		{Key: "why", Value: r.res.Reason},
-		{Key: "evaluations", Value: fmt.Sprint(r.res.Evaluations)},
-		{Key: "cov of pf", Value: fmt.Sprintf("%.3g", r.res.PfCoV)},
-		{Key: "status", Value: statusText(r.res)},
+		{Key: "method", Value: string(r.Estimate.Method)},
+		{Key: "why", Value: r.Estimate.Reason},
+		{Key: "evaluations", Value: fmt.Sprint(r.Estimate.Evaluations)},
+		{Key: "cov of pf", Value: fmt.Sprintf("%.3g", r.Estimate.PfCoV)},
+		{Key: "status", Value: statusText(r.Estimate)},
 		{Key: "seed", Value: fmt.Sprint(r.settings.Seed)},
 	}
 	if r.form != nil {
 		b.Diagnostics = append(b.Diagnostics, report.KV{Key: "FORM", Value: fmt.Sprintf("beta %.3f, %d evaluations, %s", r.form.Beta, r.form.Evaluations, r.form.Status)})
 	}
-	if r.res.Kept != nil {
-		if rows, err := sim.SpearmanTable(r.res.Kept, "g"); err == nil {
+	if r.Estimate.Kept != nil {
+		if rows, err := sim.SpearmanTable(r.Estimate.Kept, "g"); err == nil {
 			for _, rc := range rows {
 				if math.IsNaN(rc.Rho) || rc.Name == "g" {
 					continue
@@ -295,8 +336,8 @@ func (r *results) bundle() *report.Bundle {
 // the study's model and the closed-form models it is compared with, per
 // axis (see study.ReferenceCurves) and Euler's curve, the nominal member and a cloud
 // of sampled members.
-func (r *results) slendernessChart() *report.SlendernessChart {
-	md := r.l.md
+func (r *Result) slendernessChart() *report.SlendernessChart {
+	md := r.l.Model
 	refs := md.ReferenceCurves(60, 3)
 	if len(refs) == 0 {
 		return nil
@@ -312,12 +353,12 @@ func (r *results) slendernessChart() *report.SlendernessChart {
 		ey = append(ey, math.Min(1, 1/(l*l))) // Euler: N/(A fy) = 1/lam^2, capped by the squash load
 	}
 	c.Curves = append(c.Curves, report.Curve{Name: "Euler", Model: "euler", X: ex, Y: ey})
-	n := r.l.nom
+	n := r.l.Nominal
 	m := n.Member
 	c.Member = [2]float64{n.ModeSlenderness, n.Capacity / n.ModelFactor / (m.Props.EffectiveArea() * m.Fy)}
-	kept := r.res.Kept
+	kept := r.Estimate.Kept
 	limit := 500
-	if r.l.st.ModelTraits().Expensive {
+	if r.l.Study.ModelTraits().Expensive {
 		limit = 0 // each point would be a numerical analysis
 	}
 	if kept != nil {

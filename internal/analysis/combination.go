@@ -1,4 +1,4 @@
-package main
+package analysis
 
 import (
 	"context"
@@ -32,8 +32,8 @@ func combinationDoc(st *study.Study) (*report.Combination, []report.CombinationC
 
 // runCombination finds each combination case's FORM index and their
 // first-order series system, and returns the warnings to add.
-func runCombination(ctx context.Context, l *loaded, fs *sim.FORMSettings) (*study.Combined, []string) {
-	cb := l.md.CaseIndices(ctx, fs)
+func runCombination(ctx context.Context, l *Loaded, fs *sim.FORMSettings) (*study.Combined, []string) {
+	cb := l.Model.CaseIndices(ctx, fs)
 	if cb == nil {
 		return nil, nil
 	}

@@ -1,4 +1,4 @@
-package main
+package analysis
 
 import (
 	"fmt"
@@ -11,19 +11,19 @@ import (
 // slowRun is the expected run time above which run warns.
 const slowRun = time.Minute
 
-// beamTimeNote measures a few evaluations of a beam-column study at the
+// BeamTimeNote measures a few evaluations of a beam-column study at the
 // means of its inputs and, when the sample budget of s would take longer
 // than slowRun, returns a warning with the expected time and what to do
 // instead; else "".
-func beamTimeNote(l *loaded, s *sim.Settings) string {
-	if !l.st.ModelTraits().Expensive {
+func BeamTimeNote(l *Loaded, s *sim.Settings) string {
+	if !l.Study.ModelTraits().Expensive {
 		return ""
 	}
 	switch s.Method {
 	case sim.FORMMethod, sim.Subset, sim.Importance:
 		return "" // these need few evaluations whatever the budget
 	}
-	per := evalTime(l.md.Sim, 3)
+	per := evalTime(l.Model.Sim, 3)
 	workers := s.Workers
 	if workers <= 0 {
 		workers = runtime.NumCPU()
@@ -38,7 +38,7 @@ func beamTimeNote(l *loaded, s *sim.Settings) string {
 	}
 	return fmt.Sprintf("%s: one evaluation takes about %s here, so %d samples on %d workers could take up to %s (less if the target cov is reached first); "+
 		"for a quicker answer use --method form or --method subset, or lower analysis.samples",
-		l.st.Model, per.Round(10*time.Microsecond), n, workers, total.Round(time.Second))
+		l.Study.Model, per.Round(10*time.Microsecond), n, workers, total.Round(time.Second))
 }
 
 // evalTime is the mean time of k evaluations of m at the means of its

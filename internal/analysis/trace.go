@@ -1,4 +1,4 @@
-package main
+package analysis
 
 import "strutrisk/internal/report"
 
@@ -6,15 +6,15 @@ import "strutrisk/internal/report"
 // deflected shape into b: at the FORM design point (the most probable
 // failing member), or at the nominal member when FORM found none. Other
 // models have no trace.
-func (r *results) addTrace(b *report.Bundle) {
-	if !r.l.md.Traces() {
+func (r *Result) addTrace(b *report.Bundle) {
+	if !r.l.Model.Traces() {
 		return
 	}
 	var x []float64
 	if f := r.form; f != nil && len(f.Points) > 0 {
 		x = f.Points[0].X
 	}
-	tr, err := r.l.md.TraceAt(x)
+	tr, err := r.l.Model.TraceAt(x)
 	if err != nil {
 		b.Doc.Warnings = append(b.Doc.Warnings, "beam-column picture: "+err.Error())
 		return

@@ -1,4 +1,4 @@
-package main
+package analysis
 
 import (
 	"fmt"
@@ -10,16 +10,17 @@ import (
 	"strutrisk/sim"
 )
 
-// summary is the concise text run prints on the terminal.
-func (r *results) summary(dir string, files []string) string {
+// Summary is the concise text of a run for the terminal and summary.txt:
+// dir is the output folder and files the files written there.
+func (r *Result) Summary(dir string, files []string) string {
 	var w strings.Builder
-	d := r.document()
-	res := r.res
+	d := r.Document()
+	res := r.Estimate
 	fmt.Fprintf(&w, "%s\n", d.Title)
 	for _, kv := range report.RecordRows(d.Record) {
 		fmt.Fprintf(&w, "  %-18s %s\n", kv.Key, kv.Value)
 	}
-	n := r.l.nom
+	n := r.l.Nominal
 	fmt.Fprintf(&w, "  nominal capacity   %.1f kN (%s, %s), demand at mean loads %.1f kN, utilisation %.2f\n",
 		n.Capacity/1e3, governingText(n), n.Governs, n.Demand/1e3, n.Utilisation)
 	if res.Method == sim.FORMMethod {
@@ -76,7 +77,7 @@ func (r *results) summary(dir string, files []string) string {
 			fmt.Fprintf(&w, "  %-18s %s\n", label, l)
 		}
 	}
-	w.WriteString(r.cases.summary(r.l.st, res))
+	w.WriteString(r.cases.summary(r.l.Study, res))
 	for _, x := range d.Warnings {
 		fmt.Fprintf(&w, "  warning            %s\n", x)
 	}
@@ -88,7 +89,7 @@ func (r *results) summary(dir string, files []string) string {
 			fmt.Fprintf(&w, "  report             %s\n", f)
 		}
 	}
-	fmt.Fprintf(&w, "\n%s\n", caution)
+	fmt.Fprintf(&w, "\n%s\n", Caution)
 	return w.String()
 }
 

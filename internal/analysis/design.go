@@ -1,4 +1,4 @@
-package main
+package analysis
 
 import (
 	"fmt"
@@ -11,8 +11,8 @@ import (
 // partial factors of the inputs at the target beta (FORM's own without a
 // target), from the most probable design point. A design point FORM
 // doubts (not converged) gives none.
-func (r *results) fillDesign(ff *report.FORM) {
-	f, st := r.form, r.l.st
+func (r *Result) fillDesign(ff *report.FORM) {
+	f, st := r.form, r.l.Study
 	if f == nil || len(f.Points) == 0 {
 		return
 	}
@@ -25,7 +25,7 @@ func (r *results) fillDesign(ff *report.FORM) {
 	if st.HasTarget {
 		beta, whose = st.Target, fmt.Sprintf("the target reliability index %.2f (%s)", st.Target, st.TargetSource)
 	}
-	dv, err := r.l.md.DesignValues(p, beta)
+	dv, err := r.l.Model.DesignValues(p, beta)
 	if err != nil {
 		r.warnings = append(r.warnings, "design values: "+err.Error())
 		return

@@ -1,4 +1,4 @@
-package main
+package analysis
 
 import (
 	"context"
@@ -39,14 +39,14 @@ const maxConfirm = 3
 // is found again for the FORM index target + d and confirmed again, at
 // most maxConfirm runs in all. The largest added load is the FORM root
 // for target + d of the last run. It returns nil without a target.
-func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *targetRun {
-	st := l.st
-	if !st.HasTarget || len(l.md.Sim.Vars) == 0 {
+func runTarget(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *targetRun {
+	st := l.Study
+	if !st.HasTarget || len(l.Model.Sim.Vars) == 0 {
 		return nil
 	}
 	t := &targetRun{added: math.NaN()}
-	bar.stage("reserve factor (FORM)")
-	rv, err := l.md.Reserve(ctx, st.Target, s.FORM)
+	obs.Stage("reserve factor (FORM)")
+	rv, err := l.Model.Reserve(ctx, st.Target, s.FORM)
 	if err != nil {
 		t.notes = append(t.notes, "no reserve factor: "+err.Error())
 		return t
@@ -61,9 +61,9 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 		if ctx.Err() != nil {
 			return t
 		}
-		bar.stage(fmt.Sprintf("reserve confirmation (sampling run %d of at most %d)", k+1, maxConfirm))
+		obs.Stage(fmt.Sprintf("reserve confirmation (sampling run %d of at most %d)", k+1, maxConfirm))
 		cs := *s
-		res, err := sim.Run(ctx, l.md.Loaded(t.factor, 0), &cs)
+		res, err := sim.Run(ctx, l.Model.Loaded(t.factor, 0), &cs)
 		if err != nil || res.Incomplete {
 			t.notes = append(t.notes, "the reserve factor was not confirmed by sampling")
 			return t
@@ -84,7 +84,7 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 			t.notes = append(t.notes, fmt.Sprintf("after %d sampling runs the sampled beta at the reserve factor is %.3f, not the target: the factor is approximate", maxConfirm, res.Beta))
 			break
 		}
-		f, b, _, err := l.md.FactorFor(ctx, st.Target+d, s.FORM)
+		f, b, _, err := l.Model.FactorFor(ctx, st.Target+d, s.FORM)
 		if err != nil {
 			t.notes = append(t.notes, "the reserve factor could not be corrected for the offset of FORM: "+err.Error())
 			break
@@ -97,7 +97,7 @@ func runTarget(ctx context.Context, l *loaded, s *sim.Settings, bar *progress) *
 		}
 	}
 	if d != 0 && rv.AddedErr == nil {
-		if a, _, err := l.md.AddedFor(ctx, st.Target+d, s.FORM); err == nil {
+		if a, _, err := l.Model.AddedFor(ctx, st.Target+d, s.FORM); err == nil {
 			t.added = a
 		} else {
 			t.notes = append(t.notes, "no largest added load after the correction: "+err.Error())
@@ -188,18 +188,18 @@ func baseTarget(st *study.Study) *report.TargetCheck {
 
 // fillTarget writes the verdict and the margin into d. MeetsTarget stays
 // absent when the verdict is undecided.
-func (r *results) fillTarget(d *report.Document) {
-	st := r.l.st
+func (r *Result) fillTarget(d *report.Document) {
+	st := r.l.Study
 	if !st.HasTarget || d.TargetBeta == nil {
 		return
 	}
 	t := baseTarget(st)
 	d.Target = t
-	v, why := verdictOf(r.res, st.Target)
+	v, why := verdictOf(r.Estimate, st.Target)
 	t.Verdict, t.Reason = v, why
 	switch {
-	case v == "undecided" && r.res.Status.Trusted():
-		n := samplesToDecide(r.res, st.Target)
+	case v == "undecided" && r.Estimate.Status.Trusted():
+		n := samplesToDecide(r.Estimate, st.Target)
 		if !math.IsInf(n, 0) {
 			t.SamplesToDecide = &n
 		}
@@ -231,7 +231,7 @@ func (r *results) fillTarget(d *report.Document) {
 }
 
 // targetSummary is the target's part of the terminal summary.
-func (r *results) targetSummary(d *report.Document) string {
+func (r *Result) targetSummary(d *report.Document) string {
 	t := d.Target
 	if t == nil {
 		return ""
@@ -247,7 +247,7 @@ func (r *results) targetSummary(d *report.Document) string {
 	case "not met":
 		s += "NOT met"
 	case "undecided":
-		if r.res.Status.Trusted() {
+		if r.Estimate.Status.Trusted() {
 			s += "undecided at this sample size (the interval of beta straddles the target)"
 		} else {
 			s += "undecided (" + t.Reason + ")"

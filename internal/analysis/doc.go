@@ -1,0 +1,17 @@
+// Package analysis is the pipeline of a strutrisk run, from a study file
+// to a typed outcome: it loads and builds the study (Load), runs the
+// estimate, FORM, the sensitivity measures, the reserve factor and the
+// cases of a sweep and variants (Run), and turns the outcome into the
+// result document, the report bundle and the summary text. It takes a
+// context, and tells an Observer of its steps; it writes no files and
+// knows no flags or exit statuses (cmd/strutrisk does).
+package analysis
+
+// Version is the tool version written into every result document.
+const Version = "0.1.0"
+
+// Caution is the closing text of the terminal summary, summary.txt and
+// check, and of every command's help.
+const Caution = `Caution: results depend entirely on the inputs and models stated in the
+study. strutrisk supports, and never replaces, the judgement of a licensed
+engineer and the codes that apply where the structure stands.`
