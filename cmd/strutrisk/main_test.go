@@ -159,6 +159,19 @@ func TestBadStudies(t *testing.T) {
 		{"imperfection choice", good + "[capacity]\nimperfection = \"equivalant\"\n", []string{"study.toml:20: capacity.imperfection: \"equivalant\" is not a choice; did you mean \"equivalent\"?"}},
 		{"equivalent with the curve", good + "[capacity]\nmodel = \"curve\"\ncurve = \"b\"\nimperfection = \"equivalent\"\n", []string{"study.toml:22: capacity.imperfection: the buckling curve already carries its equivalent imperfection"}},
 		{"equivalent ultimate", good + "[capacity]\nmodel = \"beam-column\"\nlimit = \"ultimate\"\nimperfection = \"equivalent\"\n", []string{"study.toml:22: capacity.imperfection: the equivalent imperfection stands for the bow and the residual stresses in a first-yield check"}},
+		// Materials (materials.go, materialcheck.go).
+		{"timber with a steel curve", edit(11, "kind = \"timber\"\nstrength = 21") + "[capacity]\nmodel = \"curve\"\ncurve = \"b\"\n", []string{"study.toml:22: capacity.curve: \"b\" is a steel curve; material.kind = \"timber\" takes", "\"solid\", \"glulam\""}},
+		{"timber duration misspelt", strings.Replace(edit(11, "kind = \"timber\"\nstrength = 21"), `cov = 0.1 }
+imposed`, `cov = 0.1, duration = "permanant" }
+imposed`, 1), []string{"study.toml:16: loads.dead: duration: \"permanant\" is not a load-duration class; did you mean \"permanent\"?"}},
+		{"timber with yield", edit(11, "kind = \"timber\"\nyield = 21"), []string{"study.toml:12: material.yield: timber takes strength (compression parallel to the grain"}},
+		{"steel with a duration", strings.Replace(good, `cov = 0.1 }
+imposed`, `cov = 0.1, duration = "permanent" }
+imposed`, 1), []string{"study.toml:15: loads.dead: duration is the load-duration class of timber"}},
+		{"timber service class", edit(11, "kind = \"timber\"\nstrength = 21\nservice_class = 4"), []string{"study.toml:13: material.service_class: service_class = 4: give 1 (heated indoors), 2 (covered, unheated) or 3 (exposed)"}},
+		{"timber I section", strings.Replace(sec("shape = \"I\"\ndepth = 200\nwidth = 100\nflange = 8\nweb = 6\n"), "yield = {", "kind = \"timber\"\nstrength = {", 1), []string{"study.toml:6: member.section.shape: timber takes a rect or round section"}},
+		{"welded aluminium without its HAZ", strings.Replace(sec("shape = \"I\"\ndepth = 200\nwidth = 100\nflange = 8\nweb = 6\nfabrication = \"welded\"\n"), "modulus = 200000", "kind = \"aluminium\"\nmodulus = 70000", 1), []string{"study.toml:12: material.haz_factor: missing: a welded aluminium section needs the strength ratio rho_o,haz"}},
+		{"stainless curve misspelt", edit(11, "kind = \"stainless\"\nyield = 250") + "[capacity]\nmodel = \"curve\"\ncurve = \"holow\"\n", []string{"study.toml:22: capacity.curve: \"holow\" is not a buckling curve of stainless; did you mean \"hollow\"?"}},
 		{"equivalent custom", strings.Replace(edit(13, ``), "shape = \"rect\"\ndepth = 100\nwidth = 50\n", "shape = \"custom\"\narea = 5000\ni_major = 4e6\ni_minor = 1e6\nc_major = 50\nc_minor = 25\n", 1) + "[capacity]\nimperfection = \"equivalent\"\n", []string{"capacity.curve: missing: capacity.imperfection = \"equivalent\" needs the buckling curve of a custom section"}},
 	} {
 		t.Run(c.name, func(t *testing.T) {

@@ -117,6 +117,13 @@ type BeamOptions struct {
 	// Load is the axial load (N) that goes with Bending; 0 leaves the
 	// member without bending.
 	Load float64
+	// Law, when Law.N > 0, replaces the elastic-perfectly-plastic fibres of
+	// the ultimate limit by the compound Ramberg-Osgood law of stainless
+	// steel (EN 1993-1-4 Annex C) with the member's E and Fy (the 0.2 %
+	// proof stress) and Law.Fu and Law.N; Law.E and Law.Fy are not read.
+	// The law is followed as a non-linear elastic one (no unloading path),
+	// adequate up to the peak load, where few fibres unload.
+	Law RambergOsgood
 }
 
 // Defaults of BeamOptions.

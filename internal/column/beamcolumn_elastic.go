@@ -28,6 +28,9 @@ type bcWork struct {
 	sp, sq   []float64   // spline workspace
 
 	pl bcPlastic // ultimate limit state
+
+	ro    RambergOsgood // the fibres' law when useRO (BeamOptions.Law)
+	useRO bool
 }
 
 var bcPool = sync.Pool{New: func() any { return new(bcWork) }}

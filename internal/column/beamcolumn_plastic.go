@@ -77,6 +77,14 @@ func (w *bcWork) ultimate(m *Member, sec Section, a Axis, o *BeamOptions, tr *Tr
 	}
 	pl.sa, pl.saz, pl.sazz = area, first, ii
 	pl.ny = area * m.Fy
+	w.useRO = o.Law.N > 0
+	if w.useRO {
+		w.ro = RambergOsgood{E: m.E, Fy: m.Fy, Fu: o.Law.Fu, N: o.Law.N}
+		if err := w.ro.Validate(); err != nil {
+			return 0, "", err
+		}
+		pl.ny = area * w.ro.Fu
+	}
 
 	// Elastic pre-analysis on the fibre properties: control point and
 	// the deflection scale of first yield.
@@ -168,6 +176,9 @@ func (w *bcWork) plasticInit() {
 // the yielded fibres to the small stiffness that keeps the equations
 // solvable.
 func (w *bcWork) section(g int, e0, k float64) (n, m, kee, kek, kkk float64) {
+	if w.useRO {
+		return w.sectionRO(g, e0, k)
+	}
 	pl := &w.pl
 	ep := pl.ep[g*pl.nf : (g+1)*pl.nf]
 	fa, fz := pl.fa[:len(ep)], pl.fz[:len(ep)]
@@ -205,6 +216,9 @@ func (w *bcWork) commit() {
 			g := 2*el + q
 			e0 := pl.e0t[g]
 			ep := pl.ep[g*pl.nf : (g+1)*pl.nf]
+			if w.useRO {
+				continue // a non-linear elastic law has no plastic strain
+			}
 			for i := range ep {
 				eps := e0 + pl.fz[i]*k
 				s := w.e * (eps - ep[i])

@@ -97,3 +97,25 @@ func (r *RambergOsgood) Stress(eps float64) (s, et float64) {
 	}
 	return math.Copysign(x, eps), 1 / r.Compliance(x)
 }
+
+// sectionRO is bcWork.section for fibres that follow the Ramberg-Osgood
+// law w.ro: the stress of strain e0 + z k less the fibre's initial strain
+// (its residual stress) and the tangent modulus of the law.
+func (w *bcWork) sectionRO(g int, e0, k float64) (n, m, kee, kek, kkk float64) {
+	pl := &w.pl
+	ep := pl.ep[g*pl.nf : (g+1)*pl.nf]
+	fa, fz := pl.fa[:len(ep)], pl.fz[:len(ep)]
+	floor := w.e * 1e-6 // keeps the tangent solvable past fu
+	for i := range ep {
+		s, et := w.ro.Stress(e0 + fz[i]*k - ep[i])
+		et = math.Max(et, floor)
+		a := fa[i]
+		az := a * fz[i]
+		n += s * a
+		m += s * az
+		kee += et * a
+		kek += et * az
+		kkk += et * az * fz[i]
+	}
+	return
+}

@@ -75,6 +75,9 @@ type CodeCheck struct {
 // model factor is not applied: gamma_M1 stands for it.
 func (md *Model) CodeCheck() (*CodeCheck, error) {
 	st := md.Study
+	if st.Material.Kind != column.Steel {
+		return nil, fmt.Errorf("the code check is that of EN 1993-1-1 for carbon steel; the material is %s", st.Material.Kind)
+	}
 	cs := st.CodeCheck
 	c := &CodeCheck{GammaM0: cs.GammaM0, GammaM1: cs.GammaM1, Factors: assess.LoadFactors{GammaG: cs.GammaG, GammaQ: cs.GammaQ, Psi0: cs.Psi0}}
 	v, char := md.characteristicValues(c)

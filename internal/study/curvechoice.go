@@ -13,7 +13,7 @@ import (
 // fractile of a random material.yield, else its value.
 func (p *parser) tableCurves() {
 	st := p.st
-	if !st.ModelTraits().Curve || st.Section.Dims == nil || st.Yield == nil {
+	if !st.ModelTraits().Curve || st.Section.Dims == nil || st.Yield == nil || st.Material.Kind != column.Steel {
 		return
 	}
 	missing := st.Alpha[0] == nil || st.Alpha[1] == nil

@@ -28,6 +28,9 @@ type distSpec struct {
 	// reference period.
 	companion   *Quantity
 	repetitions int
+	// duration is a timber load's load-duration class ("" when not
+	// given; see loadDuration).
+	duration string
 }
 
 // distSets lists, per distribution, its complete parameter sets; optional
@@ -90,6 +93,7 @@ func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
 		allowed["period"] = true
 		allowed["companion"] = true
 		allowed["repetitions"] = true
+		allowed["duration"] = true
 	}
 	spec := &distSpec{name: name, params: map[string]pval{}}
 	given := map[string]bool{}
@@ -97,6 +101,13 @@ func (p *parser) distTable(path string, m map[string]any, o qopt) *distSpec {
 	for _, k := range sortedKeys(m) {
 		kp := path + "." + k
 		if k == "dist" {
+			continue
+		}
+		if k == "duration" {
+			var ok bool
+			if spec.duration, ok = p.loadDuration(kp, m[k]); !ok { // materials.go
+				bad = true
+			}
 			continue
 		}
 		if k == "period" {

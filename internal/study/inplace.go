@@ -60,6 +60,7 @@ func (md *Model) memberInto(v *values, m *column.Member, buf *column.Section) (*
 		}
 	}
 	m.Alpha = [2]float64{v[fAlpha0], v[fAlpha1]}
+	md.materialMember(m, v) // materialmodel.go
 	if md.curve {
 		m.Bow, m.Ecc = 0, 0
 	}

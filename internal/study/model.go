@@ -27,7 +27,16 @@ const (
 	fSway  // out-of-plumb angle
 	fLoads // sum of the loads
 	fG     // shear modulus (0: E / 2.6)
-	fSec0  // section dimensions in the order of secKeys
+	fKmod  // timber: k_mod of the combination evaluated (materialmodel.go)
+	fDur0  // timber: the sum of the loads of each load-duration class
+	fDur1
+	fDur2
+	fDur3
+	fDur4
+	fFu   // stainless: ultimate strength
+	fHAZw // aluminium: width of the heat-affected zone
+	fHAZr // aluminium: its strength ratio
+	fSec0 // section dimensions in the order of secKeys
 )
 
 // secKeys are the section dimensions in field order.
@@ -87,6 +96,7 @@ type Model struct {
 	// up); only, when not 0, is 1 + the one case the limit state takes
 	// (see combination_model.go).
 	cases, only int
+	mat         materialModel // materialmodel.go
 }
 
 // Outputs of the model, in the order of Model.Sim.Outputs.
@@ -139,6 +149,7 @@ func targets(st *Study) map[*Quantity][]int {
 	for i, k := range secKeys {
 		add(st.Section.Dims[k], fSec0+i)
 	}
+	materialTargets(st, add) // materialmodel.go
 	return t
 }
 
@@ -263,6 +274,7 @@ func Build(st *Study) (*Model, error) {
 	md.Sim = m
 	md.feeds = feedsOf(md.binds, -1)
 	md.linear()
+	md.setupMaterial() // materialmodel.go
 	return md, nil
 }
 
@@ -326,6 +338,14 @@ func (md *Model) g(x, out []float64) float64 {
 // set of inputs. A member the mechanics cannot evaluate (a sample outside
 // the physical range) has no capacity.
 func (md *Model) eval(v *values) (capacity, demand float64) {
+	if md.mat.timber {
+		return md.timberEval(v)
+	}
+	return md.evalOne(v)
+}
+
+// evalOne is eval of one combination of loads.
+func (md *Model) evalOne(v *values) (capacity, demand float64) {
 	demand = md.demand(v)
 	var m column.Member
 	var buf column.Section
@@ -404,13 +424,20 @@ func (md *Model) capacity(v *values, axis column.Axis) (column.Result, column.Me
 
 // evaluate runs the kernel of the study's capacity model on the member.
 func (md *Model) evaluate(m *column.Member, sec *column.Section, v *values, axis column.Axis) (column.Result, error) {
+	var res column.Result
+	var err error
 	switch md.kernel {
 	case kernelCurve:
-		return column.Curve(m, axis)
+		res, err = column.Curve(m, axis)
 	case kernelBeam:
-		return md.beamCapacity(m, *sec, v, axis)
+		res, err = md.beamCapacity(m, *sec, v, axis)
+	default:
+		res, err = column.FirstYield(m, axis)
 	}
-	return column.FirstYield(m, axis)
+	if err == nil && md.mat.adjust {
+		res = md.materialResult(res, m, sec, v, axis)
+	}
+	return res, err
 }
 
 // MarginModel returns the model with one output, "margin", equal to the

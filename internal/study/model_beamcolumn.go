@@ -92,5 +92,8 @@ func (md *Model) beamCapacity(m *column.Member, sec column.Section, v *values, a
 			opt.Springs[a] = [2]float64{v[fTop0+a], v[fBot0+a]}
 		}
 	}
+	if md.mat.law {
+		opt.Law = column.RambergOsgood{Fu: v[fFu], N: md.Study.Material.Exponent}
+	}
 	return column.BeamColumn(m, sec, axis, &opt)
 }

@@ -416,6 +416,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.checkSection()
 	if len(p.probs) == 0 {
 		p.checkClass()         // class.go
+		p.checkMaterial()      // materialcheck.go
 		p.tableCurves()        // curvechoice.go
 		p.checkImperfections() // imperfections.go
 		p.twistingNotes()
@@ -653,17 +654,10 @@ func (p *parser) material(top *table) {
 		}
 		return
 	}
+	p.materialKind(t) // materials.go
 	o := qopt{dim: Stress, need: positive}
-	if p.st.Modulus = p.q(t, "modulus", o); p.st.Modulus == nil {
-		if _, ok := t.m["modulus"]; !ok {
-			p.required(t, "modulus", "the elastic modulus, e.g. modulus = \"205 GPa\"")
-		}
-	}
-	if p.st.Yield = p.q(t, "yield", o); p.st.Yield == nil {
-		if _, ok := t.m["yield"]; !ok {
-			p.required(t, "yield", "the yield strength, e.g. yield = \"275 MPa\"")
-		}
-	}
+	p.materialModulus(t, o)
+	p.materialStrength(t, o)
 	p.st.Shear = p.q(t, "shear_modulus", o)
 	p.unknown(t)
 }
@@ -742,7 +736,7 @@ func (p *parser) capacity(top *table) {
 				continue
 			}
 			st.Curve[a] = c
-			st.Alpha[a] = &Quantity{Path: t.key("curve"), Line: p.line(t.key("curve")), Value: curveAlpha(c)}
+			st.Alpha[a] = &Quantity{Path: t.key("curve"), Line: p.line(t.key("curve")), Value: st.kindAlpha(c, a)}
 		}
 	}
 	if hasAlpha {
@@ -783,8 +777,7 @@ func (p *parser) curves(t *table) (c [2]string, given bool) {
 			p.errorf(key, "a buckling curve is a name in quotes: \"a0\", \"a\", \"b\", \"c\" or \"d\"")
 			return ""
 		}
-		if _, err := column.CurveAlpha(s); err != nil {
-			p.errorf(key, "%q is not a buckling curve: use \"a0\", \"a\", \"b\", \"c\" or \"d\"", s)
+		if !p.validCurve(key, s) { // materials.go
 			return ""
 		}
 		return s

@@ -44,7 +44,7 @@ func (md *Model) plausibleRange(q *Quantity, n *Nominal) (plausible, bool) {
 	case q == st.Length:
 		return plausible{lo: 100, hi: 100e3, what: "a member length"}, true
 	case q == st.Yield:
-		return plausible{lo: MinSteelYield, hi: MaxSteelYield, what: "the yield strength of structural steel"}, true
+		return st.strengthRange(), true // materials.go
 	case q == st.Modulus:
 		return plausible{lo: 1e3, hi: 400e3, what: "an elastic modulus"}, true
 	case q == st.Bow && !st.ModelTraits().Curve:

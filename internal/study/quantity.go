@@ -47,6 +47,9 @@ type Quantity struct {
 	// read ("1 year"); PeriodYears is it in years, 0 unless a duration.
 	Period      string
 	PeriodYears float64
+	// Duration is a timber load's load-duration class as written ("" when
+	// not given; see materials.go).
+	Duration string
 	// MaximaN is the n of the conversion of a load's maxima to the
 	// reference period (Dist = Written^n, see period.go), 0 when none was
 	// made; Written is then the distribution as written.
@@ -181,6 +184,7 @@ func (p *parser) quantity(path string, v any, o qopt) *Quantity {
 		if spec == nil {
 			return nil
 		}
+		q.Duration = spec.duration
 		if spec.name == "fixed" {
 			if spec.companion != nil || spec.repetitions > 0 {
 				p.errorf(path, "companion and repetitions apply to a random variable load: give the load a distribution, or remove them")

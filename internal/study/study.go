@@ -35,7 +35,10 @@ type Study struct {
 	Length  *Quantity
 	Section SectionSpec
 	Modulus *Quantity
-	Yield   *Quantity
+	Yield   *Quantity // material.yield, or material.strength of timber
+	// Material is the material's kind and the keys of that kind
+	// (materials.go).
+	Material MaterialSpec
 	// Shear is material.shear_modulus; nil takes E / (2 (1 + 0.3)) per
 	// sample.
 	Shear    *Quantity
