@@ -94,3 +94,44 @@ func TestRunCombinationCases(t *testing.T) {
 func phiMinus(b float64) float64 { return distuv.UnitNormal.CDF(-b) }
 
 func nearRel(a, b, tol float64) bool { return math.Abs(a-b) <= tol*math.Abs(b) }
+
+// TestRunFerryBorges: with rule ferry-borges-castanheta the loads become
+// one variable, loads.combined, shown by check and in results.json with
+// its mean and sd, and named in the run's summary; the design point has
+// it and not the loads it replaces.
+func TestRunFerryBorges(t *testing.T) {
+	text := strings.Replace(edit(16, `imposed = { dist = "gumbel", mean = "30 kN", cov = 0.4, repetitions = 10 }`+"\n"+
+		`wind = { dist = "gumbel", mean = "8 kN", cov = 0.4, repetitions = 100 }`+"\n"+"[combination]\nrule = \"ferry-borges-castanheta\""),
+		"beta = 3.8", "beta = 3.8\nreference_period = \"50 years\"", 1)
+	p := writeStudy(t, text)
+	code, out, errs := invoke(t, "check", p)
+	if code != 0 {
+		t.Fatalf("check exit %d:\n%s", code, errs)
+	}
+	if !strings.Contains(out, "Load combination (ferry-borges-castanheta") || !strings.Contains(out, "loads.combined: maximum of the sum of pulses 10 x gumbel") {
+		t.Errorf("check output lacks the combined load:\n%s", out)
+	}
+	dir := filepath.Join(t.TempDir(), "out")
+	code, out, errs = invoke(t, "run", p, "--method", "form", "--out", dir)
+	if code != 0 {
+		t.Fatalf("run exit %d:\n%s", code, errs)
+	}
+	raw, _ := os.ReadFile(filepath.Join(dir, "results.json"))
+	var d report.Document
+	if err := json.Unmarshal(raw, &d); err != nil {
+		t.Fatal(err)
+	}
+	c := d.Combination
+	if c == nil || c.Variable != "loads.combined" || c.Mean == nil || !(*c.Mean > 38e3) || len(d.Combinations) != 0 {
+		t.Fatalf("combination %+v", c)
+	}
+	if _, ok := d.FORM.DesignPoint["loads.combined"]; !ok {
+		t.Errorf("design point %v lacks loads.combined", d.FORM.DesignPoint)
+	}
+	if _, ok := d.FORM.DesignPoint["loads.imposed"]; ok {
+		t.Errorf("design point %v has a load the combination replaced", d.FORM.DesignPoint)
+	}
+	if !strings.Contains(out, "into loads.combined, the maximum of their sum") {
+		t.Errorf("run summary lacks the combination:\n%s", out)
+	}
+}

@@ -93,6 +93,10 @@ func TestBadStudies(t *testing.T) {
 		{"radius too large", edit(6, "shape = \"RHS\"\nthickness = 5\nradius = 30"), []string{"member.section: section: corner radius 30 mm must be zero or positive and at most half the smaller side"}},
 		{"class 4 CHS", strings.Replace(good, "shape = \"rect\"\ndepth = 100\nwidth = 50", "shape = \"CHS\"\ndiameter = 1000\nthickness = 5", 1), []string{"study.toml:5: member.section: the CHS is class 4", "give capacity.model_factor"}},
 		{"class 4 ultimate", strings.Replace(edit(6, "shape = \"RHS\"\nthickness = 1.5"), "[loads]", "[capacity]\nmodel = \"beam-column\"\nlimit = \"ultimate\"\n[loads]", 1), []string{"study.toml:17: capacity.limit: the section is class 4"}},
+		{"repetitions not whole", edit(16, `imposed = { dist = "gumbel", mean = "80 kN", cov = 0.3, repetitions = 2.5 }`), []string{"study.toml:16: loads.imposed: repetitions = 2.5 must be a whole number"}},
+		{"companion on a permanent load", edit(15, `dead = { dist = "normal", mean = "100 kN", cov = 0.1, companion = "50 kN" }`), []string{"study.toml:15: loads.dead: companion: a companion applies to a random variable load"}},
+		{"ferry-borges without repetitions", edit(16, `imposed = { dist = "gumbel", mean = "80 kN", cov = 0.3 }`+"\nwind = { dist = \"gumbel\", mean = \"8 kN\", cov = 0.3, repetitions = 10 }\n[combination]\nrule = \"ferry-borges-castanheta\""),
+			[]string{"study.toml:16: loads.imposed: combination.rule = \"ferry-borges-castanheta\" needs repetitions"}},
 		{"typo key", edit(11, `yeild = 250`), []string{"study.toml:11: material.yeild: unknown key", "did you mean material.yield?", "1 problem in"}}, // the typo, not also a missing yield
 		{"unknown table", good + "[materail]\nx = 1\n", []string{"study.toml:19: materail: unknown key", "did you mean material?"}},
 		{"negative cov", edit(11, `yield = { dist = "lognormal", mean = 250, cov = -0.1 }`), []string{"study.toml:11: material.yield: cov = -0.1 must be between 0 and 1"}},

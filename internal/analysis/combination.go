@@ -17,6 +17,10 @@ func combinationDoc(st *study.Study) (*report.Combination, []report.CombinationC
 	if c == nil {
 		return nil, nil
 	}
+	if q := c.Combined; q != nil {
+		m, sd := q.Dist.Mean(), q.Dist.StdDev()
+		return &report.Combination{Rule: c.Rule, Variable: q.Path, Mean: &m, SD: &sd}, nil
+	}
 	var cases []report.CombinationCase
 	for _, cs := range c.Cases {
 		rc := report.CombinationCase{Case: cs.Name(), Leading: cs.Leading.Path, Companions: []string{}}

@@ -8,8 +8,15 @@ import (
 // Combination says how the study's random variable loads combine, when
 // two or more do.
 type Combination struct {
-	// Rule is the combination rule, "turkstra".
+	// Rule is the combination rule, "turkstra" or
+	// "ferry-borges-castanheta".
 	Rule string `json:"rule"`
+	// Variable, Mean and SD are, for ferry-borges-castanheta, the one
+	// variable that replaces the loads (the maximum over the reference
+	// period of the sum of their pulses), its mean and sd (N).
+	Variable string   `json:"variable,omitempty"`
+	Mean     *float64 `json:"mean,omitempty"`
+	SD       *float64 `json:"sd,omitempty"`
 	// CaseMethod is how each case's beta was found: "form" (the first-
 	// order index of the case alone).
 	CaseMethod string `json:"case_method,omitempty"`
@@ -43,6 +50,10 @@ type CombinationCase struct {
 // governing case and each case's beta.
 func CombinationLine(d *Document) string {
 	c := d.Combination
+	if c != nil && c.Variable != "" && c.Mean != nil && c.SD != nil {
+		return fmt.Sprintf("%s: the variable loads are pulse processes, combined into %s, the maximum of their sum over the reference period (mean %s, sd %s).",
+			c.Rule, c.Variable, kN(*c.Mean), kN(*c.SD))
+	}
 	if c == nil || len(d.Combinations) == 0 {
 		return ""
 	}
@@ -76,6 +87,9 @@ func CombinationRows(d *Document) []KV {
 	c := d.Combination
 	if c == nil {
 		return nil
+	}
+	if c.Variable != "" {
+		return []KV{{"rule", CombinationLine(d)}}
 	}
 	rows := []KV{{"rule", c.Rule + "'s rule: one case per variable load at its reference-period maximum, the others at their companions; the member fails when any case fails, so the reliability index of the result is that of the union of the cases"}}
 	for _, cs := range d.Combinations {

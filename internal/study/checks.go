@@ -61,6 +61,9 @@ func (p *parser) correlation(top *table) {
 					pair[j] = s
 					key := t.key("pair")
 					switch {
+					case p.st.Combination.replaces(p.byPath[s]):
+						p.errorf(key, "%q is combined into %s by combination.rule = %q: correlate %s instead", s, CombinedPath, FerryBorges, CombinedPath)
+						good = false
 					case random[s]:
 					case p.byPath[s] != nil:
 						p.errorf(key, "%q is a fixed quantity, not a random variable: a correlation needs two random variables", s)

@@ -14,7 +14,14 @@ const (
 	// reference period, the others at their companion values, and fails
 	// when any of these cases fails.
 	Turkstra = "turkstra"
+	// FerryBorges combines pulse processes (each load with repetitions)
+	// into the maximum of their sum over the reference period
+	// (sim.PulseMaximum), one random variable.
+	FerryBorges = "ferry-borges-castanheta"
 )
+
+// CombinedPath is the path of the combined load of FerryBorges.
+const CombinedPath = "loads.combined"
 
 // MaxCombined is the largest number of random variable loads a
 // combination takes.
@@ -33,13 +40,18 @@ const MaxCombined = 8
 // draw of its companions (the instants the loads peak are taken as far
 // apart, hence independent).
 type Combination struct {
-	// Rule is Turkstra.
+	// Rule is Turkstra or FerryBorges.
 	Rule string
 	// Loads are the combined loads, the random variable loads of the
 	// study, in the order of the file.
 	Loads []*Quantity
-	// Cases holds one case per load: Cases[i] is led by Loads[i].
+	// Cases holds one case per load (Turkstra): Cases[i] is led by
+	// Loads[i].
 	Cases []CombinationCase
+	// Combined is the maximum over the reference period of the sum of the
+	// loads' pulses (FerryBorges), the random variable CombinedPath that
+	// takes the place of Loads.
+	Combined *Quantity
 }
 
 // CombinationCase is one case of Turkstra's rule.
@@ -57,10 +69,13 @@ type CombinationCase struct {
 func (c *CombinationCase) Name() string { return strings.TrimPrefix(c.Leading.Path, "loads.") }
 
 // owns reports whether q is a companion of the combination (a quantity
-// of some case that is not one of the study's loads).
+// of some case that is not one of the study's loads) or its combined load.
 func (c *Combination) owns(q *Quantity) bool {
 	if c == nil {
 		return false
+	}
+	if q == c.Combined {
+		return true
 	}
 	for _, cs := range c.Cases {
 		for _, x := range cs.Loads {
@@ -70,6 +85,12 @@ func (c *Combination) owns(q *Quantity) bool {
 		}
 	}
 	return false
+}
+
+// replaces reports whether q is a load the combined load of FerryBorges
+// takes the place of.
+func (c *Combination) replaces(q *Quantity) bool {
+	return c != nil && c.Combined != nil && q != nil && c.combined(q)
 }
 
 // combined reports whether q is one of the combined loads.
@@ -200,7 +221,46 @@ func (p *parser) combine() {
 		return
 	}
 	st.Combination = &Combination{Rule: rule, Loads: loads}
+	if rule == FerryBorges {
+		p.ferryBorges(st.Combination)
+		return
+	}
 	p.turkstra(st.Combination)
+}
+
+// ferryBorges combines the loads' pulses into their maximum sum over the
+// reference period.
+func (p *parser) ferryBorges(c *Combination) {
+	var pulses []sim.Dist
+	var reps []int
+	for _, q := range c.Loads {
+		if q.Repetitions == 0 {
+			p.errorf(q.Path, "combination.rule = %q needs repetitions = n in the distribution of every random variable load (its independent pulses in the reference period; the distribution is of one pulse)", FerryBorges)
+			continue
+		}
+		if q.Companion != nil {
+			p.warnf("%s.companion (line %d): not used by rule %s, which combines the pulses themselves", q.Path, p.line(q.Path+".companion"), FerryBorges)
+		}
+		d := q.Dist
+		if q.Written != nil {
+			d = q.Written
+		}
+		pulses, reps = append(pulses, d), append(reps, q.Repetitions)
+	}
+	if len(pulses) != len(c.Loads) {
+		return
+	}
+	if p.byPath[CombinedPath] != nil {
+		p.errorf(CombinedPath, "rule %s names the combined load %s: give this load another name", FerryBorges, CombinedPath)
+		return
+	}
+	d, err := sim.PulseMaximum(pulses, reps)
+	if err != nil {
+		p.errorf("combination.rule", "%v: give repetitions that divide one another (e.g. 1, 10 and 50)", err)
+		return
+	}
+	key := "combination.rule"
+	c.Combined = p.placed(&Quantity{Path: CombinedPath, Line: p.line(key), Dim: Force, Dist: d, DistName: FerryBorges, Params: d.String()})
 }
 
 // turkstra builds the cases of Turkstra's rule.
@@ -307,6 +367,11 @@ func (s *Study) CombinationText() string {
 		return ""
 	}
 	var b strings.Builder
+	if q := c.Combined; q != nil {
+		fmt.Fprintf(&b, "\nLoad combination (%s: pulse processes, distributions in N):\n  %s: %s\n    mean %.1f kN, sd %.1f kN, the maximum over the reference period of the sum of the loads\n",
+			c.Rule, q.Path, q.Dist.String(), q.Dist.Mean()/1e3, q.Dist.StdDev()/1e3)
+		return b.String()
+	}
 	fmt.Fprintf(&b, "\nLoad combination (%s's rule: the member fails when any case fails; %d cases; distributions in N):\n", c.Rule, len(c.Cases))
 	for _, cs := range c.Cases {
 		fmt.Fprintf(&b, "  case %s: %s at its reference-period maximum (mean %.1f kN, sd %.1f kN)\n", cs.Name(), cs.Leading.Path, cs.Leading.Dist.Mean()/1e3, cs.Leading.Dist.StdDev()/1e3)

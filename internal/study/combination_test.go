@@ -242,3 +242,81 @@ rho = 0.5
 		t.Errorf("correlations %+v", st.Corr)
 	}
 }
+
+// TestFerryBorgesStudy: rule ferry-borges-castanheta replaces the
+// variable loads by one variable, loads.combined, the maximum of the sum
+// of their pulses (sim.PulseMaximum, checked there against brute-force
+// pulses). The study's model then fails with the probability of a
+// one-dimensional integral over the normal model factor M (Gauss-Legendre
+// quadrature): pf = ∫ phi_M(m) P(S > m c0 - G) dm. The same integral with
+// the threshold found on the model's own limit state (by bisection on the
+// combined load at each m) agrees to 1e-3 relative.
+func TestFerryBorgesStudy(t *testing.T) {
+	text := strings.Replace(twoLoads, `imposed = { dist = "normal", mean = 400000, sd = 80000, companion = { dist = "normal", mean = 150000, sd = 50000 } }
+snow = { dist = "normal", mean = 350000, sd = 90000, companion = { dist = "normal", mean = 100000, sd = 40000 } }`,
+		`imposed = { dist = "normal", mean = 150000, sd = 50000, repetitions = 5 }
+snow = { dist = "gumbel", mean = 100000, sd = 40000, repetitions = 50 }
+[combination]
+rule = "ferry-borges-castanheta"`, 1)
+	st := parse(t, text)
+	c := st.Combination
+	if c == nil || c.Combined == nil || c.Combined.Path != "loads.combined" || len(c.Cases) != 0 {
+		t.Fatalf("combination %+v", c)
+	}
+	want, err := sim.PulseMaximum([]sim.Dist{find(st, "loads.imposed").Written, find(st, "loads.snow").Written}, []int{5, 50})
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := c.Combined.Dist
+	if math.Abs(s.Quantile(0.999)-want.Quantile(0.999)) > 1e-9 || math.Abs(find(st, "loads.imposed").Written.Mean()-150000) > 1e-6 {
+		t.Errorf("combined %v, want %v", s, want)
+	}
+	md, err := Build(st)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var names []string
+	for _, v := range md.Sim.Vars {
+		names = append(names, v.Name)
+	}
+	if got := strings.Join(names, " "); got != "capacity.model_factor loads.combined" {
+		t.Errorf("variables %s", got)
+	}
+	nom, _ := md.Nominal()
+	c0 := nom.Capacity
+	m := distuv.Normal{Mu: 1, Sigma: 0.1}
+	exact := quad.Fixed(func(x float64) float64 { return m.Prob(x) * s.Survival(x*c0-300000) }, -0.2, 2.2, 2000, nil, 0)
+	// The model at the model factor's quantiles: its margin changes sign
+	// where the combined load reaches m c0 - G.
+	got := quad.Fixed(func(x float64) float64 {
+		lo, hi := 0.0, c0*3 // bisection on the load at which g = 0
+		for range 100 {
+			mid := (lo + hi) / 2
+			if md.Sim.G([]float64{x, mid}, nil) > 0 {
+				lo = mid
+			} else {
+				hi = mid
+			}
+		}
+		return m.Prob(x) * s.Survival(lo)
+	}, -0.2, 2.2, 2000, nil, 0)
+	if math.Abs(got-exact) > 1e-3*exact || exact < 1e-6 {
+		t.Errorf("pf of the model %.6g, exact %.6g", got, exact)
+	}
+	for _, bad := range []struct{ loads, key string }{
+		{`imposed = { dist = "normal", mean = 150000, sd = 50000, repetitions = 5 }
+snow = { dist = "gumbel", mean = 100000, sd = 40000 }`, "loads.snow"},
+		{`imposed = { dist = "normal", mean = 150000, sd = 50000, repetitions = 3 }
+snow = { dist = "gumbel", mean = 100000, sd = 40000, repetitions = 50 }`, "combination.rule"},
+		{`imposed = { dist = "normal", mean = 150000, sd = 50000, repetitions = 5 }
+snow = { dist = "gumbel", mean = 100000, sd = 40000, repetitions = 50 }
+[[correlation]]
+pair = ["loads.snow", "loads.imposed"]
+rho = 0.3`, "correlation[0].pair"},
+	} {
+		_, err := Parse("t.toml", []byte(periodStudy(bad.loads+"\n[combination]\nrule = \"ferry-borges-castanheta\"\n", "")))
+		if e, ok := err.(*Error); !ok || e.Problems[0].Key != bad.key {
+			t.Errorf("%s: %v, want a problem at %s", bad.loads, err, bad.key)
+		}
+	}
+}

@@ -123,8 +123,8 @@ var keyTables = []*TableInfo{
 			Meaning: "The load's independent values (pulses) in the reference period: the distribution is of one pulse, its maximum over the reference period that of the largest of the pulses (F^n)."},
 	}},
 	{Path: "combination", Meaning: "How two or more random variable loads combine: each case has one load at its reference-period maximum, the others at their companions; the member fails when any case fails.", Keys: []KeyInfo{
-		{Name: "rule", Takes: "text", Choices: []string{"turkstra"}, Default: "turkstra",
-			Meaning: "turkstra: one case per variable load leading, the union of the cases (series system)."},
+		{Name: "rule", Takes: "text", Choices: []string{"turkstra", "ferry-borges-castanheta"}, Default: "turkstra",
+			Meaning: "turkstra: one case per variable load leading, the union of the cases (series system); ferry-borges-castanheta: every variable load a pulse process with repetitions (each number dividing the next larger), combined into one variable loads.combined, the maximum of their sum over the reference period."},
 	}},
 	{Path: "correlation", Array: true, Meaning: "A correlation between two random variables (Nataf).", Keys: []KeyInfo{
 		{Name: "pair", Takes: "list of two variable paths", Required: true, Meaning: "The two random variables, by path, e.g. [\"material.yield\", \"material.modulus\"]."},

@@ -129,6 +129,7 @@ func targets(st *Study) map[*Quantity][]int {
 		}
 	}
 	if c != nil {
+		add(c.Combined, fLoads)
 		for i, cs := range c.Cases {
 			for _, q := range cs.Loads {
 				add(q, fCase0+i)
@@ -167,6 +168,9 @@ func Build(st *Study) (*Model, error) {
 	}
 	if c := st.Combination; c != nil {
 		md.cases = len(c.Cases)
+		if c.Combined != nil {
+			isLoad[c.Combined] = true
+		}
 		for _, cs := range c.Cases {
 			for _, q := range cs.Loads {
 				isLoad[q] = true

@@ -110,7 +110,11 @@ func (s *Study) ReserveLoads() []*Quantity {
 		}
 	}
 	if c := s.Combination; c != nil {
-		// The companions of the combination cases are variable loads too.
+		// The companions of the combination cases and the combined load
+		// are variable loads too.
+		if c.Combined != nil {
+			out = append(out, c.Combined)
+		}
 		for _, cs := range c.Cases {
 			for _, q := range cs.Loads {
 				if c.owns(q) {
