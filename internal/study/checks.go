@@ -11,11 +11,6 @@ import (
 	"strutrisk/sim"
 )
 
-func shapeOf(i int) column.Shape {
-	return []column.Shape{column.ShapeI, column.ShapeRHS, column.ShapeCHS, column.ShapeRect, column.ShapeRound, column.ShapeCustom,
-		column.ShapeAngle, column.ShapeChannel, column.ShapeTee}[i]
-}
-
 // methodOf returns the method named s, a choice the key registry (which
 // lists sim.Methods) has already accepted.
 func methodOf(s string) sim.Method {
@@ -222,9 +217,9 @@ func (p *parser) checkSection() {
 	if _, err := sec.Properties(); err != nil {
 		p.errorf("member.section", "%v", strings.TrimPrefix(err.Error(), "column: "))
 	}
-	for _, k := range []string{"thickness", "flange", "web", "depth", "width", "diameter", "radius"} {
-		q := st.Section.Dims[k]
-		if q == nil || !q.Random() {
+	for _, d := range sectionDims {
+		q := st.Section.Dims[d.info.Name]
+		if !d.ranged || q == nil || !q.Random() {
 			continue
 		}
 		// A random dimension must keep the section valid over its range.
@@ -266,51 +261,6 @@ func (s SectionSpec) at(value func(*Quantity) float64) column.Section {
 	}
 	corners(&sec, s.Dims["radius"] != nil, s.Fabrication)
 	return sec
-}
-
-// sectionField returns the field of sec that key sets.
-func sectionField(sec *column.Section, key string) *float64 {
-	switch key {
-	case "depth":
-		return &sec.Depth
-	case "width":
-		return &sec.Width
-	case "flange":
-		return &sec.Flange
-	case "web":
-		return &sec.Web
-	case "root":
-		return &sec.Root
-	case "thickness":
-		return &sec.Thickness
-	case "diameter":
-		return &sec.Diameter
-	case "area":
-		return &sec.Area
-	case "i_major":
-		return &sec.IMajor
-	case "i_minor":
-		return &sec.IMinor
-	case "c_major":
-		return &sec.CMajor
-	case "c_minor":
-		return &sec.CMinor
-	case "thickness_loss":
-		return &sec.ThicknessLoss
-	case "radius":
-		return &sec.Radius
-	case "it":
-		return &sec.It
-	case "iw":
-		return &sec.Iw
-	case "y0":
-		return &sec.ShearCentre[column.Major]
-	case "effective_area":
-		return &sec.EffArea
-	case "z0":
-		return &sec.ShearCentre[column.Minor]
-	}
-	panic("study: unknown section key " + key)
 }
 
 // nominalValue is a quantity's value at nominal: the mean of a random

@@ -30,10 +30,8 @@ func (md *Model) memberInto(v *values, m *column.Member, buf *column.Section) (*
 	sec := &md.sec
 	if md.secRandom {
 		*buf = md.sec
-		for i := range secKeys {
-			if f := sectionPtr(buf, i); f != nil {
-				*f = v[fSec0+i]
-			}
+		for _, i := range md.secVary {
+			*buf.Field(sectionDims[i].dim) = v[fSec0+i]
 		}
 		corners(buf, md.radiusGiven, md.Study.Section.Fabrication)
 		sec = buf

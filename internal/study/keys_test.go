@@ -18,11 +18,6 @@ func TestRegistryMatchesParserTables(t *testing.T) {
 	if strings.Join(got, " ") != strings.Join(ends, " ") {
 		t.Errorf("member.ends choices %v, parser accepts %v", got, ends)
 	}
-	for k := range sectionDims {
-		if !registered("member.section", k) {
-			t.Errorf("section dimension %s is not in the registry", k)
-		}
-	}
 	for _, mt := range measureTargets {
 		if !registered("measurements", mt.key) {
 			t.Errorf("measurements.%s is not in the registry", mt.key)

@@ -3,20 +3,14 @@ package study
 import (
 	"errors"
 	"math"
+	"slices"
 
 	"strutrisk/internal/life"
 	"strutrisk/sim"
 )
 
 // lossField is the field of member.section.thickness_loss.
-var lossField = func() int {
-	for i, k := range secKeys {
-		if k == "thickness_loss" {
-			return fSec0 + i
-		}
-	}
-	panic("study: no thickness_loss field")
-}()
+var lossField = fSec0 + dimIndex("thickness_loss")
 
 // lifeModel evaluates the study's member at a time of its remaining
 // life: the inputs of a path are the study's random inputs but the
@@ -38,6 +32,9 @@ type lifeModel struct {
 func (md *Model) lifeCopy() Model {
 	c := *md
 	c.secRandom, c.propsDynamic = true, true
+	if loss := lossField - fSec0; !slices.Contains(c.secVary, loss) {
+		c.secVary = append(slices.Clip(c.secVary), loss)
+	}
 	c.kDynamic = md.springs[0] || md.springs[1]
 	c.cases, c.only = 0, 0
 	return c

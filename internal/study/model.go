@@ -36,16 +36,12 @@ const (
 	fFu   // stainless: ultimate strength
 	fHAZw // aluminium: width of the heat-affected zone
 	fHAZr // aluminium: its strength ratio
-	fSec0 // section dimensions in the order of secKeys
+	fSec0 // section dimensions in the order of sectionDims (shapes.go)
 )
-
-// secKeys are the section dimensions in field order.
-var secKeys = [...]string{"depth", "width", "flange", "web", "root", "thickness", "diameter", "area", "i_major", "i_minor", "c_major", "c_minor", "thickness_loss",
-	"radius", "it", "iw", "y0", "z0", "effective_area"}
 
 // fCase0 is the first of MaxCombined fields, the sum of the combined
 // loads of each combination case (see combination_model.go).
-const fCase0 = fSec0 + len(secKeys)
+const fCase0 = fSec0 + len(sectionDims)
 
 const nFields = fCase0 + MaxCombined
 
@@ -77,6 +73,9 @@ type Model struct {
 	perAxis    bool // the member differs by axis (see axisMember)
 	equivalent bool // capacity.imperfection = "equivalent"
 	secRandom  bool
+	// secVary are the indices in sectionDims of the random dimensions,
+	// set in each sample's section.
+	secVary []int
 	// radiusGiven: the RHS corner radius is given (else the fabrication's);
 	// classify: the shape has a section class to find; propsDynamic: the
 	// properties change per sample (the section or, for its class, the
@@ -147,8 +146,8 @@ func targets(st *Study) map[*Quantity][]int {
 		}
 		add(st.Alpha[a], fAlpha0+a)
 	}
-	for i, k := range secKeys {
-		add(st.Section.Dims[k], fSec0+i)
+	for i, d := range sectionDims {
+		add(st.Section.Dims[d.info.Name], fSec0+i)
 	}
 	materialTargets(st, add) // materialmodel.go
 	return t
@@ -218,11 +217,12 @@ func Build(st *Study) (*Model, error) {
 	md.equivalent = st.Imperfection == "equivalent"
 	md.perAxis = md.lcrBow || md.lcrEcc || st.Imperfection == "equivalent" || st.Sway != nil
 	md.sec = column.Section{Shape: st.Section.Shape}
-	for i, k := range secKeys {
-		if q := st.Section.Dims[k]; q != nil {
-			*sectionField(&md.sec, k) = md.base[fSec0+i]
+	for i, d := range sectionDims {
+		if q := st.Section.Dims[d.info.Name]; q != nil {
+			*md.sec.Field(d.dim) = md.base[fSec0+i]
 			if q.Random() {
 				md.secRandom = true
+				md.secVary = append(md.secVary, i)
 			}
 		}
 	}
@@ -366,51 +366,6 @@ func (md *Model) member(v *values) (column.Member, column.Section, error) {
 	var buf column.Section
 	sec, err := md.memberInto(v, &m, &buf)
 	return m, *sec, err
-}
-
-// sectionPtr is sectionField by index, without the string switch.
-func sectionPtr(s *column.Section, i int) *float64 {
-	switch i {
-	case 0:
-		return &s.Depth
-	case 1:
-		return &s.Width
-	case 2:
-		return &s.Flange
-	case 3:
-		return &s.Web
-	case 4:
-		return &s.Root
-	case 5:
-		return &s.Thickness
-	case 6:
-		return &s.Diameter
-	case 7:
-		return &s.Area
-	case 8:
-		return &s.IMajor
-	case 9:
-		return &s.IMinor
-	case 10:
-		return &s.CMajor
-	case 11:
-		return &s.CMinor
-	case 12:
-		return &s.ThicknessLoss
-	case 13:
-		return &s.Radius
-	case 14:
-		return &s.It
-	case 15:
-		return &s.Iw
-	case 16:
-		return &s.ShearCentre[column.Major]
-	case 17:
-		return &s.ShearCentre[column.Minor]
-	case 18:
-		return &s.EffArea
-	}
-	return nil
 }
 
 func (md *Model) springK(v *values, p *column.Props, a int) (float64, error) {

@@ -541,37 +541,6 @@ var endNames = map[string]string{
 	"fixed-pinned": "fixed-pinned", "pinned-fixed": "fixed-pinned",
 }
 
-// sectionKeys lists the required and optional keys of each shape.
-var sectionKeys = map[string]struct {
-	shape    int
-	required []string
-	optional []string
-}{
-	"I":       {0, []string{"depth", "width", "flange", "web"}, []string{"root", "thickness_loss"}},
-	"RHS":     {1, []string{"depth", "width", "thickness"}, []string{"radius", "thickness_loss"}},
-	"CHS":     {2, []string{"diameter", "thickness"}, []string{"thickness_loss"}},
-	"rect":    {3, []string{"depth", "width"}, []string{"thickness_loss"}},
-	"round":   {4, []string{"diameter"}, []string{"thickness_loss"}},
-	"custom":  {5, []string{"area", "i_major", "i_minor", "c_major", "c_minor"}, []string{"it", "iw", "y0", "z0", "effective_area"}},
-	"angle":   {6, []string{"depth", "width", "thickness"}, []string{"root", "thickness_loss"}},
-	"channel": {7, []string{"depth", "width", "flange", "web"}, []string{"thickness_loss"}},
-	"tee":     {8, []string{"depth", "width", "flange", "web"}, []string{"thickness_loss"}},
-}
-
-var sectionDims = map[string]qopt{
-	"depth": {dim: Length, need: positive}, "width": {dim: Length, need: positive},
-	"flange": {dim: Length, need: positive}, "web": {dim: Length, need: positive},
-	"root": {dim: Length, need: nonNegative}, "thickness": {dim: Length, need: positive},
-	"diameter": {dim: Length, need: positive}, "area": {dim: Area, need: positive},
-	"i_major": {dim: SecondMoment, need: positive}, "i_minor": {dim: SecondMoment, need: positive},
-	"c_major": {dim: Length, need: positive}, "c_minor": {dim: Length, need: positive},
-	"thickness_loss": {dim: Length, need: nonNegative},
-	"radius":         {dim: Length, need: nonNegative},
-	"it":             {dim: SecondMoment, need: nonNegative}, "iw": {dim: Warping, need: nonNegative},
-	"y0": {dim: Length}, "z0": {dim: Length},
-	"effective_area": {dim: Area, need: positive},
-}
-
 func (p *parser) section(member *table) {
 	t := p.sub(member, "section")
 	if t == nil {
@@ -604,24 +573,28 @@ func (p *parser) section(member *table) {
 		p.markAll(t)
 		return
 	}
-	keys := sectionKeys[canon]
-	spec := SectionSpec{Name: canon, Dims: map[string]*Quantity{}}
-	spec.Shape = shapeOf(keys.shape)
+	shape, err := column.ParseShape(canon)
+	if !p.parseError(t.key("shape"), err) {
+		p.markAll(t)
+		return
+	}
+	keys := shapeDims[shape]
+	spec := SectionSpec{Shape: shape, Name: canon, Dims: map[string]*Quantity{}}
 	for _, k := range keys.required {
 		if _, given := t.m[k]; !given {
 			p.required(t, k, fmt.Sprintf("shape %s needs %s", canon, strings.Join(keys.required, ", ")))
 			continue
 		}
-		if q := p.q(t, k, sectionDims[k]); q != nil {
+		if q := p.q(t, k, sectionDims[dimIndex(k)].opt); q != nil {
 			spec.Dims[k] = q
 		}
 	}
 	for _, k := range keys.optional {
-		if q := p.q(t, k, sectionDims[k]); q != nil {
+		if q := p.q(t, k, sectionDims[dimIndex(k)].opt); q != nil {
 			spec.Dims[k] = q
 		}
 	}
-	if _, given := t.m["thickness_loss"]; given && canon == "custom" {
+	if _, given := t.m["thickness_loss"]; given && shape == column.ShapeCustom {
 		t.used["thickness_loss"] = true
 		p.errorf(t.key("thickness_loss"), "a custom section has no faces to lose thickness from: reduce area, i_major, i_minor instead")
 	}
@@ -631,7 +604,7 @@ func (p *parser) section(member *table) {
 		if t.used[k] || k == "shape" || k == "fabrication" {
 			continue
 		}
-		if _, isDim := sectionDims[k]; isDim {
+		if dimIndex(k) >= 0 {
 			t.used[k] = true
 			p.errorf(t.key(k), "shape %s does not take %s (it takes %s)", canon, k, strings.Join(append(append([]string{}, keys.required...), keys.optional...), ", "))
 		}
@@ -718,7 +691,9 @@ func (p *parser) capacity(top *table) {
 		p.defaultf("capacity.model: not given; %s is used", defaultModel)
 	}
 	if a, ok := p.choice(t, "axis", choicesOf("capacity", "axis")); ok {
-		st.Axis = map[string]column.Axis{"major": column.Major, "minor": column.Minor, "both": column.Both}[a]
+		var err error
+		st.Axis, err = column.ParseAxis(a)
+		p.parseError(t.key("axis"), err)
 	} else if _, given := t.m["axis"]; !given {
 		p.defaultf("capacity.axis: not given; both axes are checked and each sample takes the weaker")
 	}

@@ -53,17 +53,9 @@ func (md *Model) plausibleRange(q *Quantity, n *Nominal) (plausible, bool) {
 	case q == st.Ecc && !st.ModelTraits().Curve:
 		return plausible{lo: 0, hi: L / 5, what: "L/5 = " + lengthText(L/5), hintOnly: true}, true
 	}
-	for k, d := range st.Section.Dims {
-		if d != q {
-			continue
-		}
-		switch k {
-		case "depth", "width", "diameter":
-			return plausible{lo: 10, hi: 5e3, what: "a section's " + k}, true
-		case "flange", "web", "thickness":
-			return plausible{lo: 0.5, hi: 200, what: "a plate thickness"}, true
-		case "thickness_loss":
-			return plausible{lo: 0, hi: 50, what: "a thickness loss"}, true
+	for _, d := range sectionDims {
+		if st.Section.Dims[d.info.Name] == q && q != nil {
+			return d.sane, d.sane.what != ""
 		}
 	}
 	return plausible{}, false
