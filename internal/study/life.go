@@ -40,6 +40,9 @@ const (
 	DefaultLifePaths = 20_000
 	maxLifeYears     = 500
 	maxLifePaths     = 10_000_000
+	// maxLifeRate (mm) is the first-year loss beyond which a rate is
+	// warned of.
+	maxLifeRate = 1.0
 )
 
 // life reads [life].
@@ -141,6 +144,10 @@ func (p *parser) lifeBuild() {
 	p.build(ls.Exponent, lifeExponentOpt)
 	if b := ls.Exponent; b != nil && !b.Random() && (b.Value > 1.5) {
 		p.warnf("life.corrosion_exponent (line %d): b = %g: the loss grows faster than linearly with time; ISO 9224 exponents are below 1 (check the value)", b.Line, b.Value)
+	}
+	if r := meanOf(ls.Rate, 0); r > maxLifeRate {
+		p.warnf("life.corrosion_rate (line %d): %g mm from every face in the first year is more than %g mm, past the most corrosive atmospheres of ISO 9223 (common practice); a bare number is read in the study's length unit (%s): did you mean mm?",
+			ls.Rate.Line, r, maxLifeRate, p.sys.unit[Length])
 	}
 	for _, q := range p.st.Loads {
 		if !q.Random() || isPermanentPath(p.st, q.Path) {

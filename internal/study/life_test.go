@@ -228,3 +228,48 @@ wind = { dist = "gumbel", mean = 20000, cov = 0.2, repetitions = 100 }
 		t.Errorf("exact %q sampled %q: want imposed exact, wind sampled", res.Exact, res.Sampled)
 	}
 }
+
+// TestLifeRateWarning: a first-year loss written as a bare 0.06 in kN-m
+// reads 60 mm and is warned of; "0.06 mm" is not.
+func TestLifeRateWarning(t *testing.T) {
+	kNm := "units = \"kN-m\"\n" + strings.NewReplacer("length = 3000", "length = 3.0", "diameter = 168.3", "diameter = \"168.3 mm\"", "thickness = 8", "thickness = \"8 mm\"",
+		"modulus = 205000", "modulus = \"205 GPa\"", "mean = 355,", "mean = \"355 MPa\",", "dead = 300000", "dead = 300", "mean = 250000", "mean = 250").Replace(lifeBase)
+	st := parse(t, kNm+"[life]\nyears = 10\ncorrosion_rate = 0.06\n")
+	if !hasWarning(st, "life.corrosion_rate", "60 mm", "did you mean mm?") {
+		t.Errorf("no warning of a bare rate read in m: %q", st.Warnings)
+	}
+	st = parse(t, kNm+"[life]\nyears = 10\ncorrosion_rate = \"0.06 mm\"\n")
+	if hasWarning(st, "life.corrosion_rate") {
+		t.Errorf("a warning on 0.06 mm: %q", st.Warnings)
+	}
+}
+
+// TestLifeFerryBorges: with rule ferry-borges-castanheta the combined
+// maximum over the reference period is no input of a path; the annual
+// maxima of the pulses replace it (F^(pulses a year)).
+func TestLifeFerryBorges(t *testing.T) {
+	loads := `imposed = { dist = "gumbel", mean = 150000, sd = 50000, repetitions = 100 }
+snow = { dist = "gumbel", mean = 100000, sd = 40000, repetitions = 50 }
+`
+	st := parse(t, periodStudy(loads, "50 years")+"[combination]\nrule = \"ferry-borges-castanheta\"\n[life]\nyears = 5\ncorrosion_rate = \"0.1 mm\"\n")
+	md, err := Build(st)
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := md.LifeProblem(1)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, v := range p.Vars {
+		if strings.HasPrefix(v.Name, "loads.") {
+			t.Errorf("path input %s: a path draws no variable load", v.Name)
+		}
+	}
+	if len(p.Annual) != 2 {
+		t.Fatalf("annual loads %v, want imposed and snow", p.Annual)
+	}
+	pulse, _ := sim.NewGumbel(150000, 50000)
+	if got, want := p.Annual[0].Dist.CDF(200000), math.Pow(pulse.CDF(200000), 2); math.Abs(got-want) > 1e-12 {
+		t.Errorf("imposed annual maxima CDF %g, want F^2 = %g", got, want)
+	}
+}

@@ -52,18 +52,16 @@ func (md *Model) LifeProblem(workers int) (life.Problem, error) {
 		return life.Problem{}, errors.New("study: no [life] table")
 	}
 	lm := &lifeModel{md: md.lifeCopy(), rate: -1, exp: -1, expV: 1}
-	annual := map[string]sim.Dist{}
-	for _, a := range ls.Annual {
-		annual[a.Path] = a.Dist
-	}
 	var vars, ann []sim.Variable
+	for _, a := range ls.Annual {
+		ann = append(ann, sim.Variable{Name: a.Path, Dist: a.Dist, Unit: InternalUnit(Force)})
+	}
 	for i, v := range md.Sim.Vars {
-		if d, ok := annual[v.Name]; ok && md.binds[i].add {
-			ann = append(ann, sim.Variable{Name: v.Name, Dist: d, Unit: v.Unit})
+		if md.binds[i].add && !isPermanentPath(st, v.Name) {
+			// A variable load, a companion of a combination case or the
+			// combined maximum of the loads: their annual maxima replace
+			// them.
 			continue
-		}
-		if st.Combination.owns(md.quantity(i)) {
-			continue // a companion of a combination case: not used
 		}
 		lm.keep = append(lm.keep, i)
 		vars = append(vars, v)
