@@ -72,6 +72,8 @@ func (l *Loaded) BaseDocument() *report.Document {
 			CriticalLoad:        n.Critical,
 			Mode:                n.Mode.String(),
 			CapacityMode:        n.CapacityMode.String(),
+			LoadFactor:          n.LoadFactor,
+			Bending:             bendingDoc(n), // bending.go
 		},
 		CodeCheck: l.CodeCheck,
 		Warnings:  append([]string{}, st.Warnings...),
@@ -199,6 +201,7 @@ func (l *Loaded) CheckText() string {
 		fmt.Fprintf(&b, " (effect factor %.3g included)", n.EffectFactor)
 	}
 	fmt.Fprintf(&b, "; utilisation %.3f\n", n.Utilisation)
+	b.WriteString(bendingText(st, n)) // bending.go
 	if st.HasTarget {
 		fmt.Fprintf(&b, "Target reliability index %.2f: `strutrisk run` estimates whether it is met\n", st.Target)
 	}

@@ -180,7 +180,7 @@ func baseTarget(st *study.Study) *report.TargetCheck {
 	if y := st.ReferenceYears; y > 0 {
 		t.ReferenceYears = &y
 	}
-	for _, q := range st.ReserveLoads() {
+	for _, q := range st.ReserveActions() {
 		t.ReserveLoads = append(t.ReserveLoads, q.Path)
 	}
 	return t
@@ -261,11 +261,14 @@ func (r *Result) targetSummary(d *report.Document) string {
 		s += "                     (target from " + t.Source + ")\n"
 	}
 	if d.ReserveFactor != nil {
-		on := "variable loads"
+		on := "the variable loads"
 		if t.ReserveOn == "all" {
 			on = "all loads"
 		}
-		s += fmt.Sprintf("  reserve factor     %.3f on the %s (FORM beta %.2f there)\n", *d.ReserveFactor, on, *t.ReserveFORMBeta)
+		if r.l.Study.Bending != nil {
+			on += " and the bending" // bending.go: ReserveActions
+		}
+		s += fmt.Sprintf("  reserve factor     %.3f on %s (FORM beta %.2f there)\n", *d.ReserveFactor, on, *t.ReserveFORMBeta)
 		if c := t.Confirmation; c != nil && c.Method != string(sim.FORMMethod) {
 			how := "confirmed by"
 			if !c.Confirmed {
@@ -294,7 +297,7 @@ func targetCheckText(st *study.Study) string {
 		return ""
 	}
 	var names []string
-	for _, q := range st.ReserveLoads() {
+	for _, q := range st.ReserveActions() {
 		names = append(names, q.Path)
 	}
 	s := fmt.Sprintf("  target from %s\n", st.TargetSource)

@@ -21,8 +21,13 @@ func (r *Result) Summary(dir string, files []string) string {
 		fmt.Fprintf(&w, "  %-18s %s\n", kv.Key, kv.Value)
 	}
 	n := r.l.Nominal
-	fmt.Fprintf(&w, "  nominal capacity   %.1f kN (%s, %s), demand at mean loads %.1f kN, utilisation %.2f\n",
-		n.Capacity/1e3, governingText(n), n.Governs, n.Demand/1e3, n.Utilisation)
+	if n.LoadFactor > 0 {
+		fmt.Fprintf(&w, "  nominal load factor %.3f on every action (%s, %s), axial demand at mean loads %.1f kN\n",
+			n.LoadFactor, governingText(n), n.Governs, n.Demand/1e3)
+	} else {
+		fmt.Fprintf(&w, "  nominal capacity   %.1f kN (%s, %s), demand at mean loads %.1f kN, utilisation %.2f\n",
+			n.Capacity/1e3, governingText(n), n.Governs, n.Demand/1e3, n.Utilisation)
+	}
 	if res.Method == sim.FORMMethod {
 		// A first-order approximation: no sampling, so no interval.
 		fmt.Fprintf(&w, "  failure prob. pf   %s   (first-order approximation: no sampling interval)\n", pfText(res.Pf))

@@ -102,6 +102,23 @@ type Nominal struct {
 	CriticalLoad float64 `json:"critical_load"`
 	Mode         string  `json:"mode"`
 	CapacityMode string  `json:"capacity_mode"`
+	// LoadFactor is, for a study with [bending], the factor on every
+	// action at which the member reaches its limit at nominal values
+	// (model factor included; the margin is the factor minus one), and
+	// Capacity the axial load at that factor. Absent for an axial study.
+	LoadFactor float64 `json:"load_factor,omitempty"`
+	// Bending is the nominal bending of a study with [bending].
+	Bending *NominalBending `json:"bending,omitempty"`
+}
+
+// NominalBending is the bending at nominal values, effect factor
+// included: the axis (major or minor), the end moments (N mm; the same
+// sign at both ends is single curvature) and the lateral load (N/mm).
+type NominalBending struct {
+	Axis    string  `json:"axis"`
+	Top     float64 `json:"top"`
+	Bottom  float64 `json:"bottom"`
+	Lateral float64 `json:"lateral"`
 }
 
 // Summary describes the sampled distribution of a quantity.

@@ -118,7 +118,7 @@ func (md *Model) CodeCheck() (*CodeCheck, error) {
 	if c.Resistance > 0 {
 		c.Utilisation = c.DesignLoad / c.Resistance
 	}
-	c.AxialOnly = st.Ecc != nil || st.Sway != nil || st.ModelTraits().Bending
+	c.AxialOnly = st.Ecc != nil || st.Sway != nil || st.ModelTraits().Bending || st.Bending != nil
 	c.Notes = md.checkNotes()
 	return c, nil
 }

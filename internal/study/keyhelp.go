@@ -24,10 +24,7 @@ func WriteKeyHelp(w io.Writer) error {
 		}
 	}
 	b.WriteString("\nUnits accepted with a number (inside the program: N, mm, MPa):\n")
-	for d := Length; d <= Warping; d++ {
-		if d == Moment {
-			continue // moments are read only as springs (per radian)
-		}
+	for d := Length; d <= LineLoad; d++ {
 		fmt.Fprintf(&b, "  %-24s %s\n", strings.TrimPrefix(strings.TrimPrefix(d.String(), "an "), "a "), unitsOf(d))
 	}
 	b.WriteString("Unit systems (units): N-mm, kN-m, kip-in; a bare number takes the system's unit.\n")

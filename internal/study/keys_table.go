@@ -59,6 +59,16 @@ var keyTables = []*TableInfo{
 		{Name: "sway", Takes: "quantity (angle: \"1/200\" or radians)", Default: "none",
 			Meaning: "The initial out-of-plumb angle phi of a member whose ends sway (ends fixed-free or K above 1), EN 1993-1-1 5.3.2(3); give phi itself (phi0 alpha_h alpha_m)."},
 	}},
+	{Path: "bending", Meaning: "End moments and a lateral load beside the axial loads; with them the limit state is the load factor on all actions (margin = factor - 1).", Keys: []KeyInfo{
+		{Name: "top", Takes: "quantity (moment), or { load = \"name\", ratio = quantity (length) }", Default: "none",
+			Meaning: "The end moment at the top; the same sign at both ends is single curvature. Tied to a load, it is ratio times that load in each sample."},
+		{Name: "bottom", Takes: "quantity (moment), or { load = \"name\", ratio = quantity (length) }", Default: "none",
+			Meaning: "The end moment at the bottom (see top)."},
+		{Name: "axis", Takes: "text", Choices: []string{"major", "minor"}, Default: "major (round and CHS sections must say)",
+			Meaning: "The axis the moments and the lateral load bend the member about."},
+		{Name: "lateral", Takes: "quantity (force per length, e.g. \"1.5 kN/m\")", Default: "none",
+			Meaning: "A uniform lateral load along the member (wind on a facade post); positive bends it to the side of positive end moments."},
+	}},
 	{Path: "capacity", Meaning: "The capacity model.", Keys: []KeyInfo{
 		{Name: "model", Takes: "text", Choices: modelNames(), Default: defaultModel.String(),
 			Meaning: "How the capacity is computed."},

@@ -11,7 +11,7 @@ import "strutrisk/sim"
 // point of the other; like the study's, its limit state does not allocate.
 func (md *Model) Loaded(factor, added float64) *sim.Model {
 	scaled := map[*Quantity]bool{}
-	for _, q := range md.Study.ReserveLoads() {
+	for _, q := range md.Study.ReserveActions() {
 		scaled[q] = true
 	}
 	c := *md
@@ -19,9 +19,24 @@ func (md *Model) Loaded(factor, added float64) *sim.Model {
 	for _, q := range md.Study.Loads {
 		if !q.Random() && scaled[q] {
 			c.base[fLoads] += (factor - 1) * q.Value
+			if b := md.Study.Bending; b != nil { // moments tied to the load
+				if b.Top.Load == q {
+					c.base[fTieTop] *= factor
+				}
+				if b.Bottom.Load == q {
+					c.base[fTieBot] *= factor
+				}
+			}
 		}
 	}
 	c.base[fLoads] += added
+	if b := md.Study.Bending; b != nil { // fixed moments and lateral load of their own
+		for f, q := range map[int]*Quantity{fBendTop: b.Top.Moment, fBendBot: b.Bottom.Moment, fBendLat: b.Lateral} {
+			if q != nil && !q.Random() && scaled[q] {
+				c.base[f] *= factor
+			}
+		}
+	}
 	scale := make([]float64, len(md.binds))
 	for i := range md.binds {
 		scale[i] = 1

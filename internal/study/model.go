@@ -43,7 +43,7 @@ const (
 // loads of each combination case (see combination_model.go).
 const fCase0 = fSec0 + len(sectionDims)
 
-const nFields = fCase0 + MaxCombined
+const nFields = fBendEnd // bending_model.go
 
 // values holds one evaluation's inputs.
 type values [nFields]float64
@@ -150,6 +150,7 @@ func targets(st *Study) map[*Quantity][]int {
 		add(st.Section.Dims[d.info.Name], fSec0+i)
 	}
 	materialTargets(st, add) // materialmodel.go
+	bendTargets(st, add)     // bending_model.go
 	return t
 }
 
@@ -286,8 +287,8 @@ func Build(st *Study) (*Model, error) {
 // largest spread that is correlated with nothing: g = h - c x_j with c the
 // effect factor.
 func (md *Model) linear() {
-	if md.cases > 0 {
-		return // the smallest margin over the cases is not linear in a load
+	if md.cases > 0 || md.Study.Bending != nil {
+		return // the smallest margin over the cases, a load factor: not linear in a load
 	}
 	corr := map[string]bool{}
 	for _, c := range md.Study.Corr {
@@ -342,6 +343,9 @@ func (md *Model) g(x, out []float64) float64 {
 // set of inputs. A member the mechanics cannot evaluate (a sample outside
 // the physical range) has no capacity.
 func (md *Model) eval(v *values) (capacity, demand float64) {
+	if md.Study.Bending != nil {
+		return md.evalFactor(v) // bending_model.go
+	}
 	if md.mat.timber {
 		return md.timberEval(v)
 	}

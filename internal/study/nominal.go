@@ -44,6 +44,13 @@ type Nominal struct {
 	// ModeSlenderness its relative slenderness sqrt(A fy / N_cr).
 	CapacityMode    column.Mode
 	ModeSlenderness float64
+	// LoadFactor is, for a study with [bending], the factor on all actions
+	// at which the member reaches its limit (model factor included); then
+	// Capacity is LoadFactor times Demand, Utilisation 1/LoadFactor and
+	// Bending the nominal end moments and lateral load (effect factor
+	// included). 0 and nil for an axial study.
+	LoadFactor float64
+	Bending    *column.Bending
 }
 
 // Nominal evaluates the model at nominal values.
@@ -93,6 +100,11 @@ func (md *Model) Nominal() (*Nominal, error) {
 	}
 	if n.Capacity > 0 {
 		n.Utilisation = n.Demand / n.Capacity
+	}
+	if st.Bending != nil {
+		if err := md.nominalFactor(n, &v); err != nil { // bending_model.go
+			return nil, err
+		}
 	}
 	return n, nil
 }

@@ -356,6 +356,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.material(top)
 	p.imperfection(top)
 	p.loads(top)
+	p.bending(top) // bending.go
 	p.capacity(top)
 	p.target(top)
 	p.combinationTable(top) // combination.go
@@ -420,6 +421,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 		p.tableCurves()        // curvechoice.go
 		p.checkImperfections() // imperfections.go
 		p.twistingNotes()
+		p.checkBending() // bending.go
 	}
 	return st
 }

@@ -26,6 +26,7 @@ var magnitude = map[Dim]span{
 	Area:          {1e-12, 1e16},
 	SecondMoment:  {1e-24, 1e32},
 	Warping:       {1e-36, 1e48},
+	LineLoad:      {1e-9, 1e9},
 }
 
 // rangeOf returns the range of dimension d; a dimension added without a
@@ -72,9 +73,6 @@ func (p *parser) inRange(path string, pv pval, o qopt) bool {
 func rangeHelp() string {
 	s := ""
 	for d := Dimensionless; ; d++ {
-		if d == Moment {
-			continue
-		}
 		if _, ok := magnitude[d]; !ok {
 			break
 		}

@@ -46,7 +46,7 @@ func (md *Model) Reserve(ctx context.Context, target float64, fs *sim.FORMSettin
 	if r.On == "" {
 		r.On = "variable"
 	}
-	for _, q := range st.ReserveLoads() {
+	for _, q := range st.ReserveActions() {
 		r.Loads = append(r.Loads, q.Path)
 	}
 	if len(r.Loads) == 0 {

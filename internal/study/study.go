@@ -86,6 +86,9 @@ type Study struct {
 	// Combination is how two or more random variable loads combine (see
 	// combination.go); nil with fewer.
 	Combination *Combination
+	// Bending is [bending] (bending.go), nil when the member carries axial
+	// loads alone; with it the limit state is the load factor.
+	Bending *BendingSpec
 
 	// CodeCheck holds the partial factors of the deterministic code check
 	// ([code_check], see codecheck.go).

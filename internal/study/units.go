@@ -23,6 +23,7 @@ const (
 	Area         // mm^2
 	SecondMoment // mm^4
 	Warping      // warping constant, mm^6
+	LineLoad     // force per length, N/mm (a lateral load)
 )
 
 // String names the dimension for messages.
@@ -46,6 +47,8 @@ func (d Dim) String() string {
 		return "a second moment of area"
 	case Warping:
 		return "a warping constant"
+	case LineLoad:
+		return "a force per length"
 	}
 	return "dim(?)"
 }
@@ -92,6 +95,10 @@ var units = map[string]unitDef{
 
 	"mm6": {Warping, 1}, "cm6": {Warping, 1e6}, "m6": {Warping, 1e18},
 	"in6": {Warping, inch * inch * inch * inch * inch * inch},
+
+	"N/mm": {LineLoad, 1}, "N/m": {LineLoad, 1e-3}, "kN/m": {LineLoad, 1},
+	"lbf/in": {LineLoad, lbf / inch}, "lbf/ft": {LineLoad, lbf / foot},
+	"kip/in": {LineLoad, kip / inch}, "kip/ft": {LineLoad, kip / foot},
 }
 
 func init() {
@@ -121,6 +128,7 @@ var unitOrder = []string{
 	"mm2", "cm2", "m2", "in2",
 	"mm4", "cm4", "m4", "in4",
 	"mm6", "cm6", "m6", "in6",
+	"N/mm", "N/m", "kN/m", "lbf/in", "lbf/ft", "kip/in", "kip/ft",
 }
 
 // unitsOf returns the accepted units of dimension d for messages.
@@ -137,8 +145,8 @@ func unitsOf(d Dim) string {
 // System is a unit system of bare numbers in a study.
 type System struct {
 	Name   string
-	factor [Warping + 1]float64
-	unit   [Warping + 1]string
+	factor [LineLoad + 1]float64
+	unit   [LineLoad + 1]string
 }
 
 func newSystem(name string, names ...string) System {
@@ -154,9 +162,9 @@ func newSystem(name string, names ...string) System {
 
 // The unit systems of the "units" key.
 var systems = map[string]System{
-	"N-mm":   newSystem("N-mm", "mm", "N", "MPa", "N*mm", "N*mm/rad", "mm2", "mm4", "mm6"),
-	"kN-m":   newSystem("kN-m", "m", "kN", "kPa", "kN*m", "kN*m/rad", "m2", "m4", "m6"),
-	"kip-in": newSystem("kip-in", "in", "kip", "ksi", "kip*in", "kip*in/rad", "in2", "in4", "in6"),
+	"N-mm":   newSystem("N-mm", "mm", "N", "MPa", "N*mm", "N*mm/rad", "mm2", "mm4", "mm6", "N/mm"),
+	"kN-m":   newSystem("kN-m", "m", "kN", "kPa", "kN*m", "kN*m/rad", "m2", "m4", "m6", "kN/m"),
+	"kip-in": newSystem("kip-in", "in", "kip", "ksi", "kip*in", "kip*in/rad", "in2", "in4", "in6", "kip/in"),
 }
 
 // Unit returns the unit of bare numbers of dimension d ("" if none).
