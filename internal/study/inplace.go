@@ -149,11 +149,3 @@ func (md *Model) twistInPlace(m *column.Member, v *values) {
 		m.Bow = md.twistingBow(m, v)
 	}
 }
-
-// propsInto sets *p to the properties of sec at the yield strength fy
-// (sectionProps).
-func (md *Model) propsInto(sec *column.Section, fy float64, p *column.Props) error {
-	q, err := md.sectionProps(sec, fy)
-	*p = q
-	return err
-}

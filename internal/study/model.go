@@ -65,8 +65,9 @@ type Model struct {
 
 	base       values
 	binds      []binding
-	feeds      feeds // binds flattened (feed.go)
-	relBow     bool  // bow and eccentricity are fractions of the length
+	feeds      feeds     // binds flattened (feed.go)
+	flat       flatClass // yields that leave a fixed section's class below 4 (classrange.go)
+	relBow     bool      // bow and eccentricity are fractions of the length
 	relEcc     bool
 	lcrBow     bool // bow and eccentricity are fractions of the buckling length
 	lcrEcc     bool
@@ -242,6 +243,7 @@ func Build(st *Study) (*Model, error) {
 			}
 		}
 		md.props = p // the gross I of p is all the static springs read
+		md.flatRange()
 	}
 	for a := range 2 {
 		md.springs[a] = st.Ends[a].How == "springs"
