@@ -27,7 +27,7 @@ type Combined struct {
 	// -1 when no case has one.
 	Governing int
 	// SeriesPf and SeriesBeta are the first-order failure probability of
-	// the union of the cases (sim.SeriesPf on their design points), NaN
+	// the union of the cases (sim.SeriesPf on all their design points), NaN
 	// when a case's FORM failed or did not converge.
 	SeriesPf, SeriesBeta float64
 }
@@ -65,8 +65,12 @@ func (md *Model) CaseIndices(ctx context.Context, fs *sim.FORMSettings) *Combine
 				out.Governing = i
 			}
 			if f.Converged && len(f.Points) > 0 {
-				betas = append(betas, f.Points[0].Beta)
-				alphas = append(alphas, f.Points[0].Alpha)
+				// Every design point of the case: a bow that acts by its
+				// magnitude gives a case two mirrored points.
+				for _, pt := range f.Points {
+					betas = append(betas, pt.Beta)
+					alphas = append(alphas, pt.Alpha)
+				}
 			} else {
 				whole = false
 			}

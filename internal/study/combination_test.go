@@ -320,3 +320,37 @@ rho = 0.3`, "correlation[0].pair"},
 		}
 	}
 }
+
+// TestCaseIndicesMirroredPoints: a bow that acts by its magnitude gives
+// each case two mirrored design points; the series system of the cases
+// takes every point, so its pf is at least each case's (a union is never
+// less likely than one of its parts, Ditlevsen and Madsen 1996, ch. 14,
+// from memory).
+func TestCaseIndicesMirroredPoints(t *testing.T) {
+	text := strings.Replace(twoLoads, `bow = "L/1000"`, `bow = { dist = "normal", mean = 0, sd = "L/500" }`, 1)
+	st := parse(t, text)
+	md, err := Build(st)
+	if err != nil {
+		t.Fatal(err)
+	}
+	cb := md.CaseIndices(context.Background(), nil)
+	if cb == nil || len(cb.Cases) != 2 {
+		t.Fatalf("cases %+v", cb)
+	}
+	mirrored := false
+	for _, c := range cb.Cases {
+		if c.FORM == nil || !c.FORM.Converged {
+			t.Fatalf("case %s: %v", c.Case, c.Err)
+		}
+		mirrored = mirrored || len(c.FORM.Points) > 1
+		if cb.SeriesPf < c.FORM.Pf*(1-1e-9) {
+			t.Errorf("series pf %g below case %s's pf %g", cb.SeriesPf, c.Case, c.FORM.Pf)
+		}
+	}
+	if !mirrored {
+		t.Error("no case found two design points: the check does not test what it says")
+	}
+	if g := cb.Cases[cb.Governing].FORM.Beta; g > cb.Cases[1-cb.Governing].FORM.Beta {
+		t.Errorf("governing case beta %g is not the lowest", g)
+	}
+}
