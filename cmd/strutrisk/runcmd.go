@@ -11,6 +11,7 @@ import (
 
 	"strutrisk/internal/analysis"
 	"strutrisk/internal/report"
+	"strutrisk/internal/study"
 	"strutrisk/sim"
 )
 
@@ -79,8 +80,8 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 			return exitInput
 		}
 	}
-	if o.set["samples"] && (o.samples < 1 || o.samples > 1e10) {
-		fmt.Fprintf(stderr, "strutrisk run: --samples %d must be between 1 and 1e10\n", o.samples)
+	if o.set["samples"] && (o.samples < 1 || o.samples > study.MaxSamples) {
+		fmt.Fprintf(stderr, "strutrisk run: --samples %d must be between 1 and %s\n", o.samples, study.MaxSamplesText)
 		return exitInput
 	}
 	if o.set["workers"] && (o.workers < 1 || o.workers > maxWorkers()) {

@@ -1,6 +1,8 @@
 package study
 
 import (
+	"strconv"
+
 	"strutrisk/internal/column"
 	"strutrisk/sim"
 )
@@ -155,7 +157,7 @@ var keyTables = []*TableInfo{
 	{Path: "analysis", Meaning: "The estimator and its budget.", Keys: []KeyInfo{
 		{Name: "method", Takes: "text", Choices: sim.MethodNames(),
 			Default: "auto", Meaning: "The estimator of the probability of failure."},
-		{Name: "samples", Takes: "whole number (1 to 1e10)", Default: "1000000", Meaning: "At most this many evaluations."},
+		{Name: "samples", Takes: "whole number (1 to " + MaxSamplesText + ")", Default: strconv.Itoa(sim.DefaultSamples), Meaning: "At most this many evaluations."},
 		{Name: "target_cov", Takes: "number (0 to 1)", Default: "0.05", Meaning: "Sampling stops once the coefficient of variation of pf is this."},
 		{Name: "seed", Takes: "whole number", Default: "1", Meaning: "The seed of the random numbers: same seed, same numbers."},
 	}},

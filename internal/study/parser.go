@@ -7,11 +7,13 @@ import (
 	"path/filepath"
 	"slices"
 	"sort"
+	"strconv"
 	"strings"
 
 	"github.com/BurntSushi/toml"
 
 	"strutrisk/internal/column"
+	"strutrisk/sim"
 )
 
 // parser walks a decoded study file, collecting problems as it goes.
@@ -811,8 +813,12 @@ func (p *parser) target(top *table) {
 	p.unknown(t)
 }
 
-// MaxSamples bounds analysis.samples.
+// MaxSamples bounds analysis.samples and run --samples; MaxSamplesText
+// writes it as people read it ("1e10").
 const MaxSamples = 1e10
+
+// MaxSamplesText is MaxSamples as the key table and messages write it.
+var MaxSamplesText = strings.Replace(strconv.FormatFloat(MaxSamples, 'g', -1, 64), "e+", "e", 1)
 
 func (p *parser) analysis(top *table) {
 	t := p.sub(top, "analysis")
@@ -830,8 +836,8 @@ func (p *parser) analysis(top *table) {
 	if n, ok := p.count(t, "samples", MaxSamples); ok {
 		a.Samples = int64(n)
 	} else if _, given := t.m["samples"]; !given {
-		a.Samples = 1_000_000
-		p.defaultf("analysis.samples: not given; at most 1000000 evaluations")
+		a.Samples = sim.DefaultSamples
+		p.defaultf("analysis.samples: not given; at most %d evaluations", a.Samples)
 	}
 	if c, ok := p.number(t, "target_cov"); ok {
 		if !(c > 0 && c < 1) {
