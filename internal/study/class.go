@@ -16,17 +16,15 @@ var errShell = errors.New("study: the circular hollow section is class 4 (d/t be
 // 4: its effective section's centroid shift is not modelled.
 var errOpen = errors.New("study: the open section is class 4: the shift of its effective centroid (EN 1993-1-1 6.3.3) is not modelled")
 
-// openShape reports an angle, a channel or a tee.
+// openShape reports an angle, a channel or a tee (shapeInfo.open).
 func openShape(s column.Shape) bool {
-	return s == column.ShapeAngle || s == column.ShapeChannel || s == column.ShapeTee
+	return shapeDims[s].open
 }
 
 // classifyOptions decides how the model finds the section's class.
 func (md *Model) classifyOptions(st *Study) {
-	switch st.Section.Shape {
-	case column.ShapeI, column.ShapeRHS, column.ShapeCHS, column.ShapeAngle, column.ShapeChannel, column.ShapeTee:
-		md.classify = true
-	case column.ShapeCustom: // its stated effective area (class 4)
+	md.classify = shapeDims[st.Section.Shape].classified
+	if st.Section.Shape == column.ShapeCustom { // its stated effective area (class 4)
 		md.classify = st.Section.Dims["effective_area"] != nil
 	}
 	yieldRandom := st.Yield != nil && st.Yield.Random()

@@ -81,22 +81,35 @@ var sectionDims = [...]sectionDim{
 		qopt{dim: Length, need: nonNegative}, column.DimRadius, true, plausible{}},
 }
 
+// shapeInfo is what the study needs to know of a section shape.
+type shapeInfo struct {
+	// required and optional are the dimension keys the shape takes.
+	required, optional []string
+	// note is what the key table adds to the shape's keys.
+	note string
+	// classified: each sample finds its section class (EN 1993-1-1 Table
+	// 5.2); a custom section is classified only when it gives
+	// effective_area.
+	classified bool
+	// open: an angle, channel or tee. The shift of its effective centroid
+	// is not modelled (class 4 with a reduced part is refused) and the
+	// fibre section of the ultimate beam-column does not cover it.
+	open bool
+}
+
 // shapeDims is the one table of section shapes, indexed by column.Shape:
 // the dimensions each takes, required and optional (every shape but
-// custom also takes thickness_loss), and what the key table adds.
-var shapeDims = [...]struct {
-	required, optional []string
-	note               string
-}{
-	column.ShapeI:       {[]string{"depth", "width", "flange", "web"}, []string{"root", "thickness_loss"}, ""},
-	column.ShapeRHS:     {[]string{"depth", "width", "thickness"}, []string{"radius", "thickness_loss"}, ""},
-	column.ShapeCHS:     {[]string{"diameter", "thickness"}, []string{"thickness_loss"}, ""},
-	column.ShapeRect:    {[]string{"depth", "width"}, []string{"thickness_loss"}, ""},
-	column.ShapeRound:   {[]string{"diameter"}, []string{"thickness_loss"}, ""},
-	column.ShapeCustom:  {[]string{"area", "i_major", "i_minor", "c_major", "c_minor"}, []string{"it", "iw", "y0", "z0", "effective_area"}, ""},
-	column.ShapeAngle:   {[]string{"depth", "width", "thickness"}, []string{"root", "thickness_loss"}, "the two legs"},
-	column.ShapeChannel: {[]string{"depth", "width", "flange", "web"}, []string{"thickness_loss"}, ""},
-	column.ShapeTee:     {[]string{"depth", "width", "flange", "web"}, []string{"thickness_loss"}, ""},
+// custom also takes thickness_loss), and how the study treats it.
+var shapeDims = [...]shapeInfo{
+	column.ShapeI:       {required: []string{"depth", "width", "flange", "web"}, optional: []string{"root", "thickness_loss"}, classified: true},
+	column.ShapeRHS:     {required: []string{"depth", "width", "thickness"}, optional: []string{"radius", "thickness_loss"}, classified: true},
+	column.ShapeCHS:     {required: []string{"diameter", "thickness"}, optional: []string{"thickness_loss"}, classified: true},
+	column.ShapeRect:    {required: []string{"depth", "width"}, optional: []string{"thickness_loss"}},
+	column.ShapeRound:   {required: []string{"diameter"}, optional: []string{"thickness_loss"}},
+	column.ShapeCustom:  {required: []string{"area", "i_major", "i_minor", "c_major", "c_minor"}, optional: []string{"it", "iw", "y0", "z0", "effective_area"}},
+	column.ShapeAngle:   {required: []string{"depth", "width", "thickness"}, optional: []string{"root", "thickness_loss"}, note: "the two legs", classified: true, open: true},
+	column.ShapeChannel: {required: []string{"depth", "width", "flange", "web"}, optional: []string{"thickness_loss"}, classified: true, open: true},
+	column.ShapeTee:     {required: []string{"depth", "width", "flange", "web"}, optional: []string{"thickness_loss"}, classified: true, open: true},
 }
 
 // shapeNames returns the study-file names of the shapes, in the order of

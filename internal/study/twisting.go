@@ -48,14 +48,11 @@ func (md *Model) nominalTwisting(n *Nominal, m *column.Member) error {
 // constant is listed under the defaults.
 func (p *parser) twistingNotes() {
 	st := p.st
-	switch st.Section.Shape {
-	case column.ShapeAngle, column.ShapeChannel, column.ShapeTee:
-		if st.ModelTraits().Ultimate {
-			key := "capacity.limit"
-			p.errorf(key, "the ultimate beam-column has no fibre section for a%s %s (its bending and twisting interact): use limit = \"first-yield\" or model = \"curve\"",
-				map[bool]string{true: "n", false: ""}[st.Section.Name == "angle"], st.Section.Name)
-			return
-		}
+	if openShape(st.Section.Shape) && st.ModelTraits().Ultimate {
+		key := "capacity.limit"
+		p.errorf(key, "the ultimate beam-column has no fibre section for a%s %s (its bending and twisting interact): use limit = \"first-yield\" or model = \"curve\"",
+			map[bool]string{true: "n", false: ""}[st.Section.Name == "angle"], st.Section.Name)
+		return
 	}
 	md, err := Build(st)
 	if err != nil {
