@@ -27,6 +27,7 @@ type Result struct {
 	warnings []string
 	target   *targetRun      // reserve factor and its confirmation (reserve.go)
 	combined *study.Combined // the load combination cases (combination.go)
+	life     *lifeRun        // the remaining life under corrosion (life.go)
 	// Incomplete, when not empty, says why the run is not complete.
 	Incomplete string
 	cases      *cases // sweep and variants (sweep.go)
@@ -62,6 +63,10 @@ func Run(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Result
 	}
 	obs.Stage("main run (" + string(s.Method) + ")")
 	r, err := analyse(ctx, l, s, obs)
+	if err == nil && !r.Estimate.Incomplete && l.Study.Life != nil {
+		obs.Stage("remaining life")
+		r.runLife(ctx, s.Workers) // life.go
+	}
 	if err == nil && !r.Estimate.Incomplete {
 		// The main result stays the study itself; sweep and variants
 		// follow with the same settings (sweep.go).
@@ -166,6 +171,7 @@ func (r *Result) Document() *report.Document {
 	d.Trusted = &trusted
 	r.fillTarget(d) // verdict (absent when undecided) and reserve
 	fillCombination(d, r.combined)
+	r.life.fill(d)
 	for _, o := range res.Outputs {
 		switch o.Name {
 		case "capacity":

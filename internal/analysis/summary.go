@@ -59,6 +59,13 @@ func (r *Result) Summary(dir string, files []string) string {
 		}
 		fmt.Fprintf(&w, "  %-18s %s\n", label, l)
 	}
+	for i, l := range report.WrapText(report.PlainGreek(report.LifeVerdict(d)), 76) {
+		label := ""
+		if i == 0 {
+			label = "remaining life"
+		}
+		fmt.Fprintf(&w, "  %-18s %s\n", label, l)
+	}
 	if res.Method == sim.FORMMethod {
 		fmt.Fprintf(&w, "  method             %s, %d evaluations\n", res.Method, res.Evaluations)
 	} else {
