@@ -6,8 +6,16 @@ import (
 	"math"
 )
 
-// auto chooses an estimator. FORM runs first (its design point and
-// importance factors are reported whatever follows). Then:
+// autoCrudeLimit is the largest number of samples auto spends on plain
+// Monte Carlo; a target that needs more goes to importance sampling.
+const autoCrudeLimit = 5e6
+
+// auto chooses an estimator. For a Model marked Expensive with at most
+// surrogateMaxDim (10) inputs it learns a surrogate (the surrogate
+// method: FORM, then active-learning Kriging) and keeps its result when
+// that is trusted. Otherwise, and for every other model, FORM runs first
+// (its design point and importance factors are reported whatever
+// follows). Then:
 //   - conditional quasi-Monte Carlo when the model states a usable linear
 //     input, since it is exact in that input and smooth in the others;
 //   - plain Monte Carlo when FORM's pf is large enough for the budget to
@@ -18,11 +26,41 @@ import (
 //     flags its own result.
 //
 // Result.Reason says which was used and why.
-// autoCrudeLimit is the largest number of samples auto spends on plain
-// Monte Carlo; a target that needs more goes to importance sampling.
-const autoCrudeLimit = 5e6
-
 func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, error) {
+	if m.Expensive && t.Dim() <= surrogateMaxDim {
+		res, spent, note, err := autoSurrogate(ctx, m, t, s)
+		if err != nil || res != nil {
+			return res, err
+		}
+		res, err = autoSampling(ctx, m, t, s, note)
+		if res != nil {
+			res.Evaluations += spent
+		}
+		return res, err
+	}
+	return autoSampling(ctx, m, t, s, "")
+}
+
+// autoSurrogate runs the surrogate for an expensive model. It returns the
+// result when it can be trusted (or the run was interrupted), else the
+// evaluations it spent and a note that says why auto goes on to the other
+// estimators.
+func autoSurrogate(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, int64, string, error) {
+	why := fmt.Sprintf("each evaluation of the model is expensive (Model.Expensive) and it has %d inputs, at most %d", t.Dim(), surrogateMaxDim)
+	res, err := surrogate(ctx, m, t, s)
+	switch {
+	case err != nil:
+		return nil, 0, fmt.Sprintf("%s, but the surrogate failed (%v)", why, err), nil
+	case res.Incomplete || res.Status.Trusted():
+		res.Reason = why + ": an active-learning Kriging surrogate of the limit state (AK-MCS/AK-IS) classified the candidates"
+		return res, 0, "", nil
+	}
+	return nil, res.Evaluations, fmt.Sprintf("%s, but the surrogate's result was not trusted (%s)", why, res.StatusReason), nil
+}
+
+// autoSampling is auto without the surrogate; note, when not empty, says
+// why the surrogate was not used and starts Result.Reason.
+func autoSampling(ctx context.Context, m *Model, t *Transform, s *Settings, note string) (*Result, error) {
 	target := s.TargetCoV
 	if target == 0 {
 		target = autoTargetCoV
@@ -37,6 +75,9 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 	}
 	finish := func(res *Result, reason string) *Result {
 		res.Reason = reason
+		if note != "" {
+			res.Reason = note + "; " + reason
+		}
 		if f != nil {
 			res.FORM = f
 			res.Evaluations += formEvals

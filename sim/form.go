@@ -24,6 +24,11 @@ type FORMSettings struct {
 	// g): give it a larger step, 1e-3 to 1e-2. Whatever the start, FORM
 	// enlarges the step itself when a line search fails to noise.
 	Step float64
+	// Screen, when set, searches for a further design point from a
+	// restart only when one is likely there (formLikely): one evaluation
+	// of g at the start instead of a whole search, for a limit state that
+	// is expensive to evaluate.
+	Screen bool
 }
 
 // FORM runs a first-order reliability analysis of m: the improved HL-RF
@@ -126,11 +131,16 @@ func formRunContext(ctx context.Context, sp *uSpace, s *FORMSettings) *FORMResul
 		kinkPoint *formSearch
 		tries     int
 		failed    int
+		screened  int
 	)
 	maxTries := 2 + set.MaxPoints*12
 	for len(queue) > 0 && len(found) < set.MaxPoints && tries < maxTries && !f.stopped() {
 		start := queue[0]
 		queue = queue[1:]
+		if set.Screen && len(found) > 0 && g0 > 0 && !f.likely(start, found, g0) {
+			screened++
+			continue
+		}
 		tries++
 		r := f.search(start)
 		if first == nil {
@@ -216,6 +226,9 @@ func formRunContext(ctx context.Context, sp *uSpace, s *FORMSettings) *FORMResul
 	}
 	if failed > 0 {
 		res.Status += fmt.Sprintf("; %d restart(s) did not converge", failed)
+	}
+	if screened > 0 {
+		res.Status += fmt.Sprintf("; %d restart(s) not searched, no further design point being likely there", screened)
 	}
 	return res
 }

@@ -8,7 +8,7 @@ import (
 // methodList is the one list of the estimators Run knows, in the order
 // users see them. Flags, help texts, the study parser and the docs read it
 // through Methods; add a method here and in Run.
-var methodList = []Method{Auto, MonteCarlo, LatinHypercube, FORMMethod, Importance, Subset, ConditionalQMC}
+var methodList = []Method{Auto, MonteCarlo, LatinHypercube, FORMMethod, Importance, Subset, ConditionalQMC, Surrogate}
 
 // Methods returns the estimators Run knows, auto first. The slice is a
 // copy.

@@ -76,4 +76,8 @@ type Model struct {
 	Outputs []string
 	// Linear, when not nil, states that G is linear in one input.
 	Linear *Linear
+	// Expensive states that one evaluation of G is costly (a numerical
+	// analysis, a millisecond or more): auto then learns a surrogate of G
+	// when the inputs are few enough (see Surrogate).
+	Expensive bool
 }

@@ -14,6 +14,9 @@ const (
 	// ConditionalQMC integrates the Model's Linear input exactly and draws
 	// the others by randomised quasi-Monte Carlo.
 	ConditionalQMC Method = "conditional-qmc"
+	// Surrogate learns a Kriging model of the limit state where its sign
+	// is uncertain and classifies a population of candidates with it.
+	Surrogate Method = "surrogate"
 )
 
 // Result is the outcome of Run.

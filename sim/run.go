@@ -59,6 +59,7 @@ type Settings struct {
 	Importance     *ImportanceSettings
 	Subset         *SubsetSettings
 	ConditionalQMC *ConditionalQMCSettings
+	Surrogate      *SurrogateSettings
 }
 
 // Defaults of Settings.
@@ -146,6 +147,8 @@ func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
 		res, err = importanceChecked(ctx, m, t, &cfg)
 	case Subset:
 		res, err = subsetSimulation(ctx, m, t, &cfg)
+	case Surrogate:
+		res, err = surrogate(ctx, m, t, &cfg)
 	case Auto:
 		res, err = auto(ctx, m, t, &cfg)
 	default:

@@ -29,6 +29,33 @@ type ConditionalQMCSettings struct {
 	Replicates int
 }
 
+// SurrogateSettings control the surrogate method (active-learning
+// Kriging), whether it runs as the surrogate method or under auto. The
+// zero value means the defaults. Its budget of model evaluations, FORM's
+// included, is Settings.Samples.
+type SurrogateSettings struct {
+	// Population is the number of candidates drawn at a time; default
+	// 10000.
+	Population int
+	// MaxPopulation bounds the candidates; default 200000.
+	MaxPopulation int
+}
+
+// surrogate returns the surrogate settings with defaults.
+func (s *Settings) surrogate() SurrogateSettings {
+	var c SurrogateSettings
+	if s.Surrogate != nil {
+		c = *s.Surrogate
+	}
+	if c.Population <= 0 {
+		c.Population = DefaultSurrogatePopulation
+	}
+	if c.MaxPopulation <= 0 {
+		c.MaxPopulation = DefaultSurrogateMaxPopulation
+	}
+	return c
+}
+
 // DefaultISMinFailures is the default of ImportanceSettings.MinFailures.
 const DefaultISMinFailures = 10
 
@@ -68,6 +95,8 @@ func (s *Settings) checkMethods() error {
 		return fmt.Errorf("sim: ConditionalQMC.Replicates must be at least 2, got %d", s.replicates())
 	case s.Importance != nil && s.Importance.MinFailures < 0:
 		return fmt.Errorf("sim: Importance.MinFailures must be zero (default) or positive, got %d", s.Importance.MinFailures)
+	case s.Surrogate != nil && (s.Surrogate.Population < 0 || s.Surrogate.MaxPopulation < 0):
+		return fmt.Errorf("sim: Surrogate.Population and MaxPopulation must be zero (default) or positive, got %d and %d", s.Surrogate.Population, s.Surrogate.MaxPopulation)
 	case s.Subset != nil && s.Subset.LevelSize != 0 && s.Subset.LevelSize < 100:
 		return fmt.Errorf("sim: Subset.LevelSize must be zero (default) or at least 100, got %d", s.Subset.LevelSize)
 	}

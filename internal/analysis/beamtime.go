@@ -20,7 +20,7 @@ func BeamTimeNote(l *Loaded, s *sim.Settings) string {
 		return ""
 	}
 	switch s.Method {
-	case sim.FORMMethod, sim.Subset, sim.Importance:
+	case sim.FORMMethod, sim.Subset, sim.Importance, sim.Surrogate:
 		return "" // these need few evaluations whatever the budget
 	}
 	per := evalTime(l.Model.Sim, 3)
@@ -37,7 +37,7 @@ func BeamTimeNote(l *Loaded, s *sim.Settings) string {
 		return ""
 	}
 	return fmt.Sprintf("%s: one evaluation takes about %s here, so %d samples on %d workers could take up to %s (less if the target cov is reached first); "+
-		"for a quicker answer use --method form or --method subset, or lower analysis.samples",
+		"for a quicker answer use --method surrogate, --method form or --method subset, or lower analysis.samples",
 		l.Study.Model, per.Round(10*time.Microsecond), n, workers, total.Round(time.Second))
 }
 

@@ -4,12 +4,23 @@ import "strutrisk/sim"
 
 // FORMSettings returns the FORM settings that suit the study's capacity
 // model: the finite-difference step of its Traits.FORMStep (the ultimate
-// beam-column's capacity is noisy), else nil (the defaults of sim.FORM).
+// beam-column's capacity is noisy) and, as each evaluation is then a
+// numerical analysis, further design points searched only where one is
+// likely (sim.FORMSettings.Screen: a column's resistance against its load
+// has one failure region, and each needless search cost 50 to 100
+// analyses); else nil (the defaults of sim.FORM).
 func (md *Model) FORMSettings() *sim.FORMSettings {
 	if step := md.Study.ModelTraits().FORMStep; step > 0 {
-		return &sim.FORMSettings{Step: step}
+		return &sim.FORMSettings{Step: step, Screen: true}
 	}
 	return nil
+}
+
+// expensive reports whether each evaluation of the study's capacity is a
+// numerical analysis (Traits.Expensive), which sim.Model.Expensive tells
+// the estimators.
+func (md *Model) expensive() bool {
+	return md.Study.ModelTraits().Expensive
 }
 
 // SimSettings returns s with the settings that belong to the study's

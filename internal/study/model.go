@@ -280,6 +280,7 @@ func Build(st *Study) (*Model, error) {
 	}
 	md.Sim = m
 	md.feeds = feedsOf(md.binds, -1)
+	m.Expensive = md.expensive() // formsettings.go
 	md.linear()
 	md.setupMaterial() // materialmodel.go
 	return md, nil
