@@ -5,6 +5,7 @@ import (
 	"math"
 	"strings"
 
+	"strutrisk/internal/column"
 	"strutrisk/sim"
 )
 
@@ -220,12 +221,34 @@ func (p *parser) combine() {
 		p.errorf("loads", "%d random variable loads combine; at most %d can: sum some of them into one load", len(loads), MaxCombined)
 		return
 	}
+	if !p.combinable(loads) {
+		return
+	}
 	st.Combination = &Combination{Rule: rule, Loads: loads}
 	if rule == FerryBorges {
 		p.ferryBorges(st.Combination)
 		return
 	}
 	p.turkstra(st.Combination)
+}
+
+// combinable refuses a combination of loads the model cannot take yet:
+// timber, whose k_mod follows load-duration classes that Turkstra's cases
+// would have to be crossed with, and [bending], whose load factor the
+// largest case sum of axial loads does not decide.
+func (p *parser) combinable(loads []*Quantity) bool {
+	st := p.st
+	var what string
+	switch {
+	case st.Material.Kind == column.Timber:
+		what = "timber (its k_mod follows the load-duration classes, not yet crossed with the combination cases)"
+	case st.Bending != nil:
+		what = "[bending] (the load factor of a case is not decided by its axial sum alone, and the cases are not yet evaluated one by one there)"
+	default:
+		return true
+	}
+	p.errorf(loads[1].Path, "%d random variable loads combine, which is not supported with %s: give one random variable load (their sum, conservative) or make the others fixed values", len(loads), what)
+	return false
 }
 
 // ferryBorges combines the loads' pulses into their maximum sum over the

@@ -354,3 +354,21 @@ func TestCaseIndicesMirroredPoints(t *testing.T) {
 		t.Errorf("governing case beta %g is not the lowest", g)
 	}
 }
+
+// TestCombinationRefused: the combination of two random variable loads is
+// refused, naming the second load, where the model cannot take it yet:
+// timber (k_mod by load-duration class) and [bending] (a load factor).
+func TestCombinationRefused(t *testing.T) {
+	for _, c := range []struct{ name, text, key string }{
+		{"timber", strings.Replace(timberPost, `imposed = { dist = "fixed", value = 60000, duration = "medium" }`,
+			`imposed = { dist = "gumbel", mean = 60000, cov = 0.3, duration = "medium" }`+"\n"+`snow = { dist = "gumbel", mean = 20000, cov = 0.3, duration = "short" }`, 1), "loads.snow"},
+		{"bending", strings.Replace(bendingStudy, `dead = { dist = "normal", mean = "6.5 kN", cov = 0.08 }`,
+			`dead = { dist = "normal", mean = "6.5 kN", cov = 0.08 }`+"\n"+`imposed = { dist = "gumbel", mean = "2 kN", cov = 0.3 }`+"\n"+`snow = { dist = "gumbel", mean = "1 kN", cov = 0.3 }`, 1), "loads.snow"},
+	} {
+		_, err := Parse("t.toml", []byte(c.text))
+		e, ok := err.(*Error)
+		if !ok || len(e.Problems) != 1 || e.Problems[0].Key != c.key || !strings.Contains(e.Problems[0].Msg, "not supported with") {
+			t.Errorf("%s: %v, want one problem at %s", c.name, err, c.key)
+		}
+	}
+}
