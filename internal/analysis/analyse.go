@@ -312,6 +312,7 @@ func (r *Result) Bundle() *report.Bundle {
 		}
 	}
 	b.Slenderness = r.slendernessChart()
+	r.bendingBundle(b) // bending.go
 	r.cases.fill(b)
 	r.addTrace(b)
 	b.Diagnostics = []report.KV{

@@ -3,6 +3,7 @@ package analysis
 import (
 	"fmt"
 
+	"strutrisk/internal/column"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 )
@@ -33,4 +34,44 @@ func bendingDoc(n *study.Nominal) *report.NominalBending {
 	}
 	b := n.Bending
 	return &report.NominalBending{Axis: b.Axis.String(), Top: b.Top, Bottom: b.Bottom, Lateral: b.Lateral}
+}
+
+// outputUnit is the unit of an output column of samples.csv: N for the
+// capacity, demand and margin of an axial study; for a study with
+// [bending] the load factor, its demand 1 and margin are dimensionless,
+// the axial load is in N and the moment in N*mm.
+func outputUnit(st *study.Study, name string) string {
+	if st.Bending == nil {
+		return "N"
+	}
+	switch name {
+	case "axial":
+		return "N"
+	case "moment":
+		return "N*mm"
+	}
+	return "-"
+}
+
+// bendingBundle gives the report of a study with [bending] its pictures:
+// the interaction chart in place of the slenderness picture (whose
+// capacities are axial) and dimensionless margins.
+func (r *Result) bendingBundle(b *report.Bundle) {
+	l := r.l
+	if l.Study.Bending == nil {
+		return
+	}
+	b.Slenderness = nil
+	b.TornadoOutput = "margin g = load factor - 1 (-)"
+	b.SobolOutput = "margin g = load factor - 1"
+	n, m, err := l.Model.InteractionCurve(48)
+	if err != nil {
+		return
+	}
+	c := &report.InteractionChart{N: n, M: m, Axis: l.Study.Bending.Axis.String(), Model: l.Study.Model.String()}
+	if nb := l.Nominal.Bending; nb != nil {
+		c.NominalN = l.Nominal.Demand
+		c.NominalM, _ = column.SecondOrderMoment(0, 1, l.Nominal.Member.Length, nb.Bottom, nb.Top, nb.Lateral)
+	}
+	b.Interaction = c
 }

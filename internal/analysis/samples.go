@@ -28,7 +28,7 @@ func (r *Result) samplesInUnits() *sim.Samples {
 	for j, name := range kept.Names {
 		u, ok := units[name]
 		if !ok && j >= nv {
-			u = "N" // capacity, demand and the margin g
+			u = outputUnit(r.l.Study, name) // bending.go
 		}
 		if u == "" {
 			u = "-"

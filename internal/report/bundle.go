@@ -49,6 +49,10 @@ type Bundle struct {
 	Spearman []KV
 	// Slenderness is the capacity-against-relative-slenderness picture.
 	Slenderness *SlendernessChart
+	// Interaction is the axial force against bending moment picture of a
+	// study with bending (plot_interaction.go); with it the capacity,
+	// demand and margin are load factors (dimensionless).
+	Interaction *InteractionChart
 	// Series are curves of beta against a swept parameter, one per variant
 	// (a single unnamed series for a plain sweep); SweepLabel names the axis.
 	Series     []Series

@@ -19,6 +19,7 @@ func figures(b *Bundle) (figs []*figure, skipped []error) {
 		{"sobol", func() *figure { return sobolFigure(b) }},
 		{"sobol-capacity", func() *figure { return sobolCapacityFigure(b) }},
 		{"slenderness", func() *figure { return slendernessFigure(b) }},
+		{"interaction", func() *figure { return interactionFigure(b) }},
 		{"sweep", func() *figure { return sweepFigure(b) }},
 		{"variants", func() *figure { return variantsFigure(b) }},
 		{"life", func() *figure { return lifeFigure(b) }},

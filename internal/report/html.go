@@ -107,6 +107,7 @@ a{color:inherit;text-decoration:none}
 {{range .Check}}<tr><td>{{.Quantity}}</td><td class="n">{{.Major}}</td><td class="n">{{.Minor}}</td><td>{{.Unit}}</td></tr>
 {{end}}</table>{{end}}
 {{with .Picture "slenderness"}}{{template "fig" .}}{{end}}
+{{with .Picture "interaction"}}{{template "fig" .}}{{end}}
 </section>
 
 <section id="sensitivity">

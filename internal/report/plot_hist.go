@@ -76,6 +76,9 @@ func capacityDemandFigure(b *Bundle) *figure {
 	if b.Capacity == nil && b.Demand == nil {
 		return nil
 	}
+	if b.Interaction != nil {
+		return loadFactorFigure(b) // plot_interaction.go
+	}
 	p := newPlot("Capacity and demand", "axial force (kN)", "probability density (1/kN)")
 	type part struct {
 		s    *sim.OutputStats
@@ -130,7 +133,11 @@ func marginFigure(b *Bundle) *figure {
 	if b.Margin == nil {
 		return nil
 	}
-	bins := densityBins(b.Margin.Hist, 1e-3)
+	scale, unit := 1e-3, "kN"
+	if b.Interaction != nil { // a load factor minus one
+		scale, unit = 1, "–"
+	}
+	bins := densityBins(b.Margin.Hist, scale)
 	if bins == nil {
 		return nil
 	}
@@ -147,6 +154,9 @@ func marginFigure(b *Bundle) *figure {
 		}
 	}
 	p := newPlot("Safety margin g = capacity − demand", "margin g (kN)", "probability density (1/kN)")
+	if b.Interaction != nil {
+		p = newPlot("Safety margin g = load factor − 1", "margin g (–)", "probability density (–)")
+	}
 	lo, hi := binsRange(bins)
 	top := 0.0
 	for _, bin := range bins {
@@ -184,5 +194,9 @@ func marginFigure(b *Bundle) *figure {
 		}
 	}
 	p.Y.Min = 0
-	return &figure{Name: "margin", Caption: "Sampled safety margin g = capacity − demand in kN (probability density in 1/kN); failure is g < 0 (shaded). Values outside the histogram range are counted but not drawn.", W: 16 * vg.Centimeter, H: 9 * vg.Centimeter, Plots: []*plot.Plot{p}}
+	caption := "Sampled safety margin g = capacity − demand in kN (probability density in 1/kN); failure is g < 0 (shaded). Values outside the histogram range are counted but not drawn."
+	if unit != "kN" {
+		caption = "Sampled safety margin g = load factor − 1, the factor on every action at which the member reaches its limit, less one (dimensionless); failure is g < 0 (shaded). Values outside the histogram range are counted but not drawn."
+	}
+	return &figure{Name: "margin", Caption: caption, W: 16 * vg.Centimeter, H: 9 * vg.Centimeter, Plots: []*plot.Plot{p}}
 }

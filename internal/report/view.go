@@ -175,6 +175,13 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 			{"effective length factor K", fixed(n.K, 3)},
 			{"axis", n.Axis},
 		}
+		if bn := n.Bending; n.LoadFactor > 0 && bn != nil {
+			v.Nominal = append([]KV{
+				{"nominal load factor", fixed(n.LoadFactor, 3) + " on every action (margin " + fixed(n.LoadFactor-1, 3) + ")"},
+				{"bending (" + bn.Axis + " axis)", "top " + sig(bn.Top*1e-6, 4) + " kN m, bottom " + sig(bn.Bottom*1e-6, 4) + " kN m (the same sign: single curvature), lateral " + sig(bn.Lateral, 4) + " kN/m"},
+			}, v.Nominal...)
+			v.Nominal[2].Key = "axial load at the load factor"
+		}
 	}
 
 	scale, out := tornadoScale(b.TornadoOutput)

@@ -66,11 +66,17 @@ const maxLoadFactor = 1e6
 // loadFactor returns the load factor of one set of inputs (without the
 // model factor) about axis (the bending axis or Both).
 func (md *Model) loadFactor(v *values, axis column.Axis) (column.Factor, error) {
+	b, n := md.bendingOf(v)
+	return md.factorOf(v, axis, n, &b)
+}
+
+// factorOf is loadFactor under the axial load n and the bending b.
+func (md *Model) factorOf(v *values, axis column.Axis, n float64, bp *column.Bending) (column.Factor, error) {
+	b := *bp
 	m, sec, err := md.member(v)
 	if err != nil {
 		return column.Factor{}, err
 	}
-	b, n := md.bendingOf(v)
 	mb := m
 	if md.perAxis {
 		md.axisMember(&mb, v, b.Axis)
@@ -166,4 +172,88 @@ func (md *Model) nominalFactor(n *Nominal, v *values) error {
 	n.Axis, n.Governs, n.CapacityMode = f.Axis, f.Governs, f.Mode
 	n.ModeSlenderness = n.RelSlenderness[f.Axis]
 	return nil
+}
+
+// Outputs of a study with [bending] besides capacity (the load factor)
+// and demand (1): the axial load (N) and the largest first-order moment
+// (N mm) of the sample, effect factor included.
+const (
+	OutAxial  = 2
+	OutMoment = 3
+)
+
+// outputNames are the outputs of the study's sim.Model.
+func outputNames(st *Study) []string {
+	if st.Bending != nil {
+		return []string{"capacity", "demand", "axial", "moment"}
+	}
+	return []string{"capacity", "demand"}
+}
+
+// bendOutputs writes the axial load and the largest first-order moment of
+// the inputs v into out (a study with [bending] only).
+func (md *Model) bendOutputs(v *values, out []float64) {
+	if md.Study.Bending == nil || len(out) <= OutMoment {
+		return
+	}
+	b, n := md.bendingOf(v)
+	out[OutAxial] = n
+	out[OutMoment], _ = column.SecondOrderMoment(0, 1, v[fLength], b.Bottom, b.Top, b.Lateral)
+}
+
+// InteractionCurve returns the limit of the member at nominal values in
+// the plane of the axial load N (N) and the largest first-order moment M
+// (N mm): k + 1 points from pure compression to pure bending, each the
+// load factor times actions in a fixed proportion, the moment diagram of
+// the nominal bending (a uniform moment when it has none) scaled so that
+// its largest moment is M. The model factor is included.
+func (md *Model) InteractionCurve(k int) (n, m []float64, err error) {
+	if md.Study.Bending == nil || k < 1 {
+		return nil, nil, nil
+	}
+	v := md.nominalValues()
+	b, _ := md.bendingOf(&v)
+	l := v[fLength]
+	m0, _ := column.SecondOrderMoment(0, 1, l, b.Bottom, b.Top, b.Lateral)
+	if !(m0 > 0) {
+		b, m0 = column.Bending{Axis: b.Axis, Top: 1, Bottom: 1}, 1
+	}
+	mem, _, err := md.member(&v)
+	if err != nil {
+		return nil, nil, err
+	}
+	p := &mem.Props
+	// The rays are spread evenly between the two ends of the curve: a
+	// first pass finds them on the squash load and the elastic moment.
+	ref := [2]float64{p.EffectiveArea() * mem.Fy, p.EffectiveModulus(b.Axis) * mem.Fy}
+	at := func(phi float64) (float64, float64, error) {
+		c, s := math.Cos(phi), math.Sin(phi)
+		if phi == math.Pi/2 {
+			c = 0
+		}
+		sc := s * ref[1] / m0
+		bi := column.Bending{Axis: b.Axis, Top: b.Top * sc, Bottom: b.Bottom * sc, Lateral: b.Lateral * sc}
+		f, err := md.factorOf(&v, md.Study.Axis, c*ref[0], &bi)
+		lf := v[fModel] * math.Min(f.Factor, maxLoadFactor)
+		return lf * c * ref[0], lf * s * ref[1], err
+	}
+	n0, _, err := at(0)
+	if err != nil {
+		return nil, nil, err
+	}
+	_, mm0, err := at(math.Pi / 2)
+	if err != nil {
+		return nil, nil, err
+	}
+	if n0 > 0 && mm0 > 0 {
+		ref = [2]float64{n0, mm0}
+	}
+	for i := 0; i <= k; i++ {
+		ni, mi, err := at(math.Pi / 2 * float64(i) / float64(k))
+		if err != nil {
+			return nil, nil, err
+		}
+		n, m = append(n, ni), append(m, mi)
+	}
+	return n, m, nil
 }

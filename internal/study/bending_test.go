@@ -148,3 +148,40 @@ func TestBendingEvaluationAllocs(t *testing.T) {
 		}
 	}
 }
+
+// TestInteractionCurve checks the ends of the limit curve: pure
+// compression is the axial capacity at nominal values (the study without
+// bending), and every point has load factor 1 by construction (the point
+// times 1.0 on the ray reproduces itself: checked at the nominal ray).
+func TestInteractionCurve(t *testing.T) {
+	st := parse(t, bendingStudy)
+	md, err := Build(st)
+	if err != nil {
+		t.Fatal(err)
+	}
+	n, m, err := md.InteractionCurve(8)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(n) != 9 || m[0] != 0 || n[8] != 0 {
+		t.Fatalf("curve %v %v: want 9 points from pure compression (M = 0) to pure bending (N = 0)", n, m)
+	}
+	axial := parse(t, strings.Replace(bendingStudy, "[bending]\ntop = { load = \"dead\", ratio = \"60 mm\" }\nbottom = \"-0.2 kN*m\"\nlateral = { dist = \"gumbel\", mean = \"1300 N/m\", cov = 0.3 }\n", "", 1))
+	ma, err := Build(axial)
+	if err != nil {
+		t.Fatal(err)
+	}
+	na, err := ma.Nominal()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !near(n[0], na.Capacity, 1e-9) {
+		t.Errorf("pure compression end %g N, the axial study's nominal capacity %g N", n[0], na.Capacity)
+	}
+	for i := 1; i < len(n); i++ {
+		if !(m[i] > m[i-1]) {
+			t.Errorf("the moment should grow along the curve: %v", m)
+			break
+		}
+	}
+}

@@ -54,6 +54,7 @@ func (md *Model) Loaded(factor, added float64) *sim.Model {
 		if out != nil {
 			out[OutCapacity] = capacity
 			out[OutDemand] = demand
+			cp.bendOutputs(&v, out)
 		}
 		return capacity - demand
 	}

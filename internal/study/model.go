@@ -276,7 +276,7 @@ func Build(st *Study) (*Model, error) {
 		Vars:    vars,
 		Corr:    st.Corr,
 		G:       md.g,
-		Outputs: []string{"capacity", "demand"},
+		Outputs: outputNames(st), // bending_model.go
 	}
 	md.Sim = m
 	md.feeds = feedsOf(md.binds, -1)
@@ -338,6 +338,7 @@ func (md *Model) g(x, out []float64) float64 {
 	if out != nil {
 		out[OutCapacity] = capacity
 		out[OutDemand] = demand
+		md.bendOutputs(&v, out) // bending_model.go
 	}
 	return capacity - demand
 }
