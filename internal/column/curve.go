@@ -10,8 +10,17 @@ import (
 // most severe. They are written here once; everything else asks
 // CurveAlpha.
 var (
-	curveNames  = [...]string{"a0", "a", "b", "c", "d"}
-	curveAlphas = [...]float64{0.13, 0.21, 0.34, 0.49, 0.76}
+	curveNames  = [...]string{curveA0: "a0", curveA: "a", curveB: "b", curveC: "c", curveD: "d"}
+	curveAlphas = [...]float64{curveA0: 0.13, curveA: 0.21, curveB: 0.34, curveC: 0.49, curveD: 0.76}
+)
+
+// The buckling curves by index into curveNames and curveAlphas.
+const (
+	curveA0 = iota
+	curveA
+	curveB
+	curveC
+	curveD
 )
 
 // CurveAlpha returns the imperfection factor alpha of the buckling curve

@@ -85,25 +85,27 @@ func ChiLT(lam, alpha float64, rolled bool) float64 {
 
 // LTBCurveAlpha returns the imperfection factor of the lateral-torsional
 // buckling curve of a section: for 6.3.2.3 (rolled true) EN 1993-1-1:2005
-// Table 6.5, rolled I h/b <= 2 curve b (0.34), > 2 c (0.49), welded I
-// h/b <= 2 c, > 2 d (0.76); for the general case Table 6.4, rolled I
-// h/b <= 2 a (0.21), > 2 b, welded I h/b <= 2 c, > 2 d, other sections d.
+// Table 6.5, rolled I h/b <= 2 curve b, > 2 c, welded I h/b <= 2 c, > 2
+// d; for the general case Table 6.4, rolled I h/b <= 2 a, > 2 b, welded I
+// h/b <= 2 c, > 2 d, other sections d. Table 6.3 gives curves a to d the
+// factors of Table 6.1's curves of the same names (0.21, 0.34, 0.49,
+// 0.76), read from curveAlphas.
 func LTBCurveAlpha(shape Shape, fab Fabrication, hb float64, rolled bool) float64 {
 	if shape != ShapeI {
-		return 0.76
+		return curveAlphas[curveD]
 	}
 	slim := hb > 2
 	switch {
 	case fab == HotRolled && rolled && !slim:
-		return 0.34
+		return curveAlphas[curveB]
 	case fab == HotRolled && rolled:
-		return 0.49
+		return curveAlphas[curveC]
 	case fab == HotRolled && !slim:
-		return 0.21
+		return curveAlphas[curveA]
 	case fab == HotRolled:
-		return 0.34
+		return curveAlphas[curveB]
 	case !slim:
-		return 0.49
+		return curveAlphas[curveC]
 	}
-	return 0.76
+	return curveAlphas[curveD]
 }
