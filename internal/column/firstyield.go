@@ -41,6 +41,9 @@ func FirstYield(m *Member, axis Axis) (Result, error) {
 	if err := m.Validate(axis); err != nil {
 		return Result{}, err
 	}
+	if axis != Both { // weaker's first case, without its dispatch
+		return Result{N: firstYield(m, axis), Axis: axis, Governs: GovernsFirstYield, Mode: flexuralMode(axis)}, nil
+	}
 	return weaker(m, axis, GovernsFirstYield), nil
 }
 
@@ -71,6 +74,9 @@ func firstYield(m *Member, a Axis) float64 {
 		sw := math.Abs(m.Sway*swayArm(m, a)) * ae / we
 		return ae * m.Fy * firstYieldChi(rho, math.Abs(m.Bow)*ae/we, math.Abs(m.Ecc)*ae/we, sw)
 	}
+	if m.Ecc == 0 && m.Sway == 0 { // the Perry-Robertson root, as firstYieldChi finds it
+		return m.Props.A * m.Fy * perryChi(rho, relImp(m.Bow, r, c))
+	}
 	sw := relImp(m.Sway*swayArm(m, a), r, c)
 	return m.Props.A * m.Fy * firstYieldChi(rho, relImp(m.Bow, r, c), relImp(m.Ecc, r, c), sw)
 }
@@ -91,13 +97,13 @@ func relImp(e, r, c float64) float64 {
 // avoids cancellation; everything is scaled by max(1, rho, eta) so that no
 // intermediate overflows.
 func perryChi(rho, eta float64) float64 {
-	if math.IsInf(rho, 1) || math.IsInf(eta, 1) {
-		return 0
-	}
 	if rho <= 1e150 && eta <= 1e150 {
 		b := 1 + eta + rho
 		d := (1-rho)*(1-rho) + eta*(2+2*rho+eta)
 		return 2 / (b + math.Sqrt(d))
+	}
+	if math.IsInf(rho, 1) || math.IsInf(eta, 1) {
+		return 0
 	}
 	s := math.Max(rho, eta)
 	r, e, u := rho/s, eta/s, 1/s
