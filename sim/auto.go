@@ -46,7 +46,7 @@ func auto(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, er
 // evaluations it spent and a note that says why auto goes on to the other
 // estimators.
 func autoSurrogate(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, int64, string, error) {
-	why := fmt.Sprintf("each evaluation of the model is expensive (Model.Expensive) and it has %d inputs, at most %d", t.Dim(), surrogateMaxDim)
+	why := fmt.Sprintf("each evaluation of the model is expensive (a numerical analysis) and it has %d random inputs (the surrogate takes at most %d)", t.Dim(), surrogateMaxDim)
 	res, err := surrogate(ctx, m, t, s)
 	switch {
 	case err != nil:

@@ -143,9 +143,6 @@ func (a *akRun) predict(list []int) {
 	if list == nil {
 		nc = len(a.cw)
 	}
-	if debugAK {
-		println("predict", nc, "n", a.k.n(), "evals", a.evals)
-	}
 	const chunk = 256
 	nchunks := (nc + chunk - 1) / chunk
 	workers := max(1, min(a.cfg.Workers, nchunks))
@@ -261,5 +258,3 @@ func (a *akRun) finish(e akEstimate, minU float64) {
 		r.Warnings = append(r.Warnings, fmt.Sprintf("the limit state was NaN at %d of the surrogate's model evaluations; those points were left out", a.nan))
 	}
 }
-
-const debugAK = false

@@ -89,3 +89,22 @@ func TestAutoSurrogateRule(t *testing.T) {
 		}
 	}
 }
+
+// TestSurrogateWorkers: the surrogate's numbers do not depend on the
+// number of workers.
+func TestSurrogateWorkers(t *testing.T) {
+	var first *Result
+	for _, w := range []int{1, 3} {
+		r, err := Run(context.Background(), fourBranch(6), &Settings{Method: Surrogate, Samples: 300, Seed: 5, Workers: w, AuxSamples: -1, TargetCoV: 0.1})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if first == nil {
+			first = r
+			continue
+		}
+		if r.Pf != first.Pf || r.PfCI != first.PfCI || r.Evaluations != first.Evaluations {
+			t.Errorf("%d workers: pf %v %v after %d evaluations; 1 worker: %v %v after %d", w, r.Pf, r.PfCI, r.Evaluations, first.Pf, first.PfCI, first.Evaluations)
+		}
+	}
+}

@@ -4,7 +4,6 @@ import (
 	"context"
 	"fmt"
 	"math"
-	"strings"
 
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
@@ -87,8 +86,8 @@ func analyse(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Re
 	}
 	r.Estimate = res
 	r.warnings = append(r.warnings, res.Warnings...)
-	if st := res.BetaStatement(); st != "" && !res.Incomplete && !hasPrefix(res.Warnings, "no failure") {
-		r.warnings = append(r.warnings, st) // sampling already says "no failure"
+	if st := res.BetaStatement(); st != "" && !res.Incomplete {
+		r.warnings = append(r.warnings, st) // empty when a warning of the method says so
 	}
 	if res.Incomplete {
 		r.warnings = append(r.warnings, fmt.Sprintf("incomplete: the run was interrupted after %d evaluations; the estimate is from the samples finished", res.Evaluations))
@@ -224,16 +223,6 @@ func (r *Result) Document() *report.Document {
 		d.Warnings = append(d.Warnings, "sobol: "+r.sobolMsg)
 	}
 	return d
-}
-
-// hasPrefix reports whether one of list starts with p.
-func hasPrefix(list []string, p string) bool {
-	for _, s := range list {
-		if strings.HasPrefix(s, p) {
-			return true
-		}
-	}
-	return false
 }
 
 // outputIndex returns the index of the output named name in m, or -1.
