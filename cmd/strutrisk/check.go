@@ -5,7 +5,7 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"strutrisk/internal/analysis"
+	"strutrisk/internal/report"
 
 	"strutrisk/internal/outdir"
 )
@@ -29,7 +29,7 @@ func checkCmd(args []string, stdout, stderr io.Writer) int {
 	asJSON := fs.Bool("json", false, "print the result document (without sampling fields) as JSON on standard output")
 	pos, help, err := parseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, checkHelp+flagHelp(fs)+"\n"+analysis.Caution+"\n")
+		fmt.Fprint(stdout, checkHelp+flagHelp(fs)+"\n"+report.CautionText+"\n")
 		return exitOK
 	}
 	if err != nil {

@@ -104,7 +104,7 @@ func TestRunDesignValuesReports(t *testing.T) {
 	for file, want := range map[string][]string{
 		"report.html": {"Design values and partial factors at β = 3.80", "<td>material.yield</td><td>resistance</td>", "5 % fractile", "98 % fractile of annual maxima"},
 		"summary.md":  {"### Design values and partial factors at β = 3.80", "| material.yield | resistance |"},
-		"summary.txt": {"design values            at beta 3.80", "loads.axial (action):", "gamma"},
+		"summary.txt": {"design values      at beta 3.80", "loads.axial (action):", "gamma"},
 	} {
 		b, err := os.ReadFile(filepath.Join(dir, file))
 		if err != nil {

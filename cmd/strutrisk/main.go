@@ -34,6 +34,7 @@ import (
 	"runtime/debug"
 
 	"strutrisk/internal/analysis"
+	"strutrisk/internal/report"
 )
 
 // version is the tool version written into every result document.
@@ -47,7 +48,7 @@ const (
 	exitInternal = 3
 )
 
-const usage = `strutrisk estimates how likely a column or strut is to fail, and which
+var usage = `strutrisk estimates how likely a column or strut is to fail, and which
 uncertainty drives that, from a study file (TOML).
 
 Usage:
@@ -62,7 +63,7 @@ Exit status: 0 done (target met or not), 1 target not met with
 --require-target, 2 bad input, 3 internal failure (or the results could
 not be written), 130 interrupted by Ctrl-C (SIGINT), 143 by SIGTERM.
 
-` + analysis.Caution + "\n"
+` + report.CautionText + "\n"
 
 func main() {
 	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))

@@ -6,7 +6,7 @@ import (
 	"fmt"
 	"io"
 	"strings"
-	"strutrisk/internal/analysis"
+	"strutrisk/internal/report"
 )
 
 //go:embed starter.toml
@@ -23,7 +23,7 @@ func newCmd(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("new", flag.ContinueOnError)
 	pos, help, err := parseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, newHelp+"\n"+analysis.Caution+"\n")
+		fmt.Fprint(stdout, newHelp+"\n"+report.CautionText+"\n")
 		return exitOK
 	}
 	if err != nil {

@@ -54,8 +54,8 @@ func TestRunRecord(t *testing.T) {
 	}
 
 	// The summary names the HTML report by its path.
-	if rep := filepath.Join(dir, "report.html"); !strings.Contains(out, "report             "+rep+"\n") {
-		t.Errorf("the run summary does not name %s:\n%s", rep, out)
+	if rep := filepath.Join(dir, "report.html"); !strings.Contains(errs, "report             "+rep+"\n") {
+		t.Errorf("the run does not name %s on standard error:\n%s", rep, errs)
 	}
 	if !strings.Contains(out, "  checked by         B. Checker\n") {
 		t.Errorf("the run summary lacks the record:\n%s", out)

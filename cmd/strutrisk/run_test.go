@@ -168,20 +168,30 @@ func TestRunInterrupted(t *testing.T) {
 
 // TestRunSummary: the terminal summary carries pf and beta with their
 // intervals, the target verdict, the method and evaluations, the most
-// influential variables and the caution; standard error stays quiet.
+// influential variables and the caution, and is summary.txt byte for
+// byte; standard error only says where the files went.
 func TestRunSummary(t *testing.T) {
 	dir := t.TempDir()
 	code, out, errs := invoke(t, "run", writeStudy(t, stocky), "--out", dir)
 	if code != 0 {
 		t.Fatalf("exit %d\n%s", code, errs)
 	}
-	for _, want := range []string{"failure prob. pf", "95 % interval", "reliability beta", "target beta        3.80", "NOT met", "evaluations", "most influential   loads.axial", "results in         " + dir, "licensed"} {
+	for _, want := range []string{"failure prob. pf", "95 % interval", "reliability beta", "target beta        3.80", "NOT met", "evaluations", "most influential   loads.axial", "licensed"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("summary lacks %q:\n%s", want, out)
 		}
 	}
-	if errs != "" {
-		t.Errorf("standard error not quiet when not a terminal: %q", errs)
+	if txt, err := os.ReadFile(filepath.Join(dir, "summary.txt")); err != nil || string(txt) != out {
+		t.Errorf("standard output is not summary.txt (%v):\n%s\n---\n%s", err, out, txt)
+	}
+	want := "  results in         " + dir + "/ ("
+	if !strings.HasPrefix(errs, want) {
+		t.Errorf("standard error does not start with %q: %q", want, errs)
+	}
+	for _, l := range strings.Split(strings.TrimSuffix(errs, "\n"), "\n") {
+		if !strings.HasPrefix(l, "  results in ") && !strings.HasPrefix(l, "  report ") {
+			t.Errorf("standard error not quiet when not a terminal: %q", l)
+		}
 	}
 }
 

@@ -7,6 +7,7 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"path/filepath"
 	"strings"
 
 	"strutrisk/internal/analysis"
@@ -61,7 +62,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
 	pos, help, err := parseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+analysis.Caution+"\n")
+		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+report.CautionText+"\n")
 		return exitOK
 	}
 	if err != nil {
@@ -152,7 +153,10 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		}
 		stdout.Write(append(out, '\n'))
 	} else {
-		fmt.Fprint(stdout, r.Summary(dir, paths))
+		// The summary is summary.txt byte for byte; where the files went
+		// is not part of it and goes to standard error.
+		fmt.Fprint(stdout, report.SummaryText(b))
+		fmt.Fprint(stderr, filesText(dir, paths))
 	}
 	if werr != nil {
 		// The results are on standard output; say they are nowhere else.
@@ -191,4 +195,19 @@ func incompleteReason(ctx context.Context, r *analysis.Result, sigs *interrupt) 
 		return fmt.Sprintf("interrupted by %s during %s: the main estimate is complete; what had not finished then (sensitivities, reserve factor, sweep or variant cases) is missing", sigs.name(), phase)
 	}
 	return ""
+}
+
+// filesText says where the files of a run went: the folder and the HTML
+// report.
+func filesText(dir string, files []string) string {
+	if len(files) == 0 {
+		return ""
+	}
+	s := fmt.Sprintf("  results in         %s/ (%d files: results.json, samples.csv, summary.txt, ...)\n", dir, len(files))
+	for _, f := range files {
+		if filepath.Base(f) == "report.html" {
+			s += fmt.Sprintf("  report             %s\n", f)
+		}
+	}
+	return s
 }

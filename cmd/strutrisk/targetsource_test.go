@@ -69,7 +69,7 @@ func TestRunTargetSource(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("exit %d\n%s", code, errs)
 	}
-	if !strings.Contains(out, "target beta        3.80 (pf 7.2e-05, 50 years)") || !strings.Contains(out, "(target from EN 1990 Annex B Table B2, RC2 (consequence medium), 50-year value)") {
+	if !strings.Contains(out, "target beta        3.80 (pf 7.23e-5, 50 years)") || !strings.Contains(out, "(target from EN 1990 Annex B Table B2, RC2 (consequence medium), 50-year value)") {
 		t.Errorf("summary does not give the target and its source:\n%s", out)
 	}
 	b, err := os.ReadFile(filepath.Join(dir, "summary.txt"))

@@ -9,9 +9,3 @@ package analysis
 
 // Version is the tool version written into every result document.
 const Version = "0.1.0"
-
-// Caution is the closing text of the terminal summary, summary.txt and
-// check, and of every command's help.
-const Caution = `Caution: results depend entirely on the inputs and models stated in the
-study. strutrisk supports, and never replaces, the judgement of a licensed
-engineer and the codes that apply where the structure stands.`

@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"strutrisk/internal/assess"
+	"strutrisk/internal/report"
 	"strutrisk/sim"
 )
 
@@ -79,7 +80,7 @@ func TestLifeDocument(t *testing.T) {
 				t.Errorf("year %d: cumulative beta %g above the annual %g or not of pf %g", p.Year, p.BetaCumulative, p.Beta, p.PfCumulative)
 			}
 		}
-		if !strings.Contains(r.Summary("", nil), "remaining life") {
+		if !strings.Contains(report.SummaryText(r.Bundle()), "remaining life") {
 			t.Errorf("the summary has no remaining life")
 		}
 		out, _ := json.Marshal(d.Life)

@@ -222,7 +222,7 @@ func (l *Loaded) CheckText() string {
 			fmt.Fprintf(&b, "  - %s\n", w)
 		}
 	}
-	fmt.Fprintf(&b, "\n%s\n", Caution)
+	fmt.Fprintf(&b, "\n%s\n", report.CautionText)
 	return b.String()
 }
 

@@ -117,7 +117,7 @@ func runTarget(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *t
 // trusted estimate with a finite beta and at least sim.MinFailures failed
 // samples when crude); why says what was found when it does not confirm.
 func confirmation(res *sim.Result, target float64) (ok, usable bool, why string) {
-	found := fmt.Sprintf("beta %s, 95 %% interval [%s, %s]", betaText(res.Beta), betaText(res.BetaCI[0]), betaText(res.BetaCI[1]))
+	found := fmt.Sprintf("beta %s, 95 %% interval [%s, %s]", report.BetaText(res.Beta), report.BetaText(res.BetaCI[0]), report.BetaText(res.BetaCI[1]))
 	switch {
 	case !res.Status.Trusted():
 		return false, false, "cannot be trusted: " + res.StatusReason
@@ -228,67 +228,6 @@ func (r *Result) fillTarget(d *report.Document) {
 			BetaCI: [2]report.Index{report.Index(c.BetaCI[0]), report.Index(c.BetaCI[1])},
 		}
 	}
-}
-
-// targetSummary is the target's part of the terminal summary.
-func (r *Result) targetSummary(d *report.Document) string {
-	t := d.Target
-	if t == nil {
-		return ""
-	}
-	s := fmt.Sprintf("  target beta        %.2f (pf %.2g", t.Beta, t.Pf)
-	if t.ReferencePeriod != "" {
-		s += ", " + t.ReferencePeriod
-	}
-	s += "): "
-	switch t.Verdict {
-	case "met":
-		s += "met"
-	case "not met":
-		s += "NOT met"
-	case "undecided":
-		if r.Estimate.Status.Trusted() {
-			s += "undecided at this sample size (the interval of beta straddles the target)"
-		} else {
-			s += "undecided (" + t.Reason + ")"
-		}
-		if t.SamplesToDecide != nil {
-			s += fmt.Sprintf(";\n                     about %.3g evaluations would decide it", *t.SamplesToDecide)
-		}
-	}
-	s += "\n"
-	if t.Source != "" && !strings.HasPrefix(t.Source, "target.beta") {
-		s += "                     (target from " + t.Source + ")\n"
-	}
-	if d.ReserveFactor != nil {
-		on := "the variable loads"
-		if t.ReserveOn == "all" {
-			on = "all loads"
-		}
-		if r.l.Study.Bending != nil {
-			on += " and the bending" // bending.go: ReserveActions
-		}
-		s += fmt.Sprintf("  reserve factor     %.3f on %s (FORM beta %.2f there)\n", *d.ReserveFactor, on, *t.ReserveFORMBeta)
-		if c := t.Confirmation; c != nil && c.Method != string(sim.FORMMethod) {
-			how := "confirmed by"
-			if !c.Confirmed {
-				how = "not confirmed by"
-			}
-			s += fmt.Sprintf("                     %s %s: beta %s, 95 %% interval [%s, %s], %d evaluations\n",
-				how, c.Method, betaText(float64(c.Beta)), betaText(float64(c.BetaCI[0])), betaText(float64(c.BetaCI[1])), c.Evaluations)
-		}
-	}
-	if a := t.LargestAddedLoad; a != nil {
-		if *a >= 0 {
-			s += fmt.Sprintf("  largest added load %.1f kN (a deterministic load added to the others that brings beta to the target)\n", *a/1e3)
-		} else {
-			s += fmt.Sprintf("  load to take away  %.1f kN (brings beta to the target)\n", -*a/1e3)
-		}
-	}
-	for _, n := range t.Notes {
-		s += "  note               " + n + "\n"
-	}
-	return s
 }
 
 // targetCheckText says, in check, what the reserve factor will multiply.

@@ -25,8 +25,10 @@ type cases struct {
 	variants []report.Variant
 	series   []report.Series
 	// grid[v+1][i] is variant v (-1: the study) at value i.
-	grid     [][]*report.Point
-	warnings []string
+	grid [][]*report.Point
+	// studyName says what the study itself assumes (baseName).
+	studyName string
+	warnings  []string
 }
 
 // caseSettings are the settings of a case run: the main run's, without
@@ -46,7 +48,7 @@ func runCases(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *ca
 	if st.Sweep == nil && len(st.Variants) == 0 {
 		return nil
 	}
-	c := &cases{}
+	c := &cases{studyName: baseName(st)}
 	n := 0
 	if sw := st.Sweep; sw != nil {
 		n = len(sw.Values)
@@ -228,6 +230,7 @@ func (c *cases) fill(b *report.Bundle) {
 	b.Doc.Variants = c.variants
 	b.Series = c.series
 	b.SweepLabel = c.label
+	b.Cases = &report.CaseTable{StudyName: c.studyName, Values: c.values, Grid: c.grid}
 	if lamVaries(c.lam) {
 		b.SweepLambda = map[float64]float64{}
 		for i, x := range c.values {
@@ -257,90 +260,6 @@ func caseModel(st *study.Study, v int) string {
 		return ""
 	}
 	return cs.Model.String()
-}
-
-// summary is the compact table of the cases for the terminal.
-func (c *cases) summary(st *study.Study, main *sim.Result) string {
-	if c == nil {
-		return ""
-	}
-	var w strings.Builder
-	infinite := false // a beta printed as inf or -inf needs its statement
-	caseBeta := func(pt *report.Point) string {
-		b := caseBeta(pt)
-		infinite = infinite || strings.Contains(b, "inf")
-		return b
-	}
-	row := func(name string, pf float64, ci [2]float64, beta float64) {
-		pt := &report.Point{Pf: pf, Beta: report.Index(beta)}
-		fmt.Fprintf(&w, "    %-28s %10s  [%9s, %9s]  %6s\n", name, pfText(pf), pfText(ci[0]), pfText(ci[1]), caseBeta(pt))
-	}
-	head := func(first string) {
-		fmt.Fprintf(&w, "    %-28s %10s  %-22s  %6s\n", first, "pf", "95 % interval", "beta")
-	}
-	if len(c.variants) > 0 {
-		fmt.Fprintf(&w, "  variants           (same seed and blocks as the main run)\n")
-		head("variant")
-		row("study ("+baseName(st)+")", main.Pf, [2]float64{main.PfCI[0], main.PfCI[1]}, main.Beta)
-		for _, v := range c.variants {
-			row(v.Name, v.Pf, v.PfCI, float64(v.Beta))
-		}
-	}
-	if len(c.values) > 0 {
-		fmt.Fprintf(&w, "  sweep              beta against %s\n", c.label)
-		if lamVaries(c.lam) {
-			fmt.Fprintf(&w, "                     (rel.sl.: the study's nominal relative slenderness, %s axis)\n", c.lamAxis)
-		}
-		if len(c.series) > 1 {
-			for k, s := range c.series {
-				fmt.Fprintf(&w, "    (%d) %s\n", k+1, s.Name)
-			}
-		}
-		showLam := lamVaries(c.lam)
-		fmt.Fprintf(&w, "    %12s", "value")
-		dec := sweepDecimals(c.values)
-		if showLam {
-			fmt.Fprintf(&w, " %8s", "rel.sl.")
-		}
-		for k := range c.grid {
-			if len(c.grid) > 1 {
-				fmt.Fprintf(&w, " %7s", fmt.Sprintf("(%d)", k+1))
-			} else {
-				fmt.Fprintf(&w, " %7s %10s", "beta", "pf")
-			}
-		}
-		w.WriteString("\n")
-		for i, x := range c.values {
-			fmt.Fprintf(&w, "    %12.*f", dec, x)
-			if showLam {
-				fmt.Fprintf(&w, " %8.3f", c.lam[i])
-			}
-			for v := range c.grid {
-				pt := c.grid[v][i]
-				switch {
-				case pt == nil:
-					fmt.Fprintf(&w, " %7s", "-")
-				case len(c.grid) > 1:
-					fmt.Fprintf(&w, " %7s", caseBeta(pt))
-				default:
-					fmt.Fprintf(&w, " %7s %10s", caseBeta(pt), pfText(pt.Pf))
-				}
-			}
-			w.WriteString("\n")
-		}
-	}
-	if infinite {
-		w.WriteString("    (beta inf: no sample of the case failed, beta is only bounded below; -inf: every sample failed, not a result to read before the inputs are checked)\n")
-	}
-	return w.String()
-}
-
-// caseBeta is a case's beta as text ("unbounded" when no sample failed).
-func caseBeta(pt *report.Point) string {
-	if pt.Pf == 0 {
-		return betaText(math.Inf(1))
-	}
-	return betaText(float64(pt.Beta))
 }
 
 // relSlendernessAbout is the nominal relative slenderness of the study at
@@ -404,18 +323,6 @@ func casesCheckText(st *study.Study) string {
 		}
 	}
 	return b.String()
-}
-
-// sweepDecimals is the number of decimals that gives every swept value at
-// least five significant digits, at most six, so the column lines up.
-func sweepDecimals(values []float64) int {
-	dec := 0
-	for _, x := range values {
-		if a := math.Abs(x); a > 0 && !math.IsInf(a, 0) {
-			dec = max(dec, 4-int(math.Floor(math.Log10(a))))
-		}
-	}
-	return min(dec, 6)
 }
 
 // valueText writes a swept value in unit (an internal unit of

@@ -3,7 +3,7 @@ package report
 import "strutrisk/sim"
 
 // Bundle is everything a report is drawn from: the result document plus
-// the data behind the tables and pictures. The caller (the command) fills it;
+// the data behind the tables and pictures. The caller (internal/analysis) fills it;
 // report only presents it. Nil or empty parts are left out of the report.
 type Bundle struct {
 	// Doc is the result document, written as results.json.
@@ -23,6 +23,16 @@ type Bundle struct {
 	// limit state g (N); NominalCapacity is marked on the histogram.
 	Capacity, Demand, Margin *sim.OutputStats
 	NominalCapacity          float64
+	// Governs says what governs the nominal capacity and by which limit
+	// ("the minor axis, first-yield"); NominalDemand is the demand at the
+	// mean loads (N) and Utilisation their ratio (the summary's first line).
+	Governs       string
+	NominalDemand float64
+	Utilisation   float64
+	// MethodReason says why the method was chosen or how it worked.
+	MethodReason string
+	// Cases are the sweep and variants as the summary tabulates them.
+	Cases *CaseTable
 	// Convergence traces pf and its band against evaluations; TraceKind says
 	// (TraceKind) what its points are (subset simulation's levels are not estimates).
 	Convergence []sim.ConvergencePoint

@@ -2,10 +2,15 @@ package report
 
 import (
 	"sort"
+	"strings"
 )
 
-// Caution is the sentence every report carries with its numbers.
-const Caution = "These results depend on the stated inputs and models; they support, and never replace, the judgement of a licensed engineer and the local codes."
+// Caution is the text every report, summary and help carries with the
+// numbers, the one caution of strutrisk.
+const Caution = "Caution: results depend entirely on the inputs and models stated in the study. strutrisk supports, and never replaces, the judgement of a licensed engineer and the codes that apply where the structure stands."
+
+// CautionText is Caution wrapped for a terminal and plain text.
+var CautionText = strings.Join(WrapText(Caution, 74), "\n")
 
 // verdict says how the reliability index compares with the target.
 type verdict int

@@ -108,7 +108,7 @@ func TestLifeSections(t *testing.T) {
 	if md := Markdown(b); !strings.Contains(md, "## Remaining life under corrosion") || !strings.Contains(md, "| 30 |") {
 		t.Errorf("summary.md lacks the remaining life")
 	}
-	if txt := SummaryText(b); !strings.Contains(txt, "remaining life           The annual beta falls below") {
+	if txt := SummaryText(b); !strings.Contains(txt, "remaining life     The annual beta falls below") {
 		t.Errorf("summary.txt lacks the remaining life:\n%s", txt)
 	}
 	f := lifeFigure(b)

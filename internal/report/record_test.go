@@ -41,7 +41,7 @@ func TestRecordHead(t *testing.T) {
 		t.Errorf("an empty field is shown")
 	}
 	txt := SummaryText(b)
-	if want := b.Doc.Title + "\n  project                  Warehouse B & annex <refurb>\n  member                   column C4, grid B/3\n  prepared by"; !strings.HasPrefix(txt, want) {
+	if want := b.Doc.Title + "\n  project            Warehouse B & annex <refurb>\n  member             column C4, grid B/3\n  prepared by"; !strings.HasPrefix(txt, want) {
 		t.Errorf("summary.txt starts\n%s\nwant\n%s", txt[:200], want)
 	}
 	md := Markdown(b)

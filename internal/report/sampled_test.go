@@ -24,13 +24,15 @@ func TestFORMShowsNoInterval(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		for name, text := range map[string]string{"summary": sum, "HTML": string(html)} {
-			ci := intervalText(c.ci, prob)
-			if got := strings.Contains(text, ci); got != c.want {
-				t.Errorf("%s: %s shows interval %q: %v, want %v", c.method, name, ci, got, c.want)
+		for name, tc := range map[string]struct{ text, ci string }{
+			"summary": {sum, "[" + PfText(c.ci[0]) + ", " + PfText(c.ci[1]) + "]"},
+			"HTML":    {string(html), intervalText(c.ci, prob)},
+		} {
+			if got := strings.Contains(tc.text, tc.ci); got != c.want {
+				t.Errorf("%s: %s shows interval %q: %v, want %v", c.method, name, tc.ci, got, c.want)
 			}
 		}
-		if strings.Contains(sum, "CoV") != c.want {
+		if strings.Contains(sum, "cov of pf") != c.want {
 			t.Errorf("%s: summary CoV shown %v, want %v:\n%s", c.method, !c.want, c.want, sum)
 		}
 	}

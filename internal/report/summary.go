@@ -2,120 +2,188 @@ package report
 
 import (
 	"fmt"
+	"math"
 	"strings"
 )
 
-// SummaryText returns the concise text a person reads in a terminal (and
-// in summary.txt): the nominal capacity, the failure probability and
-// reliability index with their intervals, the target and whether it is met
-// ("undecided at this sample size" when the interval of beta straddles the
-// target), the reserve factor when there is one, the method and its
-// evaluations, the three most influential inputs (RankInputs) and what
-// each ranking answers (RankingNote), the warnings and the
-// caution. Numbers that are missing or not finite are written as "n/a".
+// SummaryText returns the one text of a run: what strutrisk run prints on
+// the terminal and writes to summary.txt, byte for byte. It gives the
+// nominal capacity, the failure probability and reliability index with
+// their intervals, the target and whether it is met ("undecided" when the
+// interval of beta straddles the target or the estimate is not trusted),
+// the reserve factor and the load to add or take away, the code check,
+// the method and its evaluations, the three most influential inputs
+// (RankInputs) and what each ranking answers (RankingNote), the design
+// values, the remaining life, the cases of a sweep and variants, the
+// warnings and the caution.
 //
 // (It is not named Summary because Summary is the Document's type for a
 // sampled distribution.)
 func SummaryText(b *Bundle) string {
 	var w strings.Builder
 	d := doc(b)
+	if b == nil {
+		b = &Bundle{}
+	}
 	title := d.Title
 	if title == "" {
 		title = "strutrisk study"
 	}
 	fmt.Fprintln(&w, title)
-	line := func(label, format string, args ...any) {
-		fmt.Fprintf(&w, "  %-24s %s\n", label, fmt.Sprintf(format, args...))
-	}
-	f2 := func(x float64) string { return fixed(x, 2) }
-	for _, r := range RecordRows(d.Record) {
-		line(r.Key, "%s", r.Value)
+	for _, kv := range RecordRows(d.Record) {
+		summaryLine(&w, kv.Key, kv.Value)
 	}
 	if n := d.Nominal; n != nil {
-		line("nominal capacity", "%s (%s axis, K = %s, relative slenderness %s)", kN(n.Capacity), n.Axis, fixed(n.K, 3), fixed(n.RelativeSlenderness, 3))
+		label := "nominal capacity"
+		if n.LoadFactor > 0 {
+			label = "nominal load factor"
+		}
+		summaryLine(&w, label, nominalText(b, n))
 	}
-	if d.Pf != nil {
-		s := prob(*d.Pf)
-		if len(d.PfCI) == 2 && sampled(&d) {
-			s += "  (95% interval " + intervalText(d.PfCI, prob) + ")"
-		}
-		if d.PfCoV != nil && sampled(&d) {
-			s += ", CoV " + percent(*d.PfCoV)
-		}
-		line("probability of failure", "%s", s)
-	}
-	if d.Beta != nil {
-		s := BetaText(float64(*d.Beta))
-		if len(d.BetaCI) == 2 && sampled(&d) {
-			s += "  (95% interval " + betaIntervalText(d.BetaCI) + ")"
-		}
-		line("reliability index beta", "%s", s)
-	}
-	if v := targetVerdict(&d); v != noTarget {
-		line("target beta", "%s: %s", f2(*d.TargetBeta), verdictText(&d, v))
-		if t := d.Target; t != nil && t.Source != "" {
-			line("", "from %s", t.Source)
-		}
-		if t := d.Target; v == undecided && t != nil && t.SamplesToDecide != nil {
-			line("", "about %s evaluations would decide it", thousands(int64(*t.SamplesToDecide)))
-		}
-	}
-	for i, l := range WrapText(CodeCheckLine(d.CodeCheck), 72) {
-		label := ""
-		if i == 0 {
-			label = "code check"
-		}
-		line(label, "%s", l)
-	}
-	for i, l := range WrapText(CombinationLine(&d), 72) {
-		label := ""
-		if i == 0 {
-			label = "load combination"
-		}
-		line(label, "%s", l)
-	}
-	if d.ReserveFactor != nil {
-		line("reserve factor", "%s (load factor at which the target is just met)", f2(*d.ReserveFactor))
-	}
-	for i, l := range WrapText(plainGreek.Replace(LifeVerdict(&d)), 72) {
-		label := ""
-		if i == 0 {
-			label = "remaining life"
-		}
-		line(label, "%s", l)
-	}
-	if d.Method != "" {
-		s := d.Method
-		if d.Evaluations != nil {
-			s += ", " + thousands(*d.Evaluations) + " evaluations"
-		}
-		if d.Seed != nil {
-			s += fmt.Sprintf(", seed %d", *d.Seed)
-		}
-		line("method", "%s", s)
-	}
-	if r := RankInputs(&d, 3); len(r.Inputs) > 0 {
-		line("most influential", "%s", plainGreek.Replace(r.Text()))
-		for i, l := range WrapText(plainGreek.Replace(RankingNote(&d)), 72) {
-			label := ""
-			if i == 0 {
-				label = "rankings"
-			}
-			line(label, "%s", l)
-		}
+	w.WriteString(estimateText(&d))
+	w.WriteString(targetText(&d))
+	summaryWrapped(&w, "code check", CodeCheckLine(d.CodeCheck))
+	summaryWrapped(&w, "load combination", CombinationLine(&d))
+	summaryWrapped(&w, "remaining life", plainGreek.Replace(LifeVerdict(&d)))
+	w.WriteString(methodText(&d, b.MethodReason))
+	if rk := RankInputs(&d, 3); len(rk.Inputs) > 0 {
+		summaryLine(&w, "most influential", plainGreek.Replace(rk.Text()))
+		summaryWrapped(&w, "rankings", plainGreek.Replace(RankingNote(&d)))
 	}
 	if rows, beta, _ := designTable(b, d.FORM); len(rows) > 0 {
-		line("design values", "at beta %s (FORM, EN 1990 Annex C): characteristic -> design, partial factor", beta)
+		summaryLine(&w, "design values", "at beta "+beta+" (FORM, EN 1990 Annex C): characteristic -> design, partial factor")
 		for _, r := range rows {
-			line("", "%s (%s): %s (%s) -> %s, gamma %s", r.Variable, r.Role, r.Characteristic, r.Basis, r.Design, r.Factor)
+			summaryLine(&w, "", fmt.Sprintf("%s (%s): %s (%s) -> %s, gamma %s", r.Variable, r.Role, r.Characteristic, r.Basis, r.Design, r.Factor))
 		}
 	}
-	for _, warn := range d.Warnings {
-		line("warning", "%s", warn)
+	w.WriteString(casesText(b, &d))
+	for _, x := range d.Warnings {
+		summaryLine(&w, "warning", x)
 	}
-	line("caution", "%s", Caution)
+	fmt.Fprintf(&w, "\n%s\n", CautionText)
 	return w.String()
 }
+
+// nominalText is the nominal capacity, what governs it, and the demand
+// and utilisation at the mean loads when the bundle has them.
+func nominalText(b *Bundle, n *Nominal) string {
+	governs := b.Governs
+	if governs == "" && n.Axis != "" {
+		governs = "the " + n.Axis + " axis"
+	}
+	if n.LoadFactor > 0 {
+		// A study with [bending]: the capacity is a factor on every action.
+		return fmt.Sprintf("%s on every action (%s), axial demand at mean loads %s kN", fixed(n.LoadFactor, 3), governs, fixed(b.NominalDemand/1e3, 1))
+	}
+	s := fixed(n.Capacity/1e3, 1) + " kN"
+	if governs != "" {
+		s += " (" + governs + ")"
+	}
+	if b.NominalDemand != 0 {
+		s += fmt.Sprintf(", demand at mean loads %s kN, utilisation %s", fixed(b.NominalDemand/1e3, 1), fixed(b.Utilisation, 2))
+	}
+	return s
+}
+
+// summaryWidth is the width of the summary's labels, summaryWrap that of
+// its wrapped texts.
+const (
+	summaryWidth = 18
+	summaryWrap  = 76
+)
+
+// summaryLine writes one labelled line of the summary.
+func summaryLine(w *strings.Builder, label, text string) {
+	fmt.Fprintf(w, "  %-*s %s\n", summaryWidth, label, text)
+}
+
+// summaryWrapped writes text wrapped under its label; nothing when empty.
+func summaryWrapped(w *strings.Builder, label, text string) {
+	for i, l := range WrapText(text, summaryWrap) {
+		if i > 0 {
+			label = ""
+		}
+		summaryLine(w, label, l)
+	}
+}
+
+// estimateText is the failure probability and the reliability index with
+// their intervals (none for FORM, an approximation), and what an
+// unbounded index means.
+func estimateText(d *Document) string {
+	if d.Method == "" {
+		return ""
+	}
+	var w strings.Builder
+	pf, beta := math.NaN(), math.NaN()
+	if d.Pf != nil {
+		pf = *d.Pf
+	}
+	if d.Beta != nil {
+		beta = float64(*d.Beta)
+	}
+	if !sampled(d) || len(d.PfCI) != 2 || len(d.BetaCI) != 2 {
+		// A first-order approximation: no sampling, so no interval.
+		summaryLine(&w, "failure prob. pf", PfText(pf)+"   (first-order approximation: no sampling interval)")
+		summaryLine(&w, "reliability beta", BetaText(beta))
+	} else {
+		summaryLine(&w, "failure prob. pf", fmt.Sprintf("%s   95 %% interval [%s, %s]", PfText(pf), PfText(d.PfCI[0]), PfText(d.PfCI[1])))
+		summaryLine(&w, "reliability beta", fmt.Sprintf("%s   95 %% interval [%s, %s]", BetaText(beta), BetaText(float64(d.BetaCI[0])), BetaText(float64(d.BetaCI[1]))))
+	}
+	var n int64
+	if d.Evaluations != nil {
+		n = *d.Evaluations
+	}
+	// Never a bare -inf or inf: say what it means (the warnings give the
+	// bounds).
+	switch {
+	case math.IsInf(beta, -1):
+		summaryLine(&w, "", fmt.Sprintf("(-inf: every one of the %d evaluations failed; not a result to read before the inputs are checked: see the warnings)", n))
+	case math.IsInf(beta, 1):
+		lo := math.Inf(1)
+		if len(d.BetaCI) == 2 {
+			lo = float64(d.BetaCI[0])
+		}
+		summaryLine(&w, "", fmt.Sprintf("(inf: none of the %d evaluations failed; beta is only known to be above %s: see the warnings)", n, BetaText(lo)))
+	}
+	return w.String()
+}
+
+// methodText is the method, its evaluations and the CoV of its estimate,
+// with why the method was chosen.
+func methodText(d *Document, reason string) string {
+	if d.Method == "" {
+		return ""
+	}
+	var w strings.Builder
+	var n int64
+	if d.Evaluations != nil {
+		n = *d.Evaluations
+	}
+	s := fmt.Sprintf("%s, %d evaluations", d.Method, n)
+	if sampled(d) {
+		switch {
+		case d.PfCoV != nil:
+			s += fmt.Sprintf(", cov of pf %.3f", *d.PfCoV)
+		case d.Pf != nil && *d.Pf == 0:
+			s += ", cov of pf unbounded (no failure seen)"
+		}
+	}
+	if d.Seed != nil {
+		s += fmt.Sprintf(", seed %d", *d.Seed)
+	}
+	summaryLine(&w, "method", s)
+	if reason != "" {
+		summaryLine(&w, "", "("+reason+")")
+	}
+	return w.String()
+}
+
+// PfText writes a probability of failure as every text of a run does
+// (summary, case tables, reports): scientific with three significant
+// digits below 0.01 ("1.24e-4"), else three significant digits; "n/a"
+// when missing.
+func PfText(p float64) string { return prob(p) }
 
 // doc returns the bundle's document, or an empty one.
 func doc(b *Bundle) Document {

@@ -15,7 +15,7 @@ func TestSummaryTextVerdict(t *testing.T) {
 		target float64
 		want   string
 	}{
-		{"met", 4.1, []Index{4.0, 4.2}, 3.8, "target beta              3.80: met"},
+		{"met", 4.1, []Index{4.0, 4.2}, 3.8, "target beta        3.80: met"},
 		{"not met", 2.9, []Index{2.89, 2.92}, 3.8, "3.80: NOT met"},
 		{"straddles", 3.81, []Index{3.7, 3.95}, 3.8, "undecided at this sample size"},
 		{"straddles below", 3.75, []Index{3.7, 3.85}, 3.8, "undecided at this sample size"},
@@ -32,15 +32,15 @@ func TestSummaryTextDemo(t *testing.T) {
 	t.Parallel()
 	got := SummaryText(demoBundle())
 	for _, s := range []string{
-		"probability of failure   1.84e-3  (95% interval 1.76e-3 to 1.93e-3), CoV 2.3%",
-		"reliability index beta   2.90  (95% interval 2.89 to 2.92)",
+		"failure prob. pf   1.84e-3   95 % interval [1.76e-3, 1.93e-3]",
+		"reliability beta   2.90   95 % interval [2.89, 2.92]",
 		"NOT met",
-		"reserve factor           0.81",
-		"monte-carlo, 1 000 000 evaluations, seed 20261201",
+		"reserve factor     0.810",
+		"monte-carlo, 1000000 evaluations, cov of pf 0.023, seed 20261201",
 		// FORM importance ranks first: 0.44, 0.31, then a tie at 0.12 broken by name.
 		"loads.imposed (0.44), material.yield (0.31), imperfection.bow (0.12)  [by FORM importance alpha^2]",
-		"nominal capacity         1402 kN",
-		Caution,
+		"nominal capacity   1402.0 kN (the minor axis)",
+		CautionText,
 	} {
 		if !strings.Contains(got, s) {
 			t.Errorf("summary lacks %q:\n%s", s, got)
@@ -53,10 +53,10 @@ func TestSummaryTextSparse(t *testing.T) {
 	// A check-only document with a non-finite value never prints NaN.
 	b := &Bundle{Doc: &Document{Nominal: &Nominal{Capacity: math.NaN(), Axis: "minor"}}}
 	got := SummaryText(b)
-	if strings.Contains(got, "NaN") || !strings.Contains(got, "n/a") || !strings.Contains(got, Caution) {
+	if strings.Contains(got, "NaN") || !strings.Contains(got, "n/a") || !strings.Contains(got, CautionText) {
 		t.Errorf("summary:\n%s", got)
 	}
-	if got := SummaryText(nil); !strings.Contains(got, Caution) {
+	if got := SummaryText(nil); !strings.Contains(got, CautionText) {
 		t.Errorf("nil bundle: %q", got)
 	}
 	// Without FORM, Sobol total indices rank the inputs; without them, the

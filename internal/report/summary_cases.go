@@ -1,0 +1,143 @@
+package report
+
+import (
+	"fmt"
+	"math"
+	"strings"
+)
+
+// CaseTable is the sweep and the variants of a run as the summary
+// tabulates them.
+type CaseTable struct {
+	// StudyName says briefly what the study itself assumes, to tell it
+	// from its variants ("perry-robertson", "curve b"...).
+	StudyName string
+	// Values are the swept values, in the units of the document.
+	Values []float64
+	// Grid[s][i] is series s (the study first, then each variant, as
+	// Bundle.Series) at swept value i; nil where the case did not run.
+	Grid [][]*Point
+}
+
+// casesText is the compact table of the cases: the variants at the
+// study's values, then beta (and pf) against the swept values.
+func casesText(b *Bundle, d *Document) string {
+	c := b.Cases
+	if c == nil {
+		return ""
+	}
+	var w strings.Builder
+	infinite := false // a beta printed as inf or -inf needs its statement
+	beta := func(pt *Point) string {
+		s := caseBeta(pt)
+		infinite = infinite || strings.Contains(s, "inf")
+		return s
+	}
+	if len(d.Variants) > 0 {
+		w.WriteString(variantsText(c, d, beta))
+	}
+	if len(c.Values) > 0 {
+		w.WriteString(sweepText(b, beta))
+	}
+	if infinite {
+		w.WriteString("    (beta inf: no sample of the case failed, beta is only bounded below; -inf: every sample failed, not a result to read before the inputs are checked)\n")
+	}
+	return w.String()
+}
+
+// variantsText is the table of the study and its variants.
+func variantsText(c *CaseTable, d *Document, beta func(*Point) string) string {
+	var w strings.Builder
+	row := func(name string, pf float64, ci [2]float64, b Index) {
+		pt := &Point{Pf: pf, Beta: b}
+		fmt.Fprintf(&w, "    %-28s %10s  [%9s, %9s]  %6s\n", name, PfText(pf), PfText(ci[0]), PfText(ci[1]), beta(pt))
+	}
+	summaryLine(&w, "variants", "(same seed and blocks as the main run)")
+	fmt.Fprintf(&w, "    %-28s %10s  %-22s  %6s\n", "variant", "pf", "95 % interval", "beta")
+	pf, ci, b := math.NaN(), [2]float64{math.NaN(), math.NaN()}, Index(math.NaN())
+	if d.Pf != nil {
+		pf = *d.Pf
+	}
+	if len(d.PfCI) == 2 {
+		ci = [2]float64{d.PfCI[0], d.PfCI[1]}
+	}
+	if d.Beta != nil {
+		b = *d.Beta
+	}
+	row("study ("+c.StudyName+")", pf, ci, b)
+	for _, v := range d.Variants {
+		row(v.Name, v.Pf, v.PfCI, v.Beta)
+	}
+	return w.String()
+}
+
+// sweepText is the table of beta (with pf for a single series) against
+// the swept values, with the nominal relative slenderness when the sweep
+// changes it.
+func sweepText(b *Bundle, beta func(*Point) string) string {
+	c := b.Cases
+	var w strings.Builder
+	summaryLine(&w, "sweep", "beta against "+b.SweepLabel)
+	showLam := b.SweepLambda != nil
+	if showLam {
+		summaryLine(&w, "", "(rel.sl.: the study's nominal relative slenderness, "+b.SweepLambdaAxis+" axis)")
+	}
+	if len(b.Series) > 1 {
+		for k, s := range b.Series {
+			fmt.Fprintf(&w, "    (%d) %s\n", k+1, s.Name)
+		}
+	}
+	fmt.Fprintf(&w, "    %12s", "value")
+	dec := sweepDecimals(c.Values)
+	if showLam {
+		fmt.Fprintf(&w, " %8s", "rel.sl.")
+	}
+	for k := range c.Grid {
+		if len(c.Grid) > 1 {
+			fmt.Fprintf(&w, " %7s", fmt.Sprintf("(%d)", k+1))
+		} else {
+			fmt.Fprintf(&w, " %7s %10s", "beta", "pf")
+		}
+	}
+	w.WriteString("\n")
+	for i, x := range c.Values {
+		fmt.Fprintf(&w, "    %12.*f", dec, x)
+		if showLam {
+			fmt.Fprintf(&w, " %8.3f", b.SweepLambda[x])
+		}
+		for s := range c.Grid {
+			pt := c.Grid[s][i]
+			switch {
+			case pt == nil:
+				fmt.Fprintf(&w, " %7s", "-")
+			case len(c.Grid) > 1:
+				fmt.Fprintf(&w, " %7s", beta(pt))
+			default:
+				fmt.Fprintf(&w, " %7s %10s", beta(pt), PfText(pt.Pf))
+			}
+		}
+		w.WriteString("\n")
+	}
+	return w.String()
+}
+
+// caseBeta is a case's beta as text ("inf (unbounded)" when no sample
+// failed).
+func caseBeta(pt *Point) string {
+	if pt.Pf == 0 {
+		return BetaText(math.Inf(1))
+	}
+	return BetaText(float64(pt.Beta))
+}
+
+// sweepDecimals is the number of decimals that gives every swept value at
+// least five significant digits, at most six, so the column lines up.
+func sweepDecimals(values []float64) int {
+	dec := 0
+	for _, x := range values {
+		if a := math.Abs(x); a > 0 && !math.IsInf(a, 0) {
+			dec = max(dec, 4-int(math.Floor(math.Log10(a))))
+		}
+	}
+	return min(dec, 6)
+}
