@@ -172,13 +172,16 @@ func (l *Loaded) CheckText() string {
 		fmt.Fprintf(&b, "  %-12s %s\n", kv.Key, kv.Value)
 	}
 	fmt.Fprintf(&b, "study %s (bare numbers in %s); values below in N, mm, MPa and kN\n\n", st.File, st.Units.Name)
-	fmt.Fprintf(&b, "Nominal member: %s section, A = %.0f mm2, L = %.0f mm, E = %.0f MPa, fy = %.1f MPa\n",
-		st.Section.Name, n.Member.Props.A, n.Member.Length, n.Member.E, n.Member.Fy)
-	b.WriteString(classText(n)) // class.go
+	fmt.Fprintf(&b, "Nominal member: %s section, A = %.0f mm2, L = %.0f mm, E = %.0f MPa, %s = %.1f MPa\n",
+		st.Section.Name, n.Member.Props.A, n.Member.Length, n.Member.E, strengthSymbol(st), n.Member.Fy)
+	b.WriteString(materialText(l.Model, n)) // material.go
+	if st.Material.Kind != column.Timber {
+		b.WriteString(classText(n)) // class.go
+	}
 	if !st.ModelTraits().Curve {
 		fmt.Fprintf(&b, "  bow %.2f mm, eccentricity %.2f mm (means of their magnitude)%s\n", math.Abs(n.Member.Bow), math.Abs(n.Member.Ecc), imperfectionNote(st, n))
 	} else {
-		fmt.Fprintf(&b, "  imperfection factor alpha %.2f (major) / %.2f (minor)\n", n.Member.Alpha[0], n.Member.Alpha[1])
+		fmt.Fprintf(&b, "  imperfection factor alpha %.2f (major) / %.2f (minor), plateau lambda_0 %.2f\n", n.Member.Alpha[0], n.Member.Alpha[1], plateau(n))
 	}
 	fmt.Fprintf(&b, "\n  %-44s %12s %12s\n", "", "major", "minor")
 	for _, r := range l.checkRows() {

@@ -27,6 +27,7 @@ func (md *Model) Loaded(factor, added float64) *sim.Model {
 					c.base[fTieBot] *= factor
 				}
 			}
+			c.scaleDuration(q, factor) // materialmodel.go
 		}
 	}
 	c.base[fLoads] += added

@@ -17,9 +17,14 @@ const TimberCorrelation = 0.6
 // the kind's buckling curves (materials.go). It runs once the study is
 // otherwise clean.
 func (p *parser) checkMaterial() {
-	switch p.st.Material.Kind {
-	case column.Steel:
+	if p.st.Material.Kind == column.Steel {
 		return
+	}
+	if p.st.Bending != nil {
+		p.errorf("bending", "[bending] takes a steel member for now: its load factor and the EN 1993-1-1 6.3.3 interaction are those of carbon steel, and material.kind is %q (remove [bending], or check the member as steel)", p.st.Material.Kind)
+		return
+	}
+	switch p.st.Material.Kind {
 	case column.Timber:
 		p.checkTimber()
 	case column.Stainless:

@@ -90,6 +90,9 @@ func (md *Model) setupMaterial() {
 // lasting share (column.CreepModulus).
 func (md *Model) materialMember(m *column.Member, v *values) {
 	m.Kind, m.Lambda0 = md.mat.kind, md.mat.lambda0
+	if md.mat.timber && m.G == 0 {
+		m.G = m.E / 16 // G_mean = E_0,mean / 16, EN 338:2016 Table 1 (from memory)
+	}
 	if !md.mat.timber || md.curve {
 		return
 	}
@@ -149,9 +152,16 @@ func (md *Model) materialResult(res column.Result, m *column.Member, sec *column
 // timberEval is eval for timber: the least margin over the combinations
 // of the loads of each duration class present and all longer-acting
 // ones, each with k_mod of its shortest load (EN 1995-1-1 3.1.3(2)).
+//
+// A load in the sum that no duration class holds (the deterministic load
+// the reserve search adds, see Loaded) counts in every combination, as a
+// permanent load would.
 func (md *Model) timberEval(v *values) (capacity, demand float64) {
 	best := math.Inf(1)
-	cum := 0.0
+	cum := v[fLoads]
+	for d := range md.mat.kmod {
+		cum -= v[fDur0+d]
+	}
 	w := *v
 	for d := range md.mat.kmod {
 		cum += v[fDur0+d]
@@ -168,4 +178,15 @@ func (md *Model) timberEval(v *values) (capacity, demand float64) {
 		return md.evalOne(v)
 	}
 	return capacity, demand
+}
+
+// scaleDuration moves a fixed load's share of its duration class's sum
+// when Loaded multiplies the load by factor.
+func (md *Model) scaleDuration(q *Quantity, factor float64) {
+	if !md.mat.timber {
+		return
+	}
+	if d, err := column.ParseDuration(q.Duration); err == nil {
+		md.base[fDur0+int(d)] += (factor - 1) * q.Value
+	}
 }

@@ -222,3 +222,85 @@ dead = { dist = "fixed", value = 100000 }
 		t.Errorf("capacity %.1f, want %.1f (lam %.3f chi %.4f kappa %.4f A1/A %.4f)", c, want, lam, chi, kappa, a1)
 	}
 }
+
+// TestMaterialPicture checks that the slenderness picture draws the
+// material's curves: k_c of EN 1995-1-1 eq. 6.25 for a timber post (on
+// k_mod f), and the EN 1993-1-4 hollow-section curve (alpha 0.49,
+// lambda_0 0.40) beside a stainless CHS's Perry-Robertson model.
+func TestMaterialPicture(t *testing.T) {
+	md := buildText(t, timberPost)
+	curves := md.ReferenceCurves(20, 2)
+	if len(curves) == 0 || curves[0].Name != "study: EN 1995-1-1 k_c, solid, both axes" {
+		t.Fatalf("timber curves %+v", curves)
+	}
+	for i, x := range curves[0].X {
+		if want := kcEN1995(x, 0.2); math.Abs(curves[0].Y[i]-want) > 1e-9 {
+			t.Errorf("timber at lam %.3f: %g, want k_c %g", x, curves[0].Y[i], want)
+		}
+	}
+	text := `[member]
+length = 3500
+ends = "pinned-pinned"
+[member.section]
+shape = "CHS"
+diameter = 114.3
+thickness = 4
+[material]
+kind = "stainless"
+yield = 220
+[imperfection]
+bow = "L/1000"
+[loads]
+dead = { dist = "fixed", value = 100000 }
+`
+	md = buildText(t, text)
+	found := false
+	for _, c := range md.ReferenceCurves(20, 2) {
+		if c.Name != "EN 1993-1-4 hollow, both axes" {
+			continue
+		}
+		found = true
+		for i, x := range c.X {
+			lam := x
+			want := 1.0
+			if lam > 0.4 {
+				phi := 0.5 * (1 + 0.49*(lam-0.4) + lam*lam)
+				want = 1 / (phi + math.Sqrt(phi*phi-lam*lam))
+			}
+			if math.Abs(c.Y[i]-want) > 1e-9 {
+				t.Errorf("stainless at lam %.3f: %g, want %g", x, c.Y[i], want)
+			}
+		}
+	}
+	if !found {
+		t.Errorf("no EN 1993-1-4 curve among %v", md.ReferenceCurves(20, 2))
+	}
+}
+
+// TestTimberLoaded checks that the reserve search's model of a timber
+// study multiplies a fixed variable load within its duration class and
+// counts an added load in every combination: the margins are those of
+// TestTimberCurveCombinations with the imposed load doubled and 10 kN
+// added.
+func TestTimberLoaded(t *testing.T) {
+	md := buildText(t, strings.Replace(timberPost, "[loads]", "[target]\nbeta = 3.8\n[loads]", 1))
+	a := 150.0 * 150
+	r := 150 / math.Sqrt(12)
+	kc := kcEN1995(3000/r/math.Pi*math.Sqrt(21/11000.0), 0.2)
+	perm := 0.6*a*21*kc - 110000
+	both := 0.8*a*21*kc - 230000
+	g := md.Loaded(2, 10000).G(nil, nil)
+	if want := math.Min(perm, both); math.Abs(g-want) > 1e-6*math.Abs(want) {
+		t.Errorf("g = %.2f, want min(%.2f, %.2f)", g, perm, both)
+	}
+}
+
+// TestMaterialBendingRefused checks that [bending] is refused for a
+// material other than steel, naming the key.
+func TestMaterialBendingRefused(t *testing.T) {
+	text := strings.Replace(timberPost, "[loads]", "[bending]\ntop = \"1 kN*m\"\n[loads]", 1)
+	_, err := Parse("t.toml", []byte(text))
+	if err == nil || !strings.Contains(err.Error(), "bending") || !strings.Contains(err.Error(), "steel member") {
+		t.Errorf("err = %v, want [bending] refused for timber", err)
+	}
+}

@@ -47,6 +47,9 @@ func (md *Model) ReferenceCurve(a column.Axis) (name, row string, alpha float64)
 		}
 		return fmt.Sprintf("alpha = %.3g", alpha), "the study's curve", alpha
 	}
+	if st.Material.Kind != column.Steel {
+		return md.kindReference(a) // materialpicture.go
+	}
 	if c, why, err := st.Table62(a); err == nil {
 		if al, err := column.CurveAlpha(c); err == nil {
 			return c, "Table 6.2: " + why, al
@@ -155,9 +158,18 @@ func (md *Model) refKinds(nom *Nominal, a column.Axis) []refKind {
 	}
 	if !md.curve {
 		name, row, alpha := md.ReferenceCurve(a)
-		kinds = append(kinds, refKind{"EN 1993-1-1 curve " + name, bucklingCurve{}.String(), row, func(m *column.Member, a column.Axis) (column.Result, error) {
+		kmod := md.nominalValues()[fKmod]
+		timber := md.mat.timber
+		kinds = append(kinds, refKind{curveLabel(st.Material.Kind, name), bucklingCurve{}.String(), row, func(m *column.Member, a column.Axis) (column.Result, error) {
 			m.Alpha[a] = alpha
-			return column.Curve(m, a)
+			if !timber {
+				return column.Curve(m, a)
+			}
+			// k_c from the unreduced strength, on k_mod f (EN 1995-1-1 6.3.2)
+			m.Fy /= kmod
+			r, err := column.Curve(m, a)
+			r.N *= kmod
+			return r, err
 		}})
 	}
 	return kinds
@@ -170,7 +182,7 @@ func (md *Model) ownName(a column.Axis) string {
 	st := md.Study
 	if md.curve {
 		name, _, _ := md.ReferenceCurve(a)
-		return "EN 1993-1-1 curve " + name
+		return curveLabel(st.Material.Kind, name)
 	}
 	if opts := st.ModelTraits().Options; opts != "" {
 		return st.Model.String() + ", " + opts
@@ -213,8 +225,12 @@ func (md *Model) curveAbout(nom *Nominal, a column.Axis, n int, lamMax float64, 
 		if err != nil {
 			continue
 		}
-		x = append(x, column.RelativeSlenderness(&m, a))
-		y = append(y, res.N/(m.Props.EffectiveArea()*m.Fy))
+		lam, fy := column.RelativeSlenderness(&m, a), m.Fy
+		if md.mat.timber {
+			lam, fy = timberAxes(&m, &w, a)
+		}
+		x = append(x, lam)
+		y = append(y, res.N/(m.Props.EffectiveArea()*fy))
 	}
 	return x, y
 }

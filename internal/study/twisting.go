@@ -70,7 +70,11 @@ func (p *parser) twistingNotes() {
 	nt, mode := column.TwistingLoad(&m)
 	ncr, cmode := column.CriticalLoad(&m, column.Both)
 	if st.Shear == nil {
-		p.defaultf("material.shear_modulus: not given; G = E / (2 (1 + 0.3)) for torsional buckling")
+		if st.Material.Kind == column.Timber {
+			p.defaultf("material.shear_modulus: not given; G = E / 16 for torsional buckling (timber, EN 338 Table 1)")
+		} else {
+			p.defaultf("material.shear_modulus: not given; G = E / (2 (1 + 0.3)) for torsional buckling")
+		}
 	}
 	kN := func(x float64) string { return fmt.Sprintf("%.4g kN", x/1e3) }
 	if !cmode.Twists() {
