@@ -43,6 +43,9 @@ func loadPeriodText(st *study.Study) string {
 	b.WriteString("\nLoads in time (distributions in N):\n")
 	for _, lp := range lps {
 		switch {
+		case lp.Period == study.PointInTime && lp.N > 0:
+			fmt.Fprintf(&b, "  %s: one pulse (point-in-time), %s\n    %.4g repetitions in the reference period, their maximum (%s): %s, mean %.1f kN, sd %.1f kN\n",
+				lp.Load, lp.Written, lp.N, lp.Method, lp.Converted, lp.Mean/1e3, lp.SD/1e3)
 		case lp.Period == study.PointInTime:
 			fmt.Fprintf(&b, "  %s: point-in-time value, %s\n", lp.Load, lp.Written)
 		case lp.N > 0:
