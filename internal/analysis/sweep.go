@@ -309,13 +309,20 @@ func casesCheckText(st *study.Study) string {
 		b.WriteString("\n")
 	}
 	if len(st.Variants) > 0 {
-		fmt.Fprintf(&b, "\nVariants (run with the study's seed), nominal capacity at the study's values:\n")
+		what := "nominal capacity"
+		if st.Bending != nil {
+			what = "nominal load factor"
+		}
+		fmt.Fprintf(&b, "\nVariants (run with the study's seed), %s at the study's values:\n", what)
 		for v, va := range st.Variants {
 			capText := "?"
 			if cs, err := st.Derive(v, -1); err == nil {
 				if md, err := study.Build(cs); err == nil {
 					if n, err := md.Nominal(); err == nil {
 						capText = fmt.Sprintf("%.1f kN", n.Capacity/1e3)
+						if n.LoadFactor > 0 { // [bending]: the load factor is the capacity
+							capText = fmt.Sprintf("factor %.3f", n.LoadFactor)
+						}
 					}
 				}
 			}
