@@ -62,3 +62,13 @@ func ResidualNames() []string {
 	}
 	return names
 }
+
+// FabricationNames returns the study-file names of the fabrications
+// (Fabrication.String), in the order of their constants.
+func FabricationNames() []string {
+	var names []string
+	for f := HotRolled; f <= HotFinished; f++ {
+		names = append(names, f.String())
+	}
+	return names
+}

@@ -28,3 +28,23 @@ func TestNames(t *testing.T) {
 		t.Errorf("out-of-range names: %v, %v", Shape(9), Axis(7))
 	}
 }
+
+// TestNameLists checks that the name lists the key table reads parse back
+// to their constants, in order.
+func TestNameLists(t *testing.T) {
+	for i, n := range FabricationNames() {
+		if f, err := ParseFabrication(n); err != nil || f != HotRolled+Fabrication(i) {
+			t.Errorf("fabrication %q parses to %v, %v", n, f, err)
+		}
+	}
+	for i, n := range BeamLimitNames() {
+		if l, err := ParseBeamLimit(n); err != nil || l != BeamLimit(i) {
+			t.Errorf("limit %q parses to %v, %v", n, l, err)
+		}
+	}
+	for i, n := range ResidualNames() {
+		if r, err := ParseResidual(n); err != nil || r != Residual(i) {
+			t.Errorf("residual stress %q parses to %v, %v", n, r, err)
+		}
+	}
+}

@@ -146,7 +146,7 @@ func sectionKeyInfos() []KeyInfo {
 	for _, d := range sectionDims {
 		rows = append(rows, d.info)
 	}
-	return append(rows, KeyInfo{Name: "fabrication", Takes: "text", Choices: []string{"hot-rolled", "welded", "cold-formed", "hot-finished"},
+	return append(rows, KeyInfo{Name: "fabrication", Takes: "text", Choices: column.FabricationNames(),
 		Default: "welded (I), cold-formed (RHS, CHS), hot-rolled (rect, round, angle, channel, tee)",
 		Meaning: "How the section is made (not on custom): I hot-rolled or welded; RHS cold-formed, hot-finished or welded (a box); CHS cold-formed or hot-finished; solids, angles, channels and tees hot-rolled. It picks the EN 1993-1-1 Table 6.2 buckling curve and the RHS corner radii."})
 }
