@@ -11,6 +11,7 @@ import (
 	"strings"
 
 	"strutrisk/internal/analysis"
+	"strutrisk/internal/outdir"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
@@ -51,77 +52,24 @@ type runOptions struct {
 }
 
 func runCmd(args []string, stdout, stderr io.Writer) int {
-	var o runOptions
-	fs := flag.NewFlagSet("run", flag.ContinueOnError)
-	fs.StringVar(&o.out, "out", "", "write results into `DIR`, replacing it as a whole (default: [output] dir, else out/<study file name>)")
-	fs.Uint64Var(&o.seed, "seed", 0, "seed of every random stream (`N`; default: [analysis] seed)")
-	fs.Int64Var(&o.samples, "samples", 0, "at most `N` model evaluations (default: [analysis] samples)")
-	fs.StringVar(&o.method, "method", "", "estimator `M`: "+strings.Join(sim.MethodNames(), ", "))
-	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
-	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
-	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
-	pos, help, err := parseArgs(fs, args)
-	if help {
-		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+report.CautionText+"\n")
-		return exitOK
+	o, path, code := parseRun(args, stdout, stderr)
+	if o == nil {
+		return code
 	}
-	if err != nil {
-		fmt.Fprintf(stderr, "strutrisk run: %v (strutrisk run --help)\n", err)
-		return exitInput
-	}
-	if len(pos) != 1 {
-		fmt.Fprintf(stderr, "strutrisk run: give one study file (strutrisk run --help)\n")
-		return exitInput
-	}
-	o.set = map[string]bool{}
-	fs.Visit(func(f *flag.Flag) { o.set[f.Name] = true })
-	if o.set["method"] {
-		if _, err := sim.ParseMethod(o.method); err != nil {
-			fmt.Fprintf(stderr, "strutrisk run: --method: %v\n", err)
-			return exitInput
-		}
-	}
-	if o.set["samples"] && (o.samples < 1 || o.samples > study.MaxSamples) {
-		fmt.Fprintf(stderr, "strutrisk run: --samples %d must be between 1 and %s\n", o.samples, study.MaxSamplesText)
-		return exitInput
-	}
-	if o.set["workers"] && (o.workers < 1 || o.workers > maxWorkers()) {
-		fmt.Fprintf(stderr, "strutrisk run: --workers %d must be between 1 and %d (16 per core, at least 64; results do not depend on it)\n", o.workers, maxWorkers())
-		return exitInput
-	}
-
-	l, code := load(pos[0], stderr)
+	l, code := load(path, stderr)
 	if code != exitOK {
 		return code
 	}
 	st := l.Study
-	if len(l.Model.Sim.Vars) == 0 {
-		fmt.Fprintf(stderr, "strutrisk: %s: nothing in the study is uncertain: give at least one quantity a distribution, or use `strutrisk check` for the deterministic picture\n", st.File)
-		return exitInput
+	settings, code := runSettings(o, l, stderr)
+	if code != exitOK {
+		return code
 	}
-	if o.requireTarget && !st.HasTarget {
-		fmt.Fprintf(stderr, "strutrisk: %s: --require-target given but the study has no [target] beta\n", st.File)
-		return exitInput
-	}
-	settings := l.Settings(o.workers)
-	if o.set["method"] {
-		settings.Method = sim.Method(o.method)
-	}
-	if o.set["samples"] {
-		settings.Samples = o.samples
-	}
-	if o.set["seed"] {
-		settings.Seed = o.seed
-	}
-	if note := analysis.BeamTimeNote(l, &settings); note != "" {
-		fmt.Fprintf(stderr, "strutrisk: %s: %s\n", st.File, note)
-	}
-	folder, code := prepareOutput(pos[0], st, o.out, stderr)
+	folder, code := prepareOutput(path, st, o.out, stderr)
 	if code != exitOK {
 		return code
 	}
 	defer folder.Close()
-	dir := folder.Path
 
 	bar := newProgress(stderr, !o.json)
 	ctx, sigs, stop := withSignals(baseContext(), stderr, bar.phase)
@@ -140,7 +88,89 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	r.Incomplete = incompleteReason(ctx, r, sigs)
 	b := r.Bundle()
-	files, werr := report.Files(b, st.Output.Formats)
+	if code := writeRun(o, b, st.Output.Formats, folder, stdout, stderr); code != exitOK {
+		return code
+	}
+	return runStatus(o, r, b, sigs, folder.Path, stderr)
+}
+
+// parseRun reads run's flags and its study file. A nil options means
+// stop with the status returned (help asked for, or a bad flag).
+func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int) {
+	o := &runOptions{}
+	fs := flag.NewFlagSet("run", flag.ContinueOnError)
+	fs.StringVar(&o.out, "out", "", "write results into `DIR`, replacing it as a whole (default: [output] dir, else out/<study file name>)")
+	fs.Uint64Var(&o.seed, "seed", 0, "seed of every random stream (`N`; default: [analysis] seed)")
+	fs.Int64Var(&o.samples, "samples", 0, "at most `N` model evaluations (default: [analysis] samples)")
+	fs.StringVar(&o.method, "method", "", "estimator `M`: "+strings.Join(sim.MethodNames(), ", "))
+	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
+	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
+	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
+	pos, help, err := parseArgs(fs, args)
+	if help {
+		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+report.CautionText+"\n")
+		return nil, "", exitOK
+	}
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk run: %v (strutrisk run --help)\n", err)
+		return nil, "", exitInput
+	}
+	if len(pos) != 1 {
+		fmt.Fprintf(stderr, "strutrisk run: give one study file (strutrisk run --help)\n")
+		return nil, "", exitInput
+	}
+	o.set = map[string]bool{}
+	fs.Visit(func(f *flag.Flag) { o.set[f.Name] = true })
+	if o.set["method"] {
+		if _, err := sim.ParseMethod(o.method); err != nil {
+			fmt.Fprintf(stderr, "strutrisk run: --method: %v\n", err)
+			return nil, "", exitInput
+		}
+	}
+	if o.set["samples"] && (o.samples < 1 || o.samples > study.MaxSamples) {
+		fmt.Fprintf(stderr, "strutrisk run: --samples %d must be between 1 and %s\n", o.samples, study.MaxSamplesText)
+		return nil, "", exitInput
+	}
+	if o.set["workers"] && (o.workers < 1 || o.workers > maxWorkers()) {
+		fmt.Fprintf(stderr, "strutrisk run: --workers %d must be between 1 and %d (16 per core, at least 64; results do not depend on it)\n", o.workers, maxWorkers())
+		return nil, "", exitInput
+	}
+	return o, pos[0], exitOK
+}
+
+// runSettings are the study's settings with the flags given over them;
+// a study run cannot take is refused with a non-zero status.
+func runSettings(o *runOptions, l *analysis.Loaded, stderr io.Writer) (sim.Settings, int) {
+	st := l.Study
+	if len(l.Model.Sim.Vars) == 0 {
+		fmt.Fprintf(stderr, "strutrisk: %s: nothing in the study is uncertain: give at least one quantity a distribution, or use `strutrisk check` for the deterministic picture\n", st.File)
+		return sim.Settings{}, exitInput
+	}
+	if o.requireTarget && !st.HasTarget {
+		fmt.Fprintf(stderr, "strutrisk: %s: --require-target given but the study has no [target] beta\n", st.File)
+		return sim.Settings{}, exitInput
+	}
+	settings := l.Settings(o.workers)
+	if o.set["method"] {
+		settings.Method = sim.Method(o.method)
+	}
+	if o.set["samples"] {
+		settings.Samples = o.samples
+	}
+	if o.set["seed"] {
+		settings.Seed = o.seed
+	}
+	if note := analysis.BeamTimeNote(l, &settings); note != "" {
+		fmt.Fprintf(stderr, "strutrisk: %s: %s\n", st.File, note)
+	}
+	return settings, exitOK
+}
+
+// writeRun writes the files of the run into its folder and prints the
+// summary (summary.txt byte for byte) or, with --json, the document.
+func writeRun(o *runOptions, b *report.Bundle, formats []string, folder *outdir.Folder, stdout, stderr io.Writer) int {
+	dir := folder.Path
+	files, werr := report.Files(b, formats)
 	var paths []string
 	if werr == nil {
 		paths, werr = folder.Commit(files)
@@ -153,8 +183,7 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		}
 		stdout.Write(append(out, '\n'))
 	} else {
-		// The summary is summary.txt byte for byte; where the files went
-		// is not part of it and goes to standard error.
+		// Where the files went is not part of the summary: standard error.
 		fmt.Fprint(stdout, report.SummaryText(b))
 		fmt.Fprint(stderr, filesText(dir, paths))
 	}
@@ -163,6 +192,13 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "strutrisk: the results were not written to %s: %v; what is on standard output is all there is of this run\n", dir, werr)
 		return exitInternal
 	}
+	return exitOK
+}
+
+// runStatus is the exit status of a run whose files are written: that of
+// the signal that interrupted it, else exitTarget when --require-target
+// is given and the target is not shown to be met.
+func runStatus(o *runOptions, r *analysis.Result, b *report.Bundle, sigs *interrupt, dir string, stderr io.Writer) int {
 	switch {
 	case r.Incomplete != "":
 		fmt.Fprintf(stderr, "strutrisk: %s; the results in %s are marked \"complete\": false\n", r.Incomplete, dir)
