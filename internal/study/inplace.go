@@ -75,6 +75,8 @@ func (md *Model) capacityInto(v *values, axis column.Axis, m *column.Member, buf
 	}
 	var res column.Result
 	switch {
+	case !md.perAxis && !md.mat.adjust && md.kernel == kernelFirstYield:
+		res, err = column.FirstYield(m, axis) // evaluate's commonest case, without its call
 	case !md.perAxis:
 		res, err = md.evaluate(m, sec, v, axis)
 	case axis != column.Both:

@@ -390,7 +390,22 @@ func (md *Model) capacity(v *values, axis column.Axis) (column.Result, column.Me
 }
 
 // evaluate runs the kernel of the study's capacity model on the member.
+// The closed forms without a material adjustment return their result as
+// it is, from a small frame: the common case of every sample.
 func (md *Model) evaluate(m *column.Member, sec *column.Section, v *values, axis column.Axis) (column.Result, error) {
+	if !md.mat.adjust {
+		switch md.kernel {
+		case kernelFirstYield:
+			return column.FirstYield(m, axis)
+		case kernelCurve:
+			return column.Curve(m, axis)
+		}
+	}
+	return md.evaluateAll(m, sec, v, axis)
+}
+
+// evaluateAll is evaluate for every kernel and material.
+func (md *Model) evaluateAll(m *column.Member, sec *column.Section, v *values, axis column.Axis) (column.Result, error) {
 	var res column.Result
 	var err error
 	switch md.kernel {
