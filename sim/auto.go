@@ -65,7 +65,7 @@ func autoSampling(ctx context.Context, m *Model, t *Transform, s *Settings, note
 	if target == 0 {
 		target = autoTargetCoV
 	}
-	f, ferr := FORMContext(ctx, m, s.FORM)
+	f, ferr := FORMContext(ctx, m, s.formFor(m))
 	var formEvals int64
 	formOK := ferr == nil && f != nil && f.Converged
 	if ferr == nil && f != nil {

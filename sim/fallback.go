@@ -37,7 +37,7 @@ func designPointDoubt(f *FORMResult, err error) string {
 // warning say so; when too little budget is left, the flagged result is
 // returned with its status.
 func importanceChecked(ctx context.Context, m *Model, t *Transform, s *Settings) (*Result, error) {
-	f, ferr := FORMContext(ctx, m, s.FORM)
+	f, ferr := FORMContext(ctx, m, s.formFor(m))
 	var formEvals int64
 	if f != nil {
 		formEvals = int64(f.Evaluations)

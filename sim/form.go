@@ -29,6 +29,12 @@ type FORMSettings struct {
 	// of g at the start instead of a whole search, for a limit state that
 	// is expensive to evaluate.
 	Screen bool
+	// Workers is the number of goroutines that evaluate the 2n points of
+	// each finite-difference gradient; default 1. Worth it only for a
+	// limit state that is expensive to evaluate: Run sets it to
+	// Settings.Workers for a Model marked Expensive. The result is the
+	// same for any value.
+	Workers int
 }
 
 // FORM runs a first-order reliability analysis of m: the improved HL-RF
@@ -107,9 +113,19 @@ func formRun(sp *uSpace, s *FORMSettings) *FORMResult {
 
 // formRunContext is formRun that stops when ctx is done.
 func formRunContext(ctx context.Context, sp *uSpace, s *FORMSettings) *FORMResult {
+	return formRunRecorded(ctx, sp, s, nil)
+}
+
+// formRunRecorded is formRunContext that passes every point it evaluates
+// and its g to record (when not nil), in an order that does not depend on
+// the workers.
+func formRunRecorded(ctx context.Context, sp *uSpace, s *FORMSettings, record func(u []float64, g float64)) *FORMResult {
 	set := formSettings(s)
 	n := sp.dim
-	f := &formSolver{dim: n, g: sp.newG(), maxIter: set.MaxIter, tol: set.Tol, gScale: 1, step: set.Step, done: ctx.Done()}
+	f := &formSolver{dim: n, g: sp.newG(), maxIter: set.MaxIter, tol: set.Tol, gScale: 1, step: set.Step, done: ctx.Done(), record: record}
+	for w := 0; set.Workers > 1 && w < min(set.Workers, 2*n); w++ {
+		f.par = append(f.par, sp.newG())
+	}
 	origin := make([]float64, n)
 	g0 := f.eval(origin)
 	if math.IsNaN(g0) || math.IsInf(g0, 0) {

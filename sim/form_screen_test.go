@@ -42,3 +42,31 @@ func TestFORMScreen(t *testing.T) {
 		}
 	}
 }
+
+// TestFORMWorkers: FORM gives the same points, beta and count of
+// evaluations whether its gradients run on one goroutine or several, also
+// when the limit state is NaN in part of the space.
+func TestFORMWorkers(t *testing.T) {
+	nanAbove := fourBranch(6)
+	g := nanAbove.G
+	nanAbove.G = func(x, out []float64) float64 {
+		if x[0] > 2.5 {
+			return math.NaN()
+		}
+		return g(x, out)
+	}
+	for _, m := range []*Model{fourBranch(6), nanAbove} {
+		one, err1 := FORM(m, &FORMSettings{Screen: true})
+		par, err2 := FORM(m, &FORMSettings{Screen: true, Workers: 3})
+		if (err1 == nil) != (err2 == nil) || one.Evaluations != par.Evaluations || one.Beta != par.Beta || len(one.Points) != len(par.Points) || one.Status != par.Status {
+			t.Fatalf("1 worker: beta %v, %d evaluations, %s; 3 workers: beta %v, %d evaluations, %s", one.Beta, one.Evaluations, one.Status, par.Beta, par.Evaluations, par.Status)
+		}
+		for i := range one.Points {
+			for j, v := range one.Points[i].U {
+				if par.Points[i].U[j] != v {
+					t.Errorf("point %d differs: %v and %v", i, one.Points[i].U, par.Points[i].U)
+				}
+			}
+		}
+	}
+}

@@ -28,6 +28,11 @@ type formSolver struct {
 	// later evaluation returns NaN without calling g, so that the search
 	// ends at once.
 	done <-chan struct{}
+	// par, when it holds two or more evaluators, evaluates each gradient's
+	// points concurrently (FORMSettings.Workers); record, when not nil,
+	// receives every point evaluated and its g.
+	par    []func(u []float64) float64
+	record func(u []float64, g float64)
 }
 
 // formDefaultStep is the default relative finite-difference step and
@@ -63,7 +68,11 @@ func (f *formSolver) eval(u []float64) float64 {
 		return math.NaN()
 	}
 	f.evals++
-	return f.g(u)
+	v := f.g(u)
+	if f.record != nil {
+		f.record(u, v)
+	}
+	return v
 }
 
 // stopped reports whether the analysis was asked to stop.
@@ -81,6 +90,9 @@ func (f *formSolver) stopped() bool {
 // of the central difference is O(h^2), its rounding or noise error
 // O(noise/h)).
 func (f *formSolver) gradient(grad, u []float64) bool {
+	if len(f.par) > 1 {
+		return f.gradientPar(grad, u)
+	}
 	w := append([]float64(nil), u...)
 	for i := range u {
 		h := f.step * math.Max(1, math.Abs(u[i]))

@@ -186,7 +186,7 @@ func interruptedResult(m Method, evals int64) *Result {
 
 // runFORM wraps a FORM analysis as a Result.
 func runFORM(ctx context.Context, m *Model, s *Settings) (*Result, error) {
-	f, err := FORMContext(ctx, m, s.FORM)
+	f, err := FORMContext(ctx, m, s.formFor(m))
 	if ctx.Err() != nil {
 		res := interruptedResult(FORMMethod, 0)
 		if f != nil {

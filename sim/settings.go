@@ -56,6 +56,20 @@ func (s *Settings) surrogate() SurrogateSettings {
 	return c
 }
 
+// formFor returns the FORM settings of s for model m: for a Model marked
+// Expensive, each gradient's evaluations spread over s.Workers.
+func (s *Settings) formFor(m *Model) *FORMSettings {
+	if !m.Expensive || s.Workers <= 1 {
+		return s.FORM
+	}
+	var c FORMSettings
+	if s.FORM != nil {
+		c = *s.FORM
+	}
+	c.Workers = s.Workers
+	return &c
+}
+
 // DefaultISMinFailures is the default of ImportanceSettings.MinFailures.
 const DefaultISMinFailures = 10
 

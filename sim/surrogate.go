@@ -49,8 +49,8 @@ func surrogate(ctx context.Context, m *Model, t *Transform, s *Settings) (*Resul
 	cfg := rareDefaults(s)
 	ss := cfg.surrogate()
 	sp := modelSpace(m, t)
-	rec := &recordSpace{dim: sp.dim, g: sp.newG()}
-	form := formRunContext(ctx, rec.space(), surrogateFORM(cfg.FORM))
+	rec := &recordSpace{dim: sp.dim}
+	form := formRunRecorded(ctx, sp, surrogateFORM(cfg.formFor(m)), rec.add)
 	for i := range form.Points {
 		p := &form.Points[i]
 		p.X = make([]float64, t.Dim())
@@ -62,7 +62,7 @@ func surrogate(ctx context.Context, m *Model, t *Transform, s *Settings) (*Resul
 		r.FORM = form
 		return r, nil
 	}
-	a := &akRun{ctx: ctx, cfg: &cfg, ss: ss, g: rec.g, dim: sp.dim, res: res, tr: newTracer(&cfg, res),
+	a := &akRun{ctx: ctx, cfg: &cfg, ss: ss, g: sp.newG(), dim: sp.dim, res: res, tr: newTracer(&cfg, res),
 		k: newKriging(sp.dim), z: distuv.UnitNormal.Quantile(0.5 + cfg.Confidence/2)}
 	a.evals = rec.evals()
 	a.mixture(form, a.target())
@@ -82,24 +82,16 @@ func surrogateFORM(f *FORMSettings) *FORMSettings {
 	return &c
 }
 
-// recordSpace is a limit state in standard normal space that keeps every
-// point it evaluates, in order (FORM evaluates one point at a time).
+// recordSpace keeps the points FORM evaluates and their g, in order.
 type recordSpace struct {
 	dim int
-	g   func(u []float64) float64
 	u   []float64 // row-major
 	gv  []float64
 }
 
-func (r *recordSpace) space() *uSpace {
-	return &uSpace{dim: r.dim, newG: func() func(u []float64) float64 {
-		return func(u []float64) float64 {
-			v := r.g(u)
-			r.u = append(r.u, u...)
-			r.gv = append(r.gv, v)
-			return v
-		}
-	}}
+func (r *recordSpace) add(u []float64, g float64) {
+	r.u = append(r.u, u...)
+	r.gv = append(r.gv, g)
 }
 
 func (r *recordSpace) evals() int { return len(r.gv) }

@@ -91,11 +91,14 @@ func TestAutoSurrogateRule(t *testing.T) {
 }
 
 // TestSurrogateWorkers: the surrogate's numbers do not depend on the
-// number of workers.
+// number of workers, FORM's gradients spread over them (an expensive
+// model) included.
 func TestSurrogateWorkers(t *testing.T) {
 	var first *Result
+	m := fourBranch(6)
+	m.Expensive = true
 	for _, w := range []int{1, 3} {
-		r, err := Run(context.Background(), fourBranch(6), &Settings{Method: Surrogate, Samples: 300, Seed: 5, Workers: w, AuxSamples: -1, TargetCoV: 0.1})
+		r, err := Run(context.Background(), m, &Settings{Method: Surrogate, Samples: 300, Seed: 5, Workers: w, AuxSamples: -1, TargetCoV: 0.1})
 		if err != nil {
 			t.Fatal(err)
 		}
