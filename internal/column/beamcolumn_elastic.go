@@ -31,6 +31,7 @@ type bcWork struct {
 
 	ro    RambergOsgood // the fibres' law when useRO (BeamOptions.Law)
 	useRO bool
+	roTab roTable // ro tabulated
 }
 
 var bcPool = sync.Pool{New: func() any { return new(bcWork) }}

@@ -150,6 +150,9 @@ func (w *bcWork) plasticInit() {
 	nfib := pl.ngp * pl.nf
 	pl.ep = bcGrow(pl.ep, nfib)
 	pl.epA = bcGrow(pl.epA, nfib)
+	if w.useRO {
+		w.roTab.build(w.ro)
+	}
 	for g := 0; g < pl.ngp; g++ {
 		for k := 0; k < pl.nf; k++ {
 			pl.ep[g*pl.nf+k] = -pl.fr[k] / w.e

@@ -70,12 +70,23 @@ func (r *RambergOsgood) Compliance(s float64) float64 {
 // (0 beyond the strain at Fu), inverting Strain by Newton's method kept
 // inside a bracket. It does not allocate.
 func (r *RambergOsgood) Stress(eps float64) (s, et float64) {
+	return r.StressFrom(eps, math.NaN())
+}
+
+// StressFrom is Stress with Newton's method started from the stress
+// guess (taken when it lies inside the bracket; NaN for none): a close
+// guess, such as the fibre's stress at the last iteration, converges in
+// a step or two.
+func (r *RambergOsgood) StressFrom(eps, guess float64) (s, et float64) {
 	a := math.Abs(eps)
 	if a >= r.Strain(r.Fu) {
 		return math.Copysign(r.Fu, eps), 0
 	}
 	lo, hi := 0.0, math.Min(r.Fu, r.E*a)
 	x := hi
+	if g := math.Abs(guess); g > lo && g < hi && math.Signbit(guess) == math.Signbit(eps) {
+		x = g
+	}
 	for range 100 {
 		f := r.Strain(x) - a
 		if math.Abs(f) <= 1e-14*math.Max(a, 1e-12) {
@@ -98,6 +109,52 @@ func (r *RambergOsgood) Stress(eps float64) (s, et float64) {
 	return math.Copysign(x, eps), 1 / r.Compliance(x)
 }
 
+// roN is the number of intervals of roTable.
+const roN = 1024
+
+// roTable is a Ramberg-Osgood law tabulated at roN + 1 stresses evenly
+// spaced from 0 to Fu (their strains exact, Strain), read back by
+// interpolation: the stress of a strain is piecewise linear between the
+// nodes and its tangent that of the interval, so the fibres' law stays
+// consistent with its tangent for Newton's method, within Fu/roN of the
+// law's stress.
+type roTable struct {
+	law RambergOsgood
+	ds  float64
+	eps [roN + 1]float64
+}
+
+// build tabulates r, unless it is the law already tabulated.
+func (t *roTable) build(r RambergOsgood) {
+	if t.law == r && t.ds > 0 {
+		return
+	}
+	t.law, t.ds = r, r.Fu/roN
+	for i := range t.eps {
+		t.eps[i] = r.Strain(float64(i) * t.ds)
+	}
+}
+
+// stress is the tabulated stress at strain eps and its tangent (0 beyond
+// the strain at Fu).
+func (t *roTable) stress(eps float64) (s, et float64) {
+	a := math.Abs(eps)
+	if !(a < t.eps[roN]) {
+		return math.Copysign(t.law.Fu, eps), 0
+	}
+	lo, hi := 0, roN
+	for hi-lo > 1 {
+		mid := (lo + hi) / 2
+		if t.eps[mid] <= a {
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	et = t.ds / (t.eps[hi] - t.eps[lo])
+	return math.Copysign(float64(lo)*t.ds+(a-t.eps[lo])*et, eps), et
+}
+
 // sectionRO is bcWork.section for fibres that follow the Ramberg-Osgood
 // law w.ro: the stress of strain e0 + z k less the fibre's initial strain
 // (its residual stress) and the tangent modulus of the law.
@@ -107,7 +164,7 @@ func (w *bcWork) sectionRO(g int, e0, k float64) (n, m, kee, kek, kkk float64) {
 	fa, fz := pl.fa[:len(ep)], pl.fz[:len(ep)]
 	floor := w.e * 1e-6 // keeps the tangent solvable past fu
 	for i := range ep {
-		s, et := w.ro.Stress(e0 + fz[i]*k - ep[i])
+		s, et := w.roTab.stress(e0 + fz[i]*k - ep[i])
 		et = math.Max(et, floor)
 		a := fa[i]
 		az := a * fz[i]

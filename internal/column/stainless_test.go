@@ -71,3 +71,27 @@ func TestRambergOsgoodRoundTrip(t *testing.T) {
 		t.Errorf("Stress allocates %v times", n)
 	}
 }
+
+// TestRambergOsgoodTable checks the tabulated law of the beam-column
+// against the law itself: within Fu/roN in stress everywhere, exact at
+// the nodes, and without allocation.
+func TestRambergOsgoodTable(t *testing.T) {
+	r := RambergOsgood{E: 200000, Fy: 280, Fu: 580, N: 7}
+	var tab roTable
+	tab.build(r)
+	for i := -200; i <= 200; i++ {
+		eps := 0.04 * float64(i) / 200 * math.Abs(float64(i)) / 200 // dense near zero
+		want, _ := r.Stress(eps)
+		got, et := tab.stress(eps)
+		if math.Abs(got-want) > r.Fu/roN || !(et > 0) {
+			t.Errorf("strain %g: table %g (tangent %g), law %g", eps, got, et, want)
+		}
+	}
+	s := 100 * r.Fu / roN
+	if got, _ := tab.stress(r.Strain(s)); math.Abs(got-s) > 1e-9 {
+		t.Errorf("at a node: %g, want %g", got, s)
+	}
+	if n := testing.AllocsPerRun(100, func() { tab.stress(0.003) }); n != 0 {
+		t.Errorf("stress allocates %v times", n)
+	}
+}

@@ -4,6 +4,8 @@ import (
 	"math"
 	"strings"
 	"testing"
+
+	"strutrisk/internal/column"
 )
 
 // buildText parses and builds a study.
@@ -302,5 +304,57 @@ func TestMaterialBendingRefused(t *testing.T) {
 	_, err := Parse("t.toml", []byte(text))
 	if err == nil || !strings.Contains(err.Error(), "bending") || !strings.Contains(err.Error(), "steel member") {
 		t.Errorf("err = %v, want [bending] refused for timber", err)
+	}
+}
+
+// TestStainlessBeamColumnLaw checks that the ultimate beam-column of a
+// stainless study follows the Ramberg-Osgood law with the study's
+// ultimate strength and exponent (column.BeamColumn with Law, the law
+// itself tested against EN 1993-1-4 Annex C in internal/column), and that
+// without material.ultimate the study is refused.
+func TestStainlessBeamColumnLaw(t *testing.T) {
+	text := `[member]
+length = 2500
+ends = "pinned-pinned"
+[member.section]
+shape = "CHS"
+diameter = 114.3
+thickness = 4
+[material]
+kind = "stainless"
+yield = 300
+ultimate = 650
+exponent = 6
+[imperfection]
+bow = "L/1000"
+[capacity]
+model = "beam-column"
+limit = "ultimate"
+axis = "major"
+[loads]
+dead = { dist = "fixed", value = 100000 }
+`
+	md := buildText(t, text)
+	_, c, _ := gAt(t, md)
+	p, err := column.Section{Shape: column.ShapeCHS, Diameter: 114.3, Thickness: 4}.Properties()
+	if err != nil {
+		t.Fatal(err)
+	}
+	m := column.Member{Props: p, E: 200000, Fy: 300, Length: 2500, K: [2]float64{1, 1}, Bow: 2.5, Kind: column.Stainless, Lambda0: 0.4}
+	o := column.BeamOptions{Limit: column.UltimateLimit, Residual: column.ResidualNone, Law: column.RambergOsgood{Fu: 650, N: 6}}
+	want, err := column.BeamColumn(&m, column.Section{Shape: column.ShapeCHS, Diameter: 114.3, Thickness: 4}, column.Major, &o)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(c-want.N) > 1e-9*want.N {
+		t.Errorf("capacity %.1f, want the Ramberg-Osgood beam-column's %.1f", c, want.N)
+	}
+	o.Law = column.RambergOsgood{}
+	epp, _ := column.BeamColumn(&m, column.Section{Shape: column.ShapeCHS, Diameter: 114.3, Thickness: 4}, column.Major, &o)
+	if !(c < epp.N) {
+		t.Errorf("capacity %.1f not below the elastic-plastic %.1f: the law is not applied", c, epp.N)
+	}
+	if _, err := Parse("t.toml", []byte(strings.Replace(text, "ultimate = 650\n", "", 1))); err == nil || !strings.Contains(err.Error(), "material.ultimate") {
+		t.Errorf("err = %v, want material.ultimate missing", err)
 	}
 }
