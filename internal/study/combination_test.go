@@ -372,3 +372,41 @@ func TestCombinationRefused(t *testing.T) {
 		}
 	}
 }
+
+// TestCombinationNoAllocation: one sample of the union of Turkstra's
+// cases, of one case alone and of the Ferry Borges-Castanheta model (its
+// tabulated maximum included) does not allocate (the hot path rule of
+// DEVELOPERS.md).
+func TestCombinationNoAllocation(t *testing.T) {
+	md, err := Build(parse(t, twoLoads))
+	if err != nil {
+		t.Fatal(err)
+	}
+	cm, err := md.CaseModel(1)
+	if err != nil {
+		t.Fatal(err)
+	}
+	fbc, err := Build(parse(t, strings.Replace(twoLoads, `imposed = { dist = "normal", mean = 400000, sd = 80000, companion = { dist = "normal", mean = 150000, sd = 50000 } }
+snow = { dist = "normal", mean = 350000, sd = 90000, companion = { dist = "normal", mean = 100000, sd = 40000 } }`,
+		`imposed = { dist = "normal", mean = 150000, sd = 50000, repetitions = 5 }
+snow = { dist = "gumbel", mean = 100000, sd = 40000, repetitions = 50 }
+[combination]
+rule = "ferry-borges-castanheta"`, 1)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for name, m := range map[string]*sim.Model{"union": md.Sim, "case snow": cm, "ferry-borges-castanheta": fbc.Sim} {
+		u := make([]float64, len(m.Vars))
+		x := make([]float64, len(m.Vars))
+		out := make([]float64, len(m.Outputs))
+		eval := func() {
+			for i, v := range m.Vars {
+				x[i] = v.Dist.FromStdNormal(u[i] + 0.5) // the sampling path, through each marginal
+			}
+			m.G(x, out)
+		}
+		if n := testing.AllocsPerRun(100, eval); n != 0 {
+			t.Errorf("%s: %v allocations per evaluation", name, n)
+		}
+	}
+}
