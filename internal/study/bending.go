@@ -116,14 +116,7 @@ func (p *parser) checkBending() {
 	if st.Combination != nil {
 		p.errorf("bending", "[bending] is not combined with a load combination yet: give the loads as they act together")
 	}
-	switch k := st.Material.Kind; {
-	case k == column.Timber:
-		p.errorf("bending", "[bending] with material.kind = \"timber\" is not made yet (EN 1995-1-1 6.3.2 combines bending with its own k_c and k_m): give the timber member its axial loads alone")
-	case k != column.Steel && st.ModelTraits().Curve:
-		p.errorf("capacity.model", "model \"curve\" with [bending] is the EN 1993-1-1 6.3.3 interaction of steel members: use perry-robertson (first yield) for material.kind = %q", k)
-	case k == column.Aluminium && st.Material.HAZFactor != nil:
-		p.errorf("bending", "[bending] does not take the heat-affected zones of a welded aluminium member yet: give its axial loads alone")
-	}
+	// Another material than steel is refused by checkMaterial.
 	if st.ModelTraits().Curve {
 		switch shape {
 		case column.ShapeI, column.ShapeRHS, column.ShapeCHS, column.ShapeRect, column.ShapeRound:
