@@ -185,3 +185,28 @@ func TestInteractionCurve(t *testing.T) {
 		}
 	}
 }
+
+// TestBendingBeamColumnModel checks that model "beam-column" with
+// [bending] hands the moments and lateral load to the numerical
+// beam-column with the axial load they go with: its first-yield load
+// factor agrees with the closed form to 1e-4 (Timoshenko & Gere, ch. 1;
+// column.TestBeamColumnBendingFirstYield checks the mechanics).
+func TestBendingBeamColumnModel(t *testing.T) {
+	text := strings.Replace(bendingStudy, `model = "perry-robertson"`, "model = \"beam-column\"\naxis = \"major\"", 1)
+	md, err := Build(parse(t, text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	n, err := md.Nominal()
+	if err != nil {
+		t.Fatal(err)
+	}
+	m := n.Member
+	want, err := column.FirstYieldFactor(&m, column.Major, n.Demand, n.Bending)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !near(n.LoadFactor, want.Factor, 1e-4) {
+		t.Errorf("beam-column load factor %.7g, closed form %.7g", n.LoadFactor, want.Factor)
+	}
+}
