@@ -3,6 +3,7 @@ package analysis
 import (
 	"context"
 	"fmt"
+	"strings"
 
 	"strutrisk/internal/assess"
 	"strutrisk/internal/life"
@@ -101,7 +102,7 @@ func annualTarget(st *study.Study) (beta float64, source string, ok bool) {
 		return st.Target, st.TargetSource + ", for one year", true
 	}
 	b1 := assess.BetaOverYears(st.Target, 1/st.ReferenceYears)
-	return b1, fmt.Sprintf("%s: β = %.2f over %s, converted to one year by Φ(β_n) = Φ(β_1)^n, independent years", st.TargetSource, st.Target, assess.YearsText(st.ReferenceYears)), true
+	return b1, fmt.Sprintf("%s: beta %.2f over %s, converted to one year by Phi(beta_n) = Phi(beta_1)^n, independent years", st.TargetSource, st.Target, assess.YearsText(st.ReferenceYears)), true
 }
 
 // lossLaw says the loss law of [life] as applied.
@@ -139,4 +140,39 @@ func (lr *lifeRun) fill(d *report.Document) {
 		d.LifeEnd = &y
 	}
 	d.LifeBasis = &b
+}
+
+// lifeCheckText shows in check what [life] will compute: the loss law,
+// the nominal loss and capacity now and at the horizon, the annual
+// maxima of the variable loads and the annual target.
+func lifeCheckText(l *Loaded) string {
+	st, md := l.Study, l.Model
+	ls := st.Life
+	if ls == nil {
+		return ""
+	}
+	var b strings.Builder
+	y := float64(ls.Years)
+	fmt.Fprintf(&b, "\nRemaining life under corrosion ([life], computed by `strutrisk run`): %d years, evaluated every %s, %d member paths\n", ls.Years, stepText(ls.Step), ls.Paths)
+	fmt.Fprintf(&b, "  loss law: %s\n", lossLaw(st))
+	fmt.Fprintf(&b, "  nominal loss from every face: %.2f mm now, %.2f mm in year %d\n", md.LifeLoss(0), md.LifeLoss(y), ls.Years)
+	now, _ := md.LifeCapacity(0)
+	end, _ := md.LifeCapacity(y)
+	fmt.Fprintf(&b, "  nominal capacity: %.1f kN now, %.1f kN in year %d\n", now/1e3, end/1e3, ls.Years)
+	for _, a := range ls.Annual {
+		fmt.Fprintf(&b, "  annual maxima of %s: %s (N; %s)\n", a.Path, a.Dist, a.Basis)
+	}
+	if t, src, ok := annualTarget(st); ok {
+		fmt.Fprintf(&b, "  annual target beta %.2f (%s)\n", t, report.PlainGreek(src))
+		fmt.Fprintf(&b, "  the life ends at %s\n", report.LifeCriterion)
+	}
+	return b.String()
+}
+
+// stepText writes the step: "year" or "5 years".
+func stepText(n int) string {
+	if n == 1 {
+		return "year"
+	}
+	return fmt.Sprintf("%d years", n)
 }

@@ -91,3 +91,14 @@ func TestLifeDocument(t *testing.T) {
 		}
 	}
 }
+
+// TestLifeCheckText: check shows the loss law and the nominal loss now
+// and at the horizon: 1 mm + 0.2 mm x 30^0.8 = 4.04 mm.
+func TestLifeCheckText(t *testing.T) {
+	txt := mustLoad(t, lifeStudy).CheckText()
+	for _, w := range []string{"Remaining life under corrosion", "d(t) = r t^b", "1.00 mm now, 4.04 mm in year 30", "annual maxima of loads.imposed", "annual target beta 4.6"} {
+		if !strings.Contains(txt, w) {
+			t.Errorf("check lacks %q:\n%s", w, txt)
+		}
+	}
+}

@@ -212,6 +212,7 @@ func (l *Loaded) CheckText() string {
 	b.WriteString(loadPeriodText(st))                    // period.go
 	b.WriteString(st.CombinationText())
 	b.WriteString(report.CodeCheckText(l.CodeCheck))
+	b.WriteString(lifeCheckText(l))   // life.go
 	b.WriteString(casesCheckText(st)) // sweep.go
 	if len(st.Defaults) > 0 {
 		fmt.Fprintf(&b, "\nDefaults that apply:\n")
