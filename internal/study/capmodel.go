@@ -80,6 +80,13 @@ type Traits struct {
 	NoResidual string
 }
 
+// numericalStep is the relative finite-difference step of FORM for a
+// capacity model whose result carries numerical noise (Traits.FORMStep):
+// the beam-column at its ultimate load, about 1e-5 of the capacity from
+// the path of the nonlinear solution (sim.FORMSettings.Step says why
+// 1e-2). The reserve search retries with it when FORM does not converge.
+const numericalStep = 1e-2
+
 // capacityModels is the one registry of capacity models: capacity.model
 // takes their names, in this order, and the first is the default.
 var capacityModels = []CapacityModel{perryRobertson{}, secant{}, bucklingCurve{}, beamColumn{}}

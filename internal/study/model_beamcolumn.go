@@ -10,12 +10,6 @@ type beamColumn struct{}
 
 func (beamColumn) String() string { return "beam-column" }
 
-// numericalStep is the relative finite-difference step of FORM for a
-// capacity model whose result carries numerical noise: the beam-column at
-// its ultimate load, about 1e-5 of the capacity from the path of the
-// nonlinear solution (sim.FORMSettings.Step says why 1e-2).
-const numericalStep = 1e-2
-
 // Traits of the numerical beam-column with the limit and residual
 // stresses of st.
 func (beamColumn) Traits(st *Study) Traits {
