@@ -131,24 +131,6 @@ func confirmation(res *sim.Result, target float64) (ok, usable bool, why string)
 	return false, true, "found " + found + ", which does not hold the target"
 }
 
-// verdictOf compares the estimate of res with the target beta: "met" or
-// "not met" only when res can be trusted (sim.Status.Trusted) and the
-// whole interval of beta lies on one side of the target, else "undecided"
-// with the reason.
-func verdictOf(res *sim.Result, target float64) (verdict, reason string) {
-	if !res.Status.Trusted() {
-		return "undecided", "the estimate cannot be trusted: " + res.StatusReason
-	}
-	lo, hi := res.BetaCI[0], res.BetaCI[1]
-	switch {
-	case lo < target && target < hi:
-		return "undecided", "the interval of beta straddles the target at this sample size"
-	case res.Beta >= target:
-		return "met", ""
-	}
-	return "not met", ""
-}
-
 // samplesToDecide estimates the evaluations after which the interval of
 // pf would clear the target's pf, if the estimate stayed where it is: the
 // CoV of the estimate falls as 1/sqrt(n), so n_needed = n (CoV /
@@ -195,16 +177,22 @@ func (r *Result) fillTarget(d *report.Document) {
 	}
 	t := baseTarget(st)
 	d.Target = t
-	v, why := verdictOf(r.Estimate, st.Target)
-	t.Verdict, t.Reason = v, why
+	v := report.TargetVerdict(d) // one rule for the document, summary and reports
+	t.Verdict = v.String()
 	switch {
-	case v == "undecided" && r.Estimate.Status.Trusted():
+	case v == report.Undecided && !r.Estimate.Status.Trusted():
+		t.Reason = "the estimate cannot be trusted: " + r.Estimate.StatusReason
+	case v == report.Undecided:
+		t.Reason = "the interval of beta straddles the target at this sample size"
+	}
+	switch {
+	case v == report.Undecided && r.Estimate.Status.Trusted():
 		n := samplesToDecide(r.Estimate, st.Target)
 		if !math.IsInf(n, 0) {
 			t.SamplesToDecide = &n
 		}
-	case v != "undecided":
-		meets := v == "met"
+	case v == report.Met, v == report.NotMet:
+		meets := v == report.Met
 		d.MeetsTarget = &meets
 	}
 	tr := r.target

@@ -12,49 +12,67 @@ const Caution = "Caution: results depend entirely on the inputs and models state
 // CautionText is Caution wrapped for a terminal and plain text.
 var CautionText = strings.Join(WrapText(Caution, 74), "\n")
 
-// verdict says how the reliability index compares with the target.
-type verdict int
+// Verdict says how the reliability index of a run compares with its
+// target: the one rule that results.json (target.verdict, meets_target),
+// the summary and the reports follow.
+type Verdict int
 
+// The verdicts.
 const (
-	noTarget  verdict = iota // no target or no beta
-	met                      // beta and its whole interval at or above target
-	notMet                   // beta and its whole interval below target
-	undecided                // the interval straddles the target
+	NoTarget  Verdict = iota // no target or no beta
+	Met                      // beta and its whole interval at or above target
+	NotMet                   // beta and its whole interval below target
+	Undecided                // the interval straddles the target, or the estimate is not trusted
 )
 
-// targetVerdict compares the result of d with its target. When the beta
+// String is the verdict as results.json writes it: "met", "not met",
+// "undecided", or "" without a target.
+func (v Verdict) String() string {
+	switch v {
+	case Met:
+		return "met"
+	case NotMet:
+		return "not met"
+	case Undecided:
+		return "undecided"
+	}
+	return ""
+}
+
+// TargetVerdict compares the result of d with its target. An estimate
+// that is not trusted (d.Trusted false) decides nothing; when the beta
 // interval straddles the target the sample is too small to decide,
 // whatever the point estimate says.
-func targetVerdict(d *Document) verdict {
+func TargetVerdict(d *Document) Verdict {
 	if d == nil || d.TargetBeta == nil || d.Beta == nil || !finite(*d.TargetBeta) {
-		return noTarget
+		return NoTarget
 	}
 	if d.Target != nil && d.Target.Verdict == "undecided" {
-		return undecided // the estimate cannot be trusted, or its interval straddles
+		return Undecided // the estimate cannot be trusted, or its interval straddles
 	}
 	if d.Trusted != nil && !*d.Trusted {
-		return undecided
+		return Undecided
 	}
 	t, b := *d.TargetBeta, float64(*d.Beta)
 	if len(d.BetaCI) == 2 && float64(d.BetaCI[0]) < t && t < float64(d.BetaCI[1]) {
-		return undecided
+		return Undecided
 	}
 	if b >= t {
-		return met
+		return Met
 	}
-	return notMet
+	return NotMet
 }
 
 // verdictText is the reader's wording of v for d: an undecided verdict
 // gives its reason (an interval that straddles the target, or an
 // estimate that cannot be trusted).
-func verdictText(d *Document, v verdict) string {
+func verdictText(d *Document, v Verdict) string {
 	switch v {
-	case met:
+	case Met:
 		return "met"
-	case notMet:
+	case NotMet:
 		return "NOT met"
-	case undecided:
+	case Undecided:
 		if d != nil && d.Trusted != nil && !*d.Trusted {
 			if d.Target != nil && d.Target.Reason != "" {
 				return "undecided (" + d.Target.Reason + ")"

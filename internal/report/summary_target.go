@@ -9,8 +9,8 @@ import (
 // reserve factor and its confirmation by sampling, the load to add or
 // take away, and the notes of the reserve search.
 func targetText(d *Document) string {
-	v := targetVerdict(d)
-	if v == noTarget {
+	v := TargetVerdict(d)
+	if v == NoTarget {
 		return ""
 	}
 	var w strings.Builder
@@ -24,7 +24,7 @@ func targetText(d *Document) string {
 		s += ")"
 	}
 	s += ": " + verdictText(d, v)
-	if v == undecided && t != nil && t.SamplesToDecide != nil {
+	if v == Undecided && t != nil && t.SamplesToDecide != nil {
 		summaryLine(&w, "target beta", s+";")
 		summaryLine(&w, "", fmt.Sprintf("about %.3g evaluations would decide it", *t.SamplesToDecide))
 	} else {

@@ -129,10 +129,10 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 			v.Result = append(v.Result, KV{"95% interval of β", betaIntervalText(d.BetaCI)})
 		}
 	}
-	if vd := targetVerdict(&d); vd != noTarget {
+	if vd := TargetVerdict(&d); vd != NoTarget {
 		v.Result = append(v.Result, KV{"target β", f2(*d.TargetBeta)})
 		v.Verdict = "Target " + verdictText(&d, vd) + "."
-		v.VerdictClass = map[verdict]string{met: "met", notMet: "not-met", undecided: "undecided"}[vd]
+		v.VerdictClass = map[Verdict]string{Met: "met", NotMet: "not-met", Undecided: "undecided"}[vd]
 	}
 	if d.ReserveFactor != nil {
 		v.Result = append(v.Result, KV{"reserve factor (load factor at which the target is just met)", f2(*d.ReserveFactor)})
