@@ -157,3 +157,12 @@ func (s *Study) ReserveActions() []*Quantity {
 	}
 	return out
 }
+
+// bendingAction reports whether q is an end moment or the lateral load of
+// [bending] given as a quantity of its own: a variable action (its
+// characteristic value is that of a variable load, see
+// Model.Characteristic).
+func (s *Study) bendingAction(q *Quantity) bool {
+	b := s.Bending
+	return b != nil && q != nil && (q == b.Top.Moment || q == b.Bottom.Moment || q == b.Lateral)
+}

@@ -210,3 +210,24 @@ func TestBendingBeamColumnModel(t *testing.T) {
 		t.Errorf("beam-column load factor %.7g, closed form %.7g", n.LoadFactor, want.Factor)
 	}
 }
+
+// TestBendingCharacteristic checks that the lateral load of [bending], a
+// variable action, takes the characteristic value of a variable load:
+// the 98 % fractile of its annual maxima (EN 1990 4.1.2(7)), not its mean.
+func TestBendingCharacteristic(t *testing.T) {
+	md, err := Build(parse(t, bendingStudy))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for i, v := range md.Sim.Vars {
+		if v.Name != "bending.lateral" {
+			continue
+		}
+		c := md.Characteristic(i)
+		if want := v.Dist.Quantile(0.98); !near(c.Value, want, 1e-12) || !strings.Contains(c.Basis, "98 %") {
+			t.Errorf("characteristic lateral load %g (%s), want the 98 %% fractile %g", c.Value, c.Basis, want)
+		}
+		return
+	}
+	t.Fatal("bending.lateral is not a random variable of the study")
+}

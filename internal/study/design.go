@@ -35,7 +35,7 @@ func (md *Model) Characteristic(i int) assess.Characteristic {
 		return assess.Characteristic{Value: d.Quantile(0.05), Basis: "5 % fractile"}
 	case q == st.Bow || q == st.Ecc:
 		return assess.Characteristic{Value: meanMagnitude(d), Basis: "mean of the magnitude"}
-	case md.isLoad(q) && !md.isPermanent(q):
+	case (md.isLoad(q) || st.bendingAction(q)) && !md.isPermanent(q):
 		n := q.MaximaYears(st.ReferenceYears)
 		if n == 0 {
 			return assess.Characteristic{Value: d.Quantile(0.98), Basis: "98 % fractile of the point-in-time value (period = point-in-time: no annual maxima given)"}
