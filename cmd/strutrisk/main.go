@@ -6,6 +6,7 @@
 //	strutrisk check STUDY.toml [--json]
 //	strutrisk new [NAME]
 //	strutrisk help keys
+//	strutrisk model-factor STUDY.toml TESTS.csv [--design] [--out DIR] [--json]
 //	strutrisk --version
 //
 // run estimates the probability that the column of a study fails and the
@@ -56,6 +57,7 @@ Usage:
   strutrisk check STUDY.toml [--json]  validate; deterministic check at nominal values
   strutrisk new [NAME]                 print a commented starter study
   strutrisk help keys                  every study-file table and key: meaning, units, default
+  strutrisk model-factor STUDY TESTS.csv  model uncertainty from tests (EN 1990 Annex D)
   strutrisk --version                  print the version
   strutrisk COMMAND --help             help on a command
 
@@ -90,6 +92,8 @@ func run(args []string, stdout, stderr io.Writer) (code int) {
 		return checkCmd(args[1:], stdout, stderr)
 	case "new":
 		return newCmd(args[1:], stdout, stderr)
+	case "model-factor":
+		return modelFactorCmd(args[1:], stdout, stderr)
 	case "keys":
 		return keysCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":
@@ -102,6 +106,6 @@ func run(args []string, stdout, stderr io.Writer) (code int) {
 		fmt.Fprintln(stdout, "strutrisk", version)
 		return exitOK
 	}
-	fmt.Fprintf(stderr, "strutrisk: unknown command %q: use run, check, new or help keys (strutrisk --help)\n", args[0])
+	fmt.Fprintf(stderr, "strutrisk: unknown command %q: use run, check, new, model-factor or help keys (strutrisk --help)\n", args[0])
 	return exitInput
 }
