@@ -59,7 +59,7 @@ func runLife(ctx context.Context, l *Loaded, workers int) (*lifeRun, []string, e
 	for _, a := range ls.Annual {
 		b.Loads = append(b.Loads, report.LifeLoad{Load: a.Path, Annual: a.Dist.String(), Basis: a.Basis})
 	}
-	var warns []string
+	warns := md.LifeWarnings()
 	target, source, ok := annualTarget(st)
 	switch {
 	case ok:
@@ -161,6 +161,9 @@ func lifeCheckText(l *Loaded) string {
 	fmt.Fprintf(&b, "  nominal capacity: %.1f kN now, %.1f kN in year %d\n", now/1e3, end/1e3, ls.Years)
 	for _, a := range ls.Annual {
 		fmt.Fprintf(&b, "  annual maxima of %s: %s (N; %s)\n", a.Path, a.Dist, a.Basis)
+	}
+	for _, w := range md.LifeWarnings() {
+		fmt.Fprintf(&b, "  warning: %s\n", w)
 	}
 	if t, src, ok := annualTarget(st); ok {
 		fmt.Fprintf(&b, "  annual target beta %.2f (%s)\n", t, report.PlainGreek(src))

@@ -273,3 +273,29 @@ snow = { dist = "gumbel", mean = 100000, sd = 40000, repetitions = 50 }
 		t.Errorf("imposed annual maxima CDF %g, want F^2 = %g", got, want)
 	}
 }
+
+// TestLifeWarnings: a loss that makes the CHS 168.3 x 8 (fy 355 MPa)
+// class 4 before the horizon, which the study refuses (shell buckling),
+// is warned of with the year: 0.5 mm a year from the outside gives d/t =
+// 157.3/2.5 = 62.9 in year 11, beyond 90 eps^2 = 59.6 (EN 1993-1-1 Table
+// 5.2), and 158.3/3 = 52.8 in year 10; 0.12 mm a year moves it from class
+// 1 to class 2 by year 30 (161.1/4.4 = 36.6, between 50 and 70 eps^2); a
+// small loss says nothing.
+func TestLifeWarnings(t *testing.T) {
+	for _, c := range []struct {
+		life, want string
+	}{
+		{"years = 30\ncorrosion_rate = 0.5\n", "at the nominal loss of year 11 (5.5 mm from every face) the section cannot be evaluated"},
+		{"years = 30\ncorrosion_rate = 0.12\n", "goes from class 1 now to class 2 in year 30"},
+		{"years = 30\ncorrosion_rate = 0.01\n", ""},
+	} {
+		md, err := Build(parse(t, lifeBase+"[life]\n"+c.life))
+		if err != nil {
+			t.Fatal(err)
+		}
+		w := strings.Join(md.LifeWarnings(), "\n")
+		if c.want == "" && w != "" || !strings.Contains(w, c.want) {
+			t.Errorf("%q: warnings %q, want %q", c.life, w, c.want)
+		}
+	}
+}

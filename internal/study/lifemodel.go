@@ -2,9 +2,11 @@ package study
 
 import (
 	"errors"
+	"fmt"
 	"math"
 	"slices"
 
+	"strutrisk/internal/column"
 	"strutrisk/internal/life"
 	"strutrisk/sim"
 )
@@ -145,4 +147,40 @@ func meanOf(q *Quantity, def float64) float64 {
 		return q.Dist.Mean()
 	}
 	return q.Value
+}
+
+// LifeWarnings warns of what the loss over the remaining life does to
+// the section at nominal values: a section the loss consumes before the
+// horizon (members past that point have no capacity and count as
+// failed), or a class that changes from now to the horizon (EN 1993-1-1
+// Table 5.2), which the capacity follows year by year.
+func (md *Model) LifeWarnings() []string {
+	ls := md.Study.Life
+	if ls == nil || md.Study.Section.Shape == column.ShapeCustom {
+		return nil
+	}
+	c := md.lifeCopy()
+	classAt := func(t float64) (int, error) {
+		v := md.nominalValues()
+		v[lossField] = md.LifeLoss(t)
+		m, sec, err := c.member(&v)
+		if err != nil {
+			return 0, err
+		}
+		_, cl, err := sec.Classify(m.Fy)
+		return cl.Class, err
+	}
+	now, err := classAt(0)
+	if err != nil {
+		return nil // reported by the nominal check
+	}
+	for y := 1; y <= ls.Years; y++ {
+		if _, err := classAt(float64(y)); err != nil {
+			return []string{fmt.Sprintf("life: at the nominal loss of year %d (%.3g mm from every face) the section cannot be evaluated (%v): from about that year on members have no capacity and count as failed; check the loss law (life.corrosion_rate, life.corrosion_exponent)", y, md.LifeLoss(float64(y)), err)}
+		}
+	}
+	if end, _ := classAt(float64(ls.Years)); end != now && now > 0 {
+		return []string{fmt.Sprintf("life: the section goes from class %d now to class %d in year %d at nominal values (a nominal loss of %.3g mm from every face; EN 1993-1-1 Table 5.2): the capacity of each year follows its class", now, end, ls.Years, md.LifeLoss(float64(ls.Years)))}
+	}
+	return nil
 }
