@@ -125,7 +125,7 @@ func (md *Model) bothAxes(m *column.Member, sec *column.Section, v *values) (col
 	} else {
 		best.from(m)
 	}
-	if m.Props.It == 0 || md.kernel == kernelBeam {
+	if m.Props.It == 0 || md.planar {
 		best.to(m)
 		return res, nil
 	}

@@ -173,11 +173,11 @@ func (p *parser) checkStainless() {
 	ms := &st.Material
 	if ms.Exponent == 0 {
 		ms.Exponent = 7
-		if st.Model.kernel() == kernelBeam && st.Limit == column.UltimateLimit {
+		if st.ModelTraits().Ultimate {
 			p.defaultf("material.exponent: not given; n = 7, austenitic grades (EN 1993-1-4 Annex C, Table C.1; from memory)")
 		}
 	}
-	if st.Model.kernel() == kernelBeam && st.Limit == column.UltimateLimit {
+	if st.ModelTraits().Ultimate {
 		if ms.Ultimate == nil {
 			p.errorf("material.ultimate", "missing: the ultimate beam-column of stainless steel follows the compound Ramberg-Osgood law (EN 1993-1-4 Annex C), which needs the ultimate strength f_u, e.g. ultimate = \"530 MPa\"")
 		} else if nominalValue(ms.Ultimate, 0) <= nominalValue(st.Yield, 0) {

@@ -80,7 +80,7 @@ func (md *Model) setupMaterial() {
 		mm.adjust = mm.haz
 		mm.classA = ms.ClassA
 	case column.Stainless:
-		mm.law = md.kernel == kernelBeam && st.Limit == column.UltimateLimit && ms.Ultimate != nil
+		mm.law = md.kernel == kernelBeam && st.ModelTraits().Ultimate && ms.Ultimate != nil
 	}
 }
 

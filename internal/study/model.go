@@ -91,6 +91,7 @@ type Model struct {
 	k                                            [2]float64
 	kernel                                       kernel // of the capacity model
 	curve                                        bool   // the model is a buckling curve
+	planar                                       bool   // the model bends in one plane
 	beam                                         column.BeamOptions
 	// cases is the number of load combination cases (0: the loads add
 	// up); only, when not 0, is 1 + the one case the limit state takes
@@ -268,7 +269,7 @@ func Build(st *Study) (*Model, error) {
 		}
 	}
 	md.kernel = st.Model.kernel()
-	md.curve = st.ModelTraits().Curve
+	md.curve, md.planar = st.ModelTraits().Curve, st.ModelTraits().Planar
 	if md.kernel == kernelBeam {
 		md.beam = beamOptions(st)
 	}

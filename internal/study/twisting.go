@@ -19,7 +19,7 @@ func (md *Model) nominalTwisting(n *Nominal, m *column.Member) error {
 	if st.Axis != column.Both || m.Props.It == 0 {
 		return nil
 	}
-	if md.kernel == kernelBeam {
+	if md.planar {
 		if n.Mode.Twists() {
 			return fmt.Errorf("at nominal values: %v", column.ErrTwisting)
 		}
