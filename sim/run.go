@@ -45,9 +45,9 @@ type Settings struct {
 	Replicates int
 	// AuxSamples is the size of the crude sample that describes the
 	// outputs when the estimator's own samples cannot (conditional
-	// quasi-Monte Carlo, FORM, importance sampling, subset simulation);
-	// default 20000, negative for none. Its evaluations are not counted in
-	// Result.Evaluations.
+	// quasi-Monte Carlo, FORM, importance sampling, subset simulation, the
+	// surrogate); default 20000, negative for none. Its evaluations are not
+	// counted in Result.Evaluations.
 	AuxSamples int64
 	// FORM are the settings of every FORM analysis Run makes: the form
 	// method, the design-point search that starts auto and importance

@@ -32,7 +32,8 @@ const streamSurrogate uint64 = 0x4b
 // If the CoV of pf on the candidates is then above the target, a further
 // block of candidates is drawn (up to Surrogate.MaxPopulation) and the
 // learning goes on. The model evaluations, FORM's included, are bounded
-// by Settings.Samples.
+// by Settings.Samples (FORM itself is not cut short: a budget below what
+// FORM needs ends the learning at once, with status BudgetSpent).
 //
 // The estimate counts the candidates the mean predicts failed, weighted
 // as in importance sampling. Its error has two parts, both in PfCoV and
