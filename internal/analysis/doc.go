@@ -2,7 +2,8 @@
 // to a typed outcome: it loads and builds the study (Load), runs the
 // estimate, FORM, the sensitivity measures, the reserve factor and the
 // cases of a sweep and variants (Run), and turns the outcome into the
-// result document, the report bundle and the summary text. It takes a
+// result document and the report bundle, from which internal/report
+// writes the summary and the reports. It takes a
 // context, and tells an Observer of its steps; it writes no files and
 // knows no flags or exit statuses (cmd/strutrisk does).
 package analysis
