@@ -144,6 +144,7 @@ var keyTables = []*TableInfo{
 	}},
 	{Path: "measurements", Meaning: "Test results that update a distribution of the study (EN 1990 Annex D).", Keys: []KeyInfo{
 		{Name: "yield", Takes: "table", Meaning: "Updates material.yield."},
+		{Name: "strength", Takes: "table", Meaning: "Updates material.strength (timber)."},
 		{Name: "modulus", Takes: "table", Meaning: "Updates material.modulus."},
 		{Name: "bow", Takes: "table", Meaning: "Updates imperfection.bow."},
 		{Name: "thickness_loss", Takes: "table", Meaning: "Updates member.section.thickness_loss."},

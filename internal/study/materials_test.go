@@ -358,3 +358,17 @@ dead = { dist = "fixed", value = 100000 }
 		t.Errorf("err = %v, want material.ultimate missing", err)
 	}
 }
+
+// TestTimberMeasurements checks that timber's tests update
+// material.strength, and that measurements.yield on timber says so.
+func TestTimberMeasurements(t *testing.T) {
+	text := strings.Replace(timberPost, "strength = 21", `strength = { dist = "lognormal", mean = 26, cov = 0.2 }`, 1)
+	st := parse(t, text+"[measurements]\nstrength = { values = [\"27 MPa\", \"31 MPa\", \"24 MPa\"], cov = 0.2 }\n")
+	if len(st.Measurements) != 1 || st.Measurements[0].Path != "material.strength" {
+		t.Errorf("measurements %+v, want one of material.strength", st.Measurements)
+	}
+	_, err := Parse("t.toml", []byte(text+"[measurements]\nyield = { values = [\"27 MPa\"], cov = 0.2 }\n"))
+	if err == nil || !strings.Contains(err.Error(), "write measurements.strength") {
+		t.Errorf("err = %v, want a pointer to measurements.strength", err)
+	}
+}

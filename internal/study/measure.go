@@ -5,6 +5,7 @@ import (
 	"math"
 	"strings"
 
+	"strutrisk/internal/column"
 	"strutrisk/sim"
 )
 
@@ -44,6 +45,7 @@ type Measurement struct {
 // update.
 var measureTargets = []struct{ key, path string }{
 	{"yield", "material.yield"},
+	{"strength", "material.strength"},
 	{"modulus", "material.modulus"},
 	{"bow", "imperfection.bow"},
 	{"thickness_loss", "member.section.thickness_loss"},
@@ -88,6 +90,8 @@ func measureExample(key string) string {
 	switch key {
 	case "yield":
 		return `"287 MPa", "301 MPa", "279 MPa"`
+	case "strength":
+		return `"27 MPa", "31 MPa", "24 MPa"`
 	case "modulus":
 		return `"203 GPa", "209 GPa", "198 GPa"`
 	}
@@ -104,6 +108,10 @@ func (p *parser) measurement(t *table, path string) *Measurement {
 			what = "add thickness_loss to [member.section] (e.g. thickness_loss = \"1 mm\")"
 		} else if key == "bow" {
 			what = "add bow to [imperfection]"
+		} else if key == "yield" && p.st.Material.Kind == column.Timber {
+			what = "timber's strength is material.strength: write measurements.strength"
+		} else if key == "strength" {
+			what = "only timber has material.strength; a metal's is measurements.yield"
 		}
 		p.errorf(t.path, "the study has no %s to update: %s", path, what)
 		p.markAll(t)

@@ -166,7 +166,7 @@ func TestMeasureErrors(t *testing.T) {
 		{"negative weight", `yield = { values = ["287 MPa", "301 MPa"], prior_tests = -1 }`, "measurements.yield.prior_tests", "zero"},
 		{"one value, vague", `yield = { values = ["287 MPa"] }`, "measurements.yield", "at least 2 results"},
 		{"unknown key", `yield = { values = ["287 MPa", "301 MPa"], prior_test = 3 }`, "measurements.yield.prior_test", "did you mean"},
-		{"unknown target", `yield_strength = { values = ["287 MPa"] }`, "measurements.yield_strength", "known keys: yield, modulus, bow, thickness_loss"},
+		{"unknown target", `yield_strength = { values = ["287 MPa"] }`, "measurements.yield_strength", "known keys: yield, strength, modulus, bow, thickness_loss"},
 		{"near miss", `yeild = { values = ["287 MPa"] }`, "measurements.yeild", "did you mean measurements.yield"},
 		{"not a table", `yield = ["287 MPa"]`, "measurements.yield", "values = ["},
 		{"fixed prior weighed", `modulus = { values = ["203 GPa", "209 GPa"], prior_tests = 2 }`, "measurements.modulus", "fixed value"},
