@@ -21,7 +21,7 @@ type lifeRun struct {
 // runLife runs the remaining life into r: a failure is a warning, an
 // interruption leaves the run incomplete.
 func (r *Result) runLife(ctx context.Context, workers int) {
-	lr, warns, err := runLife(ctx, r.l, workers)
+	lr, warns, err := runLife(ctx, r.l, workers, r.settings.Seed)
 	r.warnings = append(r.warnings, warns...)
 	switch {
 	case ctx.Err() != nil:
@@ -35,13 +35,15 @@ func (r *Result) runLife(ctx context.Context, workers int) {
 
 // runLife follows the study's member through its remaining life
 // (internal/life): conditional sampling over the years, the resistance
-// the same random member every year.
-func runLife(ctx context.Context, l *Loaded, workers int) (*lifeRun, []string, error) {
+// the same random member every year, with the run's seed (--seed or
+// analysis.seed).
+func runLife(ctx context.Context, l *Loaded, workers int, seed uint64) (*lifeRun, []string, error) {
 	st, md := l.Study, l.Model
 	p, err := md.LifeProblem(workers)
 	if err != nil {
 		return nil, nil, err
 	}
+	p.Seed = seed
 	res, err := life.Run(ctx, p)
 	if err != nil {
 		return nil, nil, err
