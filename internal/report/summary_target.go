@@ -49,7 +49,7 @@ func reserveText(d *Document) string {
 	t := d.Target
 	var w strings.Builder
 	if d.ReserveFactor != nil && t == nil {
-		summaryLine(&w, "reserve factor", fixed(*d.ReserveFactor, 3)+" (load factor at which the target is just met)")
+		summaryLine(&w, "reserve factor", factorText(*d.ReserveFactor)+" (load factor at which the target is just met)")
 	}
 	if t == nil {
 		return w.String()
@@ -62,7 +62,7 @@ func reserveText(d *Document) string {
 		if d.Nominal != nil && d.Nominal.LoadFactor > 0 {
 			on += " and the bending" // a study with [bending]: study.ReserveActions
 		}
-		summaryLine(&w, "reserve factor", fmt.Sprintf("%.3f on %s (FORM beta %.2f there)", *d.ReserveFactor, on, *t.ReserveFORMBeta))
+		summaryLine(&w, "reserve factor", fmt.Sprintf("%s on %s (FORM beta %s there)", factorText(*d.ReserveFactor), on, BetaText(*t.ReserveFORMBeta)))
 		if c := t.Confirmation; c != nil && c.Method != "form" {
 			how := "confirmed by"
 			if !c.Confirmed {
@@ -81,3 +81,7 @@ func reserveText(d *Document) string {
 	}
 	return w.String()
 }
+
+// factorText writes a reserve factor wherever a run shows one: three
+// decimals.
+func factorText(x float64) string { return fixed(x, 3) }

@@ -135,7 +135,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		v.VerdictClass = map[Verdict]string{Met: "met", NotMet: "not-met", Undecided: "undecided"}[vd]
 	}
 	if d.ReserveFactor != nil {
-		v.Result = append(v.Result, KV{"reserve factor (load factor at which the target is just met)", f2(*d.ReserveFactor)})
+		v.Result = append(v.Result, KV{"reserve factor (load factor at which the target is just met)", factorText(*d.ReserveFactor)})
 	}
 	if d.GoverningAxis != "" {
 		v.Result = append(v.Result, KV{"governing axis", d.GoverningAxis})
