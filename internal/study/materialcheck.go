@@ -205,6 +205,12 @@ func (p *parser) checkAluminium() {
 			}
 		}
 	}
+	if st.Model.kernel() == kernelBeam && st.Limit == column.UltimateLimit {
+		p.warnf("material.kind (line %d): the ultimate beam-column of aluminium takes elastic-perfectly-plastic fibres at f_o; the continuous stress-strain law of EN 1999-1-1 Annex E is not modelled, so the capacity near f_o may be overestimated", p.line("material.kind"))
+		if st.Residual != column.ResidualNone {
+			p.warnf("capacity.residual_stress (line %d): the residual stress patterns are those of carbon steel; aluminium sections differ", p.line("capacity.residual_stress"))
+		}
+	}
 	welded := sec.Fabrication == column.Welded && (sec.Shape == column.ShapeI || sec.Shape == column.ShapeRHS)
 	if !welded {
 		for _, k := range []string{"haz_factor", "haz_width"} {

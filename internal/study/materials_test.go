@@ -372,3 +372,30 @@ func TestTimberMeasurements(t *testing.T) {
 		t.Errorf("err = %v, want a pointer to measurements.strength", err)
 	}
 }
+
+// TestAluminiumBeamColumnWarns checks that the ultimate beam-column of an
+// aluminium member says that its fibres are elastic-perfectly-plastic.
+func TestAluminiumBeamColumnWarns(t *testing.T) {
+	text := `[member]
+length = 2500
+ends = "pinned-pinned"
+[member.section]
+shape = "CHS"
+diameter = 114.3
+thickness = 5
+[material]
+kind = "aluminium"
+yield = 240
+[imperfection]
+bow = "L/1000"
+[capacity]
+model = "beam-column"
+limit = "ultimate"
+[loads]
+dead = 100000
+`
+	st := parse(t, text)
+	if w := strings.Join(st.Warnings, "\n"); !strings.Contains(w, "material.kind (line 9): the ultimate beam-column of aluminium takes elastic-perfectly-plastic fibres") {
+		t.Errorf("warnings lack the aluminium law:\n%s", w)
+	}
+}
