@@ -29,7 +29,8 @@ type Result struct {
 	life     *lifeRun        // the remaining life under corrosion (life.go)
 	// Incomplete, when not empty, says why the run is not complete.
 	Incomplete string
-	cases      *cases // sweep and variants (sweep.go)
+	cases      *cases        // sweep and variants (sweep.go)
+	inventory  *inventoryRun // the members of an inventory (inventory.go)
 }
 
 // Settings are the study's [analysis] settings for sim, with those of its
@@ -72,6 +73,11 @@ func Run(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Result
 		if r.cases = runCases(ctx, l, s, obs); r.cases != nil {
 			r.warnings = append(r.warnings, r.cases.warnings...)
 		}
+	}
+	if err == nil && !r.Estimate.Incomplete && l.Study.Inventory != nil {
+		obs.Stage("inventory members")
+		r.inventory = runInventory(ctx, l, s, obs)
+		r.warnings = append(r.warnings, r.inventory.warnings...)
 	}
 	return r, err
 }
@@ -171,6 +177,7 @@ func (r *Result) Document() *report.Document {
 	r.fillTarget(d) // verdict (absent when undecided) and reserve
 	fillCombination(d, r.combined)
 	r.life.fill(d)
+	r.inventory.fill(d, nil)
 	for _, o := range res.Outputs {
 		switch o.Name {
 		case "capacity":
@@ -307,6 +314,7 @@ func (r *Result) Bundle() *report.Bundle {
 	b.Slenderness = r.slendernessChart()
 	r.bendingBundle(b) // bending.go
 	r.cases.fill(b)
+	r.inventory.fill(nil, b)
 	r.addTrace(b)
 	b.Diagnostics = []report.KV{
 		{Key: "method", Value: string(r.Estimate.Method)},

@@ -33,6 +33,9 @@ type Bundle struct {
 	MethodReason string
 	// Cases are the sweep and variants as the summary tabulates them.
 	Cases *CaseTable
+	// InventoryColumns are the inventory's columns (key paths), written
+	// after the results in inventory.csv.
+	InventoryColumns []string
 	// Convergence traces pf and its band against evaluations; TraceKind says
 	// (TraceKind) what its points are (subset simulation's levels are not estimates).
 	Convergence []sim.ConvergencePoint

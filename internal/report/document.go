@@ -73,7 +73,10 @@ type Document struct {
 	Sobol    []Sobol   `json:"sobol,omitempty"`
 	Sweep    []Point   `json:"sweep,omitempty"`
 	Variants []Variant `json:"variants,omitempty"`
-	Warnings []string  `json:"warnings"`
+	// Inventory holds the members of the study's inventory and their
+	// series system (inventory.go).
+	Inventory *Inventory `json:"inventory,omitempty"`
+	Warnings  []string   `json:"warnings"`
 	// SobolCapacity are the Sobol indices of the capacity (Sobol holds those
 	// of the study's sensitivity output, the margin); loads have ~0 here.
 	SobolCapacity []Sobol `json:"sobol_capacity,omitempty"`

@@ -88,6 +88,13 @@ func Files(b *Bundle, formats []string) ([]outdir.File, error) {
 		}
 		files = append(files, outdir.File{Name: "sweep.csv", Data: csv})
 	}
+	if inv := b.Doc.Inventory; inv != nil {
+		csv, err := inventoryCSV(inv, b.InventoryColumns)
+		if err != nil {
+			return nil, err
+		}
+		files = append(files, outdir.File{Name: "inventory.csv", Data: csv})
+	}
 	files = append(files, outdir.File{Name: "summary.txt", Data: []byte(SummaryText(b))})
 	files = append(files, outdir.File{Name: "summary.md", Data: []byte(Markdown(b))})
 

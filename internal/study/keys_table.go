@@ -181,6 +181,12 @@ var keyTables = []*TableInfo{
 		{Name: "set", Takes: "table of key paths and values", Required: true,
 			Meaning: "The keys the variant changes, e.g. { \"imperfection.bow\" = \"L/500\" }; \"unset\" removes a key."},
 	}},
+	{Path: "inventory", Meaning: "Members: one a row of a CSV next to the study, each the study with the row's keys set; per member results and the series system.", Keys: []KeyInfo{
+		{Name: "file", Takes: "text (a CSV file name)", Required: true,
+			Meaning: "The members: a name column and key paths of the study (\"member.length (m)\"), units in the header or in the cell."},
+		{Name: "shared", Takes: "table of key paths and \"all\" or a column name",
+			Meaning: "How members share a random input: \"all\" one variable for every member, a column name one per value of the column; unlisted inputs are independent per member."},
+	}},
 	{Path: "life", Meaning: "The remaining life under corrosion: the section loses d(t) = r t^b from every face on top of member.section.thickness_loss, t in years from now (ISO 9224's law); the annual beta and the cumulative pf over the years, under the annual maxima of the variable loads.", Keys: []KeyInfo{
 		{Name: "years", Takes: "whole number of years, or a duration (\"30 years\")", Required: true, Meaning: "The horizon: the member is followed from now to the end of this year."},
 		{Name: "step", Takes: "whole number of years, or a duration", Default: "1 year",

@@ -376,6 +376,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.output(top)
 	p.sweep(top)
 	p.variants(top)
+	p.inventory(top) // inventory.go
 	if _, ok := raw["correlation"]; ok {
 		top.used["correlation"] = true // read once the variables are known
 	}
@@ -415,6 +416,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	}
 	p.correlation(top)
 	p.lifeCorrelation() // life.go
+	p.checkShared()     // inventory.go
 	p.checkModel()
 	p.checkSection()
 	if len(p.probs) == 0 {

@@ -9,7 +9,7 @@ import "strings"
 // so checking n cases takes time in proportion to n, not to n times the
 // file.
 type source struct {
-	doc   map[string]any // without "sweep" and "variant"; never changed
+	doc   map[string]any // without "sweep", "variant" and "inventory"; never changed
 	lines map[string]int // lines of doc's keys
 	// parts holds the lines under "sweep" and under each "variant[i]",
 	// keyed by that prefix.
@@ -20,7 +20,7 @@ type source struct {
 func newSource(raw map[string]any, lines map[string]int) *source {
 	src := &source{doc: map[string]any{}, lines: map[string]int{}, parts: map[string]map[string]int{}}
 	for k, v := range raw {
-		if k != "sweep" && k != "variant" {
+		if k != "sweep" && k != "variant" && k != "inventory" {
 			src.doc[k] = v
 		}
 	}

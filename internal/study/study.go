@@ -102,7 +102,9 @@ type Study struct {
 	Sensitivity Sensitivity
 	Sweep       *Sweep
 	Variants    []Variant
-	Output      Output
+	// Inventory, when not nil, is the study's [inventory] (inventory.go).
+	Inventory *Inventory
+	Output    Output
 
 	// Defaults lists the defaults that applied, Warnings the things a
 	// reader should know; both are full sentences naming the key.
@@ -197,6 +199,9 @@ func Parse(name string, data []byte) (*Study, error) {
 	// Every variant at every swept value is checked now, so a run does
 	// not stop half way (see sweep.go).
 	if e := st.checkCases(); e != nil {
+		return nil, e
+	}
+	if e := st.readInventory(); e != nil {
 		return nil, e
 	}
 	return st, nil

@@ -1,0 +1,155 @@
+package analysis
+
+import (
+	"context"
+	"fmt"
+	"math"
+	"sort"
+
+	"strutrisk/internal/report"
+	"strutrisk/internal/study"
+	"strutrisk/sim"
+)
+
+// inventoryRun is the result of a study's inventory (inventory.go).
+type inventoryRun struct {
+	doc      *report.Inventory
+	columns  []string
+	warnings []string
+}
+
+// MemberSeed is the seed of member i of an inventory run with seed: each
+// member draws its own stream, a function of (seed, i) only, so members
+// can be run in any order or on other machines.
+func MemberSeed(seed uint64, i int) uint64 {
+	// SplitMix64's finaliser (Steele, Lea & Flood 2014) of seed and i.
+	z := seed + uint64(i+1)*0x9e3779b97f4a7c15
+	z = (z ^ (z >> 30)) * 0xbf58476d1ce4e5b9
+	z = (z ^ (z >> 27)) * 0x94d049bb133111eb
+	return z ^ (z >> 31)
+}
+
+// runInventory runs every member of the study's inventory as a study of
+// its own, with the settings of the main run but its own seed.
+func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *inventoryRun {
+	inv := l.Study.Inventory
+	if inv == nil {
+		return nil
+	}
+	ir := &inventoryRun{doc: &report.Inventory{File: inv.File}, columns: inv.Columns}
+	settings := caseSettings(s)
+	for i := range inv.Members {
+		if ctx.Err() != nil {
+			ir.warnings = append(ir.warnings, "inventory: interrupted; the members not run are missing")
+			break
+		}
+		m := inv.Members[i]
+		obs.StartCase(i+1, len(inv.Members), "member "+clip(m.Name, 24))
+		mr, warns := runMember(ctx, l.Study, i, &settings)
+		for _, w := range warns {
+			ir.warnings = append(ir.warnings, fmt.Sprintf("member %q: %s", m.Name, w))
+		}
+		ir.doc.Members = append(ir.doc.Members, mr)
+	}
+	sortMembers(ir.doc.Members)
+	return ir
+}
+
+// runMember runs member i of st's inventory with settings s; it also
+// returns the member's warnings.
+func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings) (report.Member, []string) {
+	m := st.Inventory.Members[i]
+	mr := report.Member{Name: m.Name, Line: m.Line, Cells: m.Cells}
+	fail := func(err error) (report.Member, []string) {
+		mr.Error = err.Error()
+		mr.Pf, mr.Beta = math.NaN(), report.Index(math.NaN())
+		return mr, []string{"not run: " + err.Error()}
+	}
+	ms, err := st.Member(i)
+	if err != nil {
+		return fail(err)
+	}
+	md, err := study.Build(ms)
+	if err != nil {
+		return fail(fmt.Errorf("member.section: %v", err))
+	}
+	nom, err := md.Nominal()
+	if err != nil {
+		return fail(err)
+	}
+	if len(md.Sim.Vars) == 0 {
+		return fail(fmt.Errorf("nothing in it is uncertain"))
+	}
+	warns := append([]string(nil), ms.Warnings...)
+	warns = append(warns, md.Adequacy(nom)...)
+	mr.GoverningAxis, mr.Mode = nom.Axis.String(), nom.CapacityMode.String()
+	settings := md.SimSettings(*s)
+	settings.Seed = MemberSeed(s.Seed, i)
+	res, err := sim.Run(ctx, md.Sim, &settings)
+	if err != nil {
+		return fail(err)
+	}
+	if res.Incomplete {
+		return fail(fmt.Errorf("interrupted"))
+	}
+	mr.Pf, mr.PfCI = res.Pf, [2]float64{res.PfCI[0], res.PfCI[1]}
+	mr.Beta = report.Index(res.Beta)
+	mr.BetaCI = [2]report.Index{report.Index(res.BetaCI[0]), report.Index(res.BetaCI[1])}
+	mr.Status = res.Status.String()
+	if !res.Status.Trusted() {
+		warns = append(warns, "the estimate cannot be trusted: "+res.StatusReason)
+	}
+	if ms.HasTarget {
+		mr.Verdict = memberVerdict(ms, res)
+		if rv, err := md.Reserve(ctx, ms.Target, s.FORM); err == nil {
+			f := rv.Factor
+			mr.ReserveFactor = &f
+		} else {
+			warns = append(warns, "no reserve factor: "+err.Error())
+		}
+	}
+	return mr, warns
+}
+
+// memberVerdict is the verdict of a member's estimate against the
+// study's target by the rule of the result document; "" when undecided.
+func memberVerdict(ms *study.Study, res *sim.Result) string {
+	t, b := ms.Target, report.Index(res.Beta)
+	trusted := res.Status.Trusted()
+	d := &report.Document{TargetBeta: &t, Beta: &b, Trusted: &trusted,
+		BetaCI: report.Indices(res.BetaCI[0], res.BetaCI[1])}
+	v := report.TargetVerdict(d)
+	if v != report.Met && v != report.NotMet {
+		return ""
+	}
+	return v.String()
+}
+
+// sortMembers sorts members by beta, lowest first; members without a
+// result go last, in the order of the file.
+func sortMembers(ms []report.Member) {
+	key := func(m report.Member) float64 {
+		if m.Error != "" {
+			return math.Inf(1)
+		}
+		b := float64(m.Beta)
+		if math.IsNaN(b) {
+			return math.Inf(-1) // every sample failed: beta -inf
+		}
+		return b
+	}
+	sort.SliceStable(ms, func(i, j int) bool { return key(ms[i]) < key(ms[j]) })
+}
+
+// fill puts the inventory into the document and the bundle.
+func (ir *inventoryRun) fill(d *report.Document, b *report.Bundle) {
+	if ir == nil {
+		return
+	}
+	if d != nil {
+		d.Inventory = ir.doc
+	}
+	if b != nil {
+		b.InventoryColumns = ir.columns
+	}
+}

@@ -1,0 +1,91 @@
+package report
+
+import (
+	"bytes"
+	"encoding/csv"
+	"strconv"
+)
+
+// Inventory is the result of a study's inventory: every member's result,
+// sorted by beta, lowest first, and the members as a series system.
+type Inventory struct {
+	// File is the inventory's CSV as the study names it.
+	File    string   `json:"file"`
+	Members []Member `json:"members"`
+	// System is the series system: at least one member fails. Absent
+	// when it could not be estimated.
+	System *System `json:"system,omitempty"`
+}
+
+// Member is one member's result. Beta and BetaCI are null when not
+// finite; Verdict is absent when the study has no target or the member's
+// estimate decides nothing; ReserveFactor is FORM's factor on the loads
+// that gives the target beta, not confirmed by sampling.
+type Member struct {
+	Name string `json:"name"`
+	// Line is the member's line in the inventory file.
+	Line          int        `json:"line"`
+	Pf            float64    `json:"pf"`
+	PfCI          [2]float64 `json:"pf_ci"`
+	Beta          Index      `json:"beta"`
+	BetaCI        [2]Index   `json:"beta_ci"`
+	Status        string     `json:"status"`
+	Verdict       string     `json:"verdict,omitempty"`
+	ReserveFactor *float64   `json:"reserve_factor,omitempty"`
+	GoverningAxis string     `json:"governing_axis"`
+	Mode          string     `json:"mode"`
+	// Share is the member's share of the system failure: the
+	// probability that it fails given that the system fails.
+	Share *float64 `json:"share_of_system_failure,omitempty"`
+	// Cells are the member's cells in the inventory file, by column.
+	Cells map[string]string `json:"cells"`
+	// Error, when not empty, says why the member has no result.
+	Error string `json:"error,omitempty"`
+}
+
+// System is the series system of an inventory's members.
+type System struct {
+	// Pf is the probability that at least one member fails, PfCI its
+	// interval, Beta its index.
+	Pf   float64    `json:"pf"`
+	PfCI [2]float64 `json:"pf_ci"`
+	Beta Index      `json:"beta"`
+	// ExpectedFailures is the expected number of failing members, the
+	// sum of their pf.
+	ExpectedFailures float64 `json:"expected_failures"`
+	// Method says how Pf was computed.
+	Method string `json:"method"`
+}
+
+// inventoryCSV writes one row a member, in the order of the document.
+func inventoryCSV(inv *Inventory, columns []string) ([]byte, error) {
+	var buf bytes.Buffer
+	w := csv.NewWriter(&buf)
+	head := []string{"name", "line", "pf", "pf_low", "pf_high", "beta", "beta_low", "beta_high", "status", "verdict", "reserve_factor", "governing_axis", "mode", "share_of_system_failure"}
+	if err := w.Write(csvCells(append(head, columns...))[0]); err != nil {
+		return nil, err
+	}
+	g := func(x float64) string { return strconv.FormatFloat(x, 'g', 6, 64) }
+	opt := func(x *float64) string {
+		if x == nil {
+			return ""
+		}
+		return g(*x)
+	}
+	for _, m := range inv.Members {
+		row := []string{m.Name, strconv.Itoa(m.Line), g(m.Pf), g(m.PfCI[0]), g(m.PfCI[1]),
+			g(float64(m.Beta)), g(float64(m.BetaCI[0])), g(float64(m.BetaCI[1])),
+			m.Status, m.Verdict, opt(m.ReserveFactor), m.GoverningAxis, m.Mode, opt(m.Share)}
+		if m.Error != "" {
+			row = []string{m.Name, strconv.Itoa(m.Line), "", "", "", "", "", "", "not run: " + m.Error, "", "", "", "", ""}
+		}
+		for _, c := range columns {
+			row = append(row, m.Cells[c])
+		}
+		if err := w.Write(csvCells(row)[0]); err != nil {
+			return nil, err
+		}
+	}
+	w.Flush()
+	return buf.Bytes(), w.Error()
+}
