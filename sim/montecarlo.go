@@ -184,7 +184,7 @@ func (e *crudeEngine) run(ctx context.Context, s *Settings, method Method) (*Res
 			tr.point(ConvergencePoint{Evaluations: tot.n, Pf: pf, PfCI: ci, PfCoV: cov})
 			nextConv *= 2
 		}
-		if s.TargetCoV > 0 && tot.fails > 0 && cov <= s.TargetCoV {
+		if s.TargetCoV > 0 && tot.fails > 0 && cov <= s.TargetCoV && !sharding(s) {
 			done = true
 		}
 		if tr.watching() && (tot.blocks%progressEvery == 0 || done || tot.blocks == nb) {
@@ -193,10 +193,10 @@ func (e *crudeEngine) run(ctx context.Context, s *Settings, method Method) (*Res
 	}
 	merge(blk0)
 
-	if !done && nb > 1 && ctx.Err() == nil {
-		e.parallel(ctx, s.Workers, nb, merge, &done)
+	if err := e.rest(ctx, s, method, blk0, nb, merge, &done); err != nil {
+		return nil, err
 	}
-	if tot.blocks < nb && !done {
+	if tot.blocks < nb && !done && !sharding(s) {
 		res.Incomplete = true
 	}
 
@@ -229,9 +229,11 @@ func (e *crudeEngine) run(ctx context.Context, s *Settings, method Method) (*Res
 	return res, nil
 }
 
-// parallel evaluates blocks 1..nb-1 on workers and merges them in block
-// order, stopping when *done is set by merge or ctx is cancelled.
-func (e *crudeEngine) parallel(ctx context.Context, workers, nb int, merge func(*crudeBlock), done *bool) {
+// parallel evaluates the blocks todo (ascending) on workers and merges
+// them in that order, stopping when *done is set by merge or ctx is
+// cancelled.
+func (e *crudeEngine) parallel(ctx context.Context, workers int, todo []int, merge func(*crudeBlock), done *bool) {
+	nb := len(todo)
 	window := 4 * workers
 	tokens := make(chan struct{}, window)
 	for i := 0; i < window; i++ {
@@ -240,7 +242,6 @@ func (e *crudeEngine) parallel(ctx context.Context, workers, nb int, merge func(
 	free := make(chan *crudeBlock, window+workers)
 	results := make(chan *crudeBlock, window+workers)
 	var next atomic.Int64
-	next.Store(1)
 	var stop atomic.Bool
 	var wg sync.WaitGroup
 	for k := 0; k < workers; k++ {
@@ -250,10 +251,11 @@ func (e *crudeEngine) parallel(ctx context.Context, workers, nb int, merge func(
 			w := e.newWorker()
 			for {
 				<-tokens
-				b := int(next.Add(1) - 1)
-				if b >= nb || stop.Load() || ctx.Err() != nil {
+				i := int(next.Add(1) - 1)
+				if i >= nb || stop.Load() || ctx.Err() != nil {
 					return
 				}
+				b := todo[i]
 				var blk *crudeBlock
 				select {
 				case blk = <-free:
@@ -268,15 +270,15 @@ func (e *crudeEngine) parallel(ctx context.Context, workers, nb int, merge func(
 	}
 	go func() { wg.Wait(); close(results) }()
 	pending := make(map[int]*crudeBlock)
-	want := 1
+	want := 0
 	for blk := range results {
 		pending[blk.b] = blk
-		for !*done && !stop.Load() {
-			p, ok := pending[want]
+		for !*done && !stop.Load() && want < nb {
+			p, ok := pending[todo[want]]
 			if !ok {
 				break
 			}
-			delete(pending, want)
+			delete(pending, todo[want])
 			merge(p)
 			want++
 			select {

@@ -60,6 +60,10 @@ type Settings struct {
 	Subset         *SubsetSettings
 	ConditionalQMC *ConditionalQMCSettings
 	Surrogate      *SurrogateSettings
+	// Shard, when not nil, splits sampling across machines or replays
+	// the blocks they recorded (see Shard); only monte-carlo and
+	// latin-hypercube can be split.
+	Shard *Shard
 }
 
 // Defaults of Settings.
@@ -130,6 +134,9 @@ func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
 	}
 	if ctx == nil {
 		ctx = context.Background()
+	}
+	if sharding(&cfg) && cfg.Method != MonteCarlo && cfg.Method != LatinHypercube {
+		return nil, fmt.Errorf("sim: %s: %w", cfg.Method, ErrNotShardable)
 	}
 	var res *Result
 	switch cfg.Method {

@@ -3,6 +3,8 @@
 // Usage:
 //
 //	strutrisk run STUDY.toml [--out DIR] [--seed N] [--samples N] [--method M] [--json] [--require-target] [--workers N]
+//	strutrisk run STUDY.toml --shard K/N [--out DIR] ...
+//	strutrisk merge DIR... [--out OUT] [--study STUDY.toml] [--json] [--require-target]
 //	strutrisk check STUDY.toml [--json]
 //	strutrisk new [NAME]
 //	strutrisk help keys
@@ -54,6 +56,8 @@ uncertainty drives that, from a study file (TOML).
 
 Usage:
   strutrisk run STUDY.toml [flags]     sample the study; print a summary, write results
+  strutrisk run STUDY.toml --shard K/N  sample part K of N (on many machines)
+  strutrisk merge DIR... [--out OUT]   join the parts into the results of one run
   strutrisk check STUDY.toml [--json]  validate; deterministic check at nominal values
   strutrisk new [NAME]                 print a commented starter study
   strutrisk help keys                  every study-file table and key: meaning, units, default
@@ -88,6 +92,8 @@ func run(args []string, stdout, stderr io.Writer) (code int) {
 	switch args[0] {
 	case "run":
 		return runCmd(args[1:], stdout, stderr)
+	case "merge":
+		return mergeCmd(args[1:], stdout, stderr)
 	case "check":
 		return checkCmd(args[1:], stdout, stderr)
 	case "new":
@@ -106,6 +112,6 @@ func run(args []string, stdout, stderr io.Writer) (code int) {
 		fmt.Fprintln(stdout, "strutrisk", version)
 		return exitOK
 	}
-	fmt.Fprintf(stderr, "strutrisk: unknown command %q: use run, check, new, model-factor or help keys (strutrisk --help)\n", args[0])
+	fmt.Fprintf(stderr, "strutrisk: unknown command %q: use run, merge, check, new, model-factor or help keys (strutrisk --help)\n", args[0])
 	return exitInput
 }

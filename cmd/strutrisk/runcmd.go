@@ -48,6 +48,8 @@ type runOptions struct {
 	json          bool
 	requireTarget bool
 	workers       int
+	shard         string
+	shardCount    int
 	set           map[string]bool
 }
 
@@ -60,11 +62,19 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 	if code != exitOK {
 		return code
 	}
-	st := l.Study
 	settings, code := runSettings(o, l, stderr)
 	if code != exitOK {
 		return code
 	}
+	if o.set["shard"] || o.set["shard-count"] {
+		return runShardCmd(o, path, l, settings, stderr)
+	}
+	return runAndWrite(o, path, l, settings, stdout, stderr)
+}
+
+// runAndWrite runs the study of l with settings and writes its folder.
+func runAndWrite(o *runOptions, path string, l *analysis.Loaded, settings sim.Settings, stdout, stderr io.Writer) int {
+	st := l.Study
 	folder, code := prepareOutput(path, st, o.out, stderr)
 	if code != exitOK {
 		return code
@@ -106,6 +116,8 @@ func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int
 	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
 	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
 	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
+	fs.StringVar(&o.shard, "shard", "", "run part `K/N` (K from 0) of the sampling and write its state for strutrisk merge; \"env\" takes K and N from the scheduler (SLURM_ARRAY_TASK_ID and SLURM_ARRAY_TASK_COUNT, or JOB_COMPLETION_INDEX with --shard-count or STRUTRISK_SHARD_COUNT)")
+	fs.IntVar(&o.shardCount, "shard-count", 0, "number of shards `N` when the index comes from JOB_COMPLETION_INDEX (Kubernetes Indexed Jobs); implies --shard env")
 	pos, help, err := parseArgs(fs, args)
 	if help {
 		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+report.CautionText+"\n")

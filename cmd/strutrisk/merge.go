@@ -1,0 +1,90 @@
+package main
+
+import (
+	"flag"
+	"fmt"
+	"io"
+
+	"strutrisk/internal/shardstate"
+	"strutrisk/sim"
+)
+
+const mergeHelp = `Usage: strutrisk merge DIR... [flags]
+
+Joins the shards of a split run (strutrisk run STUDY --shard K/N, one
+output folder DIR per shard) into the results one machine would have
+written: results.json, summary.txt, the CSV files and the report, equal
+bit for bit but for the timings. Each DIR holds a ` + shardstate.FileName + `.
+The shards must be 0..N-1 of one split, each given once, of the same
+study file (unchanged), tool version and settings; otherwise nothing is
+merged and the exit status is 2. The study is read from where the shards
+read it, unless --study names it (it must have the same content). Steps
+that follow from the merged estimate (FORM, sensitivities, reserve
+factor) run here.
+
+Flags:
+`
+
+// mergeCmd is strutrisk merge.
+func mergeCmd(args []string, stdout, stderr io.Writer) int {
+	o := &runOptions{}
+	var studyPath string
+	fs := flag.NewFlagSet("merge", flag.ContinueOnError)
+	fs.StringVar(&o.out, "out", "", "write results into `DIR`, replacing it as a whole (default: [output] dir, else out/<study file name>)")
+	fs.StringVar(&studyPath, "study", "", "the study `FILE` (default: the path the shards read)")
+	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
+	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
+	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores); results do not depend on it")
+	dirs, help, err := parseArgs(fs, args)
+	if help {
+		fmt.Fprint(stdout, mergeHelp+flagHelp(fs))
+		return exitOK
+	}
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk merge: %v (strutrisk merge --help)\n", err)
+		return exitInput
+	}
+	if len(dirs) == 0 {
+		fmt.Fprintf(stderr, "strutrisk merge: give the output folders of the shards (strutrisk merge --help)\n")
+		return exitInput
+	}
+	o.set = map[string]bool{}
+	states := make([]*shardstate.State, 0, len(dirs))
+	for _, d := range dirs {
+		st, err := shardstate.Read(d)
+		if err != nil {
+			fmt.Fprintf(stderr, "strutrisk merge: %v\n", err)
+			return exitInput
+		}
+		states = append(states, st)
+	}
+	replay, err := shardstate.Join(states, dirs)
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk merge: nothing merged: %v\n", err)
+		return exitInput
+	}
+	first := states[0]
+	if studyPath == "" {
+		// As the shards were given it, so that the results name it the
+		// same; else where it was.
+		studyPath = first.Study
+		if h, err := shardstate.HashFile(studyPath); err != nil || h != first.StudySHA256 {
+			studyPath = first.StudyAbs
+		}
+	}
+	if h, err := shardstate.HashFile(studyPath); err != nil || h != first.StudySHA256 {
+		fmt.Fprintf(stderr, "strutrisk merge: %s is not the study the shards ran (missing or changed since): give it with --study\n", studyPath)
+		return exitInput
+	}
+	l, code := load(studyPath, stderr)
+	if code != exitOK {
+		return code
+	}
+	settings := l.Settings(o.workers)
+	settings.Method = sim.Method(first.Settings.Method)
+	settings.Samples = first.Settings.Samples
+	settings.Seed = first.Settings.Seed
+	settings.TargetCoV = first.Settings.TargetCoV
+	settings.Shard = replay
+	return runAndWrite(o, studyPath, l, settings, stdout, stderr)
+}
