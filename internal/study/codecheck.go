@@ -17,6 +17,13 @@ type CodeCheckSpec struct {
 	// Characteristic holds characteristic values given in the study, by
 	// the random input's path (N, mm, MPa).
 	Characteristic map[string]float64
+	// Normalise is code_check.normalise: NormaliseDesign, or "" for none;
+	// LoadRatio is code_check.load_ratio, -1 when not given (see
+	// normalise.go). NormalisedResistance is the design resistance the
+	// loads were scaled to (N), 0 without normalising.
+	Normalise            string
+	LoadRatio            float64
+	NormalisedResistance float64
 }
 
 // CheckInput is one input of the code check at its characteristic value.

@@ -46,7 +46,9 @@ func (p *parser) codeCheck(top *table) {
 	if len(defaulted) > 0 {
 		p.defaultf("code_check: %s: recommended values; the National Annex may differ", strings.Join(defaulted, ", "))
 	}
+	p.st.CodeCheck.LoadRatio = -1
 	if t != nil {
+		p.normaliseKeys(t) // normalise.go
 		p.checkCharacteristic(t)
 		p.unknown(t)
 	}

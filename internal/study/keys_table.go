@@ -132,6 +132,10 @@ var keyTables = []*TableInfo{
 		{Name: "characteristic", Takes: "table of random input paths and quantities, e.g. { \"loads.imposed\" = \"150 kN\" }",
 			Default: "5 % fractile of the yield, mean of permanent loads and of the rest, 98 % fractile of annual maxima of variable loads",
 			Meaning: "Characteristic values the study sets instead of those taken from the distributions."},
+		{Name: "normalise", Takes: "text", Choices: []string{"none", "design"}, Default: "none",
+			Meaning: "design: each case's loads are scaled (whole distributions, CoV kept) so that its design load (EN 1990 6.10 with these factors) equals its design resistance (EN 1993-1-1 6.3.1), as code-calibration studies do; beta is then comparable across slenderness, sections and models."},
+		{Name: "load_ratio", Takes: "number (0 to 1)", Default: "the study's own proportion of the loads",
+			Meaning: "With normalise = \"design\": the variable loads' share of the characteristic loads, Q_k / (G_k + Q_k), e.g. 0.5."},
 	}},
 	{Path: "record", Meaning: "The filing head of the reports: shown at the head of the HTML, text and Markdown reports and in results.json (record). Text on one line each.", Keys: []KeyInfo{
 		{Name: "project", Takes: "text", Default: "none", Meaning: "The project or job the study belongs to."},

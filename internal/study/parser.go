@@ -427,6 +427,9 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 		p.twistingNotes()
 		p.checkBending() // bending.go
 	}
+	if len(p.probs) == 0 {
+		p.normaliseLoads() // normalise.go
+	}
 	return st
 }
 
