@@ -98,6 +98,7 @@ type Model struct {
 	// (see combination_model.go).
 	cases, only int
 	mat         materialModel // materialmodel.go
+	fast        fastModel     // fastg.go
 }
 
 // Outputs of the model, in the order of Model.Sim.Outputs.
@@ -284,6 +285,7 @@ func Build(st *Study) (*Model, error) {
 	m.Expensive = md.expensive() // formsettings.go
 	md.linear()
 	md.setupMaterial() // materialmodel.go
+	md.setupFast()     // fastg.go
 	return md, nil
 }
 
