@@ -399,3 +399,22 @@ dead = 100000
 		t.Errorf("warnings lack the aluminium law:\n%s", w)
 	}
 }
+
+// TestTimberPoint checks that a sampled timber member lands on the
+// slenderness picture's k_c curve: At gives the relative slenderness of
+// EN 1995-1-1 eq. 6.21 and a member whose N / (A Fy) is k_c.
+func TestTimberPoint(t *testing.T) {
+	md := buildText(t, timberPost)
+	res, m, lam, err := md.At(nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := 150 / math.Sqrt(12)
+	want := 3000 / r / math.Pi * math.Sqrt(21/11000.0)
+	if math.Abs(lam-want) > 1e-9 {
+		t.Errorf("lam %g, want %g", lam, want)
+	}
+	if got := res.N / (m.Props.EffectiveArea() * m.Fy); math.Abs(got-kcEN1995(want, 0.2)) > 1e-9 {
+		t.Errorf("ratio %g, want k_c %g", got, kcEN1995(want, 0.2))
+	}
+}

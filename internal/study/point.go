@@ -18,6 +18,13 @@ func (md *Model) At(x []float64) (res column.Result, m column.Member, relSlender
 	if err != nil {
 		return res, m, math.NaN(), err
 	}
+	if md.mat.timber {
+		// The slenderness picture's axes for timber (materialpicture.go):
+		// the member's Fy is the strength k_mod f of all loads.
+		lam, fy := timberAxes(&m, &v, res.Axis)
+		m.Fy = fy
+		return res, m, lam, nil
+	}
 	return res, m, column.RelativeSlenderness(&m, res.Axis), nil
 }
 
