@@ -38,6 +38,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer)
 	}
 	ir := &inventoryRun{doc: &report.Inventory{File: inv.File}, columns: inv.Columns}
 	settings := caseSettings(s)
+	sys := make([]systemMember, 0, len(inv.Members))
 	for i := range inv.Members {
 		if ctx.Err() != nil {
 			ir.warnings = append(ir.warnings, "inventory: interrupted; the members not run are missing")
@@ -45,11 +46,22 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer)
 		}
 		m := inv.Members[i]
 		obs.StartCase(i+1, len(inv.Members), "member "+clip(m.Name, 24))
-		mr, warns := runMember(ctx, l.Study, i, &settings)
+		mr, md, warns := runMember(ctx, l.Study, i, &settings)
 		for _, w := range warns {
 			ir.warnings = append(ir.warnings, fmt.Sprintf("member %q: %s", m.Name, w))
 		}
 		ir.doc.Members = append(ir.doc.Members, mr)
+		if md != nil {
+			sys = append(sys, systemMember{m: md.Sim})
+		}
+	}
+	if len(sys) == len(inv.Members) && ctx.Err() == nil {
+		obs.Stage("inventory system (joint sampling)")
+		if err := ir.runSystem(ctx, l, sys, s); err != nil {
+			ir.warnings = append(ir.warnings, "inventory: no system probability: "+err.Error())
+		}
+	} else if ctx.Err() == nil {
+		ir.warnings = append(ir.warnings, "inventory: no system probability: a member was not run")
 	}
 	sortMembers(ir.doc.Members)
 	return ir
@@ -57,13 +69,13 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer)
 
 // runMember runs member i of st's inventory with settings s; it also
 // returns the member's warnings.
-func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings) (report.Member, []string) {
+func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings) (report.Member, *study.Model, []string) {
 	m := st.Inventory.Members[i]
 	mr := report.Member{Name: m.Name, Line: m.Line, Cells: m.Cells}
-	fail := func(err error) (report.Member, []string) {
+	fail := func(err error) (report.Member, *study.Model, []string) {
 		mr.Error = err.Error()
 		mr.Pf, mr.Beta = math.NaN(), report.Index(math.NaN())
-		return mr, []string{"not run: " + err.Error()}
+		return mr, nil, []string{"not run: " + err.Error()}
 	}
 	ms, err := st.Member(i)
 	if err != nil {
@@ -108,7 +120,7 @@ func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings) (re
 			warns = append(warns, "no reserve factor: "+err.Error())
 		}
 	}
-	return mr, warns
+	return mr, md, warns
 }
 
 // memberVerdict is the verdict of a member's estimate against the

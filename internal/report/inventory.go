@@ -50,9 +50,18 @@ type System struct {
 	Pf   float64    `json:"pf"`
 	PfCI [2]float64 `json:"pf_ci"`
 	Beta Index      `json:"beta"`
+	// PfCoV is the coefficient of variation of Pf, null when no sample
+	// failed; Samples the joint samples drawn; Status "converged", "few
+	// failures" (under 100 failing samples) or "no failures".
+	PfCoV   *float64 `json:"pf_cov"`
+	Samples int64    `json:"samples"`
+	Status  string   `json:"status"`
 	// ExpectedFailures is the expected number of failing members, the
 	// sum of their pf.
 	ExpectedFailures float64 `json:"expected_failures"`
+	// PfIfIndependent is 1 - prod(1 - pf_i): the system's pf were the
+	// members to share nothing.
+	PfIfIndependent float64 `json:"pf_if_independent"`
 	// Method says how Pf was computed.
 	Method string `json:"method"`
 }

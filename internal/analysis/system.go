@@ -1,0 +1,185 @@
+package analysis
+
+import (
+	"context"
+	"fmt"
+	"math"
+	"math/rand/v2"
+	"sync"
+
+	"strutrisk/sim"
+)
+
+// systemBlock is the number of joint samples drawn from one random
+// stream; systemBatch blocks are drawn before the coefficient of
+// variation is looked at, so where sampling stops does not depend on the
+// number of workers.
+const (
+	systemBlock = 1000
+	systemBatch = 16
+)
+
+// systemMember is one member as the joint sampler sees it: its model, its
+// transformation to standard normals and, for each of its variables, the
+// index of the shared normal it takes (-1: its own).
+type systemMember struct {
+	m      *sim.Model
+	t      *sim.Transform
+	shared []int
+}
+
+// systemCounts are the counts of a joint sample of the members.
+type systemCounts struct {
+	n, failures int64   // samples, samples in which a member failed
+	members     []int64 // samples in which each member failed
+	failing     int64   // failing members, summed over the samples
+}
+
+// add adds c to s.
+func (s *systemCounts) add(c *systemCounts) {
+	s.n += c.n
+	s.failures += c.failures
+	s.failing += c.failing
+	for i, k := range c.members {
+		s.members[i] += k
+	}
+}
+
+// cov is the coefficient of variation of the estimate of the system's pf.
+func (s *systemCounts) cov() float64 {
+	if s.failures == 0 {
+		return math.Inf(1)
+	}
+	p := float64(s.failures) / float64(s.n)
+	return math.Sqrt((1 - p) / (p * float64(s.n)))
+}
+
+// sampleSystem draws the members jointly, each sample one normal per
+// shared variable (nShared of them) and one per member variable that is
+// not shared, until the system's pf has a coefficient of variation of
+// targetCoV or maxN samples are drawn. Block b draws from a stream of
+// (seed, b) only, so the counts are the same for any worker count.
+func sampleSystem(ctx context.Context, ms []systemMember, nShared int, maxN int64, targetCoV float64, seed uint64, workers int) *systemCounts {
+	if workers < 1 {
+		workers = 1
+	}
+	total := &systemCounts{members: make([]int64, len(ms))}
+	blocks := int((maxN + systemBlock - 1) / systemBlock)
+	for b0 := 0; b0 < blocks && ctx.Err() == nil; b0 += systemBatch {
+		b1 := min(b0+systemBatch, blocks)
+		res := make([]*systemCounts, b1-b0)
+		var wg sync.WaitGroup
+		next := make(chan int)
+		for range min(workers, b1-b0) {
+			wg.Add(1)
+			go func() {
+				defer wg.Done()
+				w := newSystemWorker(ms, nShared)
+				for b := range next {
+					n := min(int64(systemBlock), maxN-int64(b)*systemBlock)
+					res[b-b0] = w.block(ms, seed, uint64(b), n)
+				}
+			}()
+		}
+		for b := b0; b < b1; b++ {
+			next <- b
+		}
+		close(next)
+		wg.Wait()
+		for _, c := range res {
+			total.add(c)
+		}
+		if targetCoV > 0 && total.cov() <= targetCoV {
+			break
+		}
+	}
+	return total
+}
+
+// systemWorker holds one worker's buffers.
+type systemWorker struct {
+	z, u, x []float64
+}
+
+func newSystemWorker(ms []systemMember, nShared int) *systemWorker {
+	d := 0
+	for _, m := range ms {
+		d = max(d, m.t.Dim())
+	}
+	return &systemWorker{z: make([]float64, nShared), u: make([]float64, d), x: make([]float64, d)}
+}
+
+// block draws n joint samples from the stream of (seed, b).
+func (w *systemWorker) block(ms []systemMember, seed, b uint64, n int64) *systemCounts {
+	c := &systemCounts{n: n, members: make([]int64, len(ms))}
+	r := rand.New(rand.NewPCG(seed, b))
+	for range n {
+		for k := range w.z {
+			w.z[k] = r.NormFloat64()
+		}
+		failing := int64(0)
+		for i := range ms {
+			m := &ms[i]
+			d := m.t.Dim()
+			u, x := w.u[:d], w.x[:d]
+			for k, s := range m.shared {
+				if s >= 0 {
+					u[k] = w.z[s]
+				} else {
+					u[k] = r.NormFloat64()
+				}
+			}
+			m.t.ToX(x, u)
+			if m.m.G(x, nil) < 0 {
+				c.members[i]++
+				failing++
+			}
+		}
+		if failing > 0 {
+			c.failures++
+			c.failing += failing
+		}
+	}
+	return c
+}
+
+// sharedIndex maps each (shared input, group) to the index of its shared
+// normal.
+type sharedIndex map[[2]string]int
+
+// of returns the index of the normal of key in group g, adding one.
+func (si sharedIndex) of(key, g string) int {
+	k := [2]string{key, g}
+	if i, ok := si[k]; ok {
+		return i
+	}
+	si[k] = len(si)
+	return si[k]
+}
+
+// checkSharedCorrelation refuses a shared input correlated with an input
+// not shared alike: one draw could not then be the same variable in every
+// member.
+func checkSharedCorrelation(t *sim.Transform, by map[string]string) error {
+	vs := t.Vars()
+	for i := range vs {
+		for j := range vs {
+			if i == j || t.NormalCorrelation(i, j) == 0 {
+				continue
+			}
+			bi, si := by[vs[i].Name]
+			bj, sj := by[vs[j].Name]
+			if (si || sj) && (!si || !sj || bi != bj) {
+				return fmt.Errorf("%s is shared and correlated with %s, which is not shared alike: share both by the same column or \"all\"", pick(si, vs[i].Name, vs[j].Name), pick(si, vs[j].Name, vs[i].Name))
+			}
+		}
+	}
+	return nil
+}
+
+func pick(c bool, a, b string) string {
+	if c {
+		return a
+	}
+	return b
+}

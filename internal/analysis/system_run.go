@@ -1,0 +1,92 @@
+package analysis
+
+import (
+	"context"
+	"fmt"
+	"math"
+
+	"strutrisk/internal/report"
+	"strutrisk/sim"
+)
+
+// maxSystemEvaluations caps the member evaluations of the joint sample.
+const maxSystemEvaluations = 200_000_000
+
+// runSystem estimates the series system of the members (in the order of
+// the file, as ir.doc.Members still is) by sampling them jointly: each
+// shared input one draw per group and sample, every other input one per
+// member.
+func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMember, s *sim.Settings) error {
+	inv := l.Study.Inventory
+	by := map[string]string{}
+	for _, sh := range inv.Shared {
+		by[sh.Key] = sh.By
+	}
+	si := sharedIndex{}
+	for i := range sys {
+		t, err := sim.NewTransform(sys[i].m)
+		if err != nil {
+			return fmt.Errorf("member %q: %v", inv.Members[i].Name, err)
+		}
+		if err := checkSharedCorrelation(t, by); err != nil {
+			return fmt.Errorf("member %q: %v", inv.Members[i].Name, err)
+		}
+		groups := inv.Group(i)
+		sys[i].t = t
+		sys[i].shared = make([]int, t.Dim())
+		for k, v := range t.Vars() {
+			sys[i].shared[k] = -1
+			for j, sh := range inv.Shared {
+				if sh.Key == v.Name {
+					sys[i].shared[k] = si.of(sh.Key, groups[j])
+				}
+			}
+		}
+	}
+	maxN := max(int64(l.Study.Analysis.Samples), 1000)
+	maxN = min(maxN, max(10_000, maxSystemEvaluations/int64(len(sys))))
+	c := sampleSystem(ctx, sys, len(si), maxN, l.Study.Analysis.TargetCoV, MemberSeed(s.Seed, -1), s.Workers)
+	if ctx.Err() != nil {
+		return fmt.Errorf("interrupted")
+	}
+	ir.doc.System = ir.systemDoc(c, len(si))
+	return nil
+}
+
+// systemDoc describes the joint sample's counts c, and gives each member
+// its share of the system failure.
+func (ir *inventoryRun) systemDoc(c *systemCounts, nShared int) *report.System {
+	pf := float64(c.failures) / float64(c.n)
+	lo, hi := sim.WilsonInterval(c.failures, c.n, 0.95)
+	d := &report.System{
+		Pf: pf, PfCI: [2]float64{lo, hi}, Beta: report.Index(sim.BetaFromPf(pf)),
+		Samples: c.n, PfCoV: finitePtr(c.cov()),
+		Method: fmt.Sprintf("joint sampling: %d samples of every member, each of the %d shared variables drawn once a sample, every other input once a member", c.n, nShared),
+	}
+	ind := 1.0
+	for i := range ir.doc.Members {
+		m := &ir.doc.Members[i]
+		d.ExpectedFailures += m.Pf
+		ind *= 1 - m.Pf
+		if c.failures > 0 {
+			sh := float64(c.members[i]) / float64(c.failures)
+			m.Share = &sh
+		}
+	}
+	d.PfIfIndependent = 1 - ind
+	switch {
+	case c.failures == 0:
+		d.Status = "no failures"
+		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: no member failed in %d joint samples: the system pf is below %.2g (95 %% bound) and cannot be estimated better by joint sampling", c.n, hi))
+	case c.cov() > 0:
+		d.Status = "converged"
+		if c.failures < 100 {
+			d.Status = "few failures"
+			ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: the system pf rests on %d failing samples (cov %.2g)", c.failures, c.cov()))
+		}
+	}
+	if math.IsNaN(pf) {
+		d.Status = "no samples"
+	}
+	return d
+}
