@@ -135,3 +135,26 @@ func TestShardSpec(t *testing.T) {
 		}
 	}
 }
+
+// TestShardMergeFullReference checks the merge on the reference study at
+// its full 1e7 samples with 1, 3, 7 and 64 shards. It takes about half a
+// minute on two cores, too long beside the package's other tests: set
+// STRUTRISK_SHARD_FULL=1 to run it (.ci/run does).
+func TestShardMergeFullReference(t *testing.T) {
+	if os.Getenv("STRUTRISK_SHARD_FULL") == "" {
+		t.Skip("set STRUTRISK_SHARD_FULL=1 to merge the 1e7-sample reference study in 1, 3, 7 and 64 shards")
+	}
+	dir := t.TempDir()
+	ref := "../../studies/bench/reference-strut.toml"
+	single := filepath.Join(dir, "single")
+	if code, _, errs := invoke(t, "run", ref, "--out", single); code != exitOK {
+		t.Fatalf("single run: exit %d: %s", code, errs)
+	}
+	for _, n := range []int{1, 3, 7, 64} {
+		merged := shardAndMerge(t, ref, dir, n)
+		if d := sameFolders(t, single, merged); d != "" {
+			t.Errorf("reference study, 1e7 samples, %d shards: %s", n, d)
+		}
+		os.RemoveAll(filepath.Join(dir, "shard"))
+	}
+}
