@@ -91,7 +91,7 @@ func (p *parser) normaliseLoads() {
 		text = append(text, fmt.Sprintf("%s x %.4g (characteristic %.4g kN)", q.Path, s, c.Loads[i].Characteristic*s/1e3))
 	}
 	cs.NormalisedResistance = c.Resistance
-	p.warnf("code_check.normalise = \"design\": the loads are scaled so that the design load equals the design resistance %.4g kN: %s", c.Resistance/1e3, strings.Join(text, ", "))
+	p.defaultf("code_check.normalise = \"design\": the loads are scaled so that the design load equals the design resistance %.4g kN: %s", c.Resistance/1e3, strings.Join(text, ", "))
 	if c.AxialOnly {
 		p.warnf("code_check.normalise: the member also bends, but the design resistance that sets the loads is the axial one of EN 1993-1-1 6.3.1")
 	}
