@@ -12,21 +12,18 @@ import (
 // limit state chosen once by Build: fastG. It does what g does for such a
 // study, in the same order of operations (the same numbers bit for bit),
 // without the dispatch over models, materials, bending and load cases of
-// each sample, with only the first fields of the values copied and the
-// member copied from a template whose fixed fields Build filled.
-
-// nFast is the number of leading fields fastG reads: up to the sum of the
-// loads and the shear modulus (see the field constants in model.go).
-const nFast = fG + 1
-
-// fastValues are the fields of one evaluation fastG reads.
-type fastValues [nFast]float64
+// each sample and without the values of g: the random inputs go straight
+// into a member copied from a template whose fixed inputs Build filled.
 
 // fastModel is the state of fastG, set by setupFast.
 type fastModel struct {
-	base   fastValues
-	member column.Member // the fixed fields of every sample's member
-	feeds  feeds         // every one targets a field below nFast
+	// member has the fixed inputs of every sample's member: a bow or
+	// eccentricity given as a fraction of the length is stored as the
+	// fraction, as in the values of g.
+	member               column.Member
+	model, effect, loads float64 // the fixed model and effect factors, the fixed loads' sum
+	set                  []feed  // random inputs, each into one of the fields fastField takes
+	add                  []int32 // the random loads, in the order of g's sum
 }
 
 // setupFast chooses fastG as the limit state when the study is the common
@@ -36,10 +33,18 @@ func (md *Model) setupFast() {
 		return
 	}
 	f := &md.fast
-	copy(f.base[:], md.base[:nFast])
-	f.feeds = md.feeds
-	f.member.Props = md.props
-	f.member.Kind, f.member.Lambda0 = md.mat.kind, md.mat.lambda0
+	b := &md.base
+	m := &f.member
+	m.Props = md.props
+	m.Kind, m.Lambda0 = md.mat.kind, md.mat.lambda0
+	m.E, m.G, m.Fy, m.Length, m.Bow, m.Ecc = b[fE], b[fG], b[fFy], b[fLength], b[fBow], b[fEcc]
+	m.K = [2]float64{b[fK0], b[fK1]}
+	m.Alpha = [2]float64{b[fAlpha0], b[fAlpha1]}
+	f.model, f.effect, f.loads = b[fModel], b[fEffect], b[fLoads]
+	f.set = md.feeds.set
+	for _, fd := range md.feeds.add {
+		f.add = append(f.add, fd.src)
+	}
 	md.Sim.G = md.fastG
 }
 
@@ -50,8 +55,10 @@ func (md *Model) fastOK() bool {
 		md.secRandom || md.propsDynamic || md.springs[0] || md.springs[1] {
 		return false
 	}
+	var m column.Member
+	var model, effect float64
 	for _, fd := range md.feeds.set {
-		if fd.field >= nFast || fd.field == fLoads {
+		if !fastField(&m, &model, &effect, fd.field, 0) {
 			return false
 		}
 	}
@@ -63,34 +70,62 @@ func (md *Model) fastOK() bool {
 	return true
 }
 
+// fastField stores x in the input of the member or the factors that the
+// field f of g's values stands for, and reports whether f is one fastG
+// takes.
+func fastField(m *column.Member, model, effect *float64, f int32, x float64) bool {
+	switch f {
+	case fE:
+		m.E = x
+	case fG:
+		m.G = x
+	case fFy:
+		m.Fy = x
+	case fLength:
+		m.Length = x
+	case fBow:
+		m.Bow = x
+	case fEcc:
+		m.Ecc = x
+	case fK0, fK1:
+		m.K[f-fK0] = x
+	case fAlpha0, fAlpha1:
+		m.Alpha[f-fAlpha0] = x
+	case fModel:
+		*model = x
+	case fEffect:
+		*effect = x
+	default:
+		return false
+	}
+	return true
+}
+
 // fastG is g for the common study (see setupFast): the member of memberInto
 // evaluated as capacityInto's first case does, the demand of a study
 // without combination cases.
 func (md *Model) fastG(x, out []float64) float64 {
 	f := &md.fast
-	v := f.base
-	for _, fd := range f.feeds.set {
-		v[fd.field] = x[fd.src]
+	m := f.member
+	model, effect, loads := f.model, f.effect, f.loads
+	for _, fd := range f.set {
+		fastField(&m, &model, &effect, fd.field, x[fd.src])
 	}
-	for _, fd := range f.feeds.add {
-		v[fd.field] += x[fd.src]
+	for _, i := range f.add {
+		loads += x[i]
 	}
 	// The loads' sum starts at +0, so adding caseLoad's 0 changes nothing.
-	demand := v[fEffect] * v[fLoads]
-	m := f.member
-	m.E, m.G, m.Fy, m.Length, m.Bow, m.Ecc = v[fE], v[fG], v[fFy], v[fLength], v[fBow], v[fEcc]
+	demand := effect * loads
 	if md.relBow {
 		m.Bow *= m.Length
 	}
 	if md.relEcc {
 		m.Ecc *= m.Length
 	}
-	m.K = [2]float64{v[fK0], v[fK1]}
-	m.Alpha = [2]float64{v[fAlpha0], v[fAlpha1]}
 	capacity := 0.0
 	res, err := column.FirstYield(&m, md.Study.Axis)
 	if err == nil && !math.IsNaN(res.N) && !math.IsInf(res.N, 0) && res.N >= 0 {
-		capacity = v[fModel] * res.N
+		capacity = model * res.N
 	}
 	if out != nil {
 		out[OutCapacity] = capacity

@@ -67,7 +67,8 @@ func fastPoints(md *Model) [][]float64 {
 }
 
 // TestFastGVariants: fastG against g on studies that vary what the demos
-// leave fixed: a random length and K, an eccentricity in mm, fixed loads
+// leave fixed: a random length and K, a bow in mm, an eccentricity as a
+// fraction of the length, fixed loads
 // beside random ones, an effect factor, both axes of a section that
 // twists.
 func TestFastGVariants(t *testing.T) {
@@ -88,7 +89,7 @@ length = { dist = "normal", mean = 5000, sd = 50 }
 k = { major = { dist = "uniform", min = 0.7, max = 1.0 }, minor = 1.0 }
 ` + custom + `[imperfection]
 bow = { dist = "normal", mean = 5, sd = 2.5 }
-eccentricity = { dist = "normal", mean = 10, sd = 3 }
+eccentricity = { dist = "normal", mean = "L/500", sd = "L/1500" }
 [capacity]
 model = "secant"
 axis = "major"
