@@ -53,7 +53,18 @@ func TestRunRecord(t *testing.T) {
 		t.Errorf("results.json record has %d fields, want %d: %v", len(raw.Record), len(want), raw.Record)
 	}
 
-	// The summary names the HTML report by its path.
+	// The summary, printed and filed alike, names the HTML report (issue
+	// 13 item 7) by its path in the results folder; standard error gives
+	// the whole path.
+	filed, err := os.ReadFile(filepath.Join(dir, "summary.txt"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for name, text := range map[string]string{"standard output": out, "summary.txt": string(filed)} {
+		if !strings.Contains(text, "  report             report.html in the results folder\n") {
+			t.Errorf("%s does not name report.html:\n%s", name, text)
+		}
+	}
 	if rep := filepath.Join(dir, "report.html"); !strings.Contains(errs, "report             "+rep+"\n") {
 		t.Errorf("the run does not name %s on standard error:\n%s", rep, errs)
 	}

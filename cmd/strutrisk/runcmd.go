@@ -8,6 +8,7 @@ import (
 	"fmt"
 	"io"
 	"path/filepath"
+	"slices"
 	"strings"
 
 	"strutrisk/internal/analysis"
@@ -182,6 +183,9 @@ func runSettings(o *runOptions, l *analysis.Loaded, stderr io.Writer) (sim.Setti
 // summary (summary.txt byte for byte) or, with --json, the document.
 func writeRun(o *runOptions, b *report.Bundle, formats []string, folder *outdir.Folder, stdout, stderr io.Writer) int {
 	dir := folder.Path
+	if formats == nil || slices.Contains(formats, "html") {
+		b.ReportPath = "report.html"
+	}
 	files, werr := report.Files(b, formats)
 	var paths []string
 	if werr == nil {

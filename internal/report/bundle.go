@@ -10,6 +10,11 @@ type Bundle struct {
 	Doc *Document
 	// StudyFile is the path of the study as the user gave it.
 	StudyFile string
+	// ReportPath is the HTML report's path relative to the results folder
+	// ("report.html"), named by the summary; "" when no HTML report is
+	// written. Relative, so that the summary is the same wherever the
+	// folder is (a merged run's folder equals the single run's).
+	ReportPath string
 	// StudyText is the study file byte for byte (the bytes of
 	// Doc.InputSHA256): the HTML report embeds it, collapsed.
 	StudyText []byte

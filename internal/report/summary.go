@@ -15,7 +15,8 @@ import (
 // the method and its evaluations, the three most influential inputs
 // (RankInputs) and what each ranking answers (RankingNote), the design
 // values, the remaining life, the cases of a sweep and variants, the
-// warnings and the caution.
+// warnings, the path of the HTML report (Bundle.ReportPath) and the
+// caution.
 //
 // (It is not named Summary because Summary is the Document's type for a
 // sampled distribution.)
@@ -59,6 +60,9 @@ func SummaryText(b *Bundle) string {
 	w.WriteString(casesText(b, &d))
 	for _, x := range d.Warnings {
 		summaryLine(&w, "warning", x)
+	}
+	if b.ReportPath != "" {
+		summaryLine(&w, "report", b.ReportPath+" in the results folder")
 	}
 	fmt.Fprintf(&w, "\n%s\n", CautionText)
 	return w.String()
