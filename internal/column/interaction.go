@@ -143,6 +143,9 @@ func interactionTerms(m *Member, n float64, b *Bending, in *Interaction) (iaTerm
 		t.chiZ = math.Min(t.chiZ, twisting(m, GovernsCurve).N/t.nrk)
 	}
 	w := p.EffectiveModulus(a)
+	if !(w > 0) {
+		w = bcModulus(m, a) // W not given: I/C, as the other models take it
+	}
 	switch in.Class {
 	case 1, 2:
 		if !(in.Plastic[a] > 0) {

@@ -274,3 +274,36 @@ func TestInteractionFactorAllocs(t *testing.T) {
 		t.Errorf("InteractionFactor allocates %v times", a)
 	}
 }
+
+// TestInteractionFactorModulusFromIC checks that a member whose Props
+// leave the elastic modulus W out resists bending with W = I/C (the
+// elastic modulus of elementary beam theory, EN 1993-1-1:2005 6.2.5(2),
+// M_c,Rd = W_el fy with W_el = I/z_max), as the first-yield and
+// beam-column models take it: the factor is that of the same member with
+// W = I/C given, not 0 (or NaN without bending).
+func TestInteractionFactorModulusFromIC(t *testing.T) {
+	in := Interaction{Class: 3}
+	for _, b := range []Bending{
+		{Axis: Major, Top: 50e6, Bottom: 50e6},
+		{Axis: Minor, Top: 10e6, Bottom: -5e6, Lateral: 1},
+		{Axis: Major},
+	} {
+		m := bendingMember()
+		m.Length = 4000
+		for a := range 2 {
+			m.Props.W[a] = m.Props.I[a] / m.Props.C[a]
+		}
+		want, err := InteractionFactor(&m, 300e3, &b, &in)
+		if err != nil {
+			t.Fatal(err)
+		}
+		m.Props.W = [2]float64{}
+		got, err := InteractionFactor(&m, 300e3, &b, &in)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if !(math.Abs(got.Factor-want.Factor) <= 1e-9*want.Factor) {
+			t.Errorf("%+v: factor %g without W, %g with W = I/C", b, got.Factor, want.Factor)
+		}
+	}
+}
