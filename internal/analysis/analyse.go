@@ -76,7 +76,7 @@ func Run(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Result
 	}
 	if err == nil && !r.Estimate.Incomplete && l.Study.Inventory != nil {
 		obs.Stage("inventory members")
-		r.inventory = runInventory(ctx, l, s, obs)
+		r.inventory = runInventory(ctx, l, s, r.form, obs)
 		r.warnings = append(r.warnings, r.inventory.warnings...)
 	}
 	return r, err

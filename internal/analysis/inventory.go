@@ -30,14 +30,16 @@ func MemberSeed(seed uint64, i int) uint64 {
 }
 
 // runInventory runs every member of the study's inventory as a study of
-// its own, with the settings of the main run but its own seed.
-func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *inventoryRun {
+// its own, with the settings of the main run but its own seed; main is
+// the study's own FORM result, nil when none.
+func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FORMResult, obs Observer) *inventoryRun {
 	inv := l.Study.Inventory
 	if inv == nil {
 		return nil
 	}
 	ir := &inventoryRun{doc: &report.Inventory{File: inv.File}, columns: inv.Columns}
 	settings := caseSettings(s)
+	fs := memberFORM(s.FORM, main)
 	sys := make([]systemMember, 0, len(inv.Members))
 	for i := range inv.Members {
 		if ctx.Err() != nil {
@@ -46,7 +48,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer)
 		}
 		m := inv.Members[i]
 		obs.StartCase(i+1, len(inv.Members), "member "+clip(m.Name, 24))
-		mr, md, warns := runMember(ctx, l.Study, i, &settings)
+		mr, md, warns := runMember(ctx, l.Study, i, &settings, fs)
 		for _, w := range warns {
 			ir.warnings = append(ir.warnings, fmt.Sprintf("member %q: %s", m.Name, w))
 		}
@@ -69,7 +71,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer)
 
 // runMember runs member i of st's inventory with settings s; it also
 // returns the member's warnings.
-func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings) (report.Member, *study.Model, []string) {
+func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs *sim.FORMSettings) (report.Member, *study.Model, []string) {
 	m := st.Inventory.Members[i]
 	mr := report.Member{Name: m.Name, Line: m.Line, Cells: m.Cells}
 	fail := func(err error) (report.Member, *study.Model, []string) {
@@ -113,7 +115,7 @@ func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings) (re
 	}
 	if ms.HasTarget {
 		mr.Verdict = memberVerdict(ms, res)
-		if rv, err := md.Reserve(ctx, ms.Target, s.FORM); err == nil {
+		if rv, err := md.Reserve(ctx, ms.Target, fs); err == nil {
 			f := rv.Factor
 			mr.ReserveFactor = &f
 		} else {
@@ -121,6 +123,23 @@ func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings) (re
 		}
 	}
 	return mr, md, warns
+}
+
+// memberFORM are the FORM settings of a member's reserve factor: those of
+// the run, searching a further design point only where one evaluation
+// shows one likely (sim.FORMSettings.Screen), as an inventory has many
+// members; and when the study itself has one design point (main, not
+// nil, is its FORM result), one point only.
+func memberFORM(fs *sim.FORMSettings, main *sim.FORMResult) *sim.FORMSettings {
+	var f sim.FORMSettings
+	if fs != nil {
+		f = *fs
+	}
+	f.Screen = true
+	if main != nil && main.Converged && len(main.Points) == 1 {
+		f.MaxPoints = 1
+	}
+	return &f
 }
 
 // memberVerdict is the verdict of a member's estimate against the
