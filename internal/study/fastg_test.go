@@ -68,9 +68,8 @@ func fastPoints(md *Model) [][]float64 {
 
 // TestFastGVariants: fastG against g on studies that vary what the demos
 // leave fixed: a random length and K, a bow in mm, an eccentricity as a
-// fraction of the length, fixed loads
-// beside random ones, an effect factor, both axes of a section that
-// twists.
+// fraction of the length, fixed loads beside random ones (the loads' sum
+// in their order), an effect factor, both axes.
 func TestFastGVariants(t *testing.T) {
 	const custom = `[member.section]
 shape = "custom"
