@@ -38,7 +38,8 @@ func Write(dir string, b *Bundle, formats []string) ([]string, error) {
 // Files renders the report of b: whatever the formats, results.json (the
 // Document, indented), summary.txt (SummaryText), summary.md (Markdown),
 // when the bundle holds sample points, samples.csv, and when it holds
-// sweep curves, sweep.csv (one row per series and value). The formats
+// sweep curves, sweep.csv (one row per series and value), and when it
+// holds sweep or variant cases, cases.csv (one row per case). The formats
 // add:
 //
 //	"html"  report.html, one self-contained file with inline SVG pictures
@@ -87,6 +88,13 @@ func Files(b *Bundle, formats []string) ([]outdir.File, error) {
 			return nil, err
 		}
 		files = append(files, outdir.File{Name: "sweep.csv", Data: csv})
+	}
+	if b.Cases != nil {
+		csv, err := casesCSV(b)
+		if err != nil {
+			return nil, err
+		}
+		files = append(files, outdir.File{Name: "cases.csv", Data: csv})
 	}
 	if inv := b.Doc.Inventory; inv != nil {
 		csv, err := inventoryCSV(inv, b.InventoryColumns)
