@@ -13,6 +13,7 @@ import (
 
 	"strutrisk/internal/analysis"
 	"strutrisk/internal/outdir"
+	"strutrisk/internal/progress"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
@@ -82,13 +83,14 @@ func runAndWrite(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 	}
 	defer folder.Close()
 
-	bar := newProgress(stderr, !o.json)
-	ctx, sigs, stop := withSignals(baseContext(), stderr, bar.phase)
+	bar := progress.New(stderr, drawsProgress(stderr, !o.json))
+	bar.OnStage = stageHook
+	ctx, sigs, stop := withSignals(baseContext(), stderr, bar.Phase)
 	defer stop()
-	settings.Progress = bar.update
-	bar.targetCoV = settings.TargetCoV
+	settings.Progress = bar.Update
+	bar.TargetCoV = settings.TargetCoV
 	r, err := analysis.Run(ctx, l, &settings, bar)
-	bar.done()
+	bar.Done()
 	if errors.Is(err, sim.ErrUnsuited) {
 		fmt.Fprintf(stderr, "strutrisk: %s: %v: choose another --method (auto picks one that fits)\n", st.File, err)
 		return exitInput

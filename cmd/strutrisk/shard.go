@@ -10,6 +10,7 @@ import (
 
 	"strutrisk/internal/analysis"
 	"strutrisk/internal/outdir"
+	"strutrisk/internal/progress"
 	"strutrisk/internal/shardstate"
 	"strutrisk/sim"
 )
@@ -99,13 +100,14 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		return code
 	}
 	defer folder.Close()
-	bar := newProgress(stderr, true)
-	ctx, sigs, stop := withSignals(baseContext(), stderr, bar.phase)
+	bar := progress.New(stderr, drawsProgress(stderr, true))
+	bar.OnStage = stageHook
+	ctx, sigs, stop := withSignals(baseContext(), stderr, bar.Phase)
 	defer stop()
-	settings.Progress = bar.update
+	settings.Progress = bar.Update
 	settings.Shard = &sim.Shard{Index: k, Count: n}
 	err = analysis.RunShard(ctx, l, &settings, bar)
-	bar.done()
+	bar.Done()
 	if ctx.Err() != nil {
 		fmt.Fprintf(stderr, "strutrisk: interrupted by %s: no shard state written\n", sigs.name())
 		return sigs.code()

@@ -6,6 +6,7 @@ import (
 	"math"
 	"sort"
 
+	"strutrisk/internal/progress"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
@@ -47,7 +48,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 			break
 		}
 		m := inv.Members[i]
-		obs.StartCase(i+1, len(inv.Members), "member "+clip(m.Name, 24))
+		obs.StartCase(i+1, len(inv.Members), "member "+progress.Clip(m.Name, 24))
 		mr, md, warns := runMember(ctx, l.Study, i, &settings, fs)
 		for _, w := range warns {
 			ir.warnings = append(ir.warnings, fmt.Sprintf("member %q: %s", m.Name, w))

@@ -18,12 +18,3 @@ type quiet struct{}
 
 func (quiet) Stage(string)               {}
 func (quiet) StartCase(int, int, string) {}
-
-// clip shortens s to at most n runes.
-func clip(s string, n int) string {
-	r := []rune(s)
-	if len(r) <= n {
-		return s
-	}
-	return string(r[:n-1]) + "…"
-}

@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"strutrisk/internal/column"
+	"strutrisk/internal/progress"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
@@ -155,7 +156,7 @@ func caseLabel(st *study.Study, v, i int) string {
 		parts = append(parts, st.Sweep.Parameter+" = "+valueText(st.Sweep.Values[i].Value, st.Sweep.Unit()))
 	}
 	if v >= 0 {
-		parts = append(parts, fmt.Sprintf("variant %q", clip(st.Variants[v].Name, 24)))
+		parts = append(parts, fmt.Sprintf("variant %q", progress.Clip(st.Variants[v].Name, 24)))
 	}
 	return strings.Join(parts, ", ")
 }
