@@ -49,13 +49,13 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 	if ctx.Err() != nil {
 		return fmt.Errorf("interrupted")
 	}
-	ir.doc.System = ir.systemDoc(c, len(si))
+	ir.doc.System = ir.systemDoc(c, len(si), l.Study.Analysis.TargetCoV)
 	return nil
 }
 
 // systemDoc describes the joint sample's counts c, and gives each member
 // its share of the system failure.
-func (ir *inventoryRun) systemDoc(c *systemCounts, nShared int) *report.System {
+func (ir *inventoryRun) systemDoc(c *systemCounts, nShared int, targetCoV float64) *report.System {
 	pf := float64(c.failures) / float64(c.n)
 	lo, hi := sim.WilsonInterval(c.failures, c.n, 0.95)
 	d := &report.System{
@@ -78,12 +78,14 @@ func (ir *inventoryRun) systemDoc(c *systemCounts, nShared int) *report.System {
 	case c.failures == 0:
 		d.Status = "no failures"
 		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: no member failed in %d joint samples: the system pf is below %.2g (95 %% bound) and cannot be estimated better by joint sampling", c.n, hi))
-	case c.cov() > 0:
+	case c.failures < 100:
+		d.Status = "few failures"
+		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: the system pf rests on %d failing samples (cov %.2g)", c.failures, c.cov()))
+	case c.cov() <= targetCoV:
 		d.Status = "converged"
-		if c.failures < 100 {
-			d.Status = "few failures"
-			ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: the system pf rests on %d failing samples (cov %.2g)", c.failures, c.cov()))
-		}
+	default:
+		d.Status = "budget reached"
+		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: the system pf reached a cov of %.2g in %d joint samples, above analysis.target_cov %.2g", c.cov(), c.n, targetCoV))
 	}
 	if math.IsNaN(pf) {
 		d.Status = "no samples"
