@@ -127,6 +127,7 @@ func (md *Model) CodeCheck() (*CodeCheck, error) {
 	}
 	c.AxialOnly = st.Ecc != nil || st.Sway != nil || st.ModelTraits().Bending || st.Bending != nil
 	c.Notes = md.checkNotes()
+	normalisedCheck(c, cs) // normalise.go
 	return c, nil
 }
 

@@ -167,3 +167,17 @@ func (s scaledDist) ToStdNormal(x float64) float64 { return s.d.ToStdNormal(x / 
 func (s scaledDist) String() string {
 	return fmt.Sprintf("%.4g x %s", s.k, s.d.String())
 }
+
+// normalisedCheck states in the code check c of a study whose loads were
+// normalised that the utilisation is 1 by construction: the rounding of
+// the scaled loads (a few parts in 1e16) does not decide its verdict.
+func normalisedCheck(c *CodeCheck, cs CodeCheckSpec) {
+	if cs.NormalisedResistance <= 0 {
+		return
+	}
+	if math.Abs(c.Utilisation-1) < 1e-9 {
+		c.Utilisation = 1
+		c.DesignLoad = c.Resistance
+	}
+	c.Notes = append(c.Notes, "The loads are normalised (code_check.normalise = \"design\"): the design load equals the design resistance by construction.")
+}

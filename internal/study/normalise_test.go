@@ -54,6 +54,11 @@ imposed = { dist = "gumbel", mean = 50000, cov = 0.3, period = "1 year" }`,
 			t.Errorf("load_ratio %g: utilisation %.12g, want 1", ratio, c.Utilisation)
 		}
 		g, q := c.Loads[0].Characteristic, c.Loads[1].Characteristic
+		// EN 1990 6.10 with the recommended factors of Table A1.2(B), the
+		// imposed load leading: 1.35 G_k + 1.5 Q_k = N_b,Rd.
+		if ed := 1.35*g + 1.5*q; math.Abs(ed/c.Resistance-1) > 1e-9 {
+			t.Errorf("load_ratio %g: 1.35 G_k + 1.5 Q_k = %.9g N, design resistance %.9g N", ratio, ed, c.Resistance)
+		}
 		if math.Abs(q/(g+q)-ratio) > 1e-9 {
 			t.Errorf("load_ratio %g: Q_k/(G_k+Q_k) = %.12g", ratio, q/(g+q))
 		}
