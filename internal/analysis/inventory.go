@@ -144,17 +144,16 @@ func memberFORM(fs *sim.FORMSettings, main *sim.FORMResult) *sim.FORMSettings {
 }
 
 // memberVerdict is the verdict of a member's estimate against the
-// study's target by the rule of the result document; "" when undecided.
+// study's target by the rule of the result document: "met", "not met" or
+// "undecided" (an interval that straddles the target, or an estimate
+// that cannot be trusted), as the main result's target.verdict; "" when
+// the study has no target.
 func memberVerdict(ms *study.Study, res *sim.Result) string {
 	t, b := ms.Target, report.Index(res.Beta)
 	trusted := res.Status.Trusted()
 	d := &report.Document{TargetBeta: &t, Beta: &b, Trusted: &trusted,
 		BetaCI: report.Indices(res.BetaCI[0], res.BetaCI[1])}
-	v := report.TargetVerdict(d)
-	if v != report.Met && v != report.NotMet {
-		return ""
-	}
-	return v.String()
+	return report.TargetVerdict(d).String()
 }
 
 // sortMembers sorts members by beta, lowest first; members without a

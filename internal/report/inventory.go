@@ -18,8 +18,9 @@ type Inventory struct {
 }
 
 // Member is one member's result. Beta and BetaCI are null when not
-// finite; Verdict is absent when the study has no target or the member's
-// estimate decides nothing; ReserveFactor is FORM's factor on the loads
+// finite; Verdict is "met", "not met" or "undecided" (as the main
+// result's target.verdict), absent when the study has no target;
+// ReserveFactor is FORM's factor on the loads
 // that gives the target beta, not confirmed by sampling.
 type Member struct {
 	Name string `json:"name"`
