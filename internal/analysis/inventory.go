@@ -16,6 +16,7 @@ import (
 type inventoryRun struct {
 	doc      *report.Inventory
 	columns  []string
+	shared   []string
 	warnings []string
 }
 
@@ -38,7 +39,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 	if inv == nil {
 		return nil
 	}
-	ir := &inventoryRun{doc: &report.Inventory{File: inv.File}, columns: inv.Columns}
+	ir := &inventoryRun{doc: &report.Inventory{File: inv.File}, columns: inv.Columns, shared: sharedKeys(inv)}
 	settings := caseSettings(s)
 	fs := memberFORM(s.FORM, main)
 	sys := make([]systemMember, 0, len(inv.Members))
@@ -182,5 +183,19 @@ func (ir *inventoryRun) fill(d *report.Document, b *report.Bundle) {
 	}
 	if b != nil {
 		b.InventoryColumns = ir.columns
+		b.InventoryShared = ir.shared
 	}
+}
+
+// sharedKeys are the key paths of the inventory's shared inputs and the
+// columns that group the members sharing them.
+func sharedKeys(inv *study.Inventory) []string {
+	var keys []string
+	for _, s := range inv.Shared {
+		keys = append(keys, s.Key)
+		if s.By != "all" {
+			keys = append(keys, s.By)
+		}
+	}
+	return keys
 }

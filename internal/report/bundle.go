@@ -41,6 +41,10 @@ type Bundle struct {
 	// InventoryColumns are the inventory's columns (key paths), written
 	// after the results in inventory.csv.
 	InventoryColumns []string
+	// InventoryShared are the key paths of the inputs the inventory's
+	// members share and the columns that group them: the picture of beta
+	// against a column does not choose them.
+	InventoryShared []string
 	// Convergence traces pf and its band against evaluations; TraceKind says
 	// (TraceKind) what its points are (subset simulation's levels are not estimates).
 	Convergence []sim.ConvergencePoint

@@ -167,6 +167,12 @@ a{color:inherit;text-decoration:none}
 {{end}}</table>{{end}}
 </section>{{end}}
 
+{{if or (.Picture "inventory-ranked") (.Picture "inventory-against")}}<section id="inventory">
+<h2>Inventory</h2>
+{{with .Picture "inventory-ranked"}}{{template "fig" .}}{{end}}
+{{with .Picture "inventory-against"}}{{template "fig" .}}{{end}}
+</section>{{end}}
+
 {{if .Life}}<section id="life">
 <h2>Remaining life under corrosion</h2>
 {{if .LifeVerdict}}<p class="verdict">{{.LifeVerdict}}</p>{{end}}
