@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 
+	"strutrisk/internal/assess"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
@@ -27,6 +28,8 @@ type Result struct {
 	target   *targetRun      // reserve factor and its confirmation (reserve.go)
 	combined *study.Combined // the load combination cases (combination.go)
 	life     *lifeRun        // the remaining life under corrosion (life.go)
+	// calibration is the partial-factor calibration (calibration.go).
+	calibration *assess.Calibration
 	// Incomplete, when not empty, says why the run is not complete.
 	Incomplete string
 	cases      *cases        // sweep and variants (sweep.go)
@@ -66,6 +69,10 @@ func Run(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Result
 	if err == nil && !r.Estimate.Incomplete && l.Study.Life != nil {
 		obs.Stage("remaining life")
 		r.runLife(ctx, s.Workers) // life.go
+	}
+	if err == nil && !r.Estimate.Incomplete && l.Study.Calibration != nil {
+		obs.Stage("calibration of " + l.Study.Calibration.Factor)
+		r.runCalibration(ctx, s.FORM) // calibration.go
 	}
 	if err == nil && !r.Estimate.Incomplete {
 		// The main result stays the study itself; sweep and variants
@@ -177,6 +184,7 @@ func (r *Result) Document() *report.Document {
 	r.fillTarget(d) // verdict (absent when undecided) and reserve
 	fillCombination(d, r.combined)
 	r.life.fill(d)
+	d.Calibration = r.calibration
 	r.inventory.fill(d, nil)
 	for _, o := range res.Outputs {
 		switch o.Name {

@@ -1,5 +1,7 @@
 package report
 
+import "strutrisk/internal/assess"
+
 // Document is the result document of a study (see the study-file contract):
 // all values in N, mm and MPa. Fields that only sampling produces are
 // pointers or nil slices so that `check --json` leaves them out.
@@ -64,6 +66,11 @@ type Document struct {
 	Life      []LifePoint `json:"life,omitempty"`
 	LifeEnd   *int        `json:"life_end,omitempty"`
 	LifeBasis *LifeBasis  `json:"life_basis,omitempty"`
+
+	// Calibration is the partial-factor calibration ([calibration]):
+	// the factor's value, each case's FORM beta there, the spread and
+	// whether the value lies at an end of the range searched.
+	Calibration *assess.Calibration `json:"calibration,omitempty"`
 
 	Nominal  *Nominal  `json:"nominal,omitempty"`
 	Capacity *Summary  `json:"capacity,omitempty"`

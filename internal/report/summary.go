@@ -46,6 +46,7 @@ func SummaryText(b *Bundle) string {
 	summaryWrapped(&w, "code check", CodeCheckLine(d.CodeCheck))
 	summaryWrapped(&w, "load combination", CombinationLine(&d))
 	summaryWrapped(&w, "remaining life", plainGreek.Replace(LifeVerdict(&d)))
+	summaryWrapped(&w, "calibration", CalibrationLine(d.Calibration))
 	w.WriteString(methodText(&d, b.MethodReason))
 	if rk := RankInputs(&d, 3); len(rk.Inputs) > 0 {
 		summaryLine(&w, "most influential", plainGreek.Replace(rk.Text()))

@@ -376,7 +376,8 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	p.output(top)
 	p.sweep(top)
 	p.variants(top)
-	p.inventory(top) // inventory.go
+	p.inventory(top)   // inventory.go
+	p.calibration(top) // calibration.go
 	if _, ok := raw["correlation"]; ok {
 		top.used["correlation"] = true // read once the variables are known
 	}

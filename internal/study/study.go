@@ -26,6 +26,9 @@ type Study struct {
 	// Life is the remaining life under corrosion ([life]), nil when the
 	// study has no [life] table (see life.go).
 	Life *LifeSpec
+	// Calibration is the partial-factor calibration ([calibration],
+	// calibration.go), nil when the study has none.
+	Calibration *CalibrationSpec
 	// Units is the unit system of bare numbers ("N-mm", "kN-m", "kip-in").
 	Units System
 

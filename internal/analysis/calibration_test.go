@@ -1,0 +1,124 @@
+package analysis
+
+import (
+	"context"
+	"math"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/gonum/stat/distuv"
+
+	"strutrisk/internal/report"
+)
+
+// calibrationStudy is a stocky CHS 168.3 x 8 (relative slenderness about
+// 0.12, so chi = 1 and the capacity is A fy; EN 1993-1-1 6.3.1.2(4)) with
+// a lognormal yield and one lognormal imposed load (annual maxima), the
+// loads normalised to the design resistance; two variants change the
+// CoVs. extra is appended to [calibration].
+func calibrationStudy(extra string) string {
+	return `[member]
+length = 500
+ends = "pinned-pinned"
+[member.section]
+shape = "CHS"
+diameter = 168.3
+thickness = 8
+[material]
+modulus = 210000
+yield = { dist = "lognormal", mean = 380, cov = 0.07 }
+[loads]
+imposed = { dist = "lognormal", mean = 50000, cov = 0.2, period = "1 year" }
+[capacity]
+model = "curve"
+curve = "a"
+[target]
+beta = 3.8
+reference_period = "1 year"
+[code_check]
+normalise = "design"
+[analysis]
+method = "form"
+[sensitivity]
+tornado = false
+sobol = false
+[[variant]]
+name = "steady"
+set = { "material.yield.cov" = 0.05, "loads.imposed.cov" = 0.1 }
+[[variant]]
+name = "snow"
+set = { "material.yield.cov" = 0.10, "loads.imposed.cov" = 0.3 }
+[calibration]
+factor = "gamma_m1"
+range = [1.0, 2.0]
+` + extra
+}
+
+// TestCalibrationClosedForm reproduces the closed-form check of
+// internal/assess (TestCalibrateStockyClosedForm) through a study file:
+// with R = A fy lognormal and Q lognormal, the normalisation 1.5 Q_k =
+// A f_k / gamma_M1 (f_k the 5% fractile, Q_k the 98% fractile) gives
+//
+//	beta_i(gamma) = (ln gamma + c_i) / s_i,  s_i = sqrt(zeta_R^2 + zeta_Q^2),
+//	c_i = ln 1.5 + 1.645 zeta_R + 2.054 zeta_Q,
+//
+// (the lognormal-lognormal result, e.g. Melchers, Structural Reliability
+// Analysis and Prediction, from memory) and the weighted least squares of
+// EN 1990 Annex C has ln gamma* = sum (w_i/s_i)(beta_t - c_i/s_i) / sum
+// (w_i/s_i^2). The calibration must find gamma* to 0.005.
+func TestCalibrationClosedForm(t *testing.T) {
+	const target = 5.2 // EN 1990 Table B2, RC3, 1 year (from memory)
+	l := mustLoad(t, calibrationStudy("target_beta = 5.2\nweights = { study = 2, steady = 0.5 }\n"))
+	z05, z98 := distuv.UnitNormal.Quantile(0.05), distuv.UnitNormal.Quantile(0.98)
+	cases := []struct {
+		name      string
+		vr, vq, w float64
+	}{{"study", 0.07, 0.2, 2}, {"steady", 0.05, 0.1, 0.5}, {"snow", 0.10, 0.3, 1}}
+	var num, den float64
+	for _, c := range cases {
+		sr, sq := math.Sqrt(math.Log1p(c.vr*c.vr)), math.Sqrt(math.Log1p(c.vq*c.vq))
+		s := math.Hypot(sr, sq)
+		ci := math.Log(1.5) - z05*sr + z98*sq
+		num += c.w / s * (target - ci/s)
+		den += c.w / (s * s)
+	}
+	want := math.Exp(num / den)
+	r, err := Run(context.Background(), l, ptr(l.Settings(1)), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	cal := r.Document().Calibration
+	t.Logf("closed form %.5f", want)
+	if cal == nil {
+		t.Fatalf("no calibration; warnings %v", r.warnings)
+	}
+	if math.Abs(cal.Value-want) > 0.005 || cal.AtBound {
+		t.Errorf("calibrated gamma_m1 = %.4f (at bound %v), closed form %.4f", cal.Value, cal.AtBound, want)
+	}
+	if line := report.CalibrationLine(cal); !strings.HasPrefix(line, "calibrated gamma_m1 = 1.08") || strings.Contains(line, "warning") {
+		t.Errorf("summary line %q", line)
+	}
+	for i, c := range cases {
+		if got := cal.Cases[i]; got.Case != c.name || got.Weight != c.w {
+			t.Errorf("case %d = %+v, want %s weight %g", i, got, c.name, c.w)
+		}
+	}
+}
+
+// ptr returns a pointer to a copy of s.
+func ptr[T any](s T) *T { return &s }
+
+// TestCalibrationRefused: a bad [calibration] names its key.
+func TestCalibrationRefused(t *testing.T) {
+	for _, c := range []struct{ text, want string }{
+		{strings.Replace(calibrationStudy(""), `factor = "gamma_m1"`, `factor = "gamma_x"`, 1), "calibration.factor"},
+		{strings.Replace(calibrationStudy(""), `range = [1.0, 2.0]`, `range = [1.3, 1.1]`, 1), "calibration.range"},
+		{calibrationStudy("weights = { nowhere = 1 }\n"), "calibration.weights.nowhere"},
+		{calibrationStudy("weights = { snow = -1 }\n"), "calibration.weights.snow"},
+	} {
+		_, err := Load(writeStudy(t, c.text))
+		if err == nil || !strings.Contains(err.Error(), c.want) {
+			t.Errorf("error %v, want one naming %q", err, c.want)
+		}
+	}
+}
