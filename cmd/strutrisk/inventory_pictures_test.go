@@ -63,3 +63,56 @@ func TestInventoryPictures(t *testing.T) {
 		}
 	}
 }
+
+// TestInventoryPlotAgainst checks [inventory] plot_against: a numeric
+// column named is the one beta is drawn against; a column the file does
+// not have, or one that is not numeric, is a study-file error naming the
+// key (exit 2).
+func TestInventoryPlotAgainst(t *testing.T) {
+	toml, err := os.ReadFile("../../studies/building-inventory.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	csv, err := os.ReadFile("../../studies/building-inventory.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	cases := []struct {
+		column string
+		code   int
+		want   string // in the SVG when drawn, else in stderr
+	}{
+		{"member.section.thickness_loss", exitOK, "against member.section.thickness_loss"},
+		{"member.section.thickness_los", exitInput, `did you mean "member.section.thickness_loss"`},
+		{"floor", exitInput, "is not a number"},
+	}
+	for _, c := range cases {
+		dir := t.TempDir()
+		study := filepath.Join(dir, "b.toml")
+		text := string(toml) + "plot_against = \"" + c.column + "\"\n"
+		if err := os.WriteFile(study, []byte(text), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(filepath.Join(dir, "building-inventory.csv"), csv, 0o644); err != nil {
+			t.Fatal(err)
+		}
+		out := filepath.Join(dir, "out")
+		code, _, errs := invoke(t, "run", study, "--out", out)
+		if code != c.code {
+			t.Fatalf("plot_against = %q: exit %d, want %d\n%s", c.column, code, c.code, errs)
+		}
+		if code != exitOK {
+			if !strings.Contains(errs, c.want) || !strings.Contains(errs, "inventory.plot_against") {
+				t.Errorf("plot_against = %q: message %q does not say %q and name the key", c.column, errs, c.want)
+			}
+			continue
+		}
+		svg, err := os.ReadFile(filepath.Join(out, "inventory-against.svg"))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if !strings.Contains(string(svg), c.want) {
+			t.Errorf("plot_against = %q: the picture is not drawn against it", c.column)
+		}
+	}
+}

@@ -17,6 +17,7 @@ type inventoryRun struct {
 	doc      *report.Inventory
 	columns  []string
 	shared   []string
+	against  string
 	warnings []string
 }
 
@@ -39,7 +40,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 	if inv == nil {
 		return nil
 	}
-	ir := &inventoryRun{doc: &report.Inventory{File: inv.File}, columns: inv.Columns, shared: sharedKeys(inv)}
+	ir := &inventoryRun{doc: &report.Inventory{File: inv.File}, columns: inv.Columns, shared: sharedKeys(inv), against: inv.PlotAgainst}
 	settings := caseSettings(s)
 	fs := memberFORM(s.FORM, main)
 	sys := make([]systemMember, 0, len(inv.Members))
@@ -184,6 +185,7 @@ func (ir *inventoryRun) fill(d *report.Document, b *report.Bundle) {
 	if b != nil {
 		b.InventoryColumns = ir.columns
 		b.InventoryShared = ir.shared
+		b.InventoryAgainst = ir.against
 	}
 }
 

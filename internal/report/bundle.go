@@ -45,6 +45,9 @@ type Bundle struct {
 	// members share and the columns that group them: the picture of beta
 	// against a column does not choose them.
 	InventoryShared []string
+	// InventoryAgainst is the column [inventory] plot_against names, ""
+	// when the picture chooses one.
+	InventoryAgainst string
 	// Convergence traces pf and its band against evaluations; TraceKind says
 	// (TraceKind) what its points are (subset simulation's levels are not estimates).
 	Convergence []sim.ConvergencePoint

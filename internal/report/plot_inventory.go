@@ -148,10 +148,14 @@ func isShared(c string, shared []string) bool {
 	return false
 }
 
-// againstColumn is the column the members are drawn against: the first
-// column, not shared, whose every cell is a number of one unit, and
-// which is not the same for all members. It returns "" when none is.
-func againstColumn(columns, shared []string, members []Member) (col, unit string) {
+// againstColumn is the column the members are drawn against: named, when
+// not "", else the first column, not shared, whose every cell is a number
+// of one unit and which is not the same for all members. It returns ""
+// when none is (or the named column's cells are not numbers of one unit).
+func againstColumn(columns, shared []string, named string, members []Member) (col, unit string) {
+	if named != "" {
+		columns, shared = []string{named}, nil
+	}
 	for _, c := range columns {
 		if isShared(c, shared) {
 			continue
@@ -171,7 +175,7 @@ func againstColumn(columns, shared []string, members []Member) (col, unit string
 				varies = true
 			}
 		}
-		if ok && varies {
+		if ok && (varies || named != "") {
 			return c, u
 		}
 	}
@@ -187,7 +191,7 @@ func inventoryAgainstFigure(b *Bundle) *figure {
 		return nil
 	}
 	pts, members := inventoryPoints(d.Inventory)
-	col, unit := againstColumn(b.InventoryColumns, b.InventoryShared, members)
+	col, unit := againstColumn(b.InventoryColumns, b.InventoryShared, b.InventoryAgainst, members)
 	if len(pts) == 0 || col == "" {
 		return nil
 	}
@@ -222,7 +226,11 @@ func inventoryAgainstFigure(b *Bundle) *figure {
 	yspan := math.Max(hi-lo, 0.2)
 	// A free band above the points holds the legend.
 	p.Y.Min, p.Y.Max = lo-0.08*yspan, hi+0.25*yspan
-	return &figure{Name: "inventory-against", Caption: "Reliability index β (dimensionless) of every member of the inventory against its " + col + " (bar: the 95% interval of β); dashed: the target. The column is the first numeric one of the inventory that no shared input uses.", W: 16 * vg.Centimeter, H: 9 * vg.Centimeter, Plots: []*plot.Plot{p}}
+	why := "The column is the first numeric one of the inventory that no shared input uses ([inventory] plot_against names another)."
+	if b.InventoryAgainst != "" {
+		why = "The column is the one [inventory] plot_against names."
+	}
+	return &figure{Name: "inventory-against", Caption: "Reliability index β (dimensionless) of every member of the inventory against its " + col + " (bar: the 95% interval of β); dashed: the target. " + why, W: 16 * vg.Centimeter, H: 9 * vg.Centimeter, Plots: []*plot.Plot{p}}
 }
 
 // addMemberLabels names each member beside its point, when there are few

@@ -18,18 +18,22 @@ func TestAgainstColumn(t *testing.T) {
 	}
 	cases := []struct {
 		columns, shared []string
+		named           string
 		col, unit       string
 	}{
-		{[]string{"batch", "member.length"}, []string{"material.yield", "batch"}, "member.length", ""},
-		{[]string{"loads.dead.mean", "member.length"}, []string{"loads.dead"}, "member.length", ""},
-		{[]string{"loads.dead.mean", "member.length"}, nil, "loads.dead.mean", ""},
-		{[]string{"same", "t"}, nil, "t", "mm"},
-		{[]string{"same"}, nil, "", ""},
+		{[]string{"batch", "member.length"}, []string{"material.yield", "batch"}, "", "member.length", ""},
+		{[]string{"loads.dead.mean", "member.length"}, []string{"loads.dead"}, "", "member.length", ""},
+		{[]string{"loads.dead.mean", "member.length"}, nil, "", "loads.dead.mean", ""},
+		{[]string{"same", "t"}, nil, "", "t", "mm"},
+		{[]string{"same"}, nil, "", "", ""},
+		// A named column is drawn even when shared or the same for all.
+		{[]string{"batch", "member.length"}, []string{"batch"}, "batch", "batch", ""},
+		{[]string{"same", "t"}, nil, "same", "same", ""},
 	}
 	for _, c := range cases {
-		col, unit := againstColumn(c.columns, c.shared, members)
+		col, unit := againstColumn(c.columns, c.shared, c.named, members)
 		if col != c.col || unit != c.unit {
-			t.Errorf("againstColumn(%v, %v) = %q, %q, want %q, %q", c.columns, c.shared, col, unit, c.col, c.unit)
+			t.Errorf("againstColumn(%v, %v, %q) = %q, %q, want %q, %q", c.columns, c.shared, c.named, col, unit, c.col, c.unit)
 		}
 	}
 }

@@ -23,6 +23,9 @@ type Inventory struct {
 	Columns []string
 	// Members are the rows, in the order of the file.
 	Members []Member
+	// PlotAgainst is the column the report draws beta against, ""
+	// for the first numeric one (inventory_plot.go).
+	PlotAgainst string
 }
 
 // SharedInput says how the members share one random input: By is "all"
@@ -95,6 +98,7 @@ func (p *parser) inventory(top *table) {
 			inv.Shared = append(inv.Shared, SharedInput{Key: k, By: strings.TrimSpace(by)})
 		}
 	}
+	p.plotAgainst(t, inv)
 	p.unknown(t)
 	if _, ok := top.m["sweep"]; ok {
 		p.errorf("inventory", "a study with an inventory cannot also sweep: put the sweep in a study of its own")

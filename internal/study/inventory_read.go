@@ -35,6 +35,9 @@ func (s *Study) readInventory() *Error {
 	if pr := inv.checkShared(s, at); len(pr) > 0 {
 		return &Error{Problems: pr}
 	}
+	if pr := inv.checkPlotAgainst(s); pr != nil {
+		return &Error{Problems: []Problem{*pr}}
+	}
 	var probs []Problem
 	for i := range inv.Members {
 		if _, err := s.Member(i); err != nil {

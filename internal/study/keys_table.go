@@ -190,6 +190,8 @@ var keyTables = []*TableInfo{
 			Meaning: "The members: a name column and key paths of the study (\"member.length (m)\"), units in the header or in the cell."},
 		{Name: "shared", Takes: "table of key paths and \"all\" or a column name",
 			Meaning: "How members share a random input: \"all\" one variable for every member, a column name one per value of the column; unlisted inputs are independent per member."},
+		{Name: "plot_against", Takes: "text (a column of the CSV whose cells are numbers)", Default: "the first numeric column no shared input uses",
+			Meaning: "The column the report draws each member's beta against, e.g. \"member.section.thickness_loss\"."},
 	}},
 	{Path: "life", Meaning: "The remaining life under corrosion: the section loses d(t) = r t^b from every face on top of member.section.thickness_loss, t in years from now (ISO 9224's law); the annual beta and the cumulative pf over the years, under the annual maxima of the variable loads.", Keys: []KeyInfo{
 		{Name: "years", Takes: "whole number of years, or a duration (\"30 years\")", Required: true, Meaning: "The horizon: the member is followed from now to the end of this year."},
