@@ -6,10 +6,12 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"strutrisk/internal/fixture"
 )
 
-// beamGood is the good study on the numerical beam-column at first yield.
-var beamGood = good + "[capacity]\nmodel = \"beam-column\"\nlimit = \"first-yield\"\n"
+// beamGood is fixture.BeamGood.
+var beamGood = fixture.BeamGood
 
 // TestCheckBeamColumnFirstYield: for a pinned member with a half-sine bow
 // the elastic beam-column at first yield is the Perry-Robertson load

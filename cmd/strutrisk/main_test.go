@@ -9,6 +9,7 @@ import (
 	"strings"
 	"testing"
 
+	"strutrisk/internal/fixture"
 	"strutrisk/internal/report"
 )
 
@@ -30,27 +31,8 @@ func writeStudy(t *testing.T, text string) string {
 	return p
 }
 
-// good is a valid study; the bad studies below are edits of it. Line
-// numbers matter: keep them in step with the table.
-const good = `title = "test strut"
-[member]
-length = 2000
-ends = "pinned-pinned"
-[member.section]
-shape = "rect"
-depth = 100
-width = 50
-[material]
-modulus = 200000
-yield = { dist = "lognormal", mean = 250, cov = 0.1 }
-[imperfection]
-bow = 2
-[loads]
-dead = { dist = "normal", mean = "100 kN", cov = 0.1 }
-imposed = { dist = "gumbel", mean = "80 kN", cov = 0.3 }
-[target]
-beta = 3.8
-`
+// good is fixture.Good.
+const good = fixture.Good
 
 // sec replaces the rect section of good by the lines of another shape
 // (from line 6 on).

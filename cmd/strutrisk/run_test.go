@@ -9,50 +9,12 @@ import (
 	"strings"
 	"testing"
 
+	"strutrisk/internal/fixture"
 	"strutrisk/internal/report"
 )
 
-// stocky is a short solid square strut on the buckling-curve model: its
-// relative slenderness (L/r)/(pi sqrt(E/fy)) = 10.39/(pi sqrt(205000/fy))
-// is 0.127 at the mean yield and stays below 0.2 up to fy = 748 MPa (nine
-// standard deviations of the yield's log), so chi = 1 (EN 1993-1-1:2005
-// 6.3.1.2(4)) and the capacity is R = A fy x model factor: a product of
-// lognormals, itself lognormal. Against a lognormal load S the reliability
-// index is exact in closed form (Melchers & Beck, Structural Reliability
-// Analysis and Prediction, 3rd ed., 2018, chapter 3, lognormal R and S;
-// chapter from memory):
-//
-//	beta = ln[(muR/muS) sqrt((1+VS^2)/(1+VR^2))] / sqrt(ln[(1+VR^2)(1+VS^2)])
-//
-// with 1 + VR^2 = (1 + 0.10^2)(1 + 0.05^2), muR = 100 x 100 x 300 x 1 N,
-// muS = 1.5e6 N, VS = 0.20: beta = 3.108297, pf = Phi(-beta) = 9.40844e-4
-// (computed from the formula).
-const stocky = `title = "stocky strut, lognormal R and S"
-[member]
-length = 300
-ends = "pinned-pinned"
-[member.section]
-shape = "rect"
-depth = 100
-width = 100
-[material]
-modulus = 205000
-yield = { dist = "lognormal", mean = 300, cov = 0.10 }
-[capacity]
-model = "curve"
-curve = "b"
-model_factor = { dist = "lognormal", mean = 1.0, cov = 0.05 }
-[loads]
-axial = { dist = "lognormal", mean = "1500 kN", cov = 0.20 }
-[target]
-beta = 3.8
-[analysis]
-samples = 2_000_000
-target_cov = 0.04
-seed = 7
-[sensitivity]
-sobol = { samples = 1000 }
-`
+// stocky is fixture.Stocky.
+const stocky = fixture.Stocky
 
 const (
 	stockyBeta = 3.1082970551683173

@@ -17,6 +17,7 @@ import (
 	"strings"
 	"testing"
 
+	"strutrisk/internal/fixture"
 	"strutrisk/internal/report"
 	"strutrisk/sim"
 )
@@ -31,38 +32,11 @@ const (
 	ctFoot = 12 * ctInch
 )
 
-// ctStrut is a solid rectangular strut, 100 x 50 mm, 3 m long, pinned at
-// both ends, with a 3 mm bow; %s slots take the unit system line and the
-// quantities, so one member can be written in every way the contract allows.
-const ctStrut = `title = "contract strut"
-%s
-[member]
-length = %s
-ends = "pinned-pinned"
-[member.section]
-shape = "rect"
-depth = %s
-width = %s
-[material]
-modulus = %s
-yield = %s
-[imperfection]
-bow = %s
-[loads]
-dead = { dist = "normal", mean = %s, cov = 0.1 }
-`
+// ctStrut is fixture.Strut.
+const ctStrut = fixture.Strut
 
-// ctPerry is the elastic first-yield load of a pinned strut with a
-// sinusoidal bow e0: the smaller root of (Ny - N)(Ncr - N) = eta N Ncr,
-// eta = e0 c A / I (Ayrton & Perry, The Engineer 62, 1886; the form of
-// EN 1993-1-1:2005 background, Maquoi & Rondal 1978, from memory).
-func ctPerry(A, I, c, L, E, fy, e0 float64) float64 {
-	ny := A * fy
-	ncr := math.Pi * math.Pi * E * I / (L * L)
-	eta := math.Abs(e0) * c * A / I
-	b := ny + ncr*(1+eta)
-	return (b - math.Sqrt(b*b-4*ny*ncr)) / 2
-}
+// ctPerry is fixture.Perry.
+var ctPerry = fixture.Perry
 
 // ctFirstYield solves the contract's first-yield equation
 // P/A [1 + (c/r^2)(e sec((pi/2) sqrt(P/PE)) + e0/(1 - P/PE))] = fy by
@@ -779,36 +753,8 @@ p = { dist = "normal", mean = "255 kip", cov = 0.1 }
 	}
 }
 
-// ctRS is R - S with R = A fy on a stocky custom section (chi = 1, EN
-// 1993-1-1:2005 6.3.1.2(4)), A = 1000 mm2; slots: yield, load.
-const ctRS = `title = "R - S"
-[member]
-length = 100
-ends = "pinned-pinned"
-[member.section]
-shape = "custom"
-area = 1000
-i_major = 2e8
-i_minor = 1e8
-c_major = 100
-c_minor = 100
-[material]
-modulus = 200000
-yield = %s
-[capacity]
-model = "curve"
-curve = "b"
-[loads]
-axial = %s
-[target]
-beta = 3.8
-[analysis]
-samples = 200000
-seed = 11
-[sensitivity]
-tornado = false
-sobol = false
-`
+// ctRS is fixture.RS.
+const ctRS = fixture.RS
 
 // TestContractReliabilityCases: beta of R - S from every method within
 // its interval of the exact value.
