@@ -122,3 +122,28 @@ func TestCalibrationRefused(t *testing.T) {
 		}
 	}
 }
+
+// TestCalibrationAtBoundOnce: with the study's target 3.8 the three cases
+// have betas of about 4.4, 6.2 and 3.8 already at gamma_M1 = 1 (closed
+// form above), so the best value lies below the range 1.0 to 1.05 and the
+// search ends at its low end; the summary calls it no calibration and
+// tells why once, in the warnings, not a second time on its line.
+func TestCalibrationAtBoundOnce(t *testing.T) {
+	text := strings.Replace(calibrationStudy(""), `range = [1.0, 2.0]`, `range = [1.0, 1.05]`, 1)
+	l := mustLoad(t, text)
+	r, err := Run(context.Background(), l, ptr(l.Settings(1)), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	d := r.Document()
+	if d.Calibration == nil || !d.Calibration.AtBound || d.Calibration.Value-d.Calibration.Low > 1e-3 {
+		t.Fatalf("calibration %+v, want one at an end of the range", d.Calibration)
+	}
+	sum := report.SummaryText(&report.Bundle{Doc: d})
+	if n := strings.Count(sum, "widen"); n != 1 {
+		t.Errorf("the summary says to widen the range %d times, want once:\n%s", n, sum)
+	}
+	if strings.Contains(sum, "calibrated gamma_m1") || !strings.Contains(sum, "no calibration: gamma_m1") {
+		t.Errorf("the summary calls a value at the bound a calibration:\n%s", sum)
+	}
+}

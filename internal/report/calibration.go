@@ -8,18 +8,20 @@ import (
 
 // CalibrationLine is the summary of a partial-factor calibration, "" when
 // there is none: the value, the spread of the cases' betas there and the
-// least safe case, or, when the value lies at an end of the range, that
-// it is no calibration.
+// least safe case. A value at an end of the range is no calibration: the
+// line says so and points to the run's warning, which alone explains it
+// (runCalibration adds it), so that the summary does not print it twice.
 func CalibrationLine(c *assess.Calibration) string {
 	if c == nil {
 		return ""
 	}
-	s := fmt.Sprintf("calibrated %s = %s (beta spread %s, worst case %s at beta %s, target %s; FORM, %d cases)",
-		c.Factor, fixed(c.Value, 3), fixed(c.Spread, 2), c.Worst, fixed(worstBeta(c), 2), fixed(c.TargetBeta, 2), len(c.Cases))
+	spread := fmt.Sprintf("beta spread %s, worst case %s at beta %s, target %s; FORM, %d cases",
+		fixed(c.Spread, 2), c.Worst, fixed(worstBeta(c), 2), fixed(c.TargetBeta, 2), len(c.Cases))
 	if c.AtBound {
-		s += fmt.Sprintf("; warning: the value lies at an end of the range %s to %s, so the best value may lie outside it and this is no calibration: widen calibration.range", fixed(c.Low, 3), fixed(c.High, 3))
+		return fmt.Sprintf("no calibration: %s = %s lies at an end of the range %s to %s (see the warning; %s)",
+			c.Factor, fixed(c.Value, 3), fixed(c.Low, 3), fixed(c.High, 3), spread)
 	}
-	return s
+	return fmt.Sprintf("calibrated %s = %s (%s)", c.Factor, fixed(c.Value, 3), spread)
 }
 
 // worstBeta is the beta of the calibration's worst case.
