@@ -1,16 +1,14 @@
 package main
 
 import (
-	"encoding/json"
 	"flag"
 	"fmt"
 	"io"
-	"os"
 
+	"strutrisk/internal/analysis"
 	"strutrisk/internal/modelerror"
 	"strutrisk/internal/outdir"
 	"strutrisk/internal/report"
-	"strutrisk/internal/study"
 )
 
 const modelFactorHelp = `Usage: strutrisk model-factor STUDY.toml TESTS.csv [--design] [--out DIR] [--json]
@@ -57,7 +55,7 @@ func modelFactorCmd(args []string, stdout, stderr io.Writer) int {
 	if code != exitOK {
 		return code
 	}
-	tests, err := readTests(pos[1], l.Study.Units)
+	tests, err := modelerror.ReadTestsFile(pos[1], l.Study.Units)
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 		return exitInput
@@ -75,52 +73,21 @@ func modelFactorCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 		return exitInput
 	}
-	return writeModelFactor(ev, folder, *asJSON, stdout, stderr)
-}
-
-// readTests reads a test database no larger than a study file may be.
-func readTests(path string, sys study.System) ([]modelerror.Test, error) {
-	f, err := os.Open(path)
-	if err != nil {
-		return nil, err
+	o, err := analysis.ModelFactor(ev)
+	if err == nil && folder != nil {
+		var files []outdir.File
+		if files, err = o.Files(); err == nil {
+			_, err = folder.Commit(files)
+		}
 	}
-	defer f.Close()
-	if fi, err := f.Stat(); err == nil && fi.Size() > study.MaxFileSize {
-		return nil, fmt.Errorf("%s: %d bytes; a test database may have at most %d", path, fi.Size(), study.MaxFileSize)
-	}
-	return modelerror.ReadTests(path, io.LimitReader(f, study.MaxFileSize+1), sys)
-}
-
-// writeModelFactor prints the evaluation and writes its files.
-func writeModelFactor(ev *modelerror.Evaluation, folder *outdir.Folder, asJSON bool, stdout, stderr io.Writer) int {
-	doc, err := json.MarshalIndent(ev, "", "  ")
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 		return exitInternal
 	}
-	doc = append(doc, '\n')
-	text := ev.Text() + "\n" + report.CautionText + "\n"
-	if folder != nil {
-		re, rt := make([]float64, len(ev.Rows)), make([]float64, len(ev.Rows))
-		for i, r := range ev.Rows {
-			re[i], rt[i] = r.Measured, r.Theory
-		}
-		png, err := report.TestsPicture(re, rt, ev.B)
-		if err != nil {
-			fmt.Fprintf(stderr, "strutrisk: %v\n", err)
-			return exitInternal
-		}
-		files := []outdir.File{{Name: "model-factor.json", Data: doc}, {Name: "model-factor.csv", Data: ev.CSV()},
-			{Name: "model-factor.png", Data: png}, {Name: "summary.txt", Data: []byte(text)}}
-		if _, err := folder.Commit(files); err != nil {
-			fmt.Fprintf(stderr, "strutrisk: %v\n", err)
-			return exitInternal
-		}
+	if *asJSON {
+		stdout.Write(o.JSON)
+	} else {
+		fmt.Fprint(stdout, o.Text)
 	}
-	if asJSON {
-		stdout.Write(doc)
-		return exitOK
-	}
-	fmt.Fprint(stdout, text)
 	return exitOK
 }

@@ -3,6 +3,8 @@ package modelerror
 import (
 	"math"
 	"math/rand/v2"
+	"os"
+	"path/filepath"
 	"strconv"
 	"strings"
 	"testing"
@@ -140,3 +142,28 @@ func TestReadTestsErrors(t *testing.T) {
 
 func itoa(i int) string     { return strconv.Itoa(i) }
 func ftoa(x float64) string { return strconv.FormatFloat(x, 'g', -1, 64) }
+
+// ReadTestsFile reads what ReadTests reads, and refuses a file larger
+// than a study file may be, naming its size, before reading it.
+func TestReadTestsFile(t *testing.T) {
+	st := parseStudy(t, stocky)
+	dir := t.TempDir()
+	good := filepath.Join(dir, "tests.csv")
+	if err := os.WriteFile(good, []byte("resistance (kN)\n3000\n3100\n2900\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	tests, err := ReadTestsFile(good, st.Units)
+	if err != nil || len(tests) != 3 || tests[1].Measured != 3.1e6 || tests[1].Line != 3 {
+		t.Errorf("a good file: %+v, %v; want 3 tests, the second 3.1e6 N at line 3", tests, err)
+	}
+	big := filepath.Join(dir, "big.csv")
+	if err := os.WriteFile(big, []byte("resistance (kN)\n"+strings.Repeat("3000\n", study.MaxFileSize/5+1)), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if _, err := ReadTestsFile(big, st.Units); err == nil || !strings.Contains(err.Error(), "a test database may have at most") {
+		t.Errorf("a file over study.MaxFileSize: error %v, want it refused by size", err)
+	}
+	if _, err := ReadTestsFile(filepath.Join(dir, "none.csv"), st.Units); err == nil {
+		t.Errorf("a missing file read without error")
+	}
+}
