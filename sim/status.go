@@ -34,6 +34,11 @@ const (
 	// Imprecise: the CoV of pf is so large (above MaxTrustedCoV) that the
 	// normal approximation behind the interval fails.
 	Imprecise
+	// Unsettled: the surrogate's budget ended before its Kriging model
+	// settled (some candidate's predicted sign still in doubt, U below
+	// 2): the interval rests on the model's own, unverified, predictive
+	// spread.
+	Unsettled
 )
 
 // MinFailures is the number of failed samples below which a crude
@@ -67,6 +72,8 @@ func (s Status) String() string {
 		return "design-point-unreliable"
 	case Imprecise:
 		return "imprecise"
+	case Unsettled:
+		return "unsettled"
 	}
 	return fmt.Sprintf("Status(%d)", int(s))
 }

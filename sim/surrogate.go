@@ -33,7 +33,9 @@ const streamSurrogate uint64 = 0x4b
 // block of candidates is drawn (up to Surrogate.MaxPopulation) and the
 // learning goes on. The model evaluations, FORM's included, are bounded
 // by Settings.Samples (FORM itself is not cut short: a budget below what
-// FORM needs ends the learning at once, with status BudgetSpent).
+// FORM needs ends the learning at once). A budget that ends before the
+// model settles leaves the result Unsettled, not trusted: the interval
+// would rest on the Kriging model's own predictive spread alone.
 //
 // The estimate counts the candidates the mean predicts failed, weighted
 // as in importance sampling. Its error has two parts, both in PfCoV and

@@ -46,7 +46,7 @@ func (a *akRun) learn() error {
 				best, minU = a.argminU()
 				e = a.estimate()
 			}
-			a.res.flag(BudgetSpent, fmt.Sprintf("the budget of %d model evaluations ended before the surrogate settled (least U %.2f, below %.0f): the interval carries the surrogate's uncertainty", budget, minU, surrogateU))
+			a.res.flag(Unsettled, fmt.Sprintf("the budget of %d model evaluations ended before the surrogate settled (least U %.2f, below %.0f): the signs of some candidates are in doubt; raise samples", budget, minU, surrogateU))
 			a.finish(e, minU)
 			return nil
 		}

@@ -31,7 +31,8 @@ type Document struct {
 	// Status says how far the estimate can be trusted (the names of
 	// sim.Status: "converged", "budget-spent", "few-failures",
 	// "interrupted", "weights-degenerate", "design-point-unreliable",
-	// "imprecise"); StatusReason says why when it is not "converged".
+	// "imprecise", "unsettled"); StatusReason says why when it is not
+	// "converged".
 	Status       string `json:"status,omitempty"`
 	StatusReason string `json:"status_reason,omitempty"`
 	// Trusted is false when no verdict may be drawn from the estimate.
