@@ -167,8 +167,16 @@ a{color:inherit;text-decoration:none}
 {{end}}</table>{{end}}
 </section>{{end}}
 
-{{if or (.Picture "inventory-ranked") (.Picture "inventory-against")}}<section id="inventory">
+{{if or .Inventory (.Picture "inventory-ranked") (.Picture "inventory-against")}}<section id="inventory">
 <h2>Inventory</h2>
+{{with .Inventory}}<p>{{.Head}}.</p>
+<table>{{range .System}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>
+<p>{{.Listing}}</p>
+{{if .Rows}}<table><tr><th>member</th><th>β (–)</th><th>95% interval of β (–)</th><th>verdict</th><th>reserve factor (–)</th><th>governs</th><th>note</th></tr>
+{{range .Rows}}<tr><td>{{.Name}}</td><td class="n">{{.Beta}}</td><td class="n">{{.BetaCI}}</td><td{{if .Class}} class="{{.Class}}"{{end}}>{{.Verdict}}</td><td class="n">{{.Reserve}}</td><td>{{.Governs}}</td><td>{{.Note}}</td></tr>
+{{end}}</table>{{end}}
+{{if .NotRun}}<p>Members not run:</p><ul>{{range .NotRun}}<li>{{.Name}}: {{.Note}}</li>{{end}}</ul>{{end}}
+{{if .Rest}}<p>{{.Rest}}</p>{{end}}{{end}}
 {{with .Picture "inventory-ranked"}}{{template "fig" .}}{{end}}
 {{with .Picture "inventory-against"}}{{template "fig" .}}{{end}}
 </section>{{end}}

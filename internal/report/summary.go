@@ -15,7 +15,7 @@ import (
 // the method and its evaluations, the three most influential inputs
 // (RankInputs) and what each ranking answers (RankingNote), the design
 // values, the remaining life, the cases of a sweep and variants, the
-// warnings, the path of the HTML report (Bundle.ReportPath) and the
+// inventory (its system and the members of concern), the warnings, the path of the HTML report (Bundle.ReportPath) and the
 // caution.
 //
 // (It is not named Summary because Summary is the Document's type for a
@@ -59,6 +59,7 @@ func SummaryText(b *Bundle) string {
 		}
 	}
 	w.WriteString(casesText(b, &d))
+	w.WriteString(inventoryText(&d))
 	for _, x := range d.Warnings {
 		summaryLine(&w, "warning", x)
 	}

@@ -46,6 +46,8 @@ type view struct {
 	SweepCurves *table // every curve's β at every swept value
 	Sweep       []pointRow
 	Variants    []pointRow
+	// Inventory is the study's inventory (inventory_view.go).
+	Inventory *invView
 
 	Updates     []updateRow
 	Measured    []measuredRow // see target.go
@@ -107,6 +109,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	if v.Title == "" {
 		v.Title = "strutrisk study"
 	}
+	v.Inventory = inventoryView(&d, func(lo, hi string) string { return ", 95% interval " + lo + " to " + hi })
 	if d.Seed != nil {
 		v.Seed = strconv.FormatUint(*d.Seed, 10)
 	}
