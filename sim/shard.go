@@ -32,8 +32,9 @@ type Shard struct {
 	// with Count 0, Run replays recorded blocks.
 	Index, Count int
 
-	mu   sync.Mutex
-	runs map[string]*ShardRun
+	mu    sync.Mutex
+	runs  map[string]*ShardRun
+	notes map[string]json.RawMessage // of the caller's steps (shard_notes.go)
 }
 
 // ShardRun is the recorded blocks of one sampling run.

@@ -5,6 +5,7 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
+	"strings"
 	"testing"
 )
 
@@ -113,5 +114,30 @@ func TestShardReplayMissing(t *testing.T) {
 	r := &ShardRun{Key: "k", Blocks: 4, Done: []ShardBlock{{Index: 1}, {Index: 3}, {Index: 3}}}
 	if _, err := NewReplay([]*ShardRun{r}); err == nil {
 		t.Error("a run missing block 2 was accepted")
+	}
+}
+
+// TestCombineNotes checks that notes of the shards are joined, a note
+// made alike by two shards kept once, and notes that differ refused by
+// key.
+func TestCombineNotes(t *testing.T) {
+	a := map[string]json.RawMessage{"form/main": json.RawMessage(`1`), "m/0": json.RawMessage(`2`)}
+	b := map[string]json.RawMessage{"form/main": json.RawMessage(`1`), "m/1": json.RawMessage(`3`)}
+	all, err := CombineNotes([]map[string]json.RawMessage{a, b})
+	if err != nil || len(all) != 3 {
+		t.Fatalf("got %v, %v", all, err)
+	}
+	rep := &Shard{}
+	rep.SetNotes(all)
+	var v int
+	if ok, err := rep.Recall("m/1", &v); !ok || err != nil || v != 3 {
+		t.Errorf("recalled %d, %v, %v", v, ok, err)
+	}
+	if ok, _ := rep.Recall("m/2", &v); ok {
+		t.Error("recalled a note nobody made")
+	}
+	b["form/main"] = json.RawMessage(`4`)
+	if _, err := CombineNotes([]map[string]json.RawMessage{a, b}); err == nil || !strings.Contains(err.Error(), "form/main") {
+		t.Errorf("notes that differ: %v", err)
 	}
 }

@@ -117,7 +117,7 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		return exitInternal
 	}
 	state := &shardstate.State{ToolVersion: version, Study: path, StudyAbs: abs, StudySHA256: hash, Shard: k, Shards: n,
-		Settings: stateSettings(&settings), Runs: settings.Shard.Runs()}
+		Settings: stateSettings(&settings), Runs: settings.Shard.Runs(), Notes: settings.Shard.Notes()}
 	data, err := shardstate.Encode(state)
 	if err == nil {
 		_, err = folder.Commit([]outdir.File{{Name: shardstate.FileName, Data: data}})
@@ -126,7 +126,7 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		fmt.Fprintf(stderr, "strutrisk: the shard state was not written to %s: %v\n", folder.Path, err)
 		return exitInternal
 	}
-	fmt.Fprintf(stderr, "strutrisk: shard %d of %d: %d sampling run%s recorded in %s\n", k, n, len(state.Runs), plural(len(state.Runs)), filepath.Join(folder.Path, shardstate.FileName))
+	fmt.Fprintf(stderr, "strutrisk: shard %d of %d: %d sampling run%s and %d other result%s recorded in %s\n", k, n, len(state.Runs), plural(len(state.Runs)), len(state.Notes), plural(len(state.Notes)), filepath.Join(folder.Path, shardstate.FileName))
 	return exitOK
 }
 

@@ -109,7 +109,7 @@ func analyse(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Re
 	obs.Stage("FORM")
 	r.form = res.FORM
 	if r.form == nil && len(m.Vars) > 0 && ctx.Err() == nil {
-		r.form, r.formErr = sim.FORMContext(ctx, m, s.FORM)
+		r.form, r.formErr = studyFORM(ctx, l, s) // a merge takes the shards' (shard_form.go)
 		if r.formErr != nil {
 			r.warnings = append(r.warnings, "form: "+r.formErr.Error())
 		}

@@ -51,7 +51,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 		}
 		m := inv.Members[i]
 		obs.StartCase(i+1, len(inv.Members), "member "+progress.Clip(m.Name, 24))
-		mr, md, warns := runMember(ctx, l.Study, i, &settings, fs)
+		mr, md, warns := memberResult(ctx, l.Study, i, &settings, fs) // a merge's from the shards
 		for _, w := range warns {
 			ir.warnings = append(ir.warnings, fmt.Sprintf("member %q: %s", m.Name, w))
 		}

@@ -9,10 +9,13 @@ import (
 
 // RunShard runs one shard of a split run of the study of l: the sampling
 // of the main run and of every sweep and variant case, each limited to the
-// shard's blocks by s.Shard, which records them. The steps that follow
-// from the merged estimates (FORM, sensitivities, reserve factor, life)
-// are left to the merge, which runs the whole pipeline on the recorded
-// blocks. s.Method must be monte-carlo or latin-hypercube.
+// shard's blocks by s.Shard, which records them; shard 0 notes the
+// study's FORM result; the inventory members the shard owns are run
+// whole and noted, and its blocks of the inventory's joint sample
+// (inventory_shard.go). The steps that follow from the merged estimates
+// (sensitivities, reserve factor, life) are left to the merge, which
+// runs the whole pipeline on the recorded blocks and notes. s.Method
+// must be monte-carlo or latin-hypercube.
 func RunShard(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) error {
 	if s.Shard == nil || s.Shard.Count <= 0 {
 		return fmt.Errorf("analysis: RunShard needs a shard")
@@ -24,8 +27,21 @@ func RunShard(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) err
 	if _, err := sim.Run(ctx, l.Model.Sim, s); err != nil {
 		return err
 	}
+	// The study's FORM: noted by shard 0 for the merge, and run by every
+	// shard of an inventory, whose members' reserve factors follow it.
+	var main *sim.FORMResult
+	if len(l.Model.Sim.Vars) > 0 && ctx.Err() == nil && (s.Shard.Index == 0 || l.Study.Inventory != nil) {
+		obs.Stage("FORM")
+		main, _ = studyFORM(ctx, l, s)
+	}
 	if ctx.Err() == nil {
 		runCases(ctx, l, s, obs)
+	}
+	if ctx.Err() == nil && l.Study.Inventory != nil {
+		obs.Stage("inventory members (this shard's)")
+		if err := shardInventory(ctx, l, s, main, obs); err != nil {
+			return err
+		}
 	}
 	return ctx.Err()
 }

@@ -45,9 +45,12 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 	}
 	maxN := max(int64(l.Study.Analysis.Samples), 1000)
 	maxN = min(maxN, max(10_000, maxSystemEvaluations/int64(len(sys))))
-	c := sampleSystem(ctx, sys, len(si), maxN, l.Study.Analysis.TargetCoV, MemberSeed(s.Seed, -1), s.Workers)
+	c, err := jointSample(ctx, sys, len(si), maxN, l.Study.Analysis.TargetCoV, MemberSeed(s.Seed, -1), s) // split or merged: inventory_shard.go
 	if ctx.Err() != nil {
 		return fmt.Errorf("interrupted")
+	}
+	if err != nil {
+		return err
 	}
 	ir.doc.System = ir.systemDoc(c, len(si), l.Study.Analysis.TargetCoV)
 	return nil

@@ -1,6 +1,7 @@
 package shardstate
 
 import (
+	"encoding/json"
 	"fmt"
 	"strings"
 
@@ -62,13 +63,19 @@ func Join(states []*State, dirs []string) (*sim.Shard, error) {
 		return nil, &Problem{Msgs: msgs}
 	}
 	runs := make([][]*sim.ShardRun, len(states))
+	notes := make([]map[string]json.RawMessage, len(states))
 	for i, st := range states {
-		runs[i] = st.Runs
+		runs[i], notes[i] = st.Runs, st.Notes
 	}
 	rep, err := sim.NewReplay(sim.CombineRuns(runs))
 	if err != nil {
 		return nil, &Problem{Msgs: []string{err.Error()}}
 	}
+	all, err := sim.CombineNotes(notes)
+	if err != nil {
+		return nil, &Problem{Msgs: []string{err.Error()}}
+	}
+	rep.SetNotes(all)
 	return rep, nil
 }
 

@@ -20,7 +20,7 @@ const FileName = "shard-state.json.gz"
 // Format and FormatVersion identify the file.
 const (
 	Format        = "strutrisk-shard-state"
-	FormatVersion = 1
+	FormatVersion = 2
 )
 
 // Settings are the sampling settings a shard ran with; the merge runs
@@ -48,6 +48,10 @@ type State struct {
 	Settings    Settings `json:"settings"`
 	// Runs are the sampling runs of the shard, by key.
 	Runs []*sim.ShardRun `json:"runs"`
+	// Notes are the results of the steps above sampling the shard ran
+	// (sim.Shard.Note), by key: each inventory member it owns, the
+	// blocks it owns of an inventory's joint sample, the study's FORM.
+	Notes map[string]json.RawMessage `json:"notes,omitempty"`
 }
 
 // HashFile returns the hex SHA-256 of the file at path.

@@ -1,0 +1,63 @@
+package main
+
+import (
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"strutrisk/internal/shardstate"
+)
+
+// TestShardInventoryMembers checks that a split inventory study shares
+// its members out, each run whole by one shard, and the blocks of the
+// joint sample of the system, each evaluated by one shard, and that the
+// merge, which runs neither again, writes the files of a single run byte
+// for byte; with more shards than members too.
+func TestShardInventoryMembers(t *testing.T) {
+	dir := t.TempDir()
+	inv := "../../studies/building-inventory.toml"
+	flags := []string{"--samples", "30000", "--method", "monte-carlo"}
+	single := filepath.Join(dir, "single")
+	if code, _, errs := invoke(t, append([]string{"run", inv, "--out", single}, flags...)...); code != exitOK {
+		t.Fatalf("single run: exit %d: %s", code, errs)
+	}
+	for _, n := range []int{3, 11} {
+		merged := shardAndMerge(t, inv, filepath.Join(dir, itoa(n)), n, flags...)
+		if d := sameFolders(t, single, merged); d != "" {
+			t.Errorf("inventory, %d shards: %s", n, d)
+		}
+		owner := map[string]int{}
+		for k := range n {
+			d := filepath.Join(dir, itoa(n), "shard", itoa(n)+"-"+itoa(k)+"of"+itoa(n))
+			st, err := shardstate.Read(d)
+			if err != nil {
+				t.Fatal(err)
+			}
+			for key := range st.Notes {
+				if !strings.HasPrefix(key, "inventory/") {
+					continue
+				}
+				if j, ok := owner[key]; ok {
+					t.Errorf("%d shards: %s noted by shards %d and %d", n, key, j, k)
+				}
+				owner[key] = k
+			}
+		}
+		// The demo's 8 members; the joint sample's budget is the study's
+		// [analysis] samples, 1e6: 1000 blocks of 1000.
+		members, blocks := 0, 0
+		for key := range owner {
+			switch {
+			case strings.HasPrefix(key, "inventory/member/"):
+				members++
+			case strings.HasPrefix(key, "inventory/system/block/"):
+				blocks++
+			}
+		}
+		if members != 8 || blocks != 1000 {
+			t.Errorf("%d shards: %d members and %d blocks of the joint sample noted, want 8 and 1000", n, members, blocks)
+		}
+		os.RemoveAll(filepath.Join(dir, itoa(n), "shard"))
+	}
+}

@@ -1,0 +1,246 @@
+package analysis
+
+import (
+	"context"
+	"fmt"
+	"math"
+
+	"strutrisk/internal/progress"
+	"strutrisk/internal/report"
+	"strutrisk/internal/study"
+	"strutrisk/sim"
+)
+
+// An inventory split into shards: member i is run whole, with its own
+// seed (MemberSeed), by the shard that owns i (sim.Shard.Owns), which
+// notes its result; the joint sample of the system is split by its
+// blocks, each noted by the shard that owns it. The merge takes both
+// from the notes and so writes what one machine writes.
+
+func memberNoteKey(i int) string { return fmt.Sprintf("inventory/member/%d", i) }
+
+func systemNoteKey(b int) string { return fmt.Sprintf("inventory/system/block/%d", b) }
+
+// memberNote is a member's result as its shard notes it.
+type memberNote struct {
+	Pf            sim.Bits    `json:"pf"`
+	PfCI          [2]sim.Bits `json:"pf_ci"`
+	Beta          sim.Bits    `json:"beta"`
+	BetaCI        [2]sim.Bits `json:"beta_ci"`
+	Status        string      `json:"status"`
+	Verdict       string      `json:"verdict,omitempty"`
+	ReserveFactor *sim.Bits   `json:"reserve_factor,omitempty"`
+	GoverningAxis string      `json:"governing_axis"`
+	Mode          string      `json:"mode"`
+	Error         string      `json:"error,omitempty"`
+	Warnings      []string    `json:"warnings,omitempty"`
+}
+
+func noteOfMember(m *report.Member, warns []string) *memberNote {
+	n := &memberNote{Pf: sim.Bits(m.Pf), PfCI: [2]sim.Bits{sim.Bits(m.PfCI[0]), sim.Bits(m.PfCI[1])},
+		Beta: sim.Bits(m.Beta), BetaCI: [2]sim.Bits{sim.Bits(m.BetaCI[0]), sim.Bits(m.BetaCI[1])},
+		Status: m.Status, Verdict: m.Verdict, GoverningAxis: m.GoverningAxis, Mode: m.Mode, Error: m.Error, Warnings: warns}
+	if m.ReserveFactor != nil {
+		r := sim.Bits(*m.ReserveFactor)
+		n.ReserveFactor = &r
+	}
+	return n
+}
+
+// member fills m's results from n.
+func (n *memberNote) member(m *report.Member) {
+	m.Pf, m.PfCI = float64(n.Pf), [2]float64{float64(n.PfCI[0]), float64(n.PfCI[1])}
+	m.Beta, m.BetaCI = report.Index(n.Beta), [2]report.Index{report.Index(n.BetaCI[0]), report.Index(n.BetaCI[1])}
+	m.Status, m.Verdict, m.GoverningAxis, m.Mode, m.Error = n.Status, n.Verdict, n.GoverningAxis, n.Mode, n.Error
+	if n.ReserveFactor != nil {
+		r := float64(*n.ReserveFactor)
+		m.ReserveFactor = &r
+	}
+}
+
+// memberResult is runMember, but a merge takes the result the member's
+// shard noted.
+func memberResult(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs *sim.FORMSettings) (report.Member, *study.Model, []string) {
+	if !s.Shard.Replays() {
+		return runMember(ctx, st, i, s, fs)
+	}
+	m := st.Inventory.Members[i]
+	mr := report.Member{Name: m.Name, Line: m.Line, Cells: m.Cells}
+	var n memberNote
+	ok, err := s.Shard.Recall(memberNoteKey(i), &n)
+	switch {
+	case err != nil:
+		n = memberNote{Error: err.Error()}
+	case !ok:
+		n = memberNote{Error: "no shard ran it"}
+	}
+	if !ok || err != nil {
+		nan := sim.Bits(math.NaN())
+		n.Pf, n.Beta, n.Warnings = nan, nan, []string{"not run: " + n.Error}
+	}
+	n.member(&mr)
+	if n.Error != "" {
+		return mr, nil, n.Warnings
+	}
+	// The member's model, for the joint sample: built as runMember built it.
+	md, err := memberModel(st, i)
+	if err != nil {
+		return mr, nil, append(n.Warnings, "not in the system: "+err.Error())
+	}
+	return mr, md, n.Warnings
+}
+
+// memberModel builds the model of member i of st's inventory.
+func memberModel(st *study.Study, i int) (*study.Model, error) {
+	ms, err := st.Member(i)
+	if err != nil {
+		return nil, err
+	}
+	return study.Build(ms)
+}
+
+// shardInventory runs the inventory members this shard owns, each whole,
+// and this shard's blocks of the joint sample, noting them; main is the
+// study's FORM result (nil when none), as runInventory takes it.
+func shardInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FORMResult, obs Observer) error {
+	inv := l.Study.Inventory
+	settings := caseSettings(s)
+	settings.Shard = nil // a member is run whole by the shard that owns it
+	fs := memberFORM(s.FORM, main)
+	sys := make([]systemMember, 0, len(inv.Members))
+	for i, m := range inv.Members {
+		if ctx.Err() != nil {
+			return ctx.Err()
+		}
+		if !s.Shard.Owns(i) {
+			if md, err := memberModel(l.Study, i); err == nil && len(md.Sim.Vars) > 0 {
+				sys = append(sys, systemMember{m: md.Sim})
+			}
+			continue
+		}
+		obs.StartCase(i+1, len(inv.Members), "member "+progress.Clip(m.Name, 24))
+		mr, md, warns := runMember(ctx, l.Study, i, &settings, fs)
+		if err := s.Shard.Note(memberNoteKey(i), noteOfMember(&mr, warns)); err != nil {
+			return err
+		}
+		if md != nil {
+			sys = append(sys, systemMember{m: md.Sim})
+		}
+	}
+	if len(sys) < len(inv.Members) || ctx.Err() != nil {
+		return ctx.Err() // no system: the merge says why
+	}
+	obs.Stage("inventory system (joint sampling), this shard's blocks")
+	ir := &inventoryRun{doc: &report.Inventory{}}
+	if err := ir.runSystem(ctx, l, sys, s); err != nil && ctx.Err() == nil {
+		return fmt.Errorf("inventory system: %v", err)
+	}
+	return ctx.Err()
+}
+
+// systemNote is one block of the joint sample as its shard notes it;
+// Members are pairs of member index and failing samples, for the members
+// that failed in the block.
+type systemNote struct {
+	N        int64   `json:"n"`
+	Failures int64   `json:"failures"`
+	Failing  int64   `json:"failing"`
+	Members  []int64 `json:"members,omitempty"`
+}
+
+// jointSample is sampleSystem for a run that may be split: a shard
+// evaluates and notes its blocks of the whole budget (the counts it
+// returns are of its blocks only); a merge adds the noted blocks as
+// sampleSystem adds them, stopping where it stops.
+func jointSample(ctx context.Context, ms []systemMember, nShared int, maxN int64, targetCoV float64, seed uint64, s *sim.Settings) (*systemCounts, error) {
+	sh := s.Shard
+	switch {
+	case sh.Splits():
+		return shardSystemBlocks(ctx, ms, nShared, maxN, seed, s)
+	case sh.Replays():
+		return replaySystem(ms, maxN, targetCoV, sh)
+	}
+	return sampleSystem(ctx, ms, nShared, maxN, targetCoV, seed, s.Workers), nil
+}
+
+// shardSystemBlocks evaluates and notes the shard's blocks of the joint
+// sample of maxN samples.
+func shardSystemBlocks(ctx context.Context, ms []systemMember, nShared int, maxN int64, seed uint64, s *sim.Settings) (*systemCounts, error) {
+	blocks := int((maxN + systemBlock - 1) / systemBlock)
+	var todo []int
+	for b := range blocks {
+		if s.Shard.Owns(b) {
+			todo = append(todo, b)
+		}
+	}
+	total := &systemCounts{members: make([]int64, len(ms))}
+	next := make(chan int)
+	res := make([]*systemCounts, len(todo))
+	done := make(chan struct{})
+	workers := max(1, min(s.Workers, len(todo)))
+	for range workers {
+		go func() {
+			w := newSystemWorker(ms, nShared)
+			for j := range next {
+				b := todo[j]
+				res[j] = w.block(ms, seed, uint64(b), min(int64(systemBlock), maxN-int64(b)*systemBlock))
+			}
+			done <- struct{}{}
+		}()
+	}
+	for j := range todo {
+		if ctx.Err() != nil {
+			break
+		}
+		next <- j
+	}
+	close(next)
+	for range workers {
+		<-done
+	}
+	if ctx.Err() != nil {
+		return total, ctx.Err()
+	}
+	for j, c := range res {
+		n := systemNote{N: c.n, Failures: c.failures, Failing: c.failing}
+		for i, k := range c.members {
+			if k != 0 {
+				n.Members = append(n.Members, int64(i), k)
+			}
+		}
+		if err := s.Shard.Note(systemNoteKey(todo[j]), n); err != nil {
+			return total, err
+		}
+		total.add(c)
+	}
+	return total, nil
+}
+
+// replaySystem adds the noted blocks of the joint sample in batches of
+// systemBatch, stopping at the first batch boundary where the system's pf
+// has a coefficient of variation of targetCoV, as sampleSystem does.
+func replaySystem(ms []systemMember, maxN int64, targetCoV float64, sh *sim.Shard) (*systemCounts, error) {
+	total := &systemCounts{members: make([]int64, len(ms))}
+	blocks := int((maxN + systemBlock - 1) / systemBlock)
+	for b0 := 0; b0 < blocks; b0 += systemBatch {
+		for b := b0; b < min(b0+systemBatch, blocks); b++ {
+			var n systemNote
+			ok, err := sh.Recall(systemNoteKey(b), &n)
+			if !ok || err != nil {
+				return nil, fmt.Errorf("block %d of the joint sample is in no shard's state (%v)", b, err)
+			}
+			c := &systemCounts{n: n.N, failures: n.Failures, failing: n.Failing, members: make([]int64, len(ms))}
+			for k := 0; k+1 < len(n.Members); k += 2 {
+				if n.Members[k] < 0 || n.Members[k] >= int64(len(ms)) {
+					return nil, fmt.Errorf("block %d of the joint sample names member %d of %d", b, n.Members[k], len(ms))
+				}
+				c.members[n.Members[k]] = n.Members[k+1]
+			}
+			total.add(c)
+		}
+		if targetCoV > 0 && total.cov() <= targetCoV {
+			break
+		}
+	}
+	return total, nil
+}
