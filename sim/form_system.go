@@ -158,6 +158,9 @@ func formUnionGenz(b []float64, r [][]float64) float64 {
 	rng := rand.New(rand.NewPCG(0x5eed, 0x6e7a))
 	shift := make([]float64, m)
 	w := make([]float64, m)
+	// The first limit c_1 = b_1 / l_11 is the same at every point.
+	first := b[0] / l[0][0]
+	e1, ec1 := normalPair(first)
 	var total float64
 	for sh := 0; sh < shifts; sh++ {
 		for i := range shift {
@@ -168,19 +171,24 @@ func formUnionGenz(b []float64, r [][]float64) float64 {
 			prod := 1.0
 			var union float64
 			for i := 0; i < m; i++ {
-				s := b[i]
-				for k := 0; k < i; k++ {
-					s -= l[i][k] * w[k]
+				c, e, ec := first, e1, ec1
+				if i > 0 {
+					s := b[i]
+					for k := 0; k < i; k++ {
+						s -= l[i][k] * w[k]
+					}
+					c = s / l[i][i]
+					e, ec = normalPair(c)
 				}
-				c := s / l[i][i]
-				e, ec := distuv.UnitNormal.CDF(c), distuv.UnitNormal.CDF(-c)
 				union += prod * ec
 				prod *= e
 				if i == m-1 || prod == 0 {
 					break
 				}
-				// Baker's tent transform of the shifted lattice point.
-				q := math.Mod(float64(p)*gen[i]+shift[i], 1)
+				// Baker's tent transform of the shifted lattice point;
+				// x - floor(x) is math.Mod(x, 1) for x >= 0, exactly.
+				q := float64(p)*gen[i] + shift[i]
+				q -= math.Floor(q)
 				q = 1 - math.Abs(2*q-1)
 				q = math.Min(math.Max(q, 1e-16), 1-1e-16)
 				// w = Phi^-1(q e), through the upper tail when e is near 1.
