@@ -4,6 +4,7 @@ import (
 	"context"
 	"errors"
 	"fmt"
+	"math"
 
 	"strutrisk/internal/assess"
 	"strutrisk/internal/study"
@@ -45,7 +46,31 @@ func calibrate(ctx context.Context, st *study.Study, fs *sim.FORMSettings) (*ass
 		}
 		return calibrationBeta(ctx, st, i-1, x, fs)
 	}
-	return assess.Calibrate(cs.Factor, cs.Low, cs.High, cs.Target, cases, beta, 0)
+	cal, err := assess.Calibrate(cs.Factor, cs.Low, cs.High, cs.Target, cases, beta, 0)
+	if err != nil {
+		return nil, err
+	}
+	if x, ok := st.CodeCheck.Factor(cs.Factor); ok {
+		addInitial(cal, x, beta)
+	}
+	return cal, nil
+}
+
+// addInitial sets each case's beta at the factor's initial value x, for
+// the comparison the report draws; when one case's fails, none is set.
+func addInitial(cal *assess.Calibration, x float64, beta func(float64, int) (float64, error)) {
+	bs := make([]float64, len(cal.Cases))
+	for i := range cal.Cases {
+		b, err := beta(x, i)
+		if err != nil || math.IsNaN(b) {
+			return
+		}
+		bs[i] = b
+	}
+	cal.Initial = x
+	for i := range cal.Cases {
+		cal.Cases[i].BetaInitial = &bs[i]
+	}
 }
 
 // weightOf is the weight of the case name: calibration.weights or 1.

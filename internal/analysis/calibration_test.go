@@ -102,6 +102,13 @@ func TestCalibrationClosedForm(t *testing.T) {
 		if got := cal.Cases[i]; got.Case != c.name || got.Weight != c.w {
 			t.Errorf("case %d = %+v, want %s weight %g", i, got, c.name, c.w)
 		}
+		// At the study's own gamma_m1 = 1, ln gamma = 0: beta_i = c_i/s_i.
+		sr, sq := math.Sqrt(math.Log1p(c.vr*c.vr)), math.Sqrt(math.Log1p(c.vq*c.vq))
+		s := math.Hypot(sr, sq)
+		want := (math.Log(1.5) - z05*sr + z98*sq) / s
+		if got := cal.Cases[i].BetaInitial; cal.Initial != 1 || got == nil || math.Abs(*got-want) > 0.01 {
+			t.Errorf("case %s at the initial value %g: beta %v, closed form %.3f", c.name, cal.Initial, got, want)
+		}
 	}
 }
 

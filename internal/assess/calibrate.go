@@ -19,6 +19,9 @@ type CalibratedCase struct {
 	Case   string  `json:"case"`
 	Beta   float64 `json:"beta"`
 	Weight float64 `json:"weight"`
+	// BetaInitial is the case's beta at the factor's initial value
+	// (Calibration.Initial), for comparison; nil when not computed.
+	BetaInitial *float64 `json:"beta_initial,omitempty"`
 }
 
 // Calibration is the result of Calibrate: the factor's value that brings
@@ -44,6 +47,9 @@ type Calibration struct {
 	// AtBound is true when the value found lies at an end of the range:
 	// the best value may lie outside it, and Value is no calibration.
 	AtBound bool `json:"at_bound"`
+	// Initial is the factor's value before the calibration (the study's
+	// own), at which each case's BetaInitial was found; 0 when none was.
+	Initial float64 `json:"initial,omitempty"`
 }
 
 // Calibrate finds the value of a partial factor in [lo, hi] that

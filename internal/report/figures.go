@@ -22,6 +22,7 @@ func figures(b *Bundle) (figs []*figure, skipped []error) {
 		{"interaction", func() *figure { return interactionFigure(b) }},
 		{"sweep", func() *figure { return sweepFigure(b) }},
 		{"variants", func() *figure { return variantsFigure(b) }},
+		{"calibration", func() *figure { return calibrationFigure(b) }},
 		{"inventory-ranked", func() *figure { return inventoryRankedFigure(b) }},
 		{"inventory-against", func() *figure { return inventoryAgainstFigure(b) }},
 		{"life", func() *figure { return lifeFigure(b) }},

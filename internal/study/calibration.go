@@ -144,3 +144,19 @@ func (s *Study) CalibrationCase(v int, value float64) (*Study, error) {
 	st.File, st.SHA256, st.Data = s.File, s.SHA256, s.Data
 	return st, nil
 }
+
+// Factor returns the value of the [code_check] partial factor named key
+// (one a calibration may fit), and false for any other key.
+func (cs CodeCheckSpec) Factor(key string) (float64, bool) {
+	switch key {
+	case "gamma_m0":
+		return cs.GammaM0, true
+	case "gamma_m1":
+		return cs.GammaM1, true
+	case "gamma_g":
+		return cs.GammaG, true
+	case "gamma_q":
+		return cs.GammaQ, true
+	}
+	return 0, false
+}
