@@ -18,7 +18,10 @@ relative slenderness, Euler load, the K used, the capacity and which axis
 and limit govern it, the utilisation under the mean loads, and the code
 check beside beta (EN 1993-1-1 6.3.1 at characteristic values, the EN 1990
 6.10 design load, partial factors of [code_check]: recommended values by
-default, the National Annex may differ). Every
+default, the National Annex may differ). A study with an [inventory] adds
+the check of every member (slenderness, governing axis, design load and
+resistance, utilisation, the code's verdict; --json: inventory_check).
+Every
 problem in the file is listed with its line; the exit status is then 2.
 
 Flags:
@@ -49,7 +52,7 @@ func checkCmd(args []string, stdout, stderr io.Writer) int {
 		l.Study.Warnings = append(l.Study.Warnings, fmt.Sprintf("output.dir (line %d): %v; `strutrisk run` refuses it unless --out is given", l.Study.Output.DirLine, err))
 	}
 	if *asJSON {
-		out, err := json.MarshalIndent(l.BaseDocument(), "", "  ")
+		out, err := json.MarshalIndent(l.CheckDocument(), "", "  ")
 		if err != nil {
 			fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 			return exitInternal

@@ -214,6 +214,7 @@ func (l *Loaded) CheckText() string {
 	b.WriteString(report.CodeCheckText(l.CodeCheck))
 	b.WriteString(lifeCheckText(l))   // life.go
 	b.WriteString(casesCheckText(st)) // sweep.go
+	b.WriteString(report.InventoryCheckText(l.InventoryCheck()))
 	if len(st.Defaults) > 0 {
 		fmt.Fprintf(&b, "\nDefaults that apply:\n")
 		for _, d := range st.Defaults {

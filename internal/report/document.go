@@ -84,7 +84,10 @@ type Document struct {
 	// Inventory holds the members of the study's inventory and their
 	// series system (inventory.go).
 	Inventory *Inventory `json:"inventory,omitempty"`
-	Warnings  []string   `json:"warnings"`
+	// InventoryCheck is the deterministic check of every member of the
+	// inventory (strutrisk check --json only; inventory_check.go).
+	InventoryCheck *InventoryCheck `json:"inventory_check,omitempty"`
+	Warnings       []string        `json:"warnings"`
 	// SobolCapacity are the Sobol indices of the capacity (Sobol holds those
 	// of the study's sensitivity output, the margin); loads have ~0 here.
 	SobolCapacity []Sobol `json:"sobol_capacity,omitempty"`

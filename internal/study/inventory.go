@@ -1,6 +1,7 @@
 package study
 
 import (
+	"fmt"
 	"path/filepath"
 	"sort"
 	"strings"
@@ -64,7 +65,7 @@ func (inv *Inventory) Group(i int) []string {
 func (s *Study) Member(i int) (*Study, error) {
 	inv := s.Inventory
 	m := inv.Members[i]
-	st, err := s.With("member "+m.Name, m.Sets)
+	st, err := s.With(fmt.Sprintf("member %s (%s line %d)", m.Name, inv.File, m.Line), m.Sets)
 	if err != nil {
 		return nil, err
 	}

@@ -80,6 +80,8 @@ func TestInventoryErrors(t *testing.T) {
 		{"shared unknown", inv + "shared = { \"material.yeild\" = \"all\" }\n", "name\nA\n", "did you mean \"material.yield\""},
 		{"shared by a missing column", inv + "shared = { \"material.yield\" = \"bacth\" }\n", "name, batch\nA, 1\n", "no column \"bacth\"; did you mean \"batch\""},
 		{"shared all but set", inv + "shared = { \"material.yield\" = \"all\" }\n", "name, material.yield.mean\nA, 400\nB, 420\n", "share material.yield but column material.yield.mean gives them 400 and 420"},
+		// A row whose section cannot be built names the member and its line.
+		{"wall consumed", inv, "name, member.section.thickness_loss (mm)\nA, 1\nB, 9\n", "member B (members.csv line 3)"},
 		{"with variants", inv + "[[variant]]\nname = \"v\"\nset = { \"member.length\" = 2000 }\n", "name\nA\n", "cannot also have variants"},
 	}
 	for _, c := range cases {
