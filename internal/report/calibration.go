@@ -2,6 +2,7 @@ package report
 
 import (
 	"fmt"
+	"strings"
 
 	"strutrisk/internal/assess"
 )
@@ -32,4 +33,28 @@ func worstBeta(c *assess.Calibration) float64 {
 		}
 	}
 	return 0
+}
+
+// calibrationCasesText is the table of a calibration's cases for the
+// summary, under its line: weight, beta at the value found, its gap to
+// the target and, when known, beta at the initial value.
+func calibrationCasesText(c *assess.Calibration) string {
+	if c == nil || len(c.Cases) == 0 {
+		return ""
+	}
+	var w strings.Builder
+	initial := c.Cases[0].BetaInitial != nil
+	fmt.Fprintf(&w, "    %-28s %7s  %8s  %11s", "case", "weight", "beta", "beta-target")
+	if initial {
+		fmt.Fprintf(&w, "  %s", "beta at "+fixed(c.Initial, 3))
+	}
+	w.WriteString("\n")
+	for _, k := range c.Cases {
+		fmt.Fprintf(&w, "    %-28s %7s  %8s  %11s", k.Case, sig(k.Weight, 3), fixed(k.Beta, 2), strings.Replace(signed(k.Beta-c.TargetBeta), "−", "-", 1))
+		if initial && k.BetaInitial != nil {
+			fmt.Fprintf(&w, "  %14s", fixed(*k.BetaInitial, 2))
+		}
+		w.WriteString("\n")
+	}
+	return w.String()
 }

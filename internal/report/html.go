@@ -167,6 +167,16 @@ a{color:inherit;text-decoration:none}
 {{end}}</table>{{end}}
 </section>{{end}}
 
+{{with .Calibration}}<section id="calibration">
+<h2>Calibration of {{.Factor}}</h2>
+<p class="verdict {{.Class}}">{{.Head}}</p>
+<table>{{range .Facts}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>
+{{with $.Picture "calibration"}}{{template "fig" .}}{{end}}
+<table><tr>{{range .Columns}}<th>{{.}}</th>{{end}}</tr>
+{{range .Table}}<tr>{{range $i, $c := .}}<td{{if and $i (ne $c "worst")}} class="n"{{end}}>{{$c}}</td>{{end}}</tr>
+{{end}}</table>
+</section>{{end}}
+
 {{if or .Inventory (.Picture "inventory-ranked") (.Picture "inventory-against")}}<section id="inventory">
 <h2>Inventory</h2>
 {{with .Inventory}}<p>{{.Head}}.</p>

@@ -166,6 +166,7 @@ func Markdown(b *Bundle) string {
 			mdTable(&w, []string{t.head, "pf (–)", "95% interval of pf (–)", "β (–)"}, rows)
 		}
 	}
+	mdCalibration(&w, v.Calibration)
 	mdInventory(&w, v.Inventory)
 	if len(v.Life) > 0 {
 		w.WriteString("## Remaining life under corrosion\n\n")

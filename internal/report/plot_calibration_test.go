@@ -63,3 +63,37 @@ func TestCalibrationFigure(t *testing.T) {
 		}
 	}
 }
+
+// TestCalibrationReports: the HTML and Markdown reports carry a section
+// with the facts, the picture (HTML) and the table of cases, and the
+// summary a row per case; a value at an end of the range is flagged.
+func TestCalibrationReports(t *testing.T) {
+	for _, atBound := range []bool{false, true} {
+		b := &Bundle{Doc: calibrationDoc(3, true, atBound)}
+		html, err := HTML(b)
+		if err != nil {
+			t.Fatal(err)
+		}
+		md, sum := Markdown(b), SummaryText(b)
+		// case 1: beta 3.25 at the value, 2.95 at the initial 1.000, target 3.8.
+		for _, c := range []struct{ where, text, want string }{
+			{"html", string(html), `<section id="calibration">`},
+			{"html", string(html), `<figure id="fig-calibration">`},
+			{"html", string(html), `<td>case 1</td><td class="n">1</td><td class="n">3.25</td><td class="n">−0.55</td><td class="n">2.95</td>`},
+			{"html", string(html), `<td>worst</td>`},
+			{"markdown", md, "## Calibration of gamma_m1"},
+			{"markdown", md, "| case 1 | 1 | 3.25 | −0.55 | 2.95 |  |"},
+			{"markdown", md, "| case 0 | 2 | 3.00 | −0.80 | 2.70 | worst |"},
+			{"summary", sum, "    case 2                             1      3.50        -0.30            3.20\n"},
+		} {
+			if !strings.Contains(c.text, c.want) {
+				t.Errorf("at bound %v: the %s lacks %q", atBound, c.where, c.want)
+			}
+		}
+		flagged := strings.Contains(string(html), `class="verdict undecided">no calibration`) &&
+			strings.Contains(md, "at an end of the range, no calibration")
+		if flagged != atBound {
+			t.Errorf("at bound %v: the reports flag the value as no calibration: %v", atBound, flagged)
+		}
+	}
+}

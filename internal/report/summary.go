@@ -47,6 +47,7 @@ func SummaryText(b *Bundle) string {
 	summaryWrapped(&w, "load combination", CombinationLine(&d))
 	summaryWrapped(&w, "remaining life", plainGreek.Replace(LifeVerdict(&d)))
 	summaryWrapped(&w, "calibration", CalibrationLine(d.Calibration))
+	w.WriteString(calibrationCasesText(d.Calibration))
 	w.WriteString(methodText(&d, b.MethodReason))
 	if rk := RankInputs(&d, 3); len(rk.Inputs) > 0 {
 		summaryLine(&w, "most influential", plainGreek.Replace(rk.Text()))

@@ -48,6 +48,8 @@ type view struct {
 	Variants    []pointRow
 	// Inventory is the study's inventory (inventory_view.go).
 	Inventory *invView
+	// Calibration is the partial-factor calibration (calibration_view.go).
+	Calibration *calView
 
 	Updates     []updateRow
 	Measured    []measuredRow // see target.go
@@ -109,6 +111,7 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	if v.Title == "" {
 		v.Title = "strutrisk study"
 	}
+	v.Calibration = calibrationView(d.Calibration)
 	v.Inventory = inventoryView(&d, func(lo, hi string) string { return ", 95% interval " + lo + " to " + hi })
 	if d.Seed != nil {
 		v.Seed = strconv.FormatUint(*d.Seed, 10)
