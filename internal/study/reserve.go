@@ -41,6 +41,25 @@ const ReserveTol = 1e-4
 // FORM index: beta(factor) and beta(added load) both fall as the load
 // grows. fs are passed to sim.FORM (nil: those of Model.FORMSettings).
 func (md *Model) Reserve(ctx context.Context, target float64, fs *sim.FORMSettings) (*Reserve, error) {
+	r, err := md.ReserveFactor(ctx, target, fs, nil)
+	if err != nil {
+		return nil, err
+	}
+	var calls int
+	r.Added, calls, err = md.AddedFor(ctx, target, fs)
+	r.FORMCalls += calls
+	if err != nil {
+		r.Added, r.AddedErr = math.NaN(), fmt.Errorf("largest added load: %v", err)
+	}
+	return r, nil
+}
+
+// ReserveFactor is Reserve without the largest added load (Added NaN,
+// AddedErr nil): half the FORM analyses, for a caller that reports the
+// factor alone (an inventory's members). at1, when not nil and
+// converged, is the FORM result of the study's own loads (factor 1) with
+// settings fs, which the search then takes instead of analysing it again.
+func (md *Model) ReserveFactor(ctx context.Context, target float64, fs *sim.FORMSettings, at1 *sim.FORMResult) (*Reserve, error) {
 	st := md.Study
 	r := &Reserve{Target: target, On: st.ReserveOn, Added: math.NaN()}
 	if r.On == "" {
@@ -52,17 +71,10 @@ func (md *Model) Reserve(ctx context.Context, target float64, fs *sim.FORMSettin
 	if len(r.Loads) == 0 {
 		return nil, errors.New("no load to multiply: every load is permanent")
 	}
-	calls := 0
 	var err error
-	r.Factor, r.FactorBeta, calls, err = md.FactorFor(ctx, target, fs)
-	r.FORMCalls += calls
+	r.Factor, r.FactorBeta, r.FORMCalls, err = md.factorFor(ctx, target, fs, at1)
 	if err != nil {
 		return nil, err // the caller says it is the reserve factor that failed
-	}
-	r.Added, calls, err = md.AddedFor(ctx, target, fs)
-	r.FORMCalls += calls
-	if err != nil {
-		r.Added, r.AddedErr = math.NaN(), fmt.Errorf("largest added load: %v", err)
 	}
 	return r, nil
 }
@@ -106,9 +118,23 @@ func (md *Model) formBeta(ctx context.Context, factor, added float64, fs *sim.FO
 // FORM analyses used. The search is on the logarithm of the factor,
 // between 1e-3 and 1e3.
 func (md *Model) FactorFor(ctx context.Context, beta float64, fs *sim.FORMSettings) (factor, found float64, calls int, err error) {
+	return md.factorFor(ctx, beta, fs, nil)
+}
+
+// factorFor is FactorFor, taking at1 (not nil and converged) as the FORM
+// result at factor 1; calls does not count it.
+func (md *Model) factorFor(ctx context.Context, beta float64, fs *sim.FORMSettings, at1 *sim.FORMResult) (factor, found float64, calls int, err error) {
+	// The root is a point the search evaluated last: its index is kept,
+	// not found again.
+	lastT, lastB := math.NaN(), math.NaN()
 	f := func(t float64) (float64, error) {
+		if t == 0 && at1 != nil && at1.Converged {
+			lastT, lastB = t, at1.Beta
+			return at1.Beta - beta, nil
+		}
 		calls++
 		b, err := md.formBeta(ctx, math.Exp(t), 0, fs)
+		lastT, lastB = t, b
 		return b - beta, err
 	}
 	t, err := fallingRoot(f, 0, math.Ln2, math.Log(1e-3), math.Log(1e3))
@@ -120,6 +146,9 @@ func (md *Model) FactorFor(ctx context.Context, beta float64, fs *sim.FORMSettin
 		return math.NaN(), math.NaN(), calls, err
 	}
 	factor = math.Exp(t)
+	if t == lastT {
+		return factor, lastB, calls, nil
+	}
 	calls++
 	found, err = md.formBeta(ctx, factor, 0, fs)
 	return factor, found, calls, err

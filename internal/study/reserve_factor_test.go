@@ -1,0 +1,66 @@
+package study
+
+import (
+	"context"
+	"math"
+	"testing"
+
+	"strutrisk/sim"
+)
+
+// TestReserveFactorAlone: ReserveFactor finds the factor of the lognormal
+// closed form (lognormalRS, reserve_test.go: lambda = exp((beta(1) -
+// target) D), Melchers and Beck, from memory) with the FORM index there,
+// the same as Reserve's, without searching the added load; and the root,
+// a point the search evaluated, is not analysed a second time: the calls
+// counted are those of the root search alone.
+func TestReserveFactorAlone(t *testing.T) {
+	md, err := Build(parse(t, lognormalRS))
+	if err != nil {
+		t.Fatal(err)
+	}
+	vr2 := (1+0.10*0.10)*(1+0.05*0.05) - 1
+	vs2 := 0.20 * 0.20
+	d := math.Sqrt(math.Log((1 + vr2) * (1 + vs2)))
+	beta1 := (math.Log(3e6/1.5e6) + 0.5*math.Log((1+vs2)/(1+vr2))) / d
+	for _, target := range []float64{2.5, 3.8, 4.7} {
+		ctx := context.Background()
+		r, err := md.ReserveFactor(ctx, target, nil, nil)
+		if err != nil {
+			t.Fatalf("target %g: %v", target, err)
+		}
+		if want := math.Exp((beta1 - target) * d); !near(r.Factor, want, 1e-4) || math.Abs(r.FactorBeta-target) > ReserveTol {
+			t.Errorf("target %g: factor %.6f (FORM beta %.5f), want %.6f", target, r.Factor, r.FactorBeta, want)
+		}
+		if !math.IsNaN(r.Added) || r.AddedErr != nil {
+			t.Errorf("target %g: added load %v (%v), want none searched", target, r.Added, r.AddedErr)
+		}
+		full, err := md.Reserve(ctx, target, nil)
+		if err != nil || full.Factor != r.Factor || full.FactorBeta != r.FactorBeta || full.FORMCalls <= r.FORMCalls {
+			t.Errorf("target %g: Reserve %+v (%v), ReserveFactor %+v", target, full, err, r)
+		}
+		// The search's own count: every evaluation of f in fallingRoot.
+		searched := 0
+		f := func(t float64) (float64, error) {
+			searched++
+			b, err := md.formBeta(ctx, math.Exp(t), 0, nil)
+			return b - target, err
+		}
+		if _, err := fallingRoot(f, 0, math.Ln2, math.Log(1e-3), math.Log(1e3)); err != nil {
+			t.Fatal(err)
+		}
+		if r.FORMCalls != searched {
+			t.Errorf("target %g: %d FORM analyses, the root search takes %d", target, r.FORMCalls, searched)
+		}
+		// Given the study's own FORM result, the search takes it for
+		// factor 1: the same factor to the bit, one analysis fewer.
+		own, err := sim.FORM(md.Sim, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		r1, err := md.ReserveFactor(ctx, target, nil, own)
+		if err != nil || r1.Factor != r.Factor || r1.FactorBeta != r.FactorBeta || r1.FORMCalls != r.FORMCalls-1 {
+			t.Errorf("target %g: with the own FORM %+v (%v), without %+v", target, r1, err, r)
+		}
+	}
+}
