@@ -6,7 +6,6 @@ import (
 	"math"
 	"sort"
 
-	"strutrisk/internal/progress"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
@@ -44,20 +43,23 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 	settings := caseSettings(s)
 	fs := memberFORM(s.FORM, main)
 	sys := make([]systemMember, 0, len(inv.Members))
-	for i := range inv.Members {
-		if ctx.Err() != nil {
-			ir.warnings = append(ir.warnings, "inventory: interrupted; the members not run are missing")
-			break
+	outs := runMembers(ctx, l.Study, &settings, obs, func(i int, ms *sim.Settings) memberOutcome {
+		if ms.Shard.Replays() { // a merge's from the shards
+			mr, md, warns := memberResult(ctx, l.Study, i, ms, fs)
+			return memberOutcome{mr: mr, md: md, warns: warns}
 		}
-		m := inv.Members[i]
-		obs.StartCase(i+1, len(inv.Members), "member "+progress.Clip(m.Name, 24))
-		mr, md, warns := memberResult(ctx, l.Study, i, &settings, fs) // a merge's from the shards
-		for _, w := range warns {
-			ir.warnings = append(ir.warnings, fmt.Sprintf("member %q: %s", m.Name, w))
+		return memberRun(ctx, l.Study, i, ms, fs)
+	})
+	if len(outs) < len(inv.Members) {
+		ir.warnings = append(ir.warnings, "inventory: interrupted; the members not run are missing")
+	}
+	for i, o := range outs {
+		for _, w := range o.warns {
+			ir.warnings = append(ir.warnings, fmt.Sprintf("member %q: %s", inv.Members[i].Name, w))
 		}
-		ir.doc.Members = append(ir.doc.Members, mr)
-		if md != nil {
-			sys = append(sys, systemMember{m: md.Sim})
+		ir.doc.Members = append(ir.doc.Members, o.mr)
+		if o.md != nil {
+			sys = append(sys, systemMember{m: o.md.Sim, form: o.form})
 		}
 	}
 	if len(sys) == len(inv.Members) && ctx.Err() == nil {
@@ -75,12 +77,18 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 // runMember runs member i of st's inventory with settings s; it also
 // returns the member's warnings.
 func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs *sim.FORMSettings) (report.Member, *study.Model, []string) {
+	o := memberRun(ctx, st, i, s, fs)
+	return o.mr, o.md, o.warns
+}
+
+// memberRun is runMember, giving the member's FORM result too.
+func memberRun(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs *sim.FORMSettings) memberOutcome {
 	m := st.Inventory.Members[i]
 	mr := report.Member{Name: m.Name, Line: m.Line, Cells: m.Cells}
-	fail := func(err error) (report.Member, *study.Model, []string) {
+	fail := func(err error) memberOutcome {
 		mr.Error = err.Error()
 		mr.Pf, mr.Beta = math.NaN(), report.Index(math.NaN())
-		return mr, nil, []string{"not run: " + err.Error()}
+		return memberOutcome{mr: mr, warns: []string{"not run: " + err.Error()}}
 	}
 	ms, err := st.Member(i)
 	if err != nil {
@@ -118,14 +126,12 @@ func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs 
 	}
 	if ms.HasTarget {
 		mr.Verdict = memberVerdict(ms, res)
-		if rv, err := md.Reserve(ctx, ms.Target, fs); err == nil {
-			f := rv.Factor
-			mr.ReserveFactor = &f
-		} else {
-			warns = append(warns, "no reserve factor: "+err.Error())
+		var w string
+		if mr.ReserveFactor, w = memberReserve(ctx, md, ms.Target, fs, settings.FORM, res); w != "" {
+			warns = append(warns, w)
 		}
 	}
-	return mr, md, warns
+	return memberOutcome{mr: mr, md: md, warns: warns, form: res.FORM}
 }
 
 // memberFORM are the FORM settings of a member's reserve factor: those of

@@ -21,11 +21,14 @@ const (
 
 // systemMember is one member as the joint sampler sees it: its model, its
 // transformation to standard normals and, for each of its variables, the
-// index of the shared normal it takes (-1: its own).
+// index of the shared normal it takes (-1: its own); form is the FORM
+// result of the member's estimate at its own loads (nil when its method
+// ran none), for a first-order system that need not run it again.
 type systemMember struct {
 	m      *sim.Model
 	t      *sim.Transform
 	shared []int
+	form   *sim.FORMResult
 }
 
 // systemCounts are the counts of a joint sample of the members.
