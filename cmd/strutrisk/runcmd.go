@@ -7,8 +7,6 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"path/filepath"
-	"slices"
 	"strings"
 
 	"strutrisk/internal/analysis"
@@ -99,7 +97,7 @@ func runAndWrite(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", st.File, err)
 		return exitInternal
 	}
-	r.Incomplete = incompleteReason(ctx, r, sigs)
+	r.MarkInterrupted(ctx, sigs.name(), sigs.during())
 	b := r.Bundle()
 	if code := writeRun(o, b, st.Output.Formats, folder, stdout, stderr); code != exitOK {
 		return code
@@ -156,26 +154,21 @@ func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int
 // runSettings are the study's settings with the flags given over them;
 // a study run cannot take is refused with a non-zero status.
 func runSettings(o *runOptions, l *analysis.Loaded, stderr io.Writer) (sim.Settings, int) {
-	st := l.Study
-	if len(l.Model.Sim.Vars) == 0 {
-		fmt.Fprintf(stderr, "strutrisk: %s: nothing in the study is uncertain: give at least one quantity a distribution, or use `strutrisk check` for the deterministic picture\n", st.File)
+	ov := analysis.Overrides{Method: sim.Method(o.method), Samples: o.samples, Workers: o.workers}
+	if o.set["seed"] {
+		ov.Seed = &o.seed
+	}
+	settings, note, err := l.RunSettings(ov)
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 		return sim.Settings{}, exitInput
 	}
+	st := l.Study
 	if o.requireTarget && !st.HasTarget {
 		fmt.Fprintf(stderr, "strutrisk: %s: --require-target given but the study has no [target] beta\n", st.File)
 		return sim.Settings{}, exitInput
 	}
-	settings := l.Settings(o.workers)
-	if o.set["method"] {
-		settings.Method = sim.Method(o.method)
-	}
-	if o.set["samples"] {
-		settings.Samples = o.samples
-	}
-	if o.set["seed"] {
-		settings.Seed = o.seed
-	}
-	if note := analysis.BeamTimeNote(l, &settings); note != "" {
+	if note != "" {
 		fmt.Fprintf(stderr, "strutrisk: %s: %s\n", st.File, note)
 	}
 	return settings, exitOK
@@ -185,10 +178,7 @@ func runSettings(o *runOptions, l *analysis.Loaded, stderr io.Writer) (sim.Setti
 // summary (summary.txt byte for byte) or, with --json, the document.
 func writeRun(o *runOptions, b *report.Bundle, formats []string, folder *outdir.Folder, stdout, stderr io.Writer) int {
 	dir := folder.Path
-	if formats == nil || slices.Contains(formats, "html") {
-		b.ReportPath = "report.html"
-	}
-	files, werr := report.Files(b, formats)
+	files, werr := report.RunFiles(b, formats)
 	var paths []string
 	if werr == nil {
 		paths, werr = folder.Commit(files)
@@ -203,7 +193,7 @@ func writeRun(o *runOptions, b *report.Bundle, formats []string, folder *outdir.
 	} else {
 		// Where the files went is not part of the summary: standard error.
 		fmt.Fprint(stdout, report.SummaryText(b))
-		fmt.Fprint(stderr, filesText(dir, paths))
+		fmt.Fprint(stderr, report.FilesText(dir, paths))
 	}
 	if werr != nil {
 		// The results are on standard output; say they are nowhere else.
@@ -217,51 +207,13 @@ func writeRun(o *runOptions, b *report.Bundle, formats []string, folder *outdir.
 // the signal that interrupted it, else exitTarget when --require-target
 // is given and the target is not shown to be met.
 func runStatus(o *runOptions, r *analysis.Result, b *report.Bundle, sigs *interrupt, dir string, stderr io.Writer) int {
-	switch {
-	case r.Incomplete != "":
+	if r.Incomplete != "" {
 		fmt.Fprintf(stderr, "strutrisk: %s; the results in %s are marked \"complete\": false\n", r.Incomplete, dir)
 		return sigs.code()
-	case o.requireTarget && b.Doc.MeetsTarget == nil:
-		// Undecided counts as not met: the target must be shown to be met.
-		why := "undecided at this sample size (give more samples or a smaller target_cov)"
-		if t := b.Doc.Target; t != nil && t.Reason != "" && !r.Estimate.Status.Trusted() {
-			why = "undecided: " + t.Reason
-		}
-		fmt.Fprintf(stderr, "strutrisk: the target reliability index %.2f is not shown to be met: %s\n", *b.Doc.TargetBeta, why)
-		return exitTarget
-	case o.requireTarget && !*b.Doc.MeetsTarget:
-		fmt.Fprintf(stderr, "strutrisk: the target reliability index %.2f is not met\n", *b.Doc.TargetBeta)
+	}
+	if why := r.TargetShortfall(b.Doc); o.requireTarget && why != "" {
+		fmt.Fprintf(stderr, "strutrisk: %s\n", why)
 		return exitTarget
 	}
 	return exitOK
-}
-
-// incompleteReason says why the run is not complete, or "" when it is.
-func incompleteReason(ctx context.Context, r *analysis.Result, sigs *interrupt) string {
-	switch {
-	case r.Estimate.Incomplete:
-		return fmt.Sprintf("interrupted by %s after %d evaluations of the main run: the estimate is from the samples finished; the sensitivities, the reserve factor and any sweep or variant cases were not run", sigs.name(), r.Estimate.Evaluations)
-	case ctx.Err() != nil:
-		phase := sigs.during()
-		if phase == "" {
-			phase = "the steps after the main run"
-		}
-		return fmt.Sprintf("interrupted by %s during %s: the main estimate is complete; what had not finished then (sensitivities, reserve factor, sweep or variant cases) is missing", sigs.name(), phase)
-	}
-	return ""
-}
-
-// filesText says where the files of a run went: the folder and the HTML
-// report.
-func filesText(dir string, files []string) string {
-	if len(files) == 0 {
-		return ""
-	}
-	s := fmt.Sprintf("  results in         %s/ (%d files: results.json, samples.csv, summary.txt, ...)\n", dir, len(files))
-	for _, f := range files {
-		if filepath.Base(f) == "report.html" {
-			s += fmt.Sprintf("  report             %s\n", f)
-		}
-	}
-	return s
 }
