@@ -18,14 +18,18 @@ import (
 // blocks), so differences between cases are not sampling noise.
 type cases struct {
 	label    string
-	params   string         // the swept parameter
-	values   []float64      // swept values, internal units
-	lam      []float64      // nominal relative slenderness of the study at each value, about lamAxis
+	values   []float64      // swept values of a one-key sweep, internal units
+	keys     []string       // the swept keys with their units, one per axis
+	params   []string       // the swept key paths, one per axis
+	names    []string       // the names of grid's rows: the study, each variant
+	points   [][]float64    // points[i][a]: axis a at swept point i, internal units
+	lam      []float64      // nominal relative slenderness of the study at each point, about lamAxis
 	lamAxis  column.Axis    // the axis governing the study at its own values
-	sweep    []report.Point // the study itself at each swept value
+	baseLam  float64        // the same at the study's own values
+	sweep    []report.Point // the study itself at each swept point
 	variants []report.Variant
 	series   []report.Series
-	// grid[v+1][i] is variant v (-1: the study) at value i.
+	// grid[v+1][i] is variant v (-1: the study) at swept point i.
 	grid [][]*report.Point
 	// studyName says what the study itself assumes (baseName).
 	studyName string
@@ -42,86 +46,117 @@ func caseSettings(s *sim.Settings) sim.Settings {
 	return c
 }
 
-// runCases runs every variant at the study's values and at every swept
-// value. It returns nil when the study has neither.
+// runCases runs every case of st.CaseList: each variant at the study's
+// values, the study and each variant at every swept point. It returns nil
+// when the study has none. Each case's numbers depend on the study, the
+// case and the settings only, not on the cases run before it.
 func runCases(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *cases {
 	st := l.Study
-	if st.Sweep == nil && len(st.Variants) == 0 {
+	list := st.CaseList()
+	if len(list) == 0 {
 		return nil
 	}
-	c := &cases{studyName: baseName(st)}
-	n := 0
-	if sw := st.Sweep; sw != nil {
-		n = len(sw.Values)
-		c.label, c.params = sw.Label(), sw.Parameter
-		c.lamAxis = l.Nominal.Axis
-		for i, q := range sw.Values {
-			c.values = append(c.values, q.Value)
-			c.lam = append(c.lam, relSlendernessAbout(st, i, c.lamAxis))
-		}
-	}
-	total := len(st.Variants) + (len(st.Variants)+1)*n
-	done := 0
+	c := newCases(l)
+	n := st.SweptPoints()
 	settings := caseSettings(s)
-	c.grid = make([][]*report.Point, len(st.Variants)+1)
 	// A case's own warnings are told once, those of the study not again.
 	seen := map[string]bool{}
 	for _, x := range st.Warnings {
 		seen[x] = true
 	}
-	for v := -1; v < len(st.Variants); v++ {
-		c.grid[v+1] = make([]*report.Point, n)
-		for i := -1; i < n; i++ {
-			if v < 0 && i < 0 {
-				continue // the main run
+	for k, cs := range list {
+		v, i := cs.Variant, cs.Point
+		if ctx.Err() != nil {
+			c.warnings = append(c.warnings, "sweep and variants: interrupted; the cases not run are missing")
+			return c
+		}
+		name := caseName(st, v, i)
+		obs.StartCase(k+1, len(list), caseLabel(st, v, i))
+		pt, warns, err := runCase(ctx, st, v, i, &settings)
+		for _, x := range warns {
+			if !seen[x] {
+				seen[x] = true
+				c.warnings = append(c.warnings, name+": "+x)
 			}
-			if ctx.Err() != nil {
-				c.warnings = append(c.warnings, "sweep and variants: interrupted; the cases not run are missing")
-				return c
-			}
-			done++
-			name := caseName(st, v, i)
-			obs.StartCase(done, total, caseLabel(st, v, i))
-			pt, warns, err := runCase(ctx, st, v, i, &settings)
-			for _, x := range warns {
-				if !seen[x] {
-					seen[x] = true
-					c.warnings = append(c.warnings, name+": "+x)
-				}
-			}
-			if err != nil {
-				c.warnings = append(c.warnings, fmt.Sprintf("%s: not run: %v", name, err))
-				continue
-			}
-			switch {
-			case i < 0:
-				c.variants = append(c.variants, report.Variant{Name: st.Variants[v].Name, Pf: pt.Pf, Beta: pt.Beta, PfCI: pt.PfCI})
-			case v < 0:
-				c.sweep = append(c.sweep, *pt)
-			}
-			if i >= 0 {
-				c.grid[v+1][i] = pt
-			}
+		}
+		if err != nil {
+			c.warnings = append(c.warnings, fmt.Sprintf("%s: not run: %v", name, err))
+			continue
+		}
+		switch {
+		case i < 0:
+			c.variants = append(c.variants, report.Variant{Name: st.Variants[v].Name, Pf: pt.Pf, Beta: pt.Beta, PfCI: pt.PfCI})
+		case v < 0:
+			c.sweep = append(c.sweep, *pt)
+		}
+		if i >= 0 {
+			c.grid[v+1][i] = pt
 		}
 	}
-	if n > 0 {
-		for v := -1; v < len(st.Variants); v++ {
-			s := report.Series{Name: "study", Model: caseModel(st, v)}
-			if v >= 0 {
-				s.Name = st.Variants[v].Name
-			} else if len(st.Variants) > 0 {
-				s.Name = "study (" + baseName(st) + ")"
-			}
-			for _, pt := range c.grid[v+1] {
-				// A case without failures has no finite beta to draw.
-				if pt != nil && pt.Pf > 0 {
-					s.Points = append(s.Points, *pt)
-				}
-			}
-			c.series = append(c.series, s)
-		}
+	if n > 0 && st.Grid == nil {
+		c.series = caseSeries(st, c.grid)
 	}
 	return c
+}
+
+// newCases holds the swept keys and points of the study of l, with the
+// study's nominal relative slenderness at each, and room for the results.
+func newCases(l *Loaded) *cases {
+	st := l.Study
+	c := &cases{studyName: baseName(st), baseLam: math.NaN()}
+	if l.Nominal != nil {
+		c.lamAxis = l.Nominal.Axis
+		c.baseLam = l.Nominal.RelSlenderness[c.lamAxis]
+	}
+	axes := st.SweptAxes()
+	for _, sw := range axes {
+		c.keys = append(c.keys, sw.Label())
+		c.params = append(c.params, sw.Parameter)
+	}
+	c.names = append(c.names, "study ("+c.studyName+")")
+	for _, va := range st.Variants {
+		c.names = append(c.names, va.Name)
+	}
+	n := st.SweptPoints()
+	for i := 0; i < n; i++ {
+		c.points = append(c.points, st.PointValues(i))
+		c.lam = append(c.lam, relSlendernessAbout(st, i, c.lamAxis))
+	}
+	if st.Grid == nil && st.Sweep != nil {
+		c.label = st.Sweep.Label()
+		for _, q := range st.Sweep.Values {
+			c.values = append(c.values, q.Value)
+		}
+	} else {
+		c.label = strings.Join(c.keys, ", ")
+	}
+	c.grid = make([][]*report.Point, len(st.Variants)+1)
+	for k := range c.grid {
+		c.grid[k] = make([]*report.Point, n)
+	}
+	return c
+}
+
+// caseSeries are the curves of beta against a one-key sweep, the study
+// first, then each variant.
+func caseSeries(st *study.Study, grid [][]*report.Point) []report.Series {
+	var out []report.Series
+	for v := -1; v < len(st.Variants); v++ {
+		s := report.Series{Name: "study", Model: caseModel(st, v)}
+		if v >= 0 {
+			s.Name = st.Variants[v].Name
+		} else if len(st.Variants) > 0 {
+			s.Name = "study (" + baseName(st) + ")"
+		}
+		for _, pt := range grid[v+1] {
+			// A case without failures has no finite beta to draw.
+			if pt != nil && pt.Pf > 0 {
+				s.Points = append(s.Points, *pt)
+			}
+		}
+		out = append(out, s)
+	}
+	return out
 }
 
 // baseName says briefly what the study itself assumes, to tell it from
@@ -143,20 +178,31 @@ func caseName(st *study.Study, v, i int) string {
 		parts = append(parts, fmt.Sprintf("variant %q", st.Variants[v].Name))
 	}
 	if i >= 0 {
-		parts = append(parts, st.Sweep.Parameter+" = "+valueText(st.Sweep.Values[i].Value, st.Sweep.Unit()))
+		parts = append(parts, pointText(st, i))
 	}
 	return strings.Join(parts, " at ")
 }
 
-// caseLabel names a case briefly for the progress line: the swept value
+// caseLabel names a case briefly for the progress line: the swept values
 // first, then the variant's name, shortened.
 func caseLabel(st *study.Study, v, i int) string {
 	var parts []string
 	if i >= 0 {
-		parts = append(parts, st.Sweep.Parameter+" = "+valueText(st.Sweep.Values[i].Value, st.Sweep.Unit()))
+		parts = append(parts, pointText(st, i))
 	}
 	if v >= 0 {
 		parts = append(parts, fmt.Sprintf("variant %q", progress.Clip(st.Variants[v].Name, 24)))
+	}
+	return strings.Join(parts, ", ")
+}
+
+// pointText writes swept point i as a person reads it:
+// "member.length = 3 m, imperfection.bow = L/500".
+func pointText(st *study.Study, i int) string {
+	var parts []string
+	values := st.PointValues(i)
+	for a, sw := range st.SweptAxes() {
+		parts = append(parts, sw.Parameter+" = "+valueText(values[a], sw.Unit()))
 	}
 	return strings.Join(parts, ", ")
 }
@@ -217,7 +263,14 @@ func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings
 	}
 	pt = &report.Point{Pf: res.Pf, Beta: report.Index(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]}}
 	if i >= 0 {
-		pt.Value = st.Sweep.Values[i].Value
+		values := st.PointValues(i)
+		pt.Value = values[0]
+		if st.Grid != nil {
+			pt.Values = map[string]float64{}
+			for a, sw := range st.Grid.Axes {
+				pt.Values[sw.Parameter] = values[a]
+			}
+		}
 	}
 	return pt, status, nil
 }
@@ -231,8 +284,13 @@ func (c *cases) fill(b *report.Bundle) {
 	b.Doc.Variants = c.variants
 	b.Series = c.series
 	b.SweepLabel = c.label
-	b.Cases = &report.CaseTable{StudyName: c.studyName, Values: c.values, Grid: c.grid}
+	b.Cases = &report.CaseTable{StudyName: c.studyName, Values: c.values, Grid: c.grid,
+		Keys: c.keys, Params: c.params, Points: c.points, BaseLambda: c.baseLam, Names: c.names}
 	if lamVaries(c.lam) {
+		b.Cases.Lambda = c.lam
+		b.SweepLambdaAxis = c.lamAxis.String()
+	}
+	if lamVaries(c.lam) && c.values != nil {
 		b.SweepLambda = map[float64]float64{}
 		for i, x := range c.values {
 			b.SweepLambda[x] = c.lam[i]
@@ -308,6 +366,13 @@ func casesCheckText(st *study.Study) string {
 			fmt.Fprintf(&b, " (nominal relative slenderness %.3f to %.3f)", l0, l1)
 		}
 		b.WriteString("\n")
+	}
+	if g := st.Grid; g != nil {
+		fmt.Fprintf(&b, "\nSweep of %d keys (combine = %q), %d points:\n", len(g.Axes), g.Combine, len(g.Points))
+		for _, sw := range g.Axes {
+			first, last := sw.Values[0].Value, sw.Values[len(sw.Values)-1].Value
+			fmt.Fprintf(&b, "  - %s: %d values, %.5g to %.5g\n", sw.Label(), len(sw.Values), first, last)
+		}
 	}
 	if len(st.Variants) > 0 {
 		what := "nominal capacity"

@@ -20,7 +20,8 @@ func TestCasesCSV(t *testing.T) {
 		grid[0][i] = &d.Sweep[i]
 	}
 	grid[2][1] = &Point{Value: 4000, Pf: 9e-3, Beta: 2.366, PfCI: [2]float64{8e-3, 1e-2}}
-	b.Cases = &CaseTable{StudyName: "perry-robertson", Values: values, Grid: grid}
+	// 0.6541: the study's own relative slenderness (an invented value).
+	b.Cases = &CaseTable{StudyName: "perry-robertson", Values: values, Grid: grid, BaseLambda: 0.6541}
 	data, err := casesCSV(b)
 	if err != nil {
 		t.Fatal(err)
@@ -40,9 +41,9 @@ func TestCasesCSV(t *testing.T) {
 	}
 	// The study, its 2 variants, the study at 4 values, 1 variant case.
 	want := [][]string{
-		{"study (perry-robertson)", "", "", "0.00184", "0.00176", "0.00193", "2.904"},
-		{"as built", "", "", "0.00184", "0.00176", "0.00193", "2.904"},
-		{"bow L/500", "", "", "0.0046", "0.0045", "0.0048", "2.605"},
+		{"study (perry-robertson)", "", "0.6541", "0.00184", "0.00176", "0.00193", "2.904"},
+		{"as built", "", "0.6541", "0.00184", "0.00176", "0.00193", "2.904"},
+		{"bow L/500", "", "0.6541", "0.0046", "0.0045", "0.0048", "2.605"},
 		{"study (perry-robertson)", "3000", "0.5608", "2.1e-05", "1.6e-05", "2.7e-05", "4.1"},
 		{"study (perry-robertson)", "4000", "0.7477", "0.00024", "0.00021", "0.00027", "3.49"},
 		{"study (perry-robertson)", "5000", "0.9346", "0.0015", "0.0014", "0.0016", "2.97"},

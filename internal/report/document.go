@@ -192,12 +192,15 @@ type Sobol struct {
 	TotalCI  [2]float64 `json:"total_ci"`
 }
 
-// Point is one row of a sweep.
+// Point is one row of a sweep. With several swept keys Values holds each
+// key's value (key path to value, in the unit of its axis) and Value is
+// that of the first key.
 type Point struct {
-	Value float64    `json:"value"`
-	Pf    float64    `json:"pf"`
-	Beta  Index      `json:"beta"`
-	PfCI  [2]float64 `json:"pf_ci"`
+	Value  float64            `json:"value"`
+	Values map[string]float64 `json:"values,omitempty"`
+	Pf     float64            `json:"pf"`
+	Beta   Index              `json:"beta"`
+	PfCI   [2]float64         `json:"pf_ci"`
 }
 
 // Variant is one named alternative of a study.

@@ -12,10 +12,25 @@ type CaseTable struct {
 	// StudyName says briefly what the study itself assumes, to tell it
 	// from its variants ("perry-robertson", "curve b"...).
 	StudyName string
-	// Values are the swept values, in the units of the document.
+	// Values are the swept values of a one-key sweep, in the units of the
+	// document; nil with several swept keys.
 	Values []float64
+	// Keys name the swept keys with their units ("member.length (mm)"),
+	// one per axis; Points[i][a] is axis a at swept point i.
+	Keys   []string
+	Params []string // the swept key paths, one per axis
+	Points [][]float64
+	// Lambda, when the swept values change it, is the study's nominal
+	// relative slenderness at each swept point (about the axis of
+	// Bundle.SweepLambdaAxis); BaseLambda is the same at the study's own
+	// values (NaN when unknown).
+	Lambda     []float64
+	BaseLambda float64
+	// Names are the names of the rows of Grid: the study's, then each
+	// variant's.
+	Names []string
 	// Grid[s][i] is series s (the study first, then each variant, as
-	// Bundle.Series) at swept value i; nil where the case did not run.
+	// Bundle.Series) at swept point i; nil where the case did not run.
 	Grid [][]*Point
 }
 
@@ -36,7 +51,10 @@ func casesText(b *Bundle, d *Document) string {
 	if len(d.Variants) > 0 {
 		w.WriteString(variantsText(c, d, beta))
 	}
-	if len(c.Values) > 0 {
+	switch {
+	case c.manyKeys():
+		w.WriteString(gridText(b, beta))
+	case len(c.Values) > 0:
 		w.WriteString(sweepText(b, beta))
 	}
 	if infinite {

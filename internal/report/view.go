@@ -260,8 +260,15 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 	}
 
 	v.SweepCurves = sweepCurvesTable(b)
+	if t := gridCasesTable(b); t != nil {
+		v.SweepCurves = t
+	}
 	for _, p := range d.Sweep {
-		v.Sweep = append(v.Sweep, pointRow{sig(p.Value, 4), prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta))})
+		name := sig(p.Value, 4)
+		if b.Cases.manyKeys() {
+			name = pointName(pointOf(b.Cases, p))
+		}
+		v.Sweep = append(v.Sweep, pointRow{name, prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta))})
 	}
 	for _, p := range d.Variants {
 		v.Variants = append(v.Variants, pointRow{p.Name, prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta))})

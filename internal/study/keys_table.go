@@ -172,7 +172,17 @@ var keyTables = []*TableInfo{
 		{Name: "sobol", Takes: "true/false or { samples }", Default: "true, 2048 samples (off for model beam-column)",
 			Meaning: "Sobol indices of the margin and of the capacity."},
 	}},
-	{Path: "sweep", Meaning: "Repeats the study over the values of one key.", Keys: []KeyInfo{
+	{Path: "sweep", Meaning: "Repeats the study over the values of one key, or of several keys given as [[sweep.axis]] tables.", Keys: []KeyInfo{
+		{Name: "parameter", Takes: "text (a key path)", Required: true, Meaning: "A quantity's path, or a distribution's parameter such as \"loads.imposed.mean\"."},
+		{Name: "values", Takes: "list of quantities", Meaning: "The swept values (or from, to and steps)."},
+		{Name: "from", Takes: "quantity", Meaning: "The first value of a range."},
+		{Name: "to", Takes: "quantity", Meaning: "The last value of a range."},
+		{Name: "steps", Takes: "whole number (2 to 200)", Meaning: "The number of values of a range."},
+		{Name: "scale", Takes: "text", Choices: []string{"linear", "log"}, Default: "linear", Meaning: "The spacing of a range; log needs positive ends."},
+		{Name: "combine", Takes: "text", Choices: []string{"grid", "zip"}, Default: "grid",
+			Meaning: "With [[sweep.axis]] tables: grid runs every combination of the axes' values, zip their values in step (every axis as many)."},
+	}},
+	{Path: "sweep.axis", Array: true, Meaning: "One of several swept keys (instead of [sweep] parameter): the study runs at the combinations sweep.combine makes.", Keys: []KeyInfo{
 		{Name: "parameter", Takes: "text (a key path)", Required: true, Meaning: "A quantity's path, or a distribution's parameter such as \"loads.imposed.mean\"."},
 		{Name: "values", Takes: "list of quantities", Meaning: "The swept values (or from, to and steps)."},
 		{Name: "from", Takes: "quantity", Meaning: "The first value of a range."},

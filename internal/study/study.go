@@ -103,8 +103,12 @@ type Study struct {
 
 	Analysis    Analysis
 	Sensitivity Sensitivity
-	Sweep       *Sweep
-	Variants    []Variant
+	// Sweep is a [sweep] of one key; Grid one of several keys
+	// ([[sweep.axis]]). At most one of them is set; SweptAxes and
+	// SweptPoints read either.
+	Sweep    *Sweep
+	Grid     *Grid
+	Variants []Variant
 	// Inventory, when not nil, is the study's [inventory] (inventory.go).
 	Inventory *Inventory
 	Output    Output

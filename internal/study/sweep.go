@@ -26,6 +26,10 @@ type Sweep struct {
 	lcr bool // values written Lcr/n: fractions of the buckling length
 	// raw are the values as put into the study document.
 	raw []any
+	// at is the table the key is swept in ("sweep", "sweep.axis[1]");
+	// countKey is its key that sets the number of values ("sweep.values",
+	// "sweep.axis[1].steps").
+	at, countKey string
 }
 
 // Unit is the unit of the swept values as Label gives it: "mm", "N",
@@ -84,21 +88,37 @@ func (p *parser) sweep(top *table) {
 		return
 	}
 	defer p.unknown(t)
-	sw := &Sweep{}
+	if _, many := t.m["axis"]; many {
+		p.sweepAxes(t)
+		return
+	}
+	if _, given := t.m["combine"]; given {
+		t.used["combine"] = true
+		p.errorf(t.key("combine"), "combine joins several [[sweep.axis]] tables; a [sweep] with one parameter has nothing to combine: remove it")
+	}
+	if sw := p.sweepOne(t); sw != nil {
+		p.st.Sweep = sw
+	}
+}
+
+// sweepOne reads one swept key from t: [sweep] itself or one
+// [[sweep.axis]] table. It returns nil when the key is not known.
+func (p *parser) sweepOne(t *table) *Sweep {
+	sw := &Sweep{at: t.path}
 	name, ok := p.str(t, "parameter")
 	if !ok {
 		if _, given := t.m["parameter"]; !given {
 			p.required(t, "parameter", "the quantity to sweep, e.g. parameter = \"member.length\" (or a distribution's parameter, e.g. \"loads.imposed.mean\")")
 		}
 		p.markAll(t)
-		return
+		return nil
 	}
 	sw.Parameter = name
 	o, known := p.sweepOpt(name)
 	if !known {
 		p.unknownPath(t.key("parameter"), name)
 		p.markAll(t)
-		return
+		return nil
 	}
 	sw.dim = o.dim
 	o.need = anyValue // the study's own checks apply to each value
@@ -116,6 +136,10 @@ func (p *parser) sweep(top *table) {
 	default:
 		p.required(t, "values", "the values to sweep, e.g. values = [\"3 m\", \"4 m\"], or from, to and steps")
 	}
+	sw.countKey = t.key("values")
+	if !hasValues {
+		sw.countKey = t.key("steps")
+	}
 	for i, q := range sw.Values {
 		if i > 0 && q.Lcr != sw.Values[0].Lcr {
 			p.errorf(q.Path, "the swept values mix Lcr/n with L/n or values with a unit: write all of them one way")
@@ -127,7 +151,7 @@ func (p *parser) sweep(top *table) {
 		}
 		sw.rel, sw.lcr = q.Relative, q.Lcr
 	}
-	p.st.Sweep = sw
+	return sw
 }
 
 func (p *parser) sweepList(t *table, sw *Sweep, o qopt) {
@@ -238,110 +262,4 @@ func (p *parser) unknownPath(key, name string) {
 	} else {
 		p.errorf(key, "%q is not a quantity of this study (they are %s; a distribution's parameter is written e.g. \"loads.imposed.mean\")", name, strings.Join(paths, ", "))
 	}
-}
-
-// overrides are the changes of one case: variant v (-1 for none) at
-// swept value i (-1 for none).
-func (s *Study) overrides(v, i int) []override {
-	var ovs []override
-	label := "the study"
-	if v >= 0 {
-		va := s.Variants[v]
-		label = fmt.Sprintf("variant %q", va.Name)
-		for _, o := range va.set {
-			o.label = label
-			ovs = append(ovs, o)
-		}
-	}
-	if i >= 0 && s.Sweep != nil {
-		sw := s.Sweep
-		at := sw.Values[i].Path
-		if sw.Scale != "list" {
-			at = "sweep"
-		}
-		where := fmt.Sprintf("%s = %v", sw.Parameter, sw.raw[i])
-		if v >= 0 {
-			where = label + " at " + where
-		}
-		for k := range ovs {
-			ovs[k].label = where
-		}
-		// The swept value comes last: it wins over a variant's setting.
-		ovs = append(ovs, override{key: sw.Parameter, value: sw.raw[i], at: at, label: where})
-	}
-	return ovs
-}
-
-// Derive returns the study as variant v (an index of Variants, -1 for the
-// study itself) at swept value i (an index of Sweep.Values, -1 for none):
-// the study file read again with the variant's keys and the swept value
-// set, without its sweep and variants. Parse has checked every case, so
-// an error here is unexpected.
-func (s *Study) Derive(v, i int) (*Study, error) {
-	if v < -1 || v >= len(s.Variants) || i < -1 || i >= 0 && (s.Sweep == nil || i >= len(s.Sweep.Values)) {
-		return nil, fmt.Errorf("study: no case variant %d, value %d", v, i)
-	}
-	st, probs := derive(s.File, s.src, s.overrides(v, i))
-	if len(probs) > 0 {
-		return nil, &Error{Problems: probs}
-	}
-	st.File, st.SHA256, st.Data = s.File, s.SHA256, s.Data
-	return st, nil
-}
-
-// checkCases reads every variant at every swept value (and each alone)
-// and returns their problems, each reported once.
-func (s *Study) checkCases() *Error {
-	if s.Sweep == nil && len(s.Variants) == 0 {
-		return nil
-	}
-	n := 0
-	if s.Sweep != nil {
-		n = len(s.Sweep.Values)
-	}
-	if cases := s.Cases(); cases > MaxCases {
-		key, line := "variant", s.src.parts["sweep"]["variant"]
-		if n > len(s.Variants) {
-			key, line = "sweep", s.src.parts["sweep"]["sweep"]
-		}
-		return &Error{Problems: []Problem{{File: s.File, Line: line, Key: key, Msg: fmt.Sprintf(
-			"%d cases (the study and %d variants, at %d swept values) are more than the %d a study may run: split it into several studies",
-			cases, len(s.Variants), n, MaxCases)}}}
-	}
-	var out []Problem
-	seen := map[string]bool{}
-	more := 0
-	for v := -1; v < len(s.Variants); v++ {
-		for i := -1; i < n; i++ {
-			if v < 0 && i < 0 {
-				continue
-			}
-			_, probs := derive(s.File, s.src, s.overrides(v, i))
-			for _, pr := range probs {
-				pr.File = s.File
-				if k := pr.String(); !seen[k] {
-					seen[k] = true
-					if len(out) >= maxProblems {
-						more++
-						continue
-					}
-					out = append(out, pr)
-				}
-			}
-		}
-	}
-	if len(out) == 0 {
-		return nil
-	}
-	return &Error{Problems: out, Unlisted: more}
-}
-
-// Cases is the number of runs after the study's own: each variant, and
-// the study and each variant at each swept value.
-func (s *Study) Cases() int {
-	n := 0
-	if s.Sweep != nil {
-		n = len(s.Sweep.Values)
-	}
-	return (len(s.Variants)+1)*(n+1) - 1
 }
