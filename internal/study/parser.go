@@ -430,6 +430,7 @@ func (p *parser) parseDoc(raw map[string]any) *Study {
 	}
 	if len(p.probs) == 0 {
 		p.normaliseLoads() // normalise.go
+		p.normaliseSwept() // normalise_swept.go
 	}
 	return st
 }
