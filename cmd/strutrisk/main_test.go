@@ -88,6 +88,7 @@ func TestBadStudies(t *testing.T) {
 		{"bending misspelt key", good + "[bending]\nlaterl = \"1 kN/m\"\n", []string{"study.toml:20: bending.laterl: unknown key in [bending]; did you mean bending.lateral?"}},
 		{"bending curve on an angle", sec("shape = \"angle\"\ndepth = 80\nwidth = 80\nthickness = 8\n") + "[capacity]\nmodel = \"curve\"\n[bending]\nlateral = 1\n", []string{"study.toml:21: capacity.model: model \"curve\" with [bending] is the EN 1993-1-1 6.3.3 interaction", "for this angle section"}},
 		{"bending about the axis not checked", good + "[capacity]\naxis = \"minor\"\n[bending]\nlateral = 1\n", []string{"study.toml:20: capacity.axis: \"minor\" checks one axis, but [bending] bends the member about its major axis"}},
+		{"calibration without normalised loads", good + "[calibration]\nfactor = \"gamma_m1\"\nrange = [1.0, 1.3]\ntarget_beta = 3.8\n", []string{"study.toml:20: calibration.factor: calibrating gamma_m1 needs code_check.normalise = \"design\""}},
 		{"typo key", edit(11, `yeild = 250`), []string{"study.toml:11: material.yeild: unknown key", "did you mean material.yield?", "1 problem in"}}, // the typo, not also a missing yield
 		{"unknown table", good + "[materail]\nx = 1\n", []string{"study.toml:19: materail: unknown key", "did you mean material?"}},
 		{"negative cov", edit(11, `yield = { dist = "lognormal", mean = 250, cov = -0.1 }`), []string{"study.toml:11: material.yield: cov = -0.1 must be between 0 and 1"}},

@@ -122,6 +122,7 @@ func TestCalibrationRefused(t *testing.T) {
 		{strings.Replace(calibrationStudy(""), `range = [1.0, 2.0]`, `range = [1.3, 1.1]`, 1), "calibration.range"},
 		{calibrationStudy("weights = { nowhere = 1 }\n"), "calibration.weights.nowhere"},
 		{calibrationStudy("weights = { snow = -1 }\n"), "calibration.weights.snow"},
+		{strings.Replace(calibrationStudy(""), `normalise = "design"`, ``, 1), "calibration.factor"},
 	} {
 		_, err := Load(writeStudy(t, c.text))
 		if err == nil || !strings.Contains(err.Error(), c.want) {

@@ -87,11 +87,40 @@ func Calibrate(factor string, lo, hi, target float64, cases []CalibrationCase, b
 	if err != nil {
 		return nil, err
 	}
+	if err := checkActs(factor, v, lo, hi, eval, betas); err != nil {
+		return nil, err
+	}
 	obj, err := eval(v) // betas at v
 	if err != nil {
 		return nil, err
 	}
 	return summarise(factor, v, lo, hi, target, tol, obj, cases, betas), nil
+}
+
+// checkActs refuses a value v at which the factor acts on no case: every
+// beta the same a hundredth of the range away (towards the middle). On
+// such a plateau the search stops anywhere, so its value is no
+// calibration (a factor that sets neither the design resistance nor the
+// design load that the loads are normalised to, e.g. gamma_m0 of a
+// slender member whose buckling resistance governs).
+func checkActs(factor string, v, lo, hi float64, eval func(float64) (float64, error), betas []float64) error {
+	if _, err := eval(v); err != nil {
+		return err
+	}
+	at := append([]float64(nil), betas...)
+	d := 0.01 * (hi - lo)
+	if v+d > hi {
+		d = -d
+	}
+	if _, err := eval(v + d); err != nil {
+		return err
+	}
+	for i, b := range betas {
+		if math.Abs(b-at[i]) > 1e-12*math.Max(1, math.Abs(b)) {
+			return nil
+		}
+	}
+	return fmt.Errorf("no case's beta changes with %s between %.4g and %.4g: the factor does not act on the cases there (it sets neither their design resistance nor their design load), so no value of it can be calibrated", factor, math.Min(v, v+d), math.Max(v, v+d))
 }
 
 // summarise builds the Calibration of the value v from the cases' betas

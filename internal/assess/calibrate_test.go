@@ -152,6 +152,8 @@ func TestCalibrateRefuses(t *testing.T) {
 		{"negative weight", 1, 2, []assess.CalibrationCase{{Name: "b", Weight: -1}}, ok, "case b has the weight -1"},
 		{"failing case", 1, 2, one, func(float64, int) (float64, error) { return 0, errors.New("boom") }, "case a at gamma_m1"},
 		{"NaN beta", 1, 2, one, func(float64, int) (float64, error) { return math.NaN(), nil }, "not a number"},
+		{"factor acts on nothing", 1, 2, one, func(float64, int) (float64, error) { return 3, nil }, "no case's beta changes with gamma_m1"},
+		{"plateau at the best value", 1, 2, one, func(v float64, _ int) (float64, error) { return 3.8 + math.Max(0, v-1.5), nil }, "between 1 and 1.01"},
 	} {
 		_, err := assess.Calibrate("gamma_m1", tc.lo, tc.hi, 3.8, tc.cases, tc.beta, 0)
 		if err == nil || !strings.Contains(err.Error(), tc.wantSubstring) {

@@ -39,6 +39,9 @@ func (p *parser) calibration(top *table) {
 			p.errorf(t.key("factor"), "%q is not a partial factor of [code_check] that can be calibrated: give one of %v", f, calibrationFactors)
 		}
 		cs.Factor = f
+		if p.st.CodeCheck.Normalise != NormaliseDesign {
+			p.errorf(t.key("factor"), "calibrating %s needs code_check.normalise = \"design\": without it the loads do not follow the partial factors, so no case's beta depends on %s; add normalise = \"design\" to [code_check]", f, f)
+		}
 	} else if _, given := t.get("factor"); !given {
 		p.required(t, "factor", "the [code_check] partial factor fitted, e.g. factor = \"gamma_m1\"")
 	}
