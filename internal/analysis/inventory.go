@@ -17,6 +17,7 @@ type inventoryRun struct {
 	columns  []string
 	shared   []string
 	against  string
+	units    map[string]string
 	warnings []string
 }
 
@@ -39,7 +40,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 	if inv == nil {
 		return nil
 	}
-	ir := &inventoryRun{doc: &report.Inventory{File: inv.File}, columns: inv.Columns, shared: sharedKeys(inv), against: inv.PlotAgainst}
+	ir := &inventoryRun{doc: &report.Inventory{File: inv.File}, columns: inv.Columns, shared: sharedKeys(inv), against: inv.PlotAgainst, units: inv.Units}
 	settings := caseSettings(s)
 	fs := memberFORM(s.FORM, main)
 	sys := make([]systemMember, 0, len(inv.Members))
@@ -192,6 +193,7 @@ func (ir *inventoryRun) fill(d *report.Document, b *report.Bundle) {
 		b.InventoryColumns = ir.columns
 		b.InventoryShared = ir.shared
 		b.InventoryAgainst = ir.against
+		b.InventoryUnits = ir.units
 	}
 }
 

@@ -48,6 +48,9 @@ type Bundle struct {
 	// InventoryAgainst is the column [inventory] plot_against names, ""
 	// when the picture chooses one.
 	InventoryAgainst string
+	// InventoryUnits are the units the inventory's header gives its
+	// columns, by column (the cells then hold bare numbers).
+	InventoryUnits map[string]string
 	// Convergence traces pf and its band against evaluations; TraceKind says
 	// (TraceKind) what its points are (subset simulation's levels are not estimates).
 	Convergence []sim.ConvergencePoint

@@ -39,8 +39,8 @@ func inventoryText(d *Document) string {
 			fmt.Fprintf(&w, "    %s\n", l)
 		}
 	}
-	if v.Rest != "" {
-		fmt.Fprintf(&w, "    %s\n", plainGreek.Replace(v.Rest))
+	for _, l := range WrapText(plainGreek.Replace(v.Rest), summaryWrap) {
+		fmt.Fprintf(&w, "    %s\n", l)
 	}
 	return w.String()
 }

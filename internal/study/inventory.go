@@ -22,6 +22,9 @@ type Inventory struct {
 	// Columns are the CSV's columns but name: key paths of the study,
 	// and the columns that group members sharing an input.
 	Columns []string
+	// Units are the units the header gives the columns ("member.length
+	// (m)": "m"), by column; a column without one is absent.
+	Units map[string]string
 	// Members are the rows, in the order of the file.
 	Members []Member
 	// PlotAgainst is the column the report draws beta against, ""

@@ -88,6 +88,12 @@ func (inv *Inventory) read(file string, r io.Reader, sys System) error {
 			hasName = true
 		default:
 			inv.Columns = append(inv.Columns, k)
+			if u := cols[i].unit; u != "" && u != "-" {
+				if inv.Units == nil {
+					inv.Units = map[string]string{}
+				}
+				inv.Units[k] = u
+			}
 		}
 		seen[k] = true
 	}

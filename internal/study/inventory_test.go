@@ -43,6 +43,9 @@ func TestInventoryRead(t *testing.T) {
 	if len(inv.Members) != 2 || inv.Members[1].Name != "C2" || inv.Members[1].Line != 4 {
 		t.Fatalf("members %+v", inv.Members)
 	}
+	if len(inv.Units) != 1 || inv.Units["member.length"] != "m" {
+		t.Errorf("header units %v, want member.length in m only", inv.Units)
+	}
 	if g := inv.Group(1); len(g) != 2 || g[0] != "" || g[1] != "b2" {
 		t.Errorf("groups of C2 %q, want [\"\" \"b2\"] (loads.dead, material.yield)", g)
 	}
