@@ -5,8 +5,6 @@ import (
 	"fmt"
 	"math"
 	"math/bits"
-	"sync"
-	"sync/atomic"
 )
 
 // qmcChunk is the number of points of one work unit of conditional
@@ -95,14 +93,18 @@ func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc b
 	if !qmc {
 		nsob = 0
 	}
-	dirs := sobolDirections(nsob)
+	pl := &cqmcPlan{m: m, t: t, seed: s.Seed, idx: idx, nvar: nvar, nsob: nsob, dj: dj, rest: rest, dirs: sobolDirections(nsob), R: R, maxN: maxN}
 	// One scrambling seed per replicate and dimension.
-	seeds := make([][]uint32, R)
-	for r := range seeds {
-		seeds[r] = make([]uint32, len(rest))
-		for j := range seeds[r] {
-			seeds[r][j] = uint32(splitmix64(s.Seed ^ splitmix64(streamQMC<<56^uint64(r)<<20^uint64(j))))
+	pl.seeds = make([][]uint32, R)
+	for r := range pl.seeds {
+		pl.seeds[r] = make([]uint32, len(rest))
+		for j := range pl.seeds[r] {
+			pl.seeds[r][j] = uint32(splitmix64(s.Seed ^ splitmix64(streamQMC<<56^uint64(r)<<20^uint64(j))))
 		}
+	}
+	sh, err := pl.shardOf(ctx, s, qmc, n0)
+	if err != nil {
+		return nil, err
 	}
 
 	sums := make([][]float64, R) // per replicate, per chunk
@@ -116,66 +118,17 @@ func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc b
 			break
 		}
 		// Work units: the chunks of [prev, n) of every replicate.
-		type unit struct {
-			r     int
-			start int64
-			size  int
-			slot  int
-		}
-		var units []unit
+		var units []cqmcUnit
 		for r := 0; r < R; r++ {
 			for st := prev; st < n; st += qmcChunk {
 				size := int(min(int64(qmcChunk), n-st))
-				units = append(units, unit{r: r, start: st, size: size, slot: len(sums[r])})
+				units = append(units, cqmcUnit{r: r, start: st, size: size, slot: len(sums[r])})
 				sums[r] = append(sums[r], 0)
 			}
 		}
-		var next atomic.Int64
-		var wg sync.WaitGroup
-		for w := 0; w < min(s.Workers, len(units)); w++ {
-			wg.Add(1)
-			go func() {
-				defer wg.Done()
-				x, p, z := make([]float64, nvar), make([]float64, nvar), make([]float64, nvar)
-				cur := make([]uint32, nsob)
-				rng := newBlockRNG()
-				for {
-					k := int(next.Add(1) - 1)
-					if k >= len(units) || ctx.Err() != nil {
-						return
-					}
-					u := units[k]
-					rng.seed(s.Seed, streamQMC, uint64(u.r)<<32|uint64(u.start/qmcChunk))
-					sum := 0.0
-					p[idx], x[idx] = 0.5, dj.Quantile(0.5) // ignored by Split
-					for j := range cur {
-						cur[j] = sobolAt(&dirs[j], uint32(u.start))
-					}
-					for i := 0; i < u.size; i++ {
-						if i > 0 {
-							// Gray-code order: point i differs from point
-							// i-1 by the direction number of its lowest set bit.
-							c := bits.TrailingZeros32(uint32(u.start) + uint32(i))
-							for j := range cur {
-								cur[j] ^= dirs[j][c]
-							}
-						}
-						for j, dim := range rest {
-							if j < nsob {
-								p[dim] = toUnit(owenScramble(cur[j], seeds[u.r][j]))
-							} else {
-								p[dim] = uniformOpen(rng.r)
-							}
-						}
-						t.fromUniform(x, p, z, idx)
-						h, c := m.Linear.Split(x)
-						sum += conditionalProb(dj, h, c)
-					}
-					sums[u.r][u.slot] = sum
-				}
-			}()
+		if err := pl.evaluate(ctx, s.Workers, units, sums, sh); err != nil {
+			return nil, err
 		}
-		wg.Wait()
 		if ctx.Err() != nil {
 			res.Incomplete = true
 			break
@@ -207,9 +160,12 @@ func conditional(ctx context.Context, m *Model, t *Transform, s *Settings, qmc b
 		ci := TInterval(pf, se, R-1, s.Confidence)
 		tr.point(ConvergencePoint{Evaluations: done, Pf: pf, PfCI: ci, PfCoV: cov})
 		tr.report(Progress{Done: done, Total: int64(R) * maxN, Pf: pf, CoV: cov})
-		if s.TargetCoV > 0 && cov <= s.TargetCoV {
+		if s.TargetCoV > 0 && cov <= s.TargetCoV && !sharding(s) {
 			break
 		}
+	}
+	if err := sh.finish(ctx); err != nil {
+		return nil, err
 	}
 	if done == 0 {
 		res.Incomplete = true

@@ -61,8 +61,9 @@ type Settings struct {
 	ConditionalQMC *ConditionalQMCSettings
 	Surrogate      *SurrogateSettings
 	// Shard, when not nil, splits sampling across machines or replays
-	// the blocks they recorded (see Shard); only monte-carlo and
-	// latin-hypercube can be split.
+	// the blocks they recorded (see Shard); only monte-carlo,
+	// latin-hypercube and conditional-qmc (conditional_shard.go) can be
+	// split.
 	Shard *Shard
 }
 
@@ -135,7 +136,7 @@ func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
 	if ctx == nil {
 		ctx = context.Background()
 	}
-	if sharding(&cfg) && cfg.Method != MonteCarlo && cfg.Method != LatinHypercube {
+	if sharding(&cfg) && cfg.Method != MonteCarlo && cfg.Method != LatinHypercube && cfg.Method != ConditionalQMC {
 		return nil, fmt.Errorf("sim: %s: %w", cfg.Method, ErrNotShardable)
 	}
 	var res *Result

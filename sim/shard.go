@@ -15,9 +15,10 @@ import (
 
 // ErrNotShardable is returned by Run in shard mode for a method whose plan
 // depends on its earlier results.
-var ErrNotShardable = errors.New("only monte-carlo and latin-hypercube can be split into shards: the plan of the other methods depends on their earlier results")
+var ErrNotShardable = errors.New("only monte-carlo, latin-hypercube and conditional-qmc can be split into shards: the plan of the other methods depends on their earlier results")
 
-// Shard splits crude and Latin hypercube sampling across machines. The
+// Shard splits crude and Latin hypercube sampling (and conditional QMC:
+// conditional_shard.go) across machines. The
 // blocks of a run are partitioned: block 0, which fixes the histogram
 // ranges, is evaluated by every shard; block b >= 1 belongs to shard
 // b mod Count. A shard records its blocks; a later Run given the union of

@@ -100,7 +100,7 @@ func TestShardMergeExact(t *testing.T) {
 // TestShardRefusesAdaptive checks that methods whose plan follows their
 // own results are refused in shard mode.
 func TestShardRefusesAdaptive(t *testing.T) {
-	for _, m := range []Method{Auto, Importance, Subset, ConditionalQMC, FORMMethod} {
+	for _, m := range []Method{Auto, Importance, Subset, FORMMethod} { // conditional-qmc splits: conditional_shard_test.go
 		s := Settings{Method: m, Samples: 10000, Shard: &Shard{Index: 0, Count: 2}}
 		if _, err := Run(context.Background(), shardModel(), &s); !errors.Is(err, ErrNotShardable) {
 			t.Errorf("%s: got %v, want ErrNotShardable", m, err)

@@ -77,8 +77,8 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		fmt.Fprintf(stderr, "strutrisk run: %v\n", err)
 		return exitInput
 	}
-	if settings.Method != sim.MonteCarlo && settings.Method != sim.LatinHypercube {
-		fmt.Fprintf(stderr, "strutrisk: %s: method %s cannot be split into shards: its plan depends on its earlier results; give --method monte-carlo or latin-hypercube (their budget, samples, is fixed)\n", st.File, settings.Method)
+	if settings.Method != sim.MonteCarlo && settings.Method != sim.LatinHypercube && settings.Method != sim.ConditionalQMC {
+		fmt.Fprintf(stderr, "strutrisk: %s: method %s cannot be split into shards: its plan depends on its earlier results; give --method monte-carlo, latin-hypercube or conditional-qmc (their budget, samples, and conditional-qmc's replicates are fixed)\n", st.File, settings.Method)
 		return exitInput
 	}
 	if o.json || o.requireTarget {

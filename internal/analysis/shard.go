@@ -15,7 +15,7 @@ import (
 // (inventory_shard.go). The steps that follow from the merged estimates
 // (sensitivities, reserve factor, life) are left to the merge, which
 // runs the whole pipeline on the recorded blocks and notes. s.Method
-// must be monte-carlo or latin-hypercube.
+// must be monte-carlo, latin-hypercube or conditional-qmc.
 func RunShard(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) error {
 	if s.Shard == nil || s.Shard.Count <= 0 {
 		return fmt.Errorf("analysis: RunShard needs a shard")
