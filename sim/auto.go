@@ -61,97 +61,135 @@ func autoSurrogate(ctx context.Context, m *Model, t *Transform, s *Settings) (*R
 // autoSampling is auto without the surrogate; note, when not empty, says
 // why the surrogate was not used and starts Result.Reason.
 func autoSampling(ctx context.Context, m *Model, t *Transform, s *Settings, note string) (*Result, error) {
-	target := s.TargetCoV
-	if target == 0 {
-		target = autoTargetCoV
-	}
-	f, ferr := FORMContext(ctx, m, s.formFor(m))
-	var formEvals int64
-	formOK := ferr == nil && f != nil && f.Converged
-	if ferr == nil && f != nil {
-		formEvals = int64(f.Evaluations)
-	} else {
-		f = nil
-	}
-	finish := func(res *Result, reason string) *Result {
-		res.Reason = reason
-		if note != "" {
-			res.Reason = note + "; " + reason
-		}
-		if f != nil {
-			res.FORM = f
-			res.Evaluations += formEvals
-		}
-		return res
-	}
-	formNote := ""
-	switch {
-	case ferr != nil:
-		formNote = fmt.Sprintf("FORM failed (%v)", ferr)
-	case !formOK:
-		formNote = fmt.Sprintf("FORM did not converge (%s)", f.Status)
-	default:
-		formNote = fmt.Sprintf("FORM beta = %.3f, pf = %.3g", f.Beta, f.Pf)
-	}
-
+	a := newAutoRun(ctx, m, t, s, note)
 	// Conditional QMC needs one point per replicate at least; a smaller
 	// budget goes to the other estimators.
 	if why := linearUsable(m, t); why == "" && s.Samples >= int64(s.replicates()) {
-		res, err := conditionalQMC(ctx, m, t, s)
-		if err != nil {
-			return nil, err
-		}
-		reason := fmt.Sprintf("the limit state is linear in %q, which is integrated exactly; the other inputs are drawn by randomised quasi-Monte Carlo (%s)", m.Vars[m.Linear.Index].Name, formNote)
-		if res.Incomplete || !formOK || !(res.PfCoV > 2*target) {
-			return finish(res, reason), nil
-		}
-		// Far in the tail the conditional integrand is a narrow spike that
-		// the quasi-random points rarely hit: try importance sampling and
-		// keep whichever estimate is the more precise.
-		alt, aerr := importanceSampling(ctx, m, t, f, s)
-		if aerr == nil && !importanceDegenerate(alt) && !math.IsNaN(alt.Pf) && alt.PfCoV < res.PfCoV {
-			alt.Method = Importance
-			alt.Evaluations += res.Evaluations
-			return finish(alt, fmt.Sprintf("%s: conditional quasi-Monte Carlo reached only CoV %.2g within the budget, so importance sampling around the design point was used", formNote, res.PfCoV)), nil
-		}
-		res.flag(BudgetSpent, fmt.Sprintf("conditional quasi-Monte Carlo reached CoV %.2g, above the target %.2g, and importance sampling did no better; treat pf as an order of magnitude", res.PfCoV, target)) // assess adds it to the warnings
-		return finish(res, reason), nil
+		return a.conditional()
 	}
+	if !a.formOK {
+		return a.subset(a.formNote)
+	}
+	need := (1 - a.f.Pf) / (a.f.Pf * a.target * a.target)
+	if a.f.Pf > 0 && need <= float64(s.Samples) && need <= autoCrudeLimit {
+		return a.mc(fmt.Sprintf("%s: plain Monte Carlo reaches CoV %.3g within about %.3g of the %d samples allowed", a.formNote, a.target, need, s.Samples))
+	}
+	return a.importance(need)
+}
 
-	mc := func(why string) (*Result, error) {
-		e := &crudeEngine{m: m, t: t, seed: s.Seed, stream: streamMC, n: s.Samples}
-		res, err := e.run(ctx, s, MonteCarlo)
-		if err != nil {
-			return nil, err
-		}
-		return finish(res, why), nil
-	}
-	subset := func(why string) (*Result, error) {
-		res, err := subsetSimulation(ctx, m, t, s)
-		if err != nil {
-			return mc(why + fmt.Sprintf("; subset simulation failed (%v), so plain Monte Carlo was used", err))
-		}
-		res.Method = Subset
-		return finish(res, why+"; subset simulation was used"), nil
-	}
+// autoRun is one choice of estimator by auto after FORM: the FORM result
+// the choice rests on and what Result.Reason says of it.
+type autoRun struct {
+	ctx context.Context
+	m   *Model
+	t   *Transform
+	s   *Settings
+	// note, when not empty, starts Result.Reason.
+	note string
+	// target is the CoV of pf aimed at.
+	target float64
+	// f is FORM's result (nil when FORM failed), formOK whether it
+	// converged, formEvals its evaluations, formNote what it found.
+	f         *FORMResult
+	formOK    bool
+	formEvals int64
+	formNote  string
+}
 
-	if !formOK {
-		return subset(formNote)
+// newAutoRun runs FORM for auto and says what it found.
+func newAutoRun(ctx context.Context, m *Model, t *Transform, s *Settings, note string) *autoRun {
+	a := &autoRun{ctx: ctx, m: m, t: t, s: s, note: note, target: s.TargetCoV}
+	if a.target == 0 {
+		a.target = autoTargetCoV
 	}
-	need := (1 - f.Pf) / (f.Pf * target * target)
-	if f.Pf > 0 && need <= float64(s.Samples) && need <= autoCrudeLimit {
-		return mc(fmt.Sprintf("%s: plain Monte Carlo reaches CoV %.3g within about %.3g of the %d samples allowed", formNote, target, need, s.Samples))
+	f, ferr := FORMContext(ctx, m, s.formFor(m))
+	a.formOK = ferr == nil && f != nil && f.Converged
+	if ferr == nil && f != nil {
+		a.f, a.formEvals = f, int64(f.Evaluations)
 	}
-	res, err := importanceSampling(ctx, m, t, f, s)
+	switch {
+	case ferr != nil:
+		a.formNote = fmt.Sprintf("FORM failed (%v)", ferr)
+	case !a.formOK:
+		a.formNote = fmt.Sprintf("FORM did not converge (%s)", f.Status)
+	default:
+		a.formNote = fmt.Sprintf("FORM beta = %.3f, pf = %.3g", f.Beta, f.Pf)
+	}
+	return a
+}
+
+// finish gives res its reason and FORM's result and evaluations.
+func (a *autoRun) finish(res *Result, reason string) *Result {
+	res.Reason = reason
+	if a.note != "" {
+		res.Reason = a.note + "; " + reason
+	}
+	if a.f != nil {
+		res.FORM = a.f
+		res.Evaluations += a.formEvals
+	}
+	return res
+}
+
+// conditional runs conditional quasi-Monte Carlo on the model's linear
+// input; far in the tail, where the conditional integrand is a narrow
+// spike that the quasi-random points rarely hit, it tries importance
+// sampling too and keeps whichever estimate is the more precise.
+func (a *autoRun) conditional() (*Result, error) {
+	m, s := a.m, a.s
+	res, err := conditionalQMC(a.ctx, m, a.t, s)
+	if err != nil {
+		return nil, err
+	}
+	reason := fmt.Sprintf("the limit state is linear in %q, which is integrated exactly; the other inputs are drawn by randomised quasi-Monte Carlo (%s)", m.Vars[m.Linear.Index].Name, a.formNote)
+	if res.Incomplete || !a.formOK || !(res.PfCoV > 2*a.target) {
+		return a.finish(res, reason), nil
+	}
+	alt, aerr := importanceSampling(a.ctx, m, a.t, a.f, s)
+	if aerr == nil && !importanceDegenerate(alt) && !math.IsNaN(alt.Pf) && alt.PfCoV < res.PfCoV {
+		alt.Method = Importance
+		alt.Evaluations += res.Evaluations
+		return a.finish(alt, fmt.Sprintf("%s: conditional quasi-Monte Carlo reached only CoV %.2g within the budget, so importance sampling around the design point was used", a.formNote, res.PfCoV)), nil
+	}
+	res.flag(BudgetSpent, fmt.Sprintf("conditional quasi-Monte Carlo reached CoV %.2g, above the target %.2g, and importance sampling did no better; treat pf as an order of magnitude", res.PfCoV, a.target)) // assess adds it to the warnings
+	return a.finish(res, reason), nil
+}
+
+// mc runs plain Monte Carlo on the whole budget; why is its reason.
+func (a *autoRun) mc(why string) (*Result, error) {
+	e := &crudeEngine{m: a.m, t: a.t, seed: a.s.Seed, stream: streamMC, n: a.s.Samples}
+	res, err := e.run(a.ctx, a.s, MonteCarlo)
+	if err != nil {
+		return nil, err
+	}
+	return a.finish(res, why), nil
+}
+
+// subset runs subset simulation, or plain Monte Carlo when it fails; why
+// says why it was chosen.
+func (a *autoRun) subset(why string) (*Result, error) {
+	res, err := subsetSimulation(a.ctx, a.m, a.t, a.s)
+	if err != nil {
+		return a.mc(why + fmt.Sprintf("; subset simulation failed (%v), so plain Monte Carlo was used", err))
+	}
+	res.Method = Subset
+	return a.finish(res, why+"; subset simulation was used"), nil
+}
+
+// importance runs importance sampling around FORM's design points, where
+// plain Monte Carlo would need about need samples, and subset simulation
+// when it fails or flags its own result.
+func (a *autoRun) importance(need float64) (*Result, error) {
+	res, err := importanceSampling(a.ctx, a.m, a.t, a.f, a.s)
 	switch {
 	case err != nil:
-		return subset(fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples; importance sampling failed (%v)", formNote, need, err))
+		return a.subset(fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples; importance sampling failed (%v)", a.formNote, need, err))
 	case importanceDegenerate(res):
-		return subset(fmt.Sprintf("%s: importance sampling flagged a poor design point (degenerate weights)", formNote))
+		return a.subset(fmt.Sprintf("%s: importance sampling flagged a poor design point (degenerate weights)", a.formNote))
 	}
 	res.Method = Importance
 	if math.IsNaN(res.Pf) {
-		return subset(formNote + ": importance sampling returned no estimate")
+		return a.subset(a.formNote + ": importance sampling returned no estimate")
 	}
-	return finish(res, fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples (budget %d, and auto spends at most %.0g on it); importance sampling around the design point", formNote, need, s.Samples, autoCrudeLimit)), nil
+	return a.finish(res, fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples (budget %d, and auto spends at most %.0g on it); importance sampling around the design point", a.formNote, need, a.s.Samples, autoCrudeLimit)), nil
 }
