@@ -58,7 +58,9 @@ func (md *Model) Reserve(ctx context.Context, target float64, fs *sim.FORMSettin
 // AddedErr nil): half the FORM analyses, for a caller that reports the
 // factor alone (an inventory's members). at1, when not nil and
 // converged, is the FORM result of the study's own loads (factor 1) with
-// settings fs, which the search then takes instead of analysing it again.
+// settings fs, which the search then takes instead of analysing it again,
+// stepping from it by secants (fewer analyses; the factor found is
+// another within the tolerance ReserveTol on the index).
 func (md *Model) ReserveFactor(ctx context.Context, target float64, fs *sim.FORMSettings, at1 *sim.FORMResult) (*Reserve, error) {
 	st := md.Study
 	r := &Reserve{Target: target, On: st.ReserveOn, Added: math.NaN()}
@@ -122,7 +124,9 @@ func (md *Model) FactorFor(ctx context.Context, beta float64, fs *sim.FORMSettin
 }
 
 // factorFor is FactorFor, taking at1 (not nil and converged) as the FORM
-// result at factor 1; calls does not count it.
+// result at factor 1, which calls does not count, and searching from it
+// by the secant method (secantRoot) before bracketing: the root is then
+// another point within ReserveTol of the index.
 func (md *Model) factorFor(ctx context.Context, beta float64, fs *sim.FORMSettings, at1 *sim.FORMResult) (factor, found float64, calls int, err error) {
 	// The root is a point the search evaluated last: its index is kept,
 	// not found again.
@@ -137,7 +141,15 @@ func (md *Model) factorFor(ctx context.Context, beta float64, fs *sim.FORMSettin
 		lastT, lastB = t, b
 		return b - beta, err
 	}
-	t, err := fallingRoot(f, 0, math.Ln2, math.Log(1e-3), math.Log(1e3))
+	lo, hi := math.Log(1e-3), math.Log(1e3)
+	var t float64
+	ok := false
+	if at1 != nil && at1.Converged {
+		t, ok, err = secantRoot(f, 0, at1.Beta-beta, lo, hi)
+	}
+	if !ok && err == nil {
+		t, err = fallingRoot(f, 0, math.Ln2, lo, hi)
+	}
 	var be *boundError
 	if errors.As(err, &be) {
 		be.bound = fmt.Sprintf("a factor of %.4g", math.Exp(be.at)) // not its logarithm
