@@ -53,6 +53,7 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 		return err
 	}
 	ir.doc.System = ir.systemDoc(c, len(si), l.Study.Analysis.TargetCoV)
+	ir.addFormSystem(ctx, sys, len(si), s)
 	return nil
 }
 

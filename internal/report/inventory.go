@@ -65,6 +65,20 @@ type System struct {
 	PfIfIndependent float64 `json:"pf_if_independent"`
 	// Method says how Pf was computed.
 	Method string `json:"method"`
+	// FormPf is the first-order system pf: FORM per member, the margins
+	// linearised at their design points and combined with the
+	// correlation the shared inputs induce; FormBeta its index,
+	// FormPfError the integration's error estimate (absolute, not
+	// FORM's own error), FormMethod how it was computed. Absent when it
+	// could not be computed.
+	FormPf      *float64 `json:"form_pf,omitempty"`
+	FormBeta    *Index   `json:"form_beta,omitempty"`
+	FormPfError *float64 `json:"form_pf_error,omitempty"`
+	FormMethod  string   `json:"form_method,omitempty"`
+	// Headline names the estimate to read as the system's: "joint
+	// sampling" when a joint sample failed, "form" when none did (an
+	// approximation, not a verdict).
+	Headline string `json:"headline,omitempty"`
 }
 
 // inventoryCSV writes one row a member, in the order of the document.

@@ -1,0 +1,152 @@
+package analysis
+
+import (
+	"context"
+	"fmt"
+	"math"
+	"sync"
+
+	"strutrisk/sim"
+)
+
+// memberLinearForm is how a member enters the first-order system.
+type memberLinearForm int
+
+const (
+	// linearPoint: the member's one design point.
+	linearPoint memberLinearForm = iota
+	// linearEquivalent: an equivalent plane of its several design points.
+	linearEquivalent
+	// linearFallback: FORM failed; the member's sampled pf, taken as
+	// independent of the other members.
+	linearFallback
+)
+
+// memberForms runs FORM on every member (in parallel over workers; each
+// member's search is its own, so the results do not depend on them).
+func memberForms(ctx context.Context, sys []systemMember, fs *sim.FORMSettings, workers int) []*sim.FORMResult {
+	out := make([]*sim.FORMResult, len(sys))
+	next := make(chan int)
+	var wg sync.WaitGroup
+	for range max(1, min(workers, len(sys))) {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for i := range next {
+				if r, err := sim.FORMContext(ctx, sys[i].m, fs); err == nil {
+					out[i] = r
+				}
+			}
+		}()
+	}
+	for i := range sys {
+		next <- i
+	}
+	close(next)
+	wg.Wait()
+	return out
+}
+
+// linearise returns the member's linearised margin from its FORM result
+// fr, shared[k] being the index of the shared normal the member's k-th
+// standard normal is (-1: its own). One design point gives its beta and
+// alpha; several give an equivalent plane (equivalentPlane); a FORM
+// that did not converge gives the fallback, with ok false.
+func linearise(fr *sim.FORMResult, shared []int) (linearMember, memberLinearForm, bool) {
+	if fr == nil || !fr.Converged || len(fr.Points) == 0 || math.IsNaN(fr.Beta) {
+		return linearMember{}, linearFallback, false
+	}
+	var idx []int
+	var a []float64
+	how := linearPoint
+	beta := fr.Points[0].Beta
+	if len(fr.Points) > 1 {
+		how = linearEquivalent
+		beta = fr.Beta
+	}
+	for k, j := range shared {
+		if j < 0 {
+			continue
+		}
+		idx = append(idx, j)
+		if how == linearPoint {
+			a = append(a, fr.Points[0].Alpha[k])
+		} else {
+			a = append(a, equivalentAlpha(fr, k))
+		}
+	}
+	return newLinearMember(beta, idx, a), how, true
+}
+
+// equivalentAlpha is component k of the unit direction of the plane
+// equivalent to the member's series system of design points
+// (Gollwitzer & Rackwitz, "Equivalent components in first-order system
+// reliability", Reliability Engineering 5, 1983, from memory): the
+// sensitivity d beta_e / d eps of the system's index to a shift eps of
+// the mean of U_k, under which point j's index becomes beta_j + eps
+// alpha_jk; by central differences.
+func equivalentAlpha(fr *sim.FORMResult, k int) float64 {
+	const eps = 1e-4
+	beta := make([]float64, len(fr.Points))
+	alpha := make([][]float64, len(fr.Points))
+	at := func(e float64) float64 {
+		for j, p := range fr.Points {
+			beta[j] = p.Beta + e*p.Alpha[k]
+			alpha[j] = p.Alpha
+		}
+		return sim.BetaFromPf(sim.SeriesPf(beta, alpha))
+	}
+	return (at(eps) - at(-eps)) / (2 * eps)
+}
+
+// fallbackMember is a member without a usable design point, taken as
+// independent of the others with the index of its sampled pf (the upper
+// end of its interval when no sample failed).
+func fallbackMember(pf, pfHigh float64) linearMember {
+	if !(pf > 0) {
+		pf = pfHigh
+	}
+	return linearMember{Beta: sim.BetaFromPf(pf), SD: 1}
+}
+
+// formSystem is the first-order system of the members.
+type formSystem struct {
+	seriesIntegral
+	// Equivalent and Fallback name the members with several design
+	// points and those whose FORM failed.
+	Equivalent, Fallback []string
+}
+
+// linearSystem runs FORM on the members and integrates their linearised
+// margins over the shared normals; names, pf and pfHigh are the
+// members' names and sampled pf and upper bounds, in the order of sys.
+func linearSystem(ctx context.Context, sys []systemMember, nShared int, names []string, pf, pfHigh []float64, fs *sim.FORMSettings, seed uint64, workers int) formSystem {
+	forms := memberForms(ctx, sys, fs, workers)
+	lin := make([]linearMember, len(sys))
+	var out formSystem
+	for i := range sys {
+		m, how, ok := linearise(forms[i], sys[i].shared)
+		switch {
+		case !ok:
+			m = fallbackMember(pf[i], pfHigh[i])
+			out.Fallback = append(out.Fallback, names[i])
+		case how == linearEquivalent:
+			out.Equivalent = append(out.Equivalent, names[i])
+		}
+		lin[i] = m
+	}
+	out.seriesIntegral = linearSeriesPf(lin, nShared, seed, workers)
+	return out
+}
+
+// describe is the sentence of the document's form_method.
+func (f *formSystem) describe() string {
+	s := "FORM per member, each margin linearised at its design point; " + f.Method
+	if n := len(f.Equivalent); n > 0 {
+		s += fmt.Sprintf("; %d member(s) with several design points by an equivalent plane", n)
+	}
+	if n := len(f.Fallback); n > 0 {
+		s += fmt.Sprintf("; %d member(s) without a converged FORM taken as independent with their sampled pf", n)
+	}
+	return s
+}

@@ -1,0 +1,62 @@
+package analysis
+
+import (
+	"context"
+	"fmt"
+	"math"
+	"strings"
+
+	"strutrisk/internal/report"
+	"strutrisk/sim"
+)
+
+// addFormSystem adds the first-order system (linearSystem) to the
+// inventory's system, whose joint sample is already in ir.doc.System, and
+// names the headline estimate: the joint sample when one of its samples
+// failed, else FORM, then an approximation that no sample checked.
+// ir.doc.Members are still in the order of sys.
+func (ir *inventoryRun) addFormSystem(ctx context.Context, sys []systemMember, nShared int, s *sim.Settings) {
+	d := ir.doc.System
+	n := len(sys)
+	names, pf, hi := make([]string, n), make([]float64, n), make([]float64, n)
+	for i, m := range ir.doc.Members[:n] {
+		names[i], pf[i], hi[i] = m.Name, m.Pf, m.PfCI[1]
+	}
+	f := linearSystem(ctx, sys, nShared, names, pf, hi, memberFORM(s.FORM, nil), MemberSeed(s.Seed, -2), s.Workers)
+	sampled := d.Samples > 0 && d.Status != "no failures" && d.Status != "no samples"
+	if sampled {
+		d.Headline = "joint sampling"
+	}
+	if ctx.Err() != nil || math.IsNaN(f.Pf) {
+		ir.warnings = append(ir.warnings, "inventory: no first-order system pf: FORM of the members did not finish")
+		return
+	}
+	b := report.Index(sim.BetaFromPf(f.Pf))
+	d.FormPf, d.FormBeta, d.FormPfError, d.FormMethod = &f.Pf, &b, &f.Err, f.describe()
+	if len(f.Equivalent) > 0 {
+		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: first-order system: %s have several design points, each combined into one equivalent plane", listNames(f.Equivalent)))
+	}
+	if len(f.Fallback) > 0 {
+		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: first-order system: FORM did not converge for %s; taken as independent of the other members with their sampled pf", listNames(f.Fallback)))
+	}
+	switch {
+	case !sampled:
+		d.Headline = "form"
+		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: the system pf by FORM is %.3g (beta %.2f), an approximation that no failing joint sample checks: not a verdict", f.Pf, float64(b)))
+	case f.Pf < d.PfCI[0] || f.Pf > d.PfCI[1]:
+		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: the system pf by FORM, %.3g, is outside the joint sample's 95 %% interval [%.3g, %.3g]: some member's margin is not near linear at its design point; the sampled pf stands", f.Pf, d.PfCI[0], d.PfCI[1]))
+	}
+}
+
+// listNames quotes up to five names and counts the rest.
+func listNames(names []string) string {
+	q := make([]string, 0, 6)
+	for i, n := range names {
+		if i == 5 {
+			q = append(q, fmt.Sprintf("%d more", len(names)-5))
+			break
+		}
+		q = append(q, fmt.Sprintf("%q", n))
+	}
+	return "member(s) " + strings.Join(q, ", ")
+}

@@ -1,0 +1,59 @@
+package analysis
+
+import (
+	"math"
+	"testing"
+
+	"gonum.org/v1/gonum/stat/distuv"
+)
+
+// TestLogPhi checks log Phi in its tails: the asymptotic series against
+// log of erfc where both hold (Abramowitz & Stegun 26.2.12), and the
+// upper tail, where log Phi(x) = log1p(-Phi(-x)) is about -Phi(-x) and a
+// plain log of Phi would give 0.
+func TestLogPhi(t *testing.T) {
+	for _, x := range []float64{-30, -33, -37} {
+		want := math.Log(0.5 * math.Erfc(-x/math.Sqrt2))
+		if got := lowerTailLog(x); math.Abs(got-want) > 1e-9 {
+			t.Errorf("series at %g: %.15g, log erfc: %.15g", x, got, want)
+		}
+	}
+	if got := logPhi(-40); !(got < -800 && got > -810) {
+		t.Errorf("log Phi(-40) = %g, want about -804.6", got)
+	}
+	for _, x := range []float64{6, 8.5, 12} { // -Phi(-x) to 1e-9 relative
+		want := -distuv.UnitNormal.CDF(-x)
+		if got := logPhi(x); !relClose(got, want, 1e-6) {
+			t.Errorf("log Phi(%g) = %.6g, want %.6g", x, got, want)
+		}
+	}
+}
+
+// TestLinearSeriesSampled checks the sampling over several shared
+// normals on a rare system: members whose shared components are a1, a2
+// on two normals are, by the rotation invariance of the standard normal,
+// members with the one component sqrt(a1^2 + a2^2) on one normal, which
+// the quadrature integrates; the sampled value must hold it within four
+// standard errors and that error must be small (a plain sample of the
+// shared normals would see almost nothing of a pf of 1e-9).
+func TestLinearSeriesSampled(t *testing.T) {
+	const n = 20
+	var two, one []linearMember
+	for i := range n {
+		beta := 6.2 + 0.01*float64(i)
+		two = append(two, newLinearMember(beta, []int{0, 1}, []float64{0.6, 0.5}))
+		one = append(one, newLinearMember(beta, []int{0}, []float64{math.Hypot(0.6, 0.5)}))
+	}
+	want := linearSeriesPf(one, 1, 0, 1)
+	got := linearSeriesPf(two, 2, 11, 2)
+	t.Logf("quadrature %.6g (error %.2g), sampled %.6g (se %.2g)", want.Pf, want.Err, got.Pf, got.Err)
+	if want.Pf > 1e-7 || want.Pf < 1e-11 {
+		t.Fatalf("pf %.3g: not the rare system meant", want.Pf)
+	}
+	if math.Abs(got.Pf-want.Pf) > 4*got.Err || got.Err > 0.05*want.Pf {
+		t.Errorf("sampled %.6g, standard error %.3g; quadrature %.6g", got.Pf, got.Err, want.Pf)
+	}
+	if again := linearSeriesPf(two, 2, 11, 1); again != got {
+		t.Errorf("1 worker: %+v; 2 workers: %+v", again, got)
+	}
+}
