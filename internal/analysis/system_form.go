@@ -25,6 +25,12 @@ const (
 // memberForms runs FORM on every member (in parallel over workers; each
 // member's search is its own, so the results do not depend on them).
 func memberForms(ctx context.Context, sys []systemMember, fs *sim.FORMSettings, workers int) []*sim.FORMResult {
+	return memberFormsOf(ctx, sys, fs, workers, nil)
+}
+
+// memberFormsOf is memberForms of the members i with todo[i] (all when
+// todo is nil); the others' results are nil.
+func memberFormsOf(ctx context.Context, sys []systemMember, fs *sim.FORMSettings, workers int, todo []bool) []*sim.FORMResult {
 	out := make([]*sim.FORMResult, len(sys))
 	next := make(chan int)
 	var wg sync.WaitGroup
@@ -40,7 +46,9 @@ func memberForms(ctx context.Context, sys []systemMember, fs *sim.FORMSettings, 
 		}()
 	}
 	for i := range sys {
-		next <- i
+		if todo == nil || todo[i] {
+			next <- i
+		}
 	}
 	close(next)
 	wg.Wait()
@@ -117,11 +125,11 @@ type formSystem struct {
 	Equivalent, Fallback []string
 }
 
-// linearSystem runs FORM on the members and integrates their linearised
-// margins over the shared normals; names, pf and pfHigh are the
-// members' names and sampled pf and upper bounds, in the order of sys.
-func linearSystem(ctx context.Context, sys []systemMember, nShared int, names []string, pf, pfHigh []float64, fs *sim.FORMSettings, seed uint64, workers int) formSystem {
-	forms := memberForms(ctx, sys, fs, workers)
+// linearSystem integrates the members' margins, linearised at the
+// design points of their FORM results forms, over the shared normals;
+// names, pf and pfHigh are the members' names and sampled pf and upper
+// bounds, in the order of sys.
+func linearSystem(sys []systemMember, forms []*sim.FORMResult, nShared int, names []string, pf, pfHigh []float64, seed uint64, workers int) formSystem {
 	lin := make([]linearMember, len(sys))
 	var out formSystem
 	for i := range sys {

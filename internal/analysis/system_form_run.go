@@ -14,22 +14,30 @@ import (
 // inventory's system, whose joint sample is already in ir.doc.System, and
 // names the headline estimate: the joint sample when one of its samples
 // failed, else FORM, then an approximation that no sample checked.
-// ir.doc.Members are still in the order of sys.
-func (ir *inventoryRun) addFormSystem(ctx context.Context, sys []systemMember, nShared int, s *sim.Settings) {
+// ir.doc.Members are still in the order of sys. A shard of a split run
+// only notes its members' FORM results (shardForms).
+func (ir *inventoryRun) addFormSystem(ctx context.Context, sys []systemMember, nShared int, s *sim.Settings) error {
+	forms, err := shardForms(ctx, sys, memberFORM(s.FORM, nil), s)
+	if err != nil || s.Shard.Splits() {
+		return err // a shard notes its members' FORM; the merge combines
+	}
 	d := ir.doc.System
 	n := len(sys)
+	if d == nil || len(ir.doc.Members) < n {
+		return fmt.Errorf("the first-order system needs every member's result")
+	}
 	names, pf, hi := make([]string, n), make([]float64, n), make([]float64, n)
 	for i, m := range ir.doc.Members[:n] {
 		names[i], pf[i], hi[i] = m.Name, m.Pf, m.PfCI[1]
 	}
-	f := linearSystem(ctx, sys, nShared, names, pf, hi, memberFORM(s.FORM, nil), MemberSeed(s.Seed, -2), s.Workers)
+	f := linearSystem(sys, forms, nShared, names, pf, hi, MemberSeed(s.Seed, -2), s.Workers)
 	sampled := d.Samples > 0 && d.Status != "no failures" && d.Status != "no samples"
 	if sampled {
 		d.Headline = "joint sampling"
 	}
 	if ctx.Err() != nil || math.IsNaN(f.Pf) {
 		ir.warnings = append(ir.warnings, "inventory: no first-order system pf: FORM of the members did not finish")
-		return
+		return nil
 	}
 	b := report.Index(sim.BetaFromPf(f.Pf))
 	d.FormPf, d.FormBeta, d.FormPfError, d.FormMethod = &f.Pf, &b, &f.Err, f.describe()
@@ -46,6 +54,7 @@ func (ir *inventoryRun) addFormSystem(ctx context.Context, sys []systemMember, n
 	case f.Pf < d.PfCI[0] || f.Pf > d.PfCI[1]:
 		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: the system pf by FORM, %.3g, is outside the joint sample's 95 %% interval [%.3g, %.3g]: some member's margin is not near linear at its design point; the sampled pf stands", f.Pf, d.PfCI[0], d.PfCI[1]))
 	}
+	return nil
 }
 
 // listNames quotes up to five names and counts the rest.

@@ -57,3 +57,25 @@ func TestLinearSeriesSampled(t *testing.T) {
 		t.Errorf("1 worker: %+v; 2 workers: %+v", again, got)
 	}
 }
+
+// inventoryLinear is n members of an invented building: each takes the
+// one normal shared by all, one of 10 batch normals and one of 4 floor
+// normals, with indices from 3.5 to 4.5.
+func inventoryLinear(n int) ([]linearMember, int) {
+	ms := make([]linearMember, n)
+	for i := range ms {
+		beta := 3.5 + float64(i%101)/100
+		ms[i] = newLinearMember(beta, []int{0, 1 + i%10, 11 + i%4}, []float64{0.3, 0.4, 0.5})
+	}
+	return ms, 15
+}
+
+// BenchmarkLinearSeries2000 integrates 2,000 members over 15 shared
+// normals (the first-order system step of a 2,000-member inventory,
+// FORM of the members aside).
+func BenchmarkLinearSeries2000(b *testing.B) {
+	ms, d := inventoryLinear(2000)
+	for b.Loop() {
+		linearSeriesPf(ms, d, 1, 2)
+	}
+}

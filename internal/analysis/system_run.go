@@ -52,9 +52,10 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 	if err != nil {
 		return err
 	}
-	ir.doc.System = ir.systemDoc(c, len(si), l.Study.Analysis.TargetCoV)
-	ir.addFormSystem(ctx, sys, len(si), s)
-	return nil
+	if !s.Shard.Splits() {
+		ir.doc.System = ir.systemDoc(c, len(si), l.Study.Analysis.TargetCoV)
+	}
+	return ir.addFormSystem(ctx, sys, len(si), s)
 }
 
 // systemDoc describes the joint sample's counts c, and gives each member
