@@ -119,12 +119,12 @@ func shardInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.F
 			continue
 		}
 		obs.StartCase(i+1, len(inv.Members), "member "+progress.Clip(m.Name, 24))
-		mr, md, warns := runMember(ctx, l.Study, i, &settings, fs)
-		if err := s.Shard.Note(memberNoteKey(i), noteOfMember(&mr, warns)); err != nil {
+		o := memberRun(ctx, l.Study, i, &settings, fs)
+		if err := s.Shard.Note(memberNoteKey(i), noteOfMember(&o.mr, o.warns)); err != nil {
 			return err
 		}
-		if md != nil {
-			sys = append(sys, systemMember{m: md.Sim})
+		if o.md != nil {
+			sys = append(sys, systemMember{m: o.md.Sim, form: o.form}) // its FORM for the first-order system
 		}
 	}
 	if len(sys) < len(inv.Members) || ctx.Err() != nil {

@@ -22,8 +22,10 @@ const (
 	linearFallback
 )
 
-// memberForms runs FORM on every member (in parallel over workers; each
-// member's search is its own, so the results do not depend on them).
+// memberForms returns every member's FORM result: that of its estimate
+// when its method ran one, else a search of its own (in parallel over
+// workers; each member's search is its own, so the results do not depend
+// on them).
 func memberForms(ctx context.Context, sys []systemMember, fs *sim.FORMSettings, workers int) []*sim.FORMResult {
 	return memberFormsOf(ctx, sys, fs, workers, nil)
 }
@@ -32,9 +34,19 @@ func memberForms(ctx context.Context, sys []systemMember, fs *sim.FORMSettings, 
 // todo is nil); the others' results are nil.
 func memberFormsOf(ctx context.Context, sys []systemMember, fs *sim.FORMSettings, workers int, todo []bool) []*sim.FORMResult {
 	out := make([]*sim.FORMResult, len(sys))
+	var search []int
+	for i := range sys {
+		switch {
+		case todo != nil && !todo[i]:
+		case sys[i].form != nil:
+			out[i] = sys[i].form
+		default:
+			search = append(search, i)
+		}
+	}
 	next := make(chan int)
 	var wg sync.WaitGroup
-	for range max(1, min(workers, len(sys))) {
+	for range max(1, min(workers, len(search))) {
 		wg.Add(1)
 		go func() {
 			defer wg.Done()
@@ -45,10 +57,8 @@ func memberFormsOf(ctx context.Context, sys []systemMember, fs *sim.FORMSettings
 			}
 		}()
 	}
-	for i := range sys {
-		if todo == nil || todo[i] {
-			next <- i
-		}
+	for _, i := range search {
+		next <- i
 	}
 	close(next)
 	wg.Wait()
