@@ -32,19 +32,105 @@ func (r *Result) runCalibration(ctx context.Context, fs *sim.FORMSettings) {
 	}
 }
 
-// calibrate runs assess.Calibrate on the cases of st's calibration: the
-// study itself and each variant (index -1 and 0...).
+// calCase is one case of a calibration: variant v (-1 the study) at swept
+// point i (-1 the study's own values).
+type calCase struct {
+	v, i int
+	name string
+}
+
+// calibrationCases are the cases a calibration fits: with a sweep, the
+// study and each variant at every swept point (the cases of the factorial
+// study; the runs at the study's own values are not among them); without
+// one, the study and each variant.
+func calibrationCases(st *study.Study) []calCase {
+	if st.SweptPoints() == 0 {
+		out := []calCase{{-1, -1, study.CalibrationStudy}}
+		for v, va := range st.Variants {
+			out = append(out, calCase{v, -1, va.Name})
+		}
+		return out
+	}
+	var out []calCase
+	var lams []string
+	for _, c := range st.CaseList() {
+		if c.Point < 0 {
+			continue // a variant at the study's own values
+		}
+		out = append(out, calCase{c.Variant, c.Point, calibrationCaseName(st, c.Variant, c.Point)})
+		lams = append(lams, slendernessText(caseSlenderness(st, c.Variant, c.Point)))
+	}
+	// The slenderness names the cases when it tells them apart.
+	for k := range out {
+		if lams[k] != "" && lams[k] != lams[0] {
+			for k := range out {
+				out[k].name += lams[k]
+			}
+			break
+		}
+	}
+	return out
+}
+
+// calibrationCaseName names variant v at swept point i briefly, for the
+// table and the picture: "HEB 200, member.length = 3 m", the variant's
+// name (or "study") left out when the study has no variants.
+func calibrationCaseName(st *study.Study, v, i int) string {
+	name := pointText(st, i)
+	switch {
+	case v >= 0:
+		return st.Variants[v].Name + ", " + name
+	case len(st.Variants) > 0:
+		return study.CalibrationStudy + ", " + name
+	}
+	return name
+}
+
+// slendernessText is " (relative slenderness 0.85)", "" for NaN.
+func slendernessText(lam float64) string {
+	if math.IsNaN(lam) || math.IsInf(lam, 0) {
+		return ""
+	}
+	return fmt.Sprintf(" (relative slenderness %.2f)", lam)
+}
+
+// caseSlenderness is the nominal relative slenderness of variant v at
+// swept point i about its governing axis, NaN when it cannot be found.
+func caseSlenderness(st *study.Study, v, i int) float64 {
+	cs, err := st.Derive(v, i)
+	if err != nil {
+		return math.NaN()
+	}
+	md, err := study.Build(cs)
+	if err != nil {
+		return math.NaN()
+	}
+	n, err := md.Nominal()
+	if err != nil {
+		return math.NaN()
+	}
+	return n.ModeSlenderness
+}
+
+// calibrate runs assess.Calibrate on the cases of st's calibration
+// (calibrationCases), each weighted by its variant's name ("study" for the
+// study itself).
 func calibrate(ctx context.Context, st *study.Study, fs *sim.FORMSettings) (*assess.Calibration, error) {
 	cs := st.Calibration
-	cases := []assess.CalibrationCase{{Name: study.CalibrationStudy, Weight: weightOf(cs, study.CalibrationStudy)}}
-	for _, va := range st.Variants {
-		cases = append(cases, assess.CalibrationCase{Name: va.Name, Weight: weightOf(cs, va.Name)})
+	list := calibrationCases(st)
+	cases := make([]assess.CalibrationCase, len(list))
+	for k, c := range list {
+		key := study.CalibrationStudy
+		if c.v >= 0 {
+			key = st.Variants[c.v].Name
+		}
+		cases[k] = assess.CalibrationCase{Name: c.name, Weight: weightOf(cs, key)}
 	}
-	beta := func(x float64, i int) (float64, error) {
+	beta := func(x float64, k int) (float64, error) {
 		if err := ctx.Err(); err != nil {
 			return 0, err
 		}
-		return calibrationBeta(ctx, st, i-1, x, fs)
+		return calibrationBeta(ctx, st, list[k].v, list[k].i, x, fs)
 	}
 	cal, err := assess.Calibrate(cs.Factor, cs.Low, cs.High, cs.Target, cases, beta, 0)
 	if err != nil {
@@ -81,10 +167,10 @@ func weightOf(cs *study.CalibrationSpec, name string) float64 {
 	return 1
 }
 
-// calibrationBeta is the FORM beta of case v (-1 the study) with the
-// calibrated factor at x.
-func calibrationBeta(ctx context.Context, st *study.Study, v int, x float64, fs *sim.FORMSettings) (float64, error) {
-	cs, err := st.CalibrationCase(v, x)
+// calibrationBeta is the FORM beta of variant v (-1 the study) at swept
+// point i (-1 none) with the calibrated factor at x.
+func calibrationBeta(ctx context.Context, st *study.Study, v, i int, x float64, fs *sim.FORMSettings) (float64, error) {
+	cs, err := st.CalibrationCase(v, i, x)
 	if err != nil {
 		return 0, err
 	}

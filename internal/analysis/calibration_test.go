@@ -155,3 +155,106 @@ func TestCalibrationAtBoundOnce(t *testing.T) {
 		t.Errorf("the summary calls a value at the bound a calibration:\n%s", sum)
 	}
 }
+
+// swapVariants replaces the variants of calibrationStudy by tail.
+func swapVariants(text, tail string) string {
+	return strings.Replace(text, `[[variant]]
+name = "steady"
+set = { "material.yield.cov" = 0.05, "loads.imposed.cov" = 0.1 }
+[[variant]]
+name = "snow"
+set = { "material.yield.cov" = 0.10, "loads.imposed.cov" = 0.3 }`, tail, 1)
+}
+
+// sweptCase is one calibration case of TestCalibrationSweptCases: its
+// name's start, the CoVs of yield and load, its weight.
+type sweptCase struct {
+	prefix    string
+	vr, vq, w float64
+}
+
+// TestCalibrationSweptCases: with a [sweep], the cases are the study and
+// each variant at every swept point (a plain sweep of the yield CoV 0.05
+// and 0.10 crossed with three load CoVs as variants; a grid of both CoVs
+// without variants), each weighted by its variant's weight; the
+// calibrated factor is the closed form of TestCalibrationClosedForm over
+// these cases, to 0.005.
+func TestCalibrationSweptCases(t *testing.T) {
+	var crossed, grid []sweptCase
+	for _, va := range []struct {
+		name  string
+		vq, w float64
+	}{{"study", 0.2, 2}, {"steady", 0.1, 0.5}, {"snow", 0.3, 1}} {
+		for _, vr := range []float64{0.05, 0.10} {
+			crossed = append(crossed, sweptCase{va.name + ", material.yield.cov = ", vr, va.vq, va.w})
+		}
+	}
+	for _, vr := range []float64{0.05, 0.10} {
+		for _, vq := range []float64{0.1, 0.3} {
+			grid = append(grid, sweptCase{"material.yield.cov = ", vr, vq, 1})
+		}
+	}
+	for _, c := range []struct {
+		name, text string
+		target     float64
+		cases      []sweptCase
+	}{
+		// 5.2: EN 1990 Table B2, RC3, 1 year (from memory); 5.6 keeps
+		// the grid's best value inside the range.
+		{"sweep and variants", swapVariants(calibrationStudy("target_beta = 5.2\nweights = { study = 2, steady = 0.5 }\n"), `[sweep]
+parameter = "material.yield.cov"
+values = [0.05, 0.10]
+[[variant]]
+name = "steady"
+set = { "loads.imposed.cov" = 0.1 }
+[[variant]]
+name = "snow"
+set = { "loads.imposed.cov" = 0.3 }`), 5.2, crossed},
+		{"grid", swapVariants(calibrationStudy("target_beta = 5.6\n"), `[sweep]
+[[sweep.axis]]
+parameter = "material.yield.cov"
+values = [0.05, 0.10]
+[[sweep.axis]]
+parameter = "loads.imposed.cov"
+values = [0.1, 0.3]`), 5.6, grid},
+	} {
+		t.Run(c.name, func(t *testing.T) { checkSweptCalibration(t, c.text, c.target, c.cases) })
+	}
+}
+
+// checkSweptCalibration runs the study text and compares its calibration
+// with the closed form over cases.
+func checkSweptCalibration(t *testing.T, text string, target float64, cases []sweptCase) {
+	l := mustLoad(t, text)
+	z05, z98 := distuv.UnitNormal.Quantile(0.05), distuv.UnitNormal.Quantile(0.98)
+	var num, den float64
+	for _, c := range cases {
+		sr, sq := math.Sqrt(math.Log1p(c.vr*c.vr)), math.Sqrt(math.Log1p(c.vq*c.vq))
+		s := math.Hypot(sr, sq)
+		ci := math.Log(1.5) - z05*sr + z98*sq
+		num += c.w / s * (target - ci/s)
+		den += c.w / (s * s)
+	}
+	want := math.Exp(num / den)
+	r, err := Run(context.Background(), l, ptr(l.Settings(1)), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	cal := r.Document().Calibration
+	if cal == nil {
+		t.Fatalf("no calibration; warnings %v", r.warnings)
+	}
+	t.Logf("closed form %.5f, found %.5f", want, cal.Value)
+	if math.Abs(cal.Value-want) > 0.005 || cal.AtBound {
+		t.Errorf("calibrated gamma_m1 = %.4f (at bound %v), closed form %.4f", cal.Value, cal.AtBound, want)
+	}
+	if len(cal.Cases) != len(cases) {
+		t.Fatalf("%d cases, want %d", len(cal.Cases), len(cases))
+	}
+	for i, c := range cases {
+		got := cal.Cases[i]
+		if !strings.HasPrefix(got.Case, c.prefix) || got.Weight != c.w {
+			t.Errorf("case %d = %+v, want %q... at yield CoV %g, load CoV %g, weight %g", i, got, c.prefix, c.vr, c.vq, c.w)
+		}
+	}
+}

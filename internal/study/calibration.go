@@ -131,13 +131,14 @@ func (p *parser) calibrationWeights(t *table, cs *CalibrationSpec) {
 }
 
 // CalibrationCase returns the case of the calibration (v an index of
-// Variants, -1 for the study itself) with the factor's key of
-// [code_check] set to value: the study file read again, as Derive does.
-func (s *Study) CalibrationCase(v int, value float64) (*Study, error) {
-	if s.Calibration == nil || v < -1 || v >= len(s.Variants) {
-		return nil, fmt.Errorf("study: no calibration case %d", v)
+// Variants, -1 for the study itself; i a swept point, -1 for none) with
+// the factor's key of [code_check] set to value: the study file read
+// again, as Derive does.
+func (s *Study) CalibrationCase(v, i int, value float64) (*Study, error) {
+	if s.Calibration == nil || v < -1 || v >= len(s.Variants) || i < -1 || i >= s.SweptPoints() {
+		return nil, fmt.Errorf("study: no calibration case variant %d, swept point %d", v, i)
 	}
-	ovs := s.overrides(v, -1)
+	ovs := s.overrides(v, i)
 	ovs = append(ovs, override{key: "code_check." + s.Calibration.Factor, value: value,
 		at: "calibration", label: fmt.Sprintf("calibration at %s = %g", s.Calibration.Factor, value)})
 	st, probs := derive(s.File, s.src, ovs)

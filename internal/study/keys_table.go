@@ -212,12 +212,12 @@ var keyTables = []*TableInfo{
 			Meaning: "b of d(t) = r t^b; a distribution for an uncertain exponent."},
 		{Name: "samples", Takes: "whole number (100 to 1e7)", Default: "20000", Meaning: "The number of member paths sampled, each followed through every year."},
 	}},
-	{Path: "calibration", Meaning: "The value of one [code_check] partial factor that brings the FORM betas of the study and its variants closest to a target (least squares, EN 1990 Annex C); the loads are normalised again at every trial value, so it needs code_check.normalise = \"design\".", Keys: []KeyInfo{
+	{Path: "calibration", Meaning: "The value of one [code_check] partial factor that brings the FORM betas of the study's cases closest to a target (least squares, EN 1990 Annex C): the study and its variants, or with a [sweep] the study and each variant at every swept point; the loads are normalised again at every trial value, so it needs code_check.normalise = \"design\".", Keys: []KeyInfo{
 		{Name: "factor", Takes: "text", Required: true, Choices: []string{"gamma_m0", "gamma_m1", "gamma_g", "gamma_q"}, Meaning: "The partial factor fitted."},
 		{Name: "range", Takes: "list of two numbers (1 to 2)", Required: true, Meaning: "The values searched, low then high, e.g. [1.0, 1.3]."},
 		{Name: "target_beta", Takes: "number", Default: "the study's target beta", Meaning: "The beta the cases are brought close to."},
 		{Name: "weights", Takes: "table of case names and numbers", Default: "1 for every case",
-			Meaning: "Each case's weight: \"study\" for the study itself, a variant's name for the variant."},
+			Meaning: "Each case's weight: \"study\" for the study itself, a variant's name for the variant; with a [sweep], at every swept point."},
 	}},
 	{Path: "output", Meaning: "Where the results go.", Keys: []KeyInfo{
 		{Name: "dir", Takes: "text (a folder)", Default: "out/<study name>", Meaning: "The output folder."},
