@@ -103,11 +103,9 @@ func readRow(file string, line int, cols []column, rec []string, res int, sys st
 		if cell == "" {
 			return t, fmt.Errorf("%s: empty cell; every test needs every column", at)
 		}
-		text := cell
-		if c.unit != "" && c.unit != "-" {
-			if _, err := strconv.ParseFloat(cell, 64); err == nil {
-				text = cell + " " + c.unit
-			}
+		text, err := study.CellText(cell, c.unit)
+		if err != nil {
+			return t, fmt.Errorf("%s: %v", at, err)
 		}
 		switch {
 		case c.key == "name":

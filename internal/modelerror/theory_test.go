@@ -114,6 +114,9 @@ func TestReadTestsErrors(t *testing.T) {
 		{"few tests", "resistance (kN)\n3000\n3000\n", "at least 3"},
 		{"negative", "resistance (kN)\n3000\n-3\n3000\n", "tests.csv:3: column resistance"},
 		{"empty cell", "resistance (kN),material.yield\n3000,\n3000,300\n3000,300\n", "tests.csv:2: column material.yield: empty cell"},
+		// A measured resistance of 3000 N under "(kN)" would have been
+		// read as 3000 N silently, a thousandth of the intended r_e.
+		{"cell unit against the header", "resistance (kN)\n3000\n3000 N\n3000\n", `tests.csv:3: column resistance: "3000 N" gives the unit N but the column's header gives kN`},
 	} {
 		_, err := ReadTests("tests.csv", strings.NewReader(c.csv), st.Units)
 		if err == nil || !strings.Contains(err.Error(), c.want) {

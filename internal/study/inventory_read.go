@@ -167,11 +167,9 @@ func readMember(file string, line int, cols []invColumn, rec []string, groups ma
 		if groups[c.key] {
 			continue // it groups members, sets nothing
 		}
-		text := cell
-		if c.unit != "" && c.unit != "-" {
-			if _, err := strconv.ParseFloat(cell, 64); err == nil {
-				text = cell + " " + c.unit
-			}
+		text, err := CellText(cell, c.unit)
+		if err != nil {
+			return m, fmt.Errorf("%s: %v", at, err)
 		}
 		var val any = text
 		if x, err := strconv.ParseFloat(text, 64); err == nil {

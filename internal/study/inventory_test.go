@@ -76,6 +76,9 @@ func TestInventoryErrors(t *testing.T) {
 		{"no name column", inv, "member.length\n3000\n", "members.csv:1: no \"name\" column"},
 		{"bad cell", inv, "name, member.length (m)\nA, 3\nB, -2\n", "members.csv:3: column member.length"},
 		{"empty cell", inv, "name, member.length\nA, \n", "members.csv:2: column member.length: empty cell"},
+		// The header and the cell disagree: one of them is a slip (a
+		// modulus in MPa read as 1/1000 of the intended GPa).
+		{"cell unit against the header", inv, "name, material.modulus (GPa)\nA, 210\nB, 210 MPa\n", "members.csv:3: column material.modulus: \"210 MPa\" gives the unit MPa but the column's header gives GPa"},
 		{"unknown key", inv, "name, member.lenght\nA, 3000\n", "members.csv:2: column member.lenght"},
 		{"two names", inv, "name\nA\nA\n", "members.csv:3: column name"},
 		{"no rows", inv, "name\n", "no members"},
