@@ -24,8 +24,14 @@ type figure struct {
 	Caption string
 	// W and H are the size of the whole picture.
 	W, H vg.Length
-	// Plots are the panels, in one row.
+	// Plots are the panels, in one row, or in rows of Cols when Cols is
+	// set.
 	Plots []*plot.Plot
+	Cols  int
+	// Side, when set, is a panel of width SideW right of the others (a
+	// legend they share).
+	Side  *plot.Plot
+	SideW vg.Length
 }
 
 // render draws f in the format "svg" or "png" and returns the bytes. It
@@ -67,13 +73,22 @@ const figureMargin = 4 * vg.Millimeter / 2
 // a small white margin.
 func (f *figure) draw(dc draw.Canvas) {
 	dc = draw.Crop(dc, figureMargin, -figureMargin, figureMargin, -figureMargin)
+	if f.Side != nil {
+		f.Side.Draw(draw.Crop(dc, dc.Max.X-dc.Min.X-f.SideW, 0, 0, 0))
+		dc = draw.Crop(dc, 0, -f.SideW, 0, 0)
+	}
 	if len(f.Plots) == 1 {
 		f.Plots[0].Draw(dc)
 		return
 	}
-	tiles := draw.Tiles{Rows: 1, Cols: len(f.Plots), PadX: vg.Points(18)}
+	cols := len(f.Plots)
+	if f.Cols > 0 && f.Cols < cols {
+		cols = f.Cols
+	}
+	rows := (len(f.Plots) + cols - 1) / cols
+	tiles := draw.Tiles{Rows: rows, Cols: cols, PadX: vg.Points(18), PadY: vg.Points(12)}
 	for j, p := range f.Plots {
-		p.Draw(tiles.At(dc, j, 0))
+		p.Draw(tiles.At(dc, j%cols, j/cols))
 	}
 }
 

@@ -21,6 +21,7 @@ func figures(b *Bundle) (figs []*figure, skipped []error) {
 		{"slenderness", func() *figure { return slendernessFigure(b) }},
 		{"interaction", func() *figure { return interactionFigure(b) }},
 		{"sweep", func() *figure { return sweepFigure(b) }},
+		{"heatmap", func() *figure { return heatmapFigure(b) }},
 		{"variants", func() *figure { return variantsFigure(b) }},
 		{"calibration", func() *figure { return calibrationFigure(b) }},
 		{"inventory-ranked", func() *figure { return inventoryRankedFigure(b) }},

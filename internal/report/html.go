@@ -151,9 +151,10 @@ a{color:inherit;text-decoration:none}
 {{if not (or .Tornado .Sobol .FORM .Spearman)}}<p>No sensitivity measures were computed.</p>{{end}}
 </section>
 
-{{if or .Sweep .Variants .SweepCurves (.Picture "sweep")}}<section id="sweep">
+{{if or .Sweep .Variants .SweepCurves (.Picture "sweep") (.Picture "heatmap")}}<section id="sweep">
 <h2>Sweep and variants</h2>
 {{with .Picture "sweep"}}{{template "fig" .}}{{end}}
+{{with .Picture "heatmap"}}{{template "fig" .}}{{end}}
 {{with .Picture "variants"}}{{template "fig" .}}{{end}}
 {{if .Sweep}}<table><tr><th>{{if .SweepLabel}}{{.SweepLabel}}{{else}}value{{end}}</th><th>pf (–)</th><th>95% interval of pf (–)</th><th>β (–)</th></tr>
 {{range .Sweep}}<tr><td class="n">{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td></tr>

@@ -144,6 +144,9 @@ func Markdown(b *Bundle) string {
 
 	if len(v.Sweep) > 0 || len(v.Variants) > 0 || v.SweepCurves != nil {
 		w.WriteString("## Sweep and variants\n\n")
+		if newHeatGrid(b.Cases) != nil {
+			w.WriteString("The heat map of β over the two swept keys is heatmap.png (and .svg) beside this file, when pictures are written: one panel for the study and each variant, the cells coloured by classes of β about the target.\n\n")
+		}
 		if t := v.SweepCurves; t != nil {
 			w.WriteString("β of every curve (95% interval in brackets) at each swept value:\n\n")
 			mdTable(&w, t.Head, t.Rows)
