@@ -183,8 +183,8 @@ a{color:inherit;text-decoration:none}
 {{with .Inventory}}<p>{{.Head}}.</p>
 <table>{{range .System}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>
 <p>{{.Listing}}</p>
-{{if .Rows}}<table><tr><th>member</th><th>β (–)</th><th>95% interval of β (–)</th><th>verdict</th><th>reserve factor (–)</th><th>governs</th><th>note</th></tr>
-{{range .Rows}}<tr><td>{{.Name}}</td><td class="n">{{.Beta}}</td><td class="n">{{.BetaCI}}</td><td{{if .Class}} class="{{.Class}}"{{end}}>{{.Verdict}}</td><td class="n">{{.Reserve}}</td><td>{{.Governs}}</td><td>{{.Note}}</td></tr>
+{{if .Rows}}<table><tr><th>member</th><th>β (–)</th><th>95% interval of β (–)</th><th>verdict</th><th>reserve factor (–)</th><th>governs</th>{{if .HasNote}}<th>note</th>{{end}}</tr>
+{{range .Rows}}<tr><td>{{.Name}}</td><td class="n">{{.Beta}}</td><td class="n">{{.BetaCI}}</td><td{{if .Class}} class="{{.Class}}"{{end}}>{{.Verdict}}</td><td class="n">{{.Reserve}}</td><td>{{.Governs}}</td>{{if $.Inventory.HasNote}}<td>{{.Note}}</td>{{end}}</tr>
 {{end}}</table>{{end}}
 {{if .NotRun}}<p>Members not run:</p><ul>{{range .NotRun}}<li>{{.Name}}: {{.Note}}</li>{{end}}</ul>{{end}}
 {{if .Rest}}<p>{{.Rest}}</p>{{end}}{{end}}

@@ -94,11 +94,15 @@ func mdInventory(w *strings.Builder, v *invView) {
 	fmt.Fprintf(w, "## Inventory\n\n%s.\n\n", mdText(v.Head))
 	mdKV(w, v.System)
 	fmt.Fprintf(w, "%s\n\n", mdText(v.Listing))
+	head := []string{"member", "β (–)", "95% interval of β (–)", "verdict", "reserve factor (–)", "governs", "note"}
+	if !v.HasNote {
+		head = head[:len(head)-1]
+	}
 	rows := make([][]string, len(v.Rows))
 	for i, r := range v.Rows {
-		rows[i] = []string{r.Name, r.Beta, r.BetaCI, r.Verdict, r.Reserve, r.Governs, r.Note}
+		rows[i] = []string{r.Name, r.Beta, r.BetaCI, r.Verdict, r.Reserve, r.Governs, r.Note}[:len(head)]
 	}
-	mdTable(w, []string{"member", "β (–)", "95% interval of β (–)", "verdict", "reserve factor (–)", "governs", "note"}, rows)
+	mdTable(w, head, rows)
 	if len(v.NotRun) > 0 {
 		w.WriteString("Members not run:\n\n")
 		for _, r := range v.NotRun {

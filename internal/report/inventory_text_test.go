@@ -62,7 +62,18 @@ func TestInventorySummaryText(t *testing.T) {
 	if strings.Contains(got, "F1-B2") {
 		t.Errorf("summary lists a member that meets the target:\n%s", got)
 	}
-	// Markdown carries the same facts.
+	// The HTML report and Markdown carry the same facts.
+	html, err := htmlReport(&Bundle{Doc: demoInventory()}, nil, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, s := range []string{`<section id="inventory">`, "<th>system pf (at least one member fails)</th><td>2.13e-4, 95% interval 1.86e-4 to 2.44e-4</td>",
+		`<td>F1-C3</td><td class="n">3.76</td><td class="n">[3.75, 3.77]</td><td class="not-met">not met</td>`,
+		`<td class="undecided">undecided</td>`, "<td>the interval of β straddles the target</td>", "5 other members meet the target"} {
+		if !strings.Contains(string(html), s) {
+			t.Errorf("HTML lacks %q", s)
+		}
+	}
 	md := Markdown(&Bundle{Doc: demoInventory()})
 	for _, s := range []string{"## Inventory", "| system pf (at least one member fails) | 2.13e-4, 95% interval 1.86e-4 to 2.44e-4 |",
 		"| G-B3 | 3.78 | \\[3.76, 3.80\\] | not met | 0.995 | flexural-minor |  |", "5 other members meet the target"} {

@@ -24,6 +24,8 @@ type invView struct {
 	// Listing introduces Rows: which members they are.
 	Listing string
 	Rows    []invRow
+	// HasNote is set when a listed member has a note.
+	HasNote bool
 	// NotRun are the members without a result, with the reason.
 	NotRun []invRow
 	// Rest counts the members not listed and says where they are.
@@ -78,6 +80,7 @@ func inventoryView(d *Document, interval func(lo, hi string) string) *invView {
 			break
 		}
 		v.Rows = append(v.Rows, memberRow(m))
+		v.HasNote = v.HasNote || v.Rows[i].Note != ""
 	}
 	for i, m := range notRun {
 		if i == maxListedMembers {
