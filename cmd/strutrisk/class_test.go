@@ -4,26 +4,13 @@ import (
 	"math"
 	"strings"
 	"testing"
+
+	"strutrisk/internal/fixture"
 )
 
-// classStudy is a cold-formed SHS 400x400x4 in S355 (the issue's case).
-const classStudy = `title = "SHS"
-[member]
-length = "6 m"
-ends = "pinned-pinned"
-[member.section]
-shape = "RHS"
-depth = 400
-width = 400
-thickness = 4
-[material]
-modulus = 210000
-yield = 355
-[capacity]
-model = "curve"
-[loads]
-dead = "500 kN"
-`
+// classStudy is a cold-formed SHS 400x400x4 in S355 (the issue's case,
+// fixture.SHS400).
+const classStudy = fixture.SHS400
 
 // TestCheckShowsClass: check gives the class of each wall with the EN
 // 1993-1-1 Table 5.2 limits (42 eps = 34.2 for S355) and the effective

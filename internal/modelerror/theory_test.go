@@ -9,29 +9,15 @@ import (
 	"strings"
 	"testing"
 
+	"strutrisk/internal/fixture"
 	"strutrisk/internal/study"
 )
 
-// stocky is a solid square strut whose relative slenderness stays below
-// 0.2, so chi = 1 (EN 1993-1-1:2005 6.3.1.2(4)) and its capacity is
-// A fy = 10,000 mm^2 x fy.
-const stocky = `[member]
-length = 300
-ends = "pinned-pinned"
-[member.section]
-shape = "rect"
-depth = 100
-width = 100
-[material]
-modulus = 205000
-yield = { dist = "lognormal", mean = 300, cov = 0.10 }
-[capacity]
-model = "curve"
-curve = "b"
-model_factor = { dist = "lognormal", mean = 1.3, cov = 0.05 }
-[loads]
-axial = { dist = "lognormal", mean = "1500 kN", cov = 0.20 }
-`
+// stocky is fixture.Stocky, a solid square strut whose relative
+// slenderness stays below 0.2, so chi = 1 (EN 1993-1-1:2005 6.3.1.2(4))
+// and its capacity is A fy = 10,000 mm^2 x fy, with a model factor of
+// mean 1.3 that r_t must leave out.
+var stocky = strings.Replace(fixture.Stocky, "mean = 1.0, cov = 0.05", "mean = 1.3, cov = 0.05", 1)
 
 func parseStudy(t *testing.T, src string) *study.Study {
 	t.Helper()

@@ -6,26 +6,13 @@ import (
 	"testing"
 
 	"strutrisk/internal/column"
+	"strutrisk/internal/fixture"
 )
 
-// shs400 is the issue's case: a cold-formed SHS 400x400x4 in S355, 6 m,
-// pinned, model "curve" without a curve (Table 6.2 picks it).
-const shs400 = `[member]
-length = "6 m"
-ends = "pinned-pinned"
-[member.section]
-shape = "RHS"
-depth = 400
-width = 400
-thickness = 4
-[material]
-modulus = 210000
-yield = 355
-[capacity]
-model = "curve"
-[loads]
-dead = "500 kN"
-`
+// shs400 is the issue's case, fixture.SHS400: a cold-formed SHS
+// 400x400x4 in S355, 6 m, pinned, model "curve" without a curve (Table
+// 6.2 picks it).
+const shs400 = fixture.SHS400
 
 // TestClass4EndToEnd: the SHS 400x400x4 S355 column is class 4 and its
 // capacity is chi A_eff fy (EN 1993-1-1 6.3.1.1 eq. 6.48 and 6.3.1.2 eq.

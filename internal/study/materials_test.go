@@ -1,6 +1,7 @@
 package study
 
 import (
+	"fmt"
 	"math"
 	"strings"
 	"testing"
@@ -307,33 +308,37 @@ func TestMaterialBendingRefused(t *testing.T) {
 	}
 }
 
-// TestStainlessBeamColumnLaw checks that the ultimate beam-column of a
-// stainless study follows the Ramberg-Osgood law with the study's
-// ultimate strength and exponent (column.BeamColumn with Law, the law
-// itself tested against EN 1993-1-4 Annex C in internal/column), and that
-// without material.ultimate the study is refused.
-func TestStainlessBeamColumnLaw(t *testing.T) {
-	text := `[member]
+// chsBeamColumn is a pinned CHS 114.3 x thickness strut, 2.5 m long, with
+// a bow of L/1000, on the ultimate beam-column model about the major axis
+// under 100 kN; material is the body of its [material] table, which
+// starts on line 9.
+func chsBeamColumn(thickness int, material string) string {
+	return fmt.Sprintf(`[member]
 length = 2500
 ends = "pinned-pinned"
 [member.section]
 shape = "CHS"
 diameter = 114.3
-thickness = 4
+thickness = %d
 [material]
-kind = "stainless"
-yield = 300
-ultimate = 650
-exponent = 6
-[imperfection]
+%s[imperfection]
 bow = "L/1000"
 [capacity]
 model = "beam-column"
 limit = "ultimate"
 axis = "major"
 [loads]
-dead = { dist = "fixed", value = 100000 }
-`
+dead = 100000
+`, thickness, material)
+}
+
+// TestStainlessBeamColumnLaw checks that the ultimate beam-column of a
+// stainless study follows the Ramberg-Osgood law with the study's
+// ultimate strength and exponent (column.BeamColumn with Law, the law
+// itself tested against EN 1993-1-4 Annex C in internal/column), and that
+// without material.ultimate the study is refused.
+func TestStainlessBeamColumnLaw(t *testing.T) {
+	text := chsBeamColumn(4, "kind = \"stainless\"\nyield = 300\nultimate = 650\nexponent = 6\n")
 	md := buildText(t, text)
 	_, c, _ := gAt(t, md)
 	p, err := column.Section{Shape: column.ShapeCHS, Diameter: 114.3, Thickness: 4}.Properties()
@@ -376,25 +381,7 @@ func TestTimberMeasurements(t *testing.T) {
 // TestAluminiumBeamColumnWarns checks that the ultimate beam-column of an
 // aluminium member says that its fibres are elastic-perfectly-plastic.
 func TestAluminiumBeamColumnWarns(t *testing.T) {
-	text := `[member]
-length = 2500
-ends = "pinned-pinned"
-[member.section]
-shape = "CHS"
-diameter = 114.3
-thickness = 5
-[material]
-kind = "aluminium"
-yield = 240
-[imperfection]
-bow = "L/1000"
-[capacity]
-model = "beam-column"
-limit = "ultimate"
-[loads]
-dead = 100000
-`
-	st := parse(t, text)
+	st := parse(t, chsBeamColumn(5, "kind = \"aluminium\"\nyield = 240\n"))
 	if w := strings.Join(st.Warnings, "\n"); !strings.Contains(w, "material.kind (line 9): the ultimate beam-column of aluminium takes elastic-perfectly-plastic fibres") {
 		t.Errorf("warnings lack the aluminium law:\n%s", w)
 	}

@@ -6,14 +6,17 @@ import (
 	"math"
 	"strings"
 	"testing"
+
+	"strutrisk/internal/fixture"
 )
 
-// lognormalRS is a stocky solid square strut on the buckling-curve model
-// whose relative slenderness stays below 0.2, so chi = 1 (EN 1993-1-1:2005
-// 6.3.1.2(4)) and the capacity is R = A fy x model factor, a lognormal,
-// against a lognormal load S. The reliability index is then exact in
-// closed form (Melchers and Beck, Structural Reliability Analysis and
-// Prediction, 3rd ed., 2018, chapter 3, lognormal R and S; from memory):
+// lognormalRS is fixture.Stocky with a reference period: a stocky solid
+// square strut on the buckling-curve model whose relative slenderness
+// stays below 0.2, so chi = 1 (EN 1993-1-1:2005 6.3.1.2(4)) and the
+// capacity is R = A fy x model factor, a lognormal, against a lognormal
+// load S. The reliability index is then exact in closed form (Melchers
+// and Beck, Structural Reliability Analysis and Prediction, 3rd ed., 2018,
+// chapter 3, lognormal R and S; from memory):
 //
 //	beta(lambda) = [ln(muR / (lambda muS)) + ln sqrt((1+VS^2)/(1+VR^2))] / D,
 //	D = sqrt(ln[(1+VR^2)(1+VS^2)])
@@ -21,26 +24,7 @@ import (
 // with S multiplied by lambda, so the factor at which beta equals a target
 // is lambda = exp((beta(1) - target) D). FORM is exact here: ln R - ln S
 // is linear in standard normal space.
-const lognormalRS = `[member]
-length = 300
-ends = "pinned-pinned"
-[member.section]
-shape = "rect"
-depth = 100
-width = 100
-[material]
-modulus = 205000
-yield = { dist = "lognormal", mean = 300, cov = 0.10 }
-[capacity]
-model = "curve"
-curve = "b"
-model_factor = { dist = "lognormal", mean = 1.0, cov = 0.05 }
-[loads]
-axial = { dist = "lognormal", mean = "1500 kN", cov = 0.20 }
-[target]
-beta = 3.8
-reference_period = "50 years"
-`
+var lognormalRS = strings.Replace(fixture.Stocky, "beta = 3.8\n", "beta = 3.8\nreference_period = \"50 years\"\n", 1)
 
 func TestReserveFactorClosedForm(t *testing.T) {
 	st := parse(t, lognormalRS)
