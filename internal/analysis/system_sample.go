@@ -14,8 +14,8 @@ import (
 // seriesBlock, each block from the stream of (seed, block) and the
 // blocks added in their order, so the sum does not depend on workers.
 const (
-	seriesSamples = 4096
-	seriesBlock   = 256
+	seriesSamples = 2048
+	seriesBlock   = 128
 )
 
 // sampleSeries estimates P(some member fails) over several shared normals
@@ -118,9 +118,12 @@ func unionRatio(ms []linearMember, s []float64) float64 {
 		x /= m.SD
 		p := 0.5 * math.Erfc(x/math.Sqrt2) // Phi(-x)
 		sumP += p
-		if x > 0 {
+		switch {
+		case p < 1e-4: // log1p(-p) by its series, to 3e-13 relative
+			logSurv -= p * (1 + p*(0.5+p/3))
+		case x > 0:
 			logSurv += math.Log1p(-p)
-		} else {
+		default:
 			logSurv += logPhi(x)
 		}
 	}

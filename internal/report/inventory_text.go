@@ -49,6 +49,7 @@ func inventoryText(d *Document) string {
 var systemLabels = map[string]string{
 	"system pf (at least one member fails)":  "system pf",
 	"system β":                               "system beta",
+	"system pf by FORM (first order)":        "FORM system pf",
 	"system pf were the members independent": "if independent",
 	"expected number of failing members":     "expected failures",
 	"system estimate":                        "system estimate",

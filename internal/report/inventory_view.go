@@ -221,11 +221,25 @@ func systemRows(inv *Inventory, interval func(lo, hi string) string) []KV {
 		rows = append(rows, KV{"system pf (at least one member fails)", prob(s.Pf) + interval(prob(s.PfCI[0]), prob(s.PfCI[1]))},
 			KV{"system β", shortBeta(float64(s.Beta))})
 	}
+	if s.FormPf != nil && s.FormBeta != nil {
+		rows = append(rows, KV{"system pf by FORM (first order)", formSystemValue(s)})
+	}
 	rows = append(rows,
 		KV{"system pf were the members independent", prob(s.PfIfIndependent)},
 		KV{"expected number of failing members", prob(s.ExpectedFailures) + " (the sum of the members' pf)"},
 		KV{"system estimate", systemStatus(s)})
 	return rows
+}
+
+// formSystemValue is the first-order system pf with its index, and what
+// it is: the headline when no joint sample failed, and then an
+// approximation, not a verdict; else a check on the joint sample.
+func formSystemValue(s *System) string {
+	t := prob(*s.FormPf) + ", β " + shortBeta(float64(*s.FormBeta))
+	if s.Headline == "form" {
+		return t + "; the estimate to read, as no joint sample failed: an approximation that no failing sample checks, not a verdict"
+	}
+	return t + "; a check on the joint sample"
 }
 
 // systemStatus is how the system pf was estimated and how far it got.
