@@ -86,12 +86,13 @@ func calibrationCaseName(st *study.Study, v, i int) string {
 	return name
 }
 
-// slendernessText is " (relative slenderness 0.85)", "" for NaN.
+// slendernessText is " (λ 0.85)", the relative slenderness as the
+// report's pictures write it, "" for NaN.
 func slendernessText(lam float64) string {
 	if math.IsNaN(lam) || math.IsInf(lam, 0) {
 		return ""
 	}
-	return fmt.Sprintf(" (relative slenderness %.2f)", lam)
+	return fmt.Sprintf(" (λ %.2f)", lam)
 }
 
 // caseSlenderness is the nominal relative slenderness of variant v at

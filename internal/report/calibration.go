@@ -3,6 +3,7 @@ package report
 import (
 	"fmt"
 	"strings"
+	"unicode/utf8"
 
 	"strutrisk/internal/assess"
 )
@@ -44,13 +45,17 @@ func calibrationCasesText(c *assess.Calibration) string {
 	}
 	var w strings.Builder
 	initial := c.Cases[0].BetaInitial != nil
-	fmt.Fprintf(&w, "    %-28s %7s  %8s  %11s", "case", "weight", "beta", "beta-target")
+	width := 28
+	for _, k := range c.Cases {
+		width = max(width, utf8.RuneCountInString(k.Case))
+	}
+	fmt.Fprintf(&w, "    %-*s %7s  %8s  %11s", width, "case", "weight", "beta", "beta-target")
 	if initial {
 		fmt.Fprintf(&w, "  %s", "beta at "+fixed(c.Initial, 3))
 	}
 	w.WriteString("\n")
 	for _, k := range c.Cases {
-		fmt.Fprintf(&w, "    %-28s %7s  %8s  %11s", k.Case, sig(k.Weight, 3), fixed(k.Beta, 2), strings.Replace(signed(k.Beta-c.TargetBeta), "−", "-", 1))
+		fmt.Fprintf(&w, "    %-*s %7s  %8s  %11s", width, k.Case, sig(k.Weight, 3), fixed(k.Beta, 2), strings.Replace(signed(k.Beta-c.TargetBeta), "−", "-", 1))
 		if initial && k.BetaInitial != nil {
 			fmt.Fprintf(&w, "  %14s", fixed(*k.BetaInitial, 2))
 		}

@@ -2,6 +2,7 @@ package report
 
 import (
 	"math"
+	"unicode/utf8"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/plotter"
@@ -77,7 +78,13 @@ func calibrationFigure(b *Bundle) *figure {
 	if c.AtBound {
 		caption += " The value lies at an end of the range searched: it is no calibration."
 	}
-	return &figure{Name: "calibration", Caption: caption, W: 16 * vg.Centimeter, H: min(h, 60*vg.Centimeter), Plots: []*plot.Plot{p}}
+	// Long case names (swept values) widen the picture, not squeeze the rows.
+	long := 0
+	for _, s := range names {
+		long = max(long, utf8.RuneCountInString(s))
+	}
+	w := vg.Length(16+0.16*math.Max(0, float64(long-30))) * vg.Centimeter
+	return &figure{Name: "calibration", Caption: caption, W: min(w, 24*vg.Centimeter), H: min(h, 60*vg.Centimeter), Plots: []*plot.Plot{p}}
 }
 
 // addCalibrationPoints draws the betas at the calibrated value (filled)
