@@ -107,7 +107,7 @@ func memberRun(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs 
 		return fail(fmt.Errorf("nothing in it is uncertain"))
 	}
 	warns := append([]string(nil), ms.Warnings...)
-	warns = append(warns, md.Adequacy(nom)...)
+	warns = append(append(warns, md.Plausibility(nom)...), md.Adequacy(nom)...)
 	mr.GoverningAxis, mr.Mode = nom.Axis.String(), nom.CapacityMode.String()
 	settings := md.SimSettings(*s)
 	settings.Seed = MemberSeed(s.Seed, i)
