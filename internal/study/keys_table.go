@@ -173,7 +173,7 @@ var keyTables = []*TableInfo{
 			Meaning: "Sobol indices of the margin and of the capacity."},
 	}},
 	{Path: "sweep", Meaning: "Repeats the study over the values of one key, or of several keys given as [[sweep.axis]] tables.", Keys: []KeyInfo{
-		{Name: "parameter", Takes: "text (a key path)", Required: true, Meaning: "A quantity's path, or a distribution's parameter such as \"loads.imposed.mean\"."},
+		{Name: "parameter", Takes: "text (a key path)", Meaning: "A quantity's path, or a distribution's parameter such as \"loads.imposed.mean\"; required unless the keys are [[sweep.axis]] tables."},
 		{Name: "values", Takes: "list of quantities", Meaning: "The swept values (or from, to and steps)."},
 		{Name: "from", Takes: "quantity", Meaning: "The first value of a range."},
 		{Name: "to", Takes: "quantity", Meaning: "The last value of a range."},

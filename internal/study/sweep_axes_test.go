@@ -101,6 +101,10 @@ func TestSweepAxesErrors(t *testing.T) {
 			`sweep.axis[1].steps: combine = "zip" takes the axes' values in step: sweep.axis[1] has 2 values, sweep.axis[0] has 3`},
 		{"too many", long,
 			"sweep.axis: the grid of the swept keys has more than the 10000 cases a study may run (200 x 200 values)"},
+		{"too many with a variant", "[[sweep.axis]]\nparameter = \"member.length\"\nfrom = \"1 m\"\nto = \"5 m\"\nsteps = 100\n" +
+			"[[sweep.axis]]\nparameter = \"imperfection.bow\"\nfrom = \"L/1000\"\nto = \"L/200\"\nsteps = 60\n" +
+			"[[variant]]\nname = \"thick\"\nset = { \"member.section.thickness\" = 10 }\n",
+			"sweep: 12001 cases (the study and 1 variants, at 6000 swept points) are more than the 10000"},
 		{"same key twice", "[[sweep.axis]]\nparameter = \"member.length\"\nvalues = [2000]\n[[sweep.axis]]\nparameter = \"member.length\"\nvalues = [3000]\n",
 			`sweep.axis[1].parameter: "member.length" is swept in sweep.axis[0] already`},
 		{"parameter beside axes", "[sweep]\nparameter = \"member.length\"\n[[sweep.axis]]\nparameter = \"member.length\"\nvalues = [2000]\n",

@@ -158,7 +158,7 @@ func (s *Study) checkCases() *Error {
 	if cases := s.Cases(); cases > MaxCases {
 		key, line := "variant", s.src.parts["sweep"]["variant"]
 		if n > len(s.Variants) {
-			key, line = "sweep", s.src.parts["sweep"]["sweep"]
+			key, line = "sweep", firstLine(s.src.parts["sweep"], "sweep")
 		}
 		what := "values"
 		if s.Grid != nil {
@@ -195,4 +195,16 @@ func (s *Study) checkCases() *Error {
 // the study and each variant at each swept point.
 func (s *Study) Cases() int {
 	return (len(s.Variants)+1)*(s.SweptPoints()+1) - 1
+}
+
+// firstLine is the first line of the keys of lines under prefix: the line
+// of [sweep], or of the first [[sweep.axis]] when [sweep] is not written.
+func firstLine(lines map[string]int, prefix string) int {
+	first := 0
+	for k, n := range lines {
+		if (k == prefix || strings.HasPrefix(k, prefix+".")) && n > 0 && (first == 0 || n < first) {
+			first = n
+		}
+	}
+	return first
 }
