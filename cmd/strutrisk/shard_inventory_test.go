@@ -1,6 +1,7 @@
 package main
 
 import (
+	"bytes"
 	"os"
 	"path/filepath"
 	"strings"
@@ -57,6 +58,17 @@ func TestShardInventoryMembers(t *testing.T) {
 		}
 		if members != 8 || blocks != 1000 {
 			t.Errorf("%d shards: %d members and %d blocks of the joint sample noted, want 8 and 1000", n, members, blocks)
+		}
+		// A shard run again writes the same state, byte for byte.
+		d1 := filepath.Join(dir, itoa(n), "shard", itoa(n)+"-1of"+itoa(n))
+		again := filepath.Join(dir, itoa(n), "again")
+		if code, _, errs := invoke(t, append([]string{"run", inv, "--shard", "1/" + itoa(n), "--out", again, "--workers", "1"}, flags...)...); code != exitOK {
+			t.Fatalf("shard 1 again: exit %d: %s", code, errs)
+		}
+		a, _ := os.ReadFile(filepath.Join(d1, shardstate.FileName))
+		b, _ := os.ReadFile(filepath.Join(again, shardstate.FileName))
+		if len(a) == 0 || !bytes.Equal(a, b) {
+			t.Errorf("%d shards: shard 1 run again on one worker wrote another state", n)
 		}
 		os.RemoveAll(filepath.Join(dir, itoa(n), "shard"))
 	}

@@ -45,9 +45,8 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 	fs := memberFORM(s.FORM, main)
 	sys := make([]systemMember, 0, len(inv.Members))
 	outs := runMembers(ctx, l.Study, &settings, obs, func(i int, ms *sim.Settings) memberOutcome {
-		if ms.Shard.Replays() { // a merge's from the shards
-			mr, md, warns := memberResult(ctx, l.Study, i, ms, fs)
-			return memberOutcome{mr: mr, md: md, warns: warns}
+		if ms.Shard.Replays() { // a merge's from the shards (inventory_shard.go)
+			return memberResult(l.Study, i, ms.Shard)
 		}
 		return memberRun(ctx, l.Study, i, ms, fs)
 	})

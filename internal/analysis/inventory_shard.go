@@ -5,7 +5,6 @@ import (
 	"fmt"
 	"math"
 
-	"strutrisk/internal/progress"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
@@ -58,16 +57,13 @@ func (n *memberNote) member(m *report.Member) {
 	}
 }
 
-// memberResult is runMember, but a merge takes the result the member's
-// shard noted.
-func memberResult(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs *sim.FORMSettings) (report.Member, *study.Model, []string) {
-	if !s.Shard.Replays() {
-		return runMember(ctx, st, i, s, fs)
-	}
+// memberResult is the outcome of member i in a merge: the result the
+// member's shard noted, and its model, built again for the joint sample.
+func memberResult(st *study.Study, i int, sh *sim.Shard) memberOutcome {
 	m := st.Inventory.Members[i]
 	mr := report.Member{Name: m.Name, Line: m.Line, Cells: m.Cells}
 	var n memberNote
-	ok, err := s.Shard.Recall(memberNoteKey(i), &n)
+	ok, err := sh.Recall(memberNoteKey(i), &n)
 	switch {
 	case err != nil:
 		n = memberNote{Error: err.Error()}
@@ -80,14 +76,18 @@ func memberResult(ctx context.Context, st *study.Study, i int, s *sim.Settings, 
 	}
 	n.member(&mr)
 	if n.Error != "" {
-		return mr, nil, n.Warnings
+		return memberOutcome{mr: mr, warns: n.Warnings}
 	}
-	// The member's model, for the joint sample: built as runMember built it.
+	// Its FORM for the first-order system is noted apart
+	// (system_form_shard.go).
+	o := memberOutcome{mr: mr, warns: n.Warnings}
 	md, err := memberModel(st, i)
 	if err != nil {
-		return mr, nil, append(n.Warnings, "not in the system: "+err.Error())
+		o.warns = append(o.warns, "not in the system: "+err.Error())
+		return o
 	}
-	return mr, md, n.Warnings
+	o.md = md
+	return o
 }
 
 // memberModel builds the model of member i of st's inventory.
@@ -99,36 +99,41 @@ func memberModel(st *study.Study, i int) (*study.Model, error) {
 	return study.Build(ms)
 }
 
-// shardInventory runs the inventory members this shard owns, each whole,
-// and this shard's blocks of the joint sample, noting them; main is the
-// study's FORM result (nil when none), as runInventory takes it.
+// shardInventory runs the inventory members this shard owns, each whole
+// (several at a time, as runInventory does), and this shard's blocks of
+// the joint sample, noting them; main is the study's FORM result (nil
+// when none), as runInventory takes it.
 func shardInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FORMResult, obs Observer) error {
 	inv := l.Study.Inventory
 	settings := caseSettings(s)
 	settings.Shard = nil // a member is run whole by the shard that owns it
 	fs := memberFORM(s.FORM, main)
+	outs := runMembers(ctx, l.Study, &settings, obs, func(i int, ms *sim.Settings) memberOutcome {
+		if s.Shard.Owns(i) {
+			return memberRun(ctx, l.Study, i, ms, fs)
+		}
+		// Another shard's: only its model, for the joint sample.
+		if md, err := memberModel(l.Study, i); err == nil && len(md.Sim.Vars) > 0 {
+			return memberOutcome{md: md}
+		}
+		return memberOutcome{}
+	})
+	if ctx.Err() != nil {
+		return ctx.Err()
+	}
 	sys := make([]systemMember, 0, len(inv.Members))
-	for i, m := range inv.Members {
-		if ctx.Err() != nil {
-			return ctx.Err()
-		}
-		if !s.Shard.Owns(i) {
-			if md, err := memberModel(l.Study, i); err == nil && len(md.Sim.Vars) > 0 {
-				sys = append(sys, systemMember{m: md.Sim})
+	for i, o := range outs {
+		if s.Shard.Owns(i) {
+			if err := s.Shard.Note(memberNoteKey(i), noteOfMember(&o.mr, o.warns)); err != nil {
+				return err
 			}
-			continue
-		}
-		obs.StartCase(i+1, len(inv.Members), "member "+progress.Clip(m.Name, 24))
-		o := memberRun(ctx, l.Study, i, &settings, fs)
-		if err := s.Shard.Note(memberNoteKey(i), noteOfMember(&o.mr, o.warns)); err != nil {
-			return err
 		}
 		if o.md != nil {
 			sys = append(sys, systemMember{m: o.md.Sim, form: o.form}) // its FORM for the first-order system
 		}
 	}
-	if len(sys) < len(inv.Members) || ctx.Err() != nil {
-		return ctx.Err() // no system: the merge says why
+	if len(sys) < len(inv.Members) {
+		return nil // no system: the merge says why
 	}
 	obs.Stage("inventory system (joint sampling), this shard's blocks")
 	ir := &inventoryRun{doc: &report.Inventory{}}
