@@ -136,7 +136,7 @@ func Run(ctx context.Context, m *Model, s *Settings) (*Result, error) {
 	if ctx == nil {
 		ctx = context.Background()
 	}
-	if sharding(&cfg) && cfg.Method != MonteCarlo && cfg.Method != LatinHypercube && cfg.Method != ConditionalQMC {
+	if sharding(&cfg) && !Shardable(cfg.Method) {
 		return nil, fmt.Errorf("sim: %s: %w", cfg.Method, ErrNotShardable)
 	}
 	var res *Result

@@ -6,7 +6,6 @@ import (
 	"io"
 
 	"strutrisk/internal/shardstate"
-	"strutrisk/sim"
 )
 
 const mergeHelp = `Usage: strutrisk merge DIR... [flags]
@@ -49,31 +48,18 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 		return exitInput
 	}
 	o.set = map[string]bool{}
-	states := make([]*shardstate.State, 0, len(dirs))
-	for _, d := range dirs {
-		st, err := shardstate.Read(d)
-		if err != nil {
-			fmt.Fprintf(stderr, "strutrisk merge: %v\n", err)
-			return exitInput
-		}
-		states = append(states, st)
+	states, err := shardstate.ReadAll(dirs)
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk merge: %v\n", err)
+		return exitInput
 	}
 	replay, err := shardstate.Join(states, dirs)
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk merge: nothing merged: %v\n", err)
 		return exitInput
 	}
-	first := states[0]
-	if studyPath == "" {
-		// As the shards were given it, so that the results name it the
-		// same; else where it was.
-		studyPath = first.Study
-		if h, err := shardstate.HashFile(studyPath); err != nil || h != first.StudySHA256 {
-			studyPath = first.StudyAbs
-		}
-	}
-	if h, err := shardstate.HashFile(studyPath); err != nil || h != first.StudySHA256 {
-		fmt.Fprintf(stderr, "strutrisk merge: %s is not the study the shards ran (missing or changed since): give it with --study\n", studyPath)
+	if studyPath, err = states[0].Locate(studyPath); err != nil {
+		fmt.Fprintf(stderr, "strutrisk merge: %v\n", err)
 		return exitInput
 	}
 	l, code := load(studyPath, stderr)
@@ -81,10 +67,7 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 		return code
 	}
 	settings := l.Settings(o.workers)
-	settings.Method = sim.Method(first.Settings.Method)
-	settings.Samples = first.Settings.Samples
-	settings.Seed = first.Settings.Seed
-	settings.TargetCoV = first.Settings.TargetCoV
+	states[0].Settings.Apply(&settings)
 	settings.Shard = replay
 	return runAndWrite(o, studyPath, l, settings, stdout, stderr)
 }
