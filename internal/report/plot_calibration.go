@@ -83,8 +83,12 @@ func calibrationFigure(b *Bundle) *figure {
 	for _, s := range names {
 		long = max(long, utf8.RuneCountInString(s))
 	}
-	w := vg.Length(16+0.16*math.Max(0, float64(long-30))) * vg.Centimeter
-	return &figure{Name: "calibration", Caption: caption, W: min(w, 24*vg.Centimeter), H: min(h, 60*vg.Centimeter), Plots: []*plot.Plot{p}}
+	// (A little only: the HTML scales a wide picture down, labels too.)
+	w := vg.Length(16+0.1*math.Max(0, float64(long-30))) * vg.Centimeter
+	if long > 36 {
+		p.Y.Tick.Label.Font.Size = 8
+	}
+	return &figure{Name: "calibration", Caption: caption, W: min(w, 18*vg.Centimeter), H: min(h, 60*vg.Centimeter), Plots: []*plot.Plot{p}}
 }
 
 // addCalibrationPoints draws the betas at the calibrated value (filled)
