@@ -50,7 +50,7 @@ func inventoryView(d *Document, interval func(lo, hi string) string) *invView {
 	if inv.File != "" {
 		v.Head += " (" + inv.File + ")"
 	}
-	v.Head += ": the study with each row's keys set"
+	v.Head += ": the study with each row's keys set; the results above it are the study's own, with its keys as written"
 	v.System = systemRows(inv, interval)
 	var concern, fine, notRun []Member
 	hasTarget := d.TargetBeta != nil
