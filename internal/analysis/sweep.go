@@ -261,7 +261,8 @@ func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings
 	case res.Status == sim.FewFailures:
 		status = res.StatusReason
 	}
-	pt = &report.Point{Pf: res.Pf, Beta: report.Index(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]}}
+	pt = &report.Point{Pf: res.Pf, Beta: report.Index(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]},
+		Doubtful: !res.Status.Trusted()}
 	if i >= 0 {
 		values := st.PointValues(i)
 		pt.Value = values[0]

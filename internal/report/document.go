@@ -198,9 +198,12 @@ type Sobol struct {
 type Point struct {
 	Value  float64            `json:"value"`
 	Values map[string]float64 `json:"values,omitempty"`
-	Pf     float64            `json:"pf"`
-	Beta   Index              `json:"beta"`
-	PfCI   [2]float64         `json:"pf_ci"`
+	// Doubtful is set when the engine does not trust the case's estimate
+	// (a warning says why): pictures do not judge it against the target.
+	Doubtful bool       `json:"-"`
+	Pf       float64    `json:"pf"`
+	Beta     Index      `json:"beta"`
+	PfCI     [2]float64 `json:"pf_ci"`
 }
 
 // Variant is one named alternative of a study.

@@ -150,7 +150,7 @@ func heatmapFigure(b *Bundle) *figure {
 	rows := (n + cols - 1) / cols
 	f := &figure{Name: "heatmap", Plots: plots, Cols: cols,
 		W: vg.Length(cols)*8*vg.Centimeter + 4.5*vg.Centimeter, H: vg.Length(rows) * 8 * vg.Centimeter,
-		Side: heatLegend(classes, target), SideW: 4.5 * vg.Centimeter}
+		Side: heatLegend(classes, target, anyDoubtful(c, n)), SideW: 4.5 * vg.Centimeter}
 	var w strings.Builder
 	fmt.Fprintf(&w, "Reliability index β (dimensionless) at every combination of %s and %s, one panel for the study", c.Keys[0], c.Keys[1])
 	if len(c.Grid) > 1 {
@@ -169,6 +169,9 @@ func heatmapFigure(b *Bundle) *figure {
 		fmt.Fprintf(&w, ". Reds are below the target β = %s, blues at or above it; the dark line bounds the cells below the target", fixed(*target, 2))
 	}
 	w.WriteString(". A white cell did not run.")
+	if anyDoubtful(c, n) {
+		w.WriteString(" A grey cell, its β marked ?, has an estimate the engine does not trust (the warnings say why): it is not judged against the target.")
+	}
 	f.Caption = w.String()
 	return f
 }
@@ -198,13 +201,22 @@ func heatPanel(c *CaseTable, g *heatGrid, s int, classes []betaClass, target *fl
 		}
 		return float64(pt.Beta), !math.IsNaN(float64(pt.Beta))
 	}
+	doubtful := func(ix, iy int) bool {
+		i := g.at[ix][iy]
+		return s < len(c.Grid) && i < len(c.Grid[s]) && c.Grid[s][i] != nil && c.Grid[s][i].Doubtful
+	}
 	for ix := range g.xs {
 		for iy := range g.ys {
 			x, y := float64(ix), float64(iy)
 			bt, ok := beta(ix, iy)
 			fill := color.Color(color.White)
 			var cl betaClass
-			if ok {
+			switch {
+			case ok && doubtful(ix, iy):
+				// Not judged against the target: grey, its beta marked.
+				cl = betaClass{Fill: colGrid, Light: true}
+				fill = cl.Fill
+			case ok:
 				cl = classOf(classes, bt)
 				fill = cl.Fill
 			}
@@ -227,6 +239,9 @@ func heatPanel(c *CaseTable, g *heatGrid, s int, classes []betaClass, target *fl
 			if math.IsInf(bt, 0) {
 				label = csvIndex(Index(bt)) // "inf" or "-inf": the caption says what they mean
 			}
+			if doubtful(ix, iy) {
+				label += "?"
+			}
 			labels.Labels = append(labels.Labels, label)
 			st := textStyle(9, ink)
 			st.XAlign, st.YAlign = text.XCenter, text.YCenter
@@ -234,7 +249,11 @@ func heatPanel(c *CaseTable, g *heatGrid, s int, classes []betaClass, target *fl
 		}
 	}
 	if target != nil && finite(*target) {
-		addTargetBoundary(p, g, beta, *target)
+		judged := func(ix, iy int) (float64, bool) {
+			b, ok := beta(ix, iy)
+			return b, ok && !doubtful(ix, iy)
+		}
+		addTargetBoundary(p, g, judged, *target)
 	}
 	if len(labels.Labels) > 0 {
 		if l, err := plotter.NewLabels(labels); err == nil {
@@ -314,8 +333,9 @@ func heatValue(v float64, key string) string {
 }
 
 // heatLegend is the side panel naming the classes of beta, the highest on
-// top, and the target's boundary.
-func heatLegend(classes []betaClass, target *float64) *plot.Plot {
+// top, the grey of the estimates not trusted (when doubt), and the
+// target's boundary.
+func heatLegend(classes []betaClass, target *float64, doubt bool) *plot.Plot {
 	p := newPlot("", "", "")
 	p.HideAxes()
 	p.X.Min, p.X.Max, p.Y.Min, p.Y.Max = 0, 1, 0, 1
@@ -331,6 +351,11 @@ func heatLegend(classes []betaClass, target *float64) *plot.Plot {
 		sw.LineStyle.Width = 0
 		p.Legend.Add(classes[k].name(), sw)
 	}
+	if sw, err := plotter.NewPolygon(plotter.XYs{{X: 0, Y: 0}, {X: 1, Y: 0}, {X: 1, Y: 1}}); err == nil && doubt {
+		sw.Color = colGrid
+		sw.LineStyle.Width = 0
+		p.Legend.Add("not trusted (β?)", sw)
+	}
 	if target != nil && finite(*target) {
 		if ln, err := plotter.NewLine(plotter.XYs{{X: 0, Y: 0}, {X: 1, Y: 0}}); err == nil {
 			ln.LineStyle = lineStyle(colInk, 2.2, false)
@@ -338,4 +363,17 @@ func heatLegend(classes []betaClass, target *float64) *plot.Plot {
 		}
 	}
 	return p
+}
+
+// anyDoubtful tells whether a case of the first n rows of c.Grid has an
+// estimate the engine does not trust.
+func anyDoubtful(c *CaseTable, n int) bool {
+	for _, line := range c.Grid[:min(n, len(c.Grid))] {
+		for _, pt := range line {
+			if pt != nil && pt.Doubtful {
+				return true
+			}
+		}
+	}
+	return false
 }

@@ -47,11 +47,16 @@ func TestHeatmapFigure(t *testing.T) {
 		{"two variants", 3, 3, 2, false, 3, "one for each variant"},
 		{"many variants", 3, 2, 8, false, maxHeatPanels, "the first 5; every case is in cases.csv"},
 		{"too many to label", 20, 20, 0, false, 1, "too many to write β"},
+		{"a case not trusted", 3, 3, 0, false, 1, "A grey cell, its β marked ?"},
 		{"zipped", 4, 4, 0, true, 0, ""},
 		{"one value of a key", 4, 1, 0, false, 0, ""},
 	} {
 		t.Run(c.name, func(t *testing.T) {
-			f := heatmapFigure(heatBundle(c.nx, c.ny, c.variants, c.zip))
+			b := heatBundle(c.nx, c.ny, c.variants, c.zip)
+			if strings.Contains(c.name, "not trusted") {
+				b.Cases.Grid[0][4].Doubtful = true
+			}
+			f := heatmapFigure(b)
 			if c.panels == 0 {
 				if f != nil {
 					t.Fatalf("a picture of %d panels, want none", len(f.Plots))
