@@ -31,10 +31,6 @@ func (ir *inventoryRun) addFormSystem(ctx context.Context, sys []systemMember, n
 		names[i], pf[i], hi[i] = m.Name, m.Pf, m.PfCI[1]
 	}
 	f := linearSystem(sys, forms, nShared, names, pf, hi, MemberSeed(s.Seed, -2), s.Workers)
-	sampled := d.Samples > 0 && d.Status != "no failures" && d.Status != "no samples"
-	if sampled {
-		d.Headline = "joint sampling"
-	}
 	if ctx.Err() != nil || math.IsNaN(f.Pf) {
 		ir.warnings = append(ir.warnings, "inventory: no first-order system pf: FORM of the members did not finish")
 		return nil
@@ -47,14 +43,32 @@ func (ir *inventoryRun) addFormSystem(ctx context.Context, sys []systemMember, n
 	if len(f.Fallback) > 0 {
 		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: first-order system: FORM did not converge for %s; taken as independent of the other members with their sampled pf", listNames(f.Fallback)))
 	}
-	switch {
-	case !sampled:
-		d.Headline = "form"
-		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: the system pf by FORM is %.3g (beta %.2f), an approximation that no failing joint sample checks: not a verdict", f.Pf, float64(b)))
-	case f.Pf < d.PfCI[0] || f.Pf > d.PfCI[1]:
-		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: the system pf by FORM, %.3g, is outside the joint sample's 95 %% interval [%.3g, %.3g]: some member's margin is not near linear at its design point; the sampled pf stands", f.Pf, d.PfCI[0], d.PfCI[1]))
+	var w string
+	d.Headline, w = systemHeadline(d, f.Pf)
+	if w != "" {
+		ir.warnings = append(ir.warnings, "inventory: "+w)
 	}
 	return nil
+}
+
+// systemHeadline names the estimate of the system d to read, given the
+// first-order pf, with a warning when there is something to say: the
+// joint sample when one of its samples failed (a first-order pf outside
+// its 95 % interval is warned of); when none did, FORM, an approximation
+// no failing sample checks, unless it lies above the sample's 95 % bound,
+// which then stands.
+func systemHeadline(d *report.System, formPf float64) (string, string) {
+	beta := sim.BetaFromPf(formPf)
+	switch {
+	case d.Samples > 0 && d.Status != "no failures" && d.Status != "no samples":
+		if formPf < d.PfCI[0] || formPf > d.PfCI[1] {
+			return "joint sampling", fmt.Sprintf("the system pf by FORM, %.3g, is outside the joint sample's 95 %% interval [%.3g, %.3g]: some member's margin is not near linear at its design point; the sampled pf stands", formPf, d.PfCI[0], d.PfCI[1])
+		}
+		return "joint sampling", ""
+	case d.Status == "no failures" && formPf > d.PfCI[1]:
+		return "joint sampling", fmt.Sprintf("the system pf by FORM, %.3g (beta %.2f), is above the 95 %% bound %.3g of the joint sample, in which no member failed: some member's margin is not near linear at its design point; the bound stands, and neither is a verdict", formPf, beta, d.PfCI[1])
+	}
+	return "form", fmt.Sprintf("the system pf by FORM is %.3g (beta %.2f), an approximation that no failing joint sample checks: not a verdict", formPf, beta)
 }
 
 // listNames quotes up to five names and counts the rest.

@@ -7,6 +7,8 @@ import (
 	"testing"
 
 	"gonum.org/v1/gonum/stat/distuv"
+
+	"strutrisk/internal/report"
 )
 
 // linStudy is stocky made linear and normal: a normal yield (mean 300
@@ -166,5 +168,35 @@ func TestFormSystemNonlinear(t *testing.T) {
 	half := (sys.PfCI[1] - sys.PfCI[0]) / 2 * 4 / 1.96
 	if math.Abs(got-sys.Pf) > half+formErr*got {
 		t.Errorf("form_pf %.5g against the joint sample %.5g [%.5g, %.5g]", got, sys.Pf, sys.PfCI[0], sys.PfCI[1])
+	}
+}
+
+// TestSystemHeadline checks which estimate of the system is to be read:
+// the joint sample when a sample failed (warned of when FORM is outside
+// its interval), FORM when none did, unless FORM lies above the sample's
+// 95 % bound, which then stands.
+func TestSystemHeadline(t *testing.T) {
+	cases := []struct {
+		status   string
+		ci       [2]float64
+		form     float64
+		headline string
+		warn     string
+	}{
+		{"converged", [2]float64{1e-3, 2e-3}, 1.5e-3, "joint sampling", ""},
+		{"few failures", [2]float64{1e-5, 5e-5}, 8e-5, "joint sampling", "outside the joint sample's 95 % interval"},
+		{"no failures", [2]float64{0, 3e-6}, 6e-7, "form", "not a verdict"},
+		{"no failures", [2]float64{0, 3e-6}, 9e-6, "joint sampling", "the bound stands"},
+		{"no samples", [2]float64{0, 1}, 1e-4, "form", "not a verdict"},
+	}
+	for _, c := range cases {
+		d := &report.System{Status: c.status, PfCI: c.ci, Samples: 1000}
+		if c.status == "no samples" {
+			d.Samples = 0
+		}
+		h, w := systemHeadline(d, c.form)
+		if h != c.headline || (c.warn == "") != (w == "") || !strings.Contains(w, c.warn) {
+			t.Errorf("%s, interval %v, FORM %g: headline %q, warning %q; want %q and %q", c.status, c.ci, c.form, h, w, c.headline, c.warn)
+		}
 	}
 }
