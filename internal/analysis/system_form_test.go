@@ -1,6 +1,7 @@
 package analysis
 
 import (
+	"context"
 	"fmt"
 	"math"
 	"strings"
@@ -198,5 +199,36 @@ func TestSystemHeadline(t *testing.T) {
 		if h != c.headline || (c.warn == "") != (w == "") || !strings.Contains(w, c.warn) {
 			t.Errorf("%s, interval %v, FORM %g: headline %q, warning %q; want %q and %q", c.status, c.ci, c.form, h, w, c.headline, c.warn)
 		}
+	}
+}
+
+// TestFormSystemDemo is check (c) with several shared normals: the
+// building demo (lognormal yield and model factor, Gumbel imposed loads;
+// five shared normals: two batches, two floors, one model factor), whose
+// first-order system must agree with its joint sample of 1e6 within the
+// sample's interval (four standard errors) widened by FORM's own error,
+// stated as 10 % of pf as in TestFormSystemNonlinear.
+func TestFormSystemDemo(t *testing.T) {
+	l, err := Load("../../studies/building-inventory.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := l.Settings(2)
+	r, err := Run(context.Background(), l, &s, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	sys := r.Document().Inventory.System
+	if sys == nil || sys.FormPf == nil {
+		t.Fatalf("no first-order system: %v", r.warnings)
+	}
+	got := *sys.FormPf
+	t.Logf("form_pf %.4g (error %.2g), sampled %.4g [%.4g, %.4g]", got, *sys.FormPfError, sys.Pf, sys.PfCI[0], sys.PfCI[1])
+	half := (sys.PfCI[1] - sys.PfCI[0]) / 2 * 4 / 1.96
+	if math.Abs(got-sys.Pf) > half+0.10*got || *sys.FormPfError > 0.01*got {
+		t.Errorf("form_pf %.4g (error %.2g) against the joint sample %.4g [%.4g, %.4g]", got, *sys.FormPfError, sys.Pf, sys.PfCI[0], sys.PfCI[1])
+	}
+	if !strings.Contains(sys.FormMethod, "5 shared normals") || sys.Headline != "joint sampling" {
+		t.Errorf("form_method %q, headline %q", sys.FormMethod, sys.Headline)
 	}
 }
