@@ -5,6 +5,8 @@ import (
 	"math"
 	"testing"
 
+	"strutrisk/internal/fixture"
+
 	"strutrisk/sim"
 )
 
@@ -19,17 +21,13 @@ func TestReserveFactorAlone(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	vr2 := (1+0.10*0.10)*(1+0.05*0.05) - 1
-	vs2 := 0.20 * 0.20
-	d := math.Sqrt(math.Log((1 + vr2) * (1 + vs2)))
-	beta1 := (math.Log(3e6/1.5e6) + 0.5*math.Log((1+vs2)/(1+vr2))) / d
 	for _, target := range []float64{2.5, 3.8, 4.7} {
 		ctx := context.Background()
 		r, err := md.ReserveFactor(ctx, target, nil, nil)
 		if err != nil {
 			t.Fatalf("target %g: %v", target, err)
 		}
-		if want := math.Exp((beta1 - target) * d); !near(r.Factor, want, 1e-4) || math.Abs(r.FactorBeta-target) > ReserveTol {
+		if want := fixture.StockyFactor(target); !near(r.Factor, want, 1e-4) || math.Abs(r.FactorBeta-target) > ReserveTol {
 			t.Errorf("target %g: factor %.6f (FORM beta %.5f), want %.6f", target, r.Factor, r.FactorBeta, want)
 		}
 		if !math.IsNaN(r.Added) || r.AddedErr != nil {
@@ -64,7 +62,7 @@ func TestReserveFactorAlone(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		if want := math.Exp((beta1 - target) * d); !near(r1.Factor, want, 1e-4) || math.Abs(r1.FactorBeta-target) > ReserveTol || r1.FORMCalls > 2 || r1.FORMCalls >= r.FORMCalls {
+		if want := fixture.StockyFactor(target); !near(r1.Factor, want, 1e-4) || math.Abs(r1.FactorBeta-target) > ReserveTol || r1.FORMCalls > 2 || r1.FORMCalls >= r.FORMCalls {
 			t.Errorf("target %g: with the own FORM %+v, want the factor %.6f in at most 2 analyses (%d without)", target, r1, want, r.FORMCalls)
 		}
 	}

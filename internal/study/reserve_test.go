@@ -32,16 +32,13 @@ func TestReserveFactorClosedForm(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	vr2 := (1+0.10*0.10)*(1+0.05*0.05) - 1
-	vs2 := 0.20 * 0.20
-	d := math.Sqrt(math.Log((1 + vr2) * (1 + vs2)))
-	beta1 := (math.Log(3e6/1.5e6) + 0.5*math.Log((1+vs2)/(1+vr2))) / d
+	beta1 := fixture.StockyBeta(1)
 	for _, target := range []float64{2.5, 3.1, 3.8, 4.7} {
 		r, err := md.Reserve(context.Background(), target, nil)
 		if err != nil {
 			t.Fatalf("target %g: %v", target, err)
 		}
-		want := math.Exp((beta1 - target) * d)
+		want := fixture.StockyFactor(target)
 		if !near(r.Factor, want, 1e-4) || math.Abs(r.FactorBeta-target) > ReserveTol {
 			t.Errorf("target %g: factor %.6f (FORM beta %.5f), want %.6f", target, r.Factor, r.FactorBeta, want)
 		}
