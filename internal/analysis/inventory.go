@@ -44,11 +44,12 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 	settings := caseSettings(s)
 	fs := memberFORM(s.FORM, main)
 	sys := make([]systemMember, 0, len(inv.Members))
+	same := &sameMembers{}
 	outs := runMembers(ctx, l.Study, &settings, obs, func(i int, ms *sim.Settings) memberOutcome {
 		if ms.Shard.Replays() { // a merge's from the shards (inventory_shard.go)
 			return memberResult(l.Study, i, ms.Shard)
 		}
-		return memberRun(ctx, l.Study, i, ms, fs)
+		return memberRun(ctx, l.Study, i, ms, fs, same)
 	})
 	if len(outs) < len(inv.Members) {
 		ir.warnings = append(ir.warnings, "inventory: interrupted; the members not run are missing")
@@ -77,12 +78,14 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 // runMember runs member i of st's inventory with settings s; it also
 // returns the member's warnings.
 func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs *sim.FORMSettings) (report.Member, *study.Model, []string) {
-	o := memberRun(ctx, st, i, s, fs)
+	o := memberRun(ctx, st, i, s, fs, nil)
 	return o.mr, o.md, o.warns
 }
 
-// memberRun is runMember, giving the member's FORM result too.
-func memberRun(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs *sim.FORMSettings) memberOutcome {
+// memberRun is runMember, giving the member's FORM result too; same,
+// when not nil, holds the reserve factors of the member studies run
+// before.
+func memberRun(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs *sim.FORMSettings, same *sameMembers) memberOutcome {
 	m := st.Inventory.Members[i]
 	mr := report.Member{Name: m.Name, Line: m.Line, Cells: m.Cells}
 	fail := func(err error) memberOutcome {
@@ -126,8 +129,10 @@ func memberRun(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs 
 	}
 	if ms.HasTarget {
 		mr.Verdict = memberVerdict(ms, res)
-		var w string
-		if mr.ReserveFactor, w = memberReserve(ctx, md, ms.Target, fs, settings.FORM, res); w != "" {
+		f, w := same.reserveOf(ctx, memberKey(&m), func() (*float64, string) {
+			return memberReserve(ctx, md, ms.Target, fs, settings.FORM, res)
+		})
+		if mr.ReserveFactor = f; w != "" {
 			warns = append(warns, w)
 		}
 	}
