@@ -51,10 +51,9 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 		}
 		return memberRun(ctx, l.Study, i, ms, fs, same)
 	})
-	if len(outs) < len(inv.Members) {
-		ir.warnings = append(ir.warnings, "inventory: interrupted; the members not run are missing")
-	}
+	cut := len(outs) < len(inv.Members)
 	for i, o := range outs {
+		cut = cut || o.mr.Error == "interrupted"
 		for _, w := range o.warns {
 			ir.warnings = append(ir.warnings, fmt.Sprintf("member %q: %s", inv.Members[i].Name, w))
 		}
@@ -62,6 +61,9 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 		if o.md != nil {
 			sys = append(sys, systemMember{m: o.md.Sim, form: o.form})
 		}
+	}
+	if cut && ctx.Err() != nil {
+		ir.warnings = append(ir.warnings, "inventory: interrupted; the members not run are missing")
 	}
 	if len(sys) == len(inv.Members) && ctx.Err() == nil {
 		obs.Stage("inventory system (joint sampling)")

@@ -86,3 +86,44 @@ func TestMemberReserveAllDesignPoints(t *testing.T) {
 		t.Errorf("screened search (index %.4f at %.4f): factor %v, warning %q", sc.FactorBeta, sc.Factor, got, w)
 	}
 }
+
+// cancelAt cancels its run when member k starts.
+type cancelAt struct {
+	k      int
+	cancel context.CancelFunc
+}
+
+func (c cancelAt) Stage(string) {}
+func (c cancelAt) StartCase(k, n int, what string) {
+	if k == c.k {
+		c.cancel()
+	}
+}
+
+// TestInventoryInterrupted: a run stopped while its members run says so,
+// as it did when they ran one after another, and keeps the members that
+// finished; no system is estimated. Stopped as the last member starts,
+// every member is there, the last one cut short.
+func TestInventoryInterrupted(t *testing.T) {
+	l := loadInventory(t, benchInventory, generatedMembers(6))
+	for _, w := range []int{1, 2} {
+		for _, k := range []int{3, 6} {
+			s := l.Settings(w)
+			ctx, cancel := context.WithCancel(context.Background())
+			ir := runInventory(ctx, l, &s, nil, cancelAt{k: k, cancel: cancel})
+			cancel()
+			cut := 0
+			for _, m := range ir.doc.Members {
+				if m.Error == "interrupted" {
+					cut++
+				}
+			}
+			if ir.doc.System != nil || len(ir.doc.Members) < k || (len(ir.doc.Members) == 6 && cut == 0) {
+				t.Errorf("%d workers, stopped at member %d: %d members (%d cut), system %v", w, k, len(ir.doc.Members), cut, ir.doc.System)
+			}
+			if !strings.Contains(strings.Join(ir.warnings, "\n"), "inventory: interrupted") {
+				t.Errorf("%d workers, stopped at member %d: warnings %q, want the interruption", w, k, ir.warnings)
+			}
+		}
+	}
+}
