@@ -96,6 +96,9 @@ func (e *Evaluation) Text() string {
 	}
 	fmt.Fprintf(&b, "  error term delta ranges %.3f to %.3f\n\n", lo, hi)
 	fmt.Fprintf(&b, "For the study ([capacity]):\n  %s\n", e.ModelFactor)
+	if e.VDelta < noScatter {
+		fmt.Fprintf(&b, "  Warning: V_delta is %.2g: every test lies on b r_t, which real tests do not; check the database\n  (repeated rows, r_e computed rather than measured) before taking a model factor without scatter.\n", e.VDelta)
+	}
 	if e.Count < 10 {
 		fmt.Fprintf(&b, "  Only %d tests: V_delta is itself uncertain; D.8 advises more than 10, and the design values below take the\n  small number into account through k_n of Tables D.1 and D.2.\n", e.Count)
 	}

@@ -120,8 +120,22 @@ func (f *Fit) DesignValues(grtMean, vrt float64) (*Values, error) {
 	return v, nil
 }
 
+// noScatter is the V_delta below which the tests are taken not to
+// scatter about b r_t at all (a study refuses a distribution without
+// spread).
+const noScatter = 1e-6
+
+// NoScatter reports whether every test lies on b r_t (V_delta about 0):
+// real tests scatter, so the database is more likely wrong (repeated
+// rows) than the model exact.
+func (f *Fit) NoScatter() bool { return f.V < noScatter }
+
 // ModelFactor writes the fitted model factor as a study line: a lognormal
-// variable with mean b and coefficient of variation V_delta.
+// variable with mean b and coefficient of variation V_delta, or b alone
+// when the tests do not scatter (NoScatter).
 func (f *Fit) ModelFactor() string {
+	if f.NoScatter() {
+		return "model_factor = " + fmtG(f.B)
+	}
 	return "model_factor = { dist = \"lognormal\", mean = " + fmtG(f.B) + ", cov = " + fmtG(f.V) + " }"
 }
