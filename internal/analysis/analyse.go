@@ -72,7 +72,7 @@ func Run(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Result
 	}
 	if err == nil && !r.Estimate.Incomplete && l.Study.Calibration != nil {
 		obs.Stage("calibration of " + l.Study.Calibration.Factor)
-		r.runCalibration(ctx, s.FORM) // calibration.go
+		r.runCalibration(ctx, s.FORM, obs) // calibration.go
 	}
 	if err == nil && !r.Estimate.Incomplete {
 		// The main result stays the study itself; sweep and variants

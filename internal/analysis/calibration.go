@@ -15,9 +15,9 @@ import (
 // its variants: at every trial value each case is read again with the
 // factor set (so its loads are normalised again) and its beta found by
 // FORM, smooth in the factor. A failure is a warning, not a result.
-func (r *Result) runCalibration(ctx context.Context, fs *sim.FORMSettings) {
+func (r *Result) runCalibration(ctx context.Context, fs *sim.FORMSettings, obs Observer) {
 	st := r.l.Study
-	cal, err := calibrate(ctx, st, fs)
+	cal, err := calibrate(ctx, st, fs, obs)
 	switch {
 	case ctx.Err() != nil:
 		r.Incomplete = "interrupted during the calibration ([calibration]): it is left out"
@@ -115,8 +115,8 @@ func caseSlenderness(st *study.Study, v, i int) float64 {
 
 // calibrate runs assess.Calibrate on the cases of st's calibration
 // (calibrationCases), each weighted by its variant's name ("study" for the
-// study itself).
-func calibrate(ctx context.Context, st *study.Study, fs *sim.FORMSettings) (*assess.Calibration, error) {
+// study itself). obs is told of each value tried.
+func calibrate(ctx context.Context, st *study.Study, fs *sim.FORMSettings, obs Observer) (*assess.Calibration, error) {
 	cs := st.Calibration
 	list := calibrationCases(st)
 	cases := make([]assess.CalibrationCase, len(list))
@@ -127,9 +127,14 @@ func calibrate(ctx context.Context, st *study.Study, fs *sim.FORMSettings) (*ass
 		}
 		cases[k] = assess.CalibrationCase{Name: c.name, Weight: weightOf(cs, key)}
 	}
+	trial := 0
 	beta := func(x float64, k int) (float64, error) {
 		if err := ctx.Err(); err != nil {
 			return 0, err
+		}
+		if k == 0 {
+			trial++
+			obs.Stage(fmt.Sprintf("calibration of %s: value %d tried, %.5g (%d cases each)", cs.Factor, trial, x, len(list)))
 		}
 		return calibrationBeta(ctx, st, list[k].v, list[k].i, x, fs)
 	}

@@ -2,6 +2,7 @@ package analysis
 
 import (
 	"context"
+	"fmt"
 	"math"
 	"strings"
 	"testing"
@@ -255,6 +256,37 @@ func checkSweptCalibration(t *testing.T, text string, target float64, cases []sw
 		got := cal.Cases[i]
 		if !strings.HasPrefix(got.Case, c.prefix) || got.Weight != c.w {
 			t.Errorf("case %d = %+v, want %q... at yield CoV %g, load CoV %g, weight %g", i, got, c.prefix, c.vr, c.vq, c.w)
+		}
+	}
+}
+
+// stages records the stages a run names.
+type stages struct{ names []string }
+
+func (s *stages) Stage(name string)          { s.names = append(s.names, name) }
+func (s *stages) StartCase(int, int, string) {}
+
+// TestCalibrationProgress: the observer is told of every value tried,
+// the first the low end of the range (the scan of assess.MinimiseBounded
+// begins there), the count rising by one each time.
+func TestCalibrationProgress(t *testing.T) {
+	l := mustLoad(t, calibrationStudy("target_beta = 5.2\n"))
+	obs := &stages{}
+	if _, err := Run(context.Background(), l, ptr(l.Settings(1)), obs); err != nil {
+		t.Fatal(err)
+	}
+	var tried []string
+	for _, s := range obs.names {
+		if strings.HasPrefix(s, "calibration of gamma_m1: value ") {
+			tried = append(tried, s)
+		}
+	}
+	if len(tried) < 10 || tried[0] != "calibration of gamma_m1: value 1 tried, 1 (3 cases each)" {
+		t.Fatalf("values tried %q", tried)
+	}
+	for i, s := range tried {
+		if !strings.HasPrefix(s, fmt.Sprintf("calibration of gamma_m1: value %d tried, ", i+1)) {
+			t.Errorf("stage %d is %q", i+1, s)
 		}
 	}
 }
