@@ -79,3 +79,15 @@ func BenchmarkLinearSeries2000(b *testing.B) {
 		linearSeriesPf(ms, d, 1, 2)
 	}
 }
+
+// BenchmarkLinearSeries2000One integrates 2,000 members over one shared
+// normal (the quadrature).
+func BenchmarkLinearSeries2000One(b *testing.B) {
+	ms, _ := inventoryLinear(2000)
+	for i := range ms {
+		ms[i] = newLinearMember(ms[i].Beta, []int{0}, []float64{0.6})
+	}
+	for b.Loop() {
+		linearSeriesPf(ms, 1, 1, 2)
+	}
+}
