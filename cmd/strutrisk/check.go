@@ -1,7 +1,6 @@
 package main
 
 import (
-	"encoding/json"
 	"flag"
 	"fmt"
 	"io"
@@ -52,13 +51,7 @@ func checkCmd(args []string, stdout, stderr io.Writer) int {
 		l.Study.Warnings = append(l.Study.Warnings, fmt.Sprintf("output.dir (line %d): %v; `strutrisk run` refuses it unless --out is given", l.Study.Output.DirLine, err))
 	}
 	if *asJSON {
-		out, err := json.MarshalIndent(l.CheckDocument(), "", "  ")
-		if err != nil {
-			fmt.Fprintf(stderr, "strutrisk: %v\n", err)
-			return exitInternal
-		}
-		stdout.Write(append(out, '\n'))
-		return exitOK
+		return printJSON(l.CheckDocument(), stdout, stderr)
 	}
 	fmt.Fprint(stdout, l.CheckText())
 	return exitOK

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"encoding/json"
 	"errors"
 	"flag"
 	"fmt"
@@ -43,4 +44,24 @@ func flagHelp(fs *flag.FlagSet) string {
 		fmt.Fprintf(&b, "\n      %s\n", use)
 	})
 	return b.String()
+}
+
+// outputFlags adds to fs the flags run and merge share: --out, --json
+// and --require-target.
+func outputFlags(fs *flag.FlagSet, o *runOptions) {
+	fs.StringVar(&o.out, "out", "", "write results into `DIR`, replacing it as a whole (default: [output] dir, else out/<study file name>)")
+	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
+	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
+}
+
+// printJSON prints v as indented JSON on stdout; a value that cannot be
+// encoded is an internal failure.
+func printJSON(v any, stdout, stderr io.Writer) int {
+	out, err := json.MarshalIndent(v, "", "  ")
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
+		return exitInternal
+	}
+	stdout.Write(append(out, '\n'))
+	return exitOK
 }

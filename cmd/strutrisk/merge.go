@@ -29,10 +29,8 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 	o := &runOptions{}
 	var studyPath string
 	fs := flag.NewFlagSet("merge", flag.ContinueOnError)
-	fs.StringVar(&o.out, "out", "", "write results into `DIR`, replacing it as a whole (default: [output] dir, else out/<study file name>)")
+	outputFlags(fs, o)
 	fs.StringVar(&studyPath, "study", "", "the study `FILE` (default: the path the shards read)")
-	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
-	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
 	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores); results do not depend on it")
 	dirs, help, err := parseArgs(fs, args)
 	if help {

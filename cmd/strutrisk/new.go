@@ -7,6 +7,7 @@ import (
 	"io"
 	"strings"
 	"strutrisk/internal/report"
+	"strutrisk/internal/study"
 )
 
 //go:embed starter.toml
@@ -38,23 +39,6 @@ func newCmd(args []string, stdout, stderr io.Writer) int {
 	if len(pos) == 1 {
 		title = pos[0]
 	}
-	fmt.Fprint(stdout, strings.Replace(starter, "{{TITLE}}", tomlEscape(title), 1))
+	fmt.Fprint(stdout, strings.Replace(starter, "{{TITLE}}", study.TOMLString(title), 1))
 	return exitOK
-}
-
-// tomlEscape escapes s for a TOML basic string.
-func tomlEscape(s string) string {
-	var b strings.Builder
-	for _, r := range s {
-		switch {
-		case r == '"' || r == '\\':
-			b.WriteByte('\\')
-			b.WriteRune(r)
-		case r < 0x20 || r == 0x7f:
-			fmt.Fprintf(&b, "\\u%04X", r)
-		default:
-			b.WriteRune(r)
-		}
-	}
-	return b.String()
 }

@@ -2,7 +2,6 @@ package main
 
 import (
 	"context"
-	"encoding/json"
 	"errors"
 	"flag"
 	"fmt"
@@ -110,12 +109,10 @@ func runAndWrite(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int) {
 	o := &runOptions{}
 	fs := flag.NewFlagSet("run", flag.ContinueOnError)
-	fs.StringVar(&o.out, "out", "", "write results into `DIR`, replacing it as a whole (default: [output] dir, else out/<study file name>)")
+	outputFlags(fs, o)
 	fs.Uint64Var(&o.seed, "seed", 0, "seed of every random stream (`N`; default: [analysis] seed)")
 	fs.Int64Var(&o.samples, "samples", 0, "at most `N` model evaluations (default: [analysis] samples)")
 	fs.StringVar(&o.method, "method", "", "estimator `M`: "+strings.Join(sim.MethodNames(), ", "))
-	fs.BoolVar(&o.json, "json", false, "print the result document as JSON on standard output, nothing else there")
-	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
 	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
 	fs.StringVar(&o.shard, "shard", "", "run part `K/N` (K from 0) of the sampling and write its state for strutrisk merge; \"env\" takes K and N from the scheduler (SLURM_ARRAY_TASK_ID and SLURM_ARRAY_TASK_COUNT, or JOB_COMPLETION_INDEX with --shard-count or STRUTRISK_SHARD_COUNT)")
 	fs.IntVar(&o.shardCount, "shard-count", 0, "number of shards `N` when the index comes from JOB_COMPLETION_INDEX (Kubernetes Indexed Jobs); implies --shard env")
@@ -184,12 +181,9 @@ func writeRun(o *runOptions, b *report.Bundle, formats []string, folder *outdir.
 		paths, werr = folder.Commit(files)
 	}
 	if o.json {
-		out, err := json.MarshalIndent(b.Doc, "", "  ")
-		if err != nil {
-			fmt.Fprintf(stderr, "strutrisk: %v\n", err)
-			return exitInternal
+		if code := printJSON(b.Doc, stdout, stderr); code != exitOK {
+			return code
 		}
-		stdout.Write(append(out, '\n'))
 	} else {
 		// Where the files went is not part of the summary: standard error.
 		fmt.Fprint(stdout, report.SummaryText(b))
