@@ -4,8 +4,10 @@ import (
 	"context"
 	"fmt"
 	"math"
+	"strings"
 
 	"strutrisk/internal/report"
+	"strutrisk/internal/study"
 	"strutrisk/sim"
 )
 
@@ -19,14 +21,16 @@ const maxSystemEvaluations = 200_000_000
 func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMember, s *sim.Settings) error {
 	inv := l.Study.Inventory
 	by := map[string]string{}
-	for _, sh := range inv.Shared {
-		by[sh.Key] = sh.By
-	}
 	si := sharedIndex{}
 	for i := range sys {
 		t, err := sim.NewTransform(sys[i].m)
 		if err != nil {
 			return fmt.Errorf("member %q: %v", inv.Members[i].Name, err)
+		}
+		for _, v := range t.Vars() {
+			if j := sharedOf(inv.Shared, v.Name); j >= 0 {
+				by[v.Name] = inv.Shared[j].By
+			}
 		}
 		if err := checkSharedCorrelation(t, by); err != nil {
 			return fmt.Errorf("member %q: %v", inv.Members[i].Name, err)
@@ -36,10 +40,8 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 		sys[i].shared = make([]int, t.Dim())
 		for k, v := range t.Vars() {
 			sys[i].shared[k] = -1
-			for j, sh := range inv.Shared {
-				if sh.Key == v.Name {
-					sys[i].shared[k] = si.of(sh.Key, groups[j])
-				}
+			if j := sharedOf(inv.Shared, v.Name); j >= 0 {
+				sys[i].shared[k] = si.of(v.Name, groups[j])
 			}
 		}
 	}
@@ -56,6 +58,21 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 		ir.doc.System = ir.systemDoc(c, len(si), l.Study.Analysis.TargetCoV)
 	}
 	return ir.addFormSystem(ctx, sys, len(si), s)
+}
+
+// sharedOf returns the index of the shared input that variable name
+// belongs to, -1 for none: the key itself or one of its sub-variables
+// (a shared load's companion, loads.imposed.companion or
+// loads.imposed.companion.snow, is shared the same way, each its own
+// normal). The longest matching key wins.
+func sharedOf(shared []study.SharedInput, name string) int {
+	at := -1
+	for j, sh := range shared {
+		if (name == sh.Key || strings.HasPrefix(name, sh.Key+".")) && (at < 0 || len(sh.Key) > len(shared[at].Key)) {
+			at = j
+		}
+	}
+	return at
 }
 
 // systemDoc describes the joint sample's counts c, and gives each member
