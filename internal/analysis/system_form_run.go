@@ -43,6 +43,9 @@ func (ir *inventoryRun) addFormSystem(ctx context.Context, sys []systemMember, n
 	if len(f.Fallback) > 0 {
 		ir.warnings = append(ir.warnings, fmt.Sprintf("inventory: first-order system: FORM did not converge for %s; taken as independent of the other members with their sampled pf", listNames(f.Fallback)))
 	}
+	if w := f.errorWarning(); w != "" {
+		ir.warnings = append(ir.warnings, "inventory: "+w)
+	}
 	var w string
 	d.Headline, w = systemHeadline(d, f.Pf)
 	if w != "" {
@@ -82,4 +85,14 @@ func listNames(names []string) string {
 		q = append(q, fmt.Sprintf("%q", n))
 	}
 	return "member(s) " + strings.Join(q, ", ")
+}
+
+// errorWarning warns when the integration's error is above 1 % of the
+// first-order pf (members whose margins are nearly all shared inputs
+// make the integrand over one shared normal a step).
+func (f *seriesIntegral) errorWarning() string {
+	if !(f.Err > 0.01*f.Pf) {
+		return ""
+	}
+	return fmt.Sprintf("the first-order system pf %.3g carries an integration error of %.2g (%.2g %% of it): read it to that precision", f.Pf, f.Err, 100*f.Err/f.Pf)
 }

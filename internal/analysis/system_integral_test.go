@@ -2,6 +2,7 @@ package analysis
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/stat/distuv"
@@ -89,5 +90,25 @@ func BenchmarkLinearSeries2000One(b *testing.B) {
 	}
 	for b.Loop() {
 		linearSeriesPf(ms, 1, 1, 2)
+	}
+}
+
+// TestLinearSeriesStep checks members whose margins are all the one
+// shared normal (a = 1): each fails when s < -beta_i, so the system
+// fails when s < -min beta, pf = Phi(-3) exactly; the quadrature of the
+// step is rough, and its stated error must cover the truth and be warned
+// of above 1 %.
+func TestLinearSeriesStep(t *testing.T) {
+	ms := []linearMember{newLinearMember(3, []int{0}, []float64{1}), newLinearMember(3.3, []int{0}, []float64{1})}
+	r := linearSeriesPf(ms, 1, 0, 1)
+	want := distuv.UnitNormal.CDF(-3)
+	if math.Abs(r.Pf-want) > r.Err || r.Err > 0.05*want {
+		t.Errorf("pf %.6g, error %.2g; want %.6g", r.Pf, r.Err, want)
+	}
+	if w := r.errorWarning(); (r.Err > 0.01*r.Pf) != (w != "") {
+		t.Errorf("error %.2g of pf %.3g: warning %q", r.Err, r.Pf, w)
+	}
+	if w := (&seriesIntegral{Pf: 1e-3, Err: 2e-5}).errorWarning(); !strings.Contains(w, "2 %") {
+		t.Errorf("warning %q", w)
 	}
 }
