@@ -15,7 +15,7 @@ output folder DIR per shard) into the results one machine would have
 written: results.json, summary.txt, the CSV files and the report, equal
 bit for bit but for the timings. Each DIR holds a ` + shardstate.FileName + `.
 The shards must be 0..N-1 of one split, each given once, of the same
-study file (unchanged), tool version and settings; otherwise nothing is
+study file and inventory file (unchanged), tool version and settings; otherwise nothing is
 merged and the exit status is 2. The study is read from where the shards
 read it, unless --study names it (it must have the same content). Steps
 that follow from the merged estimate (FORM, sensitivities, reserve
@@ -63,6 +63,10 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 	l, code := load(studyPath, stderr)
 	if code != exitOK {
 		return code
+	}
+	if err := states[0].CheckInventory(inventoryPath(l.Study)); err != nil {
+		fmt.Fprintf(stderr, "strutrisk merge: nothing merged: %v\n", err)
+		return exitInput
 	}
 	settings := l.Settings(o.workers)
 	states[0].Settings.Apply(&settings)

@@ -10,6 +10,7 @@ import (
 	"strutrisk/internal/outdir"
 	"strutrisk/internal/progress"
 	"strutrisk/internal/shardstate"
+	"strutrisk/internal/study"
 	"strutrisk/sim"
 )
 
@@ -30,6 +31,9 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		return exitInput
 	}
 	id, err := shardstate.Identify(path)
+	if err == nil {
+		id.Inventory, err = shardstate.InventoryHash(inventoryPath(st))
+	}
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 		return exitInput
@@ -66,4 +70,13 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 	}
 	fmt.Fprintf(stderr, "strutrisk: shard %d of %d: %d sampling run%s and %d other result%s recorded in %s\n", k, n, len(state.Runs), plural(len(state.Runs)), len(state.Notes), plural(len(state.Notes)), filepath.Join(folder.Path, shardstate.FileName))
 	return exitOK
+}
+
+// inventoryPath is where the study's inventory file was read from, ""
+// when it has none.
+func inventoryPath(st *study.Study) string {
+	if st.Inventory == nil {
+		return ""
+	}
+	return st.Inventory.Path
 }

@@ -90,3 +90,59 @@ func TestShardInventoryMembers(t *testing.T) {
 		os.RemoveAll(filepath.Join(dir, itoa(n), "shard"))
 	}
 }
+
+// TestShardInventoryFileChanged checks that the shards of an inventory
+// study refuse to merge when its CSV file changed between the shards, or
+// after them, exit 2: each shard runs its own members from the file it
+// read, so a merge would mix two buildings. (The study file's own hash
+// did not cover the CSV before.)
+func TestShardInventoryFileChanged(t *testing.T) {
+	dir := t.TempDir()
+	text, err := os.ReadFile("../../studies/building-inventory.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := strings.Replace(string(text), "samples    = 1_000_000", "samples    = 4_000", 1)
+	s = strings.Replace(s, `method     = "auto"`, `method     = "monte-carlo"`, 1)
+	csv, err := os.ReadFile("../../studies/building-inventory.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	inv := writeStudy(t, s)
+	file := filepath.Join(filepath.Dir(inv), "building-inventory.csv")
+	write := func(data []byte) {
+		if err := os.WriteFile(file, data, 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	shard := func(k int) string {
+		d := filepath.Join(dir, "s"+itoa(k))
+		if code, _, errs := invoke(t, "run", inv, "--shard", itoa(k)+"/2", "--out", d); code != exitOK {
+			t.Fatalf("shard %d: exit %d: %s", k, code, errs)
+		}
+		return d
+	}
+	// An edited member: one more line of comment changes no member but
+	// the bytes; a changed value is what matters to the user.
+	edited := []byte(strings.Replace(string(csv), "\n", "\n", 1) + "\n")
+	write(csv)
+	d0 := shard(0)
+	write(edited)
+	d1 := shard(1)
+	code, _, errs := invoke(t, "merge", d0, d1, "--out", filepath.Join(dir, "m1"))
+	if code != exitInput || !strings.Contains(errs, "another inventory file") {
+		t.Errorf("shards of two inventory files: exit %d, %q", code, errs)
+	}
+	// Both shards of the edited file, the file changed back before the merge.
+	d0 = shard(0)
+	write(csv)
+	code, _, errs = invoke(t, "merge", d0, d1, "--out", filepath.Join(dir, "m2"))
+	if code != exitInput || !strings.Contains(errs, "is not the one the shards ran") {
+		t.Errorf("inventory file changed after the shards: exit %d, %q", code, errs)
+	}
+	// Unchanged: merged.
+	write(edited)
+	if code, _, errs := invoke(t, "merge", d0, d1, "--out", filepath.Join(dir, "m3")); code != exitOK {
+		t.Errorf("unchanged inventory file: exit %d: %s", code, errs)
+	}
+}

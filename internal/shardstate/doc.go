@@ -3,7 +3,7 @@
 // shard for the merge.
 //
 // The file, FileName, is gzip-compressed JSON (State). Format names it and
-// FormatVersion (2) versions it; a reader refuses any other version. Each
+// FormatVersion (3) versions it; a reader refuses any other version. Each
 // recorded sampling run (sim.ShardRun) holds, per block of the run that
 // the shard evaluated, the sample and failure counts and, per output and
 // for g, the count, NaN count, the moment sums, extremes and the sparse
@@ -11,6 +11,7 @@
 // patterns so that they read back exactly. Notes hold, by key, what the
 // shard computed above sampling (sim.Shard.Note): the study's FORM result,
 // the inventory members it owns, its blocks of an inventory's joint
-// sample (version 2; version 1 had none). Writing the same state twice
+// sample (version 2; version 1 had none). Version 3 adds the hash of the
+// study's inventory file, as a shard runs members of it. Writing the same state twice
 // gives the same bytes.
 package shardstate

@@ -34,6 +34,9 @@ func Join(states []*State, dirs []string) (*sim.Shard, error) {
 		case st.StudySHA256 != first.StudySHA256:
 			msgs = append(msgs, fmt.Sprintf("%s ran another study (or the study file changed): %s, not %s", where, st.Study, first.Study))
 			continue
+		case st.InventorySHA256 != first.InventorySHA256:
+			msgs = append(msgs, fmt.Sprintf("%s ran another inventory file (or it changed between shards) than %s", where, dirs[0]))
+			continue
 		case st.ToolVersion != first.ToolVersion:
 			msgs = append(msgs, fmt.Sprintf("%s ran strutrisk %s, %s ran %s", where, st.ToolVersion, dirs[0], first.ToolVersion))
 			continue

@@ -8,9 +8,12 @@ import (
 )
 
 // StudyID identifies the study file of a split run: its path as given,
-// its absolute path and the hash of its bytes.
+// its absolute path and the hash of its bytes; Inventory is the hash of
+// the bytes of its inventory's CSV file, "" when it has none (see
+// InventoryHash), as members are split between shards.
 type StudyID struct {
 	Path, Abs, SHA256 string
+	Inventory         string
 }
 
 // Identify reads the study file at path for its StudyID.
@@ -29,7 +32,7 @@ func Identify(path string) (StudyID, error) {
 // Record is the state of a shard of the study id, run by the tool version
 // tool with settings s, whose Shard holds what it recorded.
 func Record(tool string, id StudyID, s *sim.Settings) *State {
-	return &State{ToolVersion: tool, Study: id.Path, StudyAbs: id.Abs, StudySHA256: id.SHA256,
+	return &State{ToolVersion: tool, Study: id.Path, StudyAbs: id.Abs, StudySHA256: id.SHA256, InventorySHA256: id.Inventory,
 		Shard: s.Shard.Index, Shards: s.Shard.Count, Settings: SettingsOf(s), Runs: s.Shard.Runs(), Notes: s.Shard.Notes()}
 }
 
@@ -73,4 +76,27 @@ func (st *State) Locate(given string) (string, error) {
 		return "", fmt.Errorf("%s is not the study the shards ran (missing or changed since): give it with --study", path)
 	}
 	return path, nil
+}
+
+// InventoryHash returns the hex SHA-256 of the inventory file read from
+// path ("" for a study without one: path ""). A shard records it and a
+// merge compares it, as the members a shard ran came from that file.
+func InventoryHash(path string) (string, error) {
+	if path == "" {
+		return "", nil
+	}
+	return HashFile(path)
+}
+
+// CheckInventory says whether the inventory file at path (the merge's
+// study's, "" when none) is the one the shards of st ran.
+func (st *State) CheckInventory(path string) error {
+	h, err := InventoryHash(path)
+	if err != nil {
+		return err
+	}
+	if h != st.InventorySHA256 {
+		return fmt.Errorf("the inventory file %s is not the one the shards ran (changed since): run the shards again", path)
+	}
+	return nil
 }

@@ -20,7 +20,7 @@ const FileName = "shard-state.json.gz"
 // Format and FormatVersion identify the file.
 const (
 	Format        = "strutrisk-shard-state"
-	FormatVersion = 2
+	FormatVersion = 3
 )
 
 // Settings are the sampling settings a shard ran with; the merge runs
@@ -40,12 +40,15 @@ type State struct {
 	// Study is the study file's path as the shard was given it (the
 	// results name it so), StudyAbs its absolute path when the shard ran
 	// and StudySHA256 the hash of its bytes.
-	Study       string   `json:"study"`
-	StudyAbs    string   `json:"study_abs"`
-	StudySHA256 string   `json:"study_sha256"`
-	Shard       int      `json:"shard"`
-	Shards      int      `json:"shards"`
-	Settings    Settings `json:"settings"`
+	Study       string `json:"study"`
+	StudyAbs    string `json:"study_abs"`
+	StudySHA256 string `json:"study_sha256"`
+	// InventorySHA256 is the hash of the bytes of the study's inventory
+	// file, absent for a study without one.
+	InventorySHA256 string   `json:"inventory_sha256,omitempty"`
+	Shard           int      `json:"shard"`
+	Shards          int      `json:"shards"`
+	Settings        Settings `json:"settings"`
 	// Runs are the sampling runs of the shard, by key.
 	Runs []*sim.ShardRun `json:"runs"`
 	// Notes are the results of the steps above sampling the shard ran
