@@ -43,7 +43,7 @@ func (r *Result) fillDesign(ff *report.FORM) {
 		ff.CharacteristicBasis[d.Name] = d.Basis
 	}
 	ff.DesignNote = "Design values at " + whose + ", along the FORM direction alpha of the most probable design point (EN 1990 Annex C, C.7): x_d = F^-1(Phi(-alpha beta)) for an independent input. " +
-		"An input is a resistance when alpha > 0 (the margin grows with it), an action when alpha < 0; bow and eccentricity act by their magnitude. " +
+		"An input is a resistance when alpha > 0 (the margin grows with it), an action when alpha < 0; bow and eccentricity act by their magnitude; a load and its companion are actions whatever alpha. " +
 		"Partial factor x_k / x_d for a resistance, x_d / x_k for an action."
 	if len(f.Points) > 1 {
 		ff.DesignNote += fmt.Sprintf(" FORM found %d design points; the values follow the most probable one only.", len(f.Points))

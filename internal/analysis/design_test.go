@@ -27,3 +27,37 @@ func TestDesignValuesNotConverged(t *testing.T) {
 		}
 	}
 }
+
+// TestDesignRolesOfLoads: with two variable loads combined by Turkstra's
+// rule, a load and its companion are actions (EN 1990:2002 1.5.3.1, an
+// action is a force applied to the structure; from memory) even where
+// the design point gives them alpha = 0, as the load that does not enter
+// the governing case has; the resistance side keeps its role by alpha.
+func TestDesignRolesOfLoads(t *testing.T) {
+	l := mustLoad(t, twoLoadsStudy[:strings.Index(twoLoadsStudy, "[inventory]")])
+	vars := l.Model.Sim.Vars
+	p := sim.DesignPoint{Alpha: make([]float64, len(vars))}
+	loads := 0
+	for i, v := range vars {
+		if v.Name == "material.yield" {
+			p.Alpha[i] = 1
+		}
+	}
+	dv, err := l.Model.DesignValues(p, 3.8)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, d := range dv {
+		want := "resistance"
+		if strings.HasPrefix(d.Name, "loads.") {
+			want = "action"
+			loads++
+		}
+		if (d.Name == "material.yield" || want == "action") && d.Role != want {
+			t.Errorf("%s: role %q, want %q", d.Name, d.Role, want)
+		}
+	}
+	if loads < 5 { // dead, stock, snow and the two companions
+		t.Errorf("%d load variables, want the dead load, two variable loads and their companions", loads)
+	}
+}

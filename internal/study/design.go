@@ -73,7 +73,8 @@ func (md *Model) isPermanent(q *Quantity) bool {
 // factor, in N, mm and MPa: a bow or eccentricity written as L/n is
 // converted with the member length at the same point. Bow and
 // eccentricity act by their magnitude, so theirs are magnitudes and they
-// count as actions.
+// count as actions; loads and their companions are actions whatever the
+// sign of alpha.
 func (md *Model) DesignValues(p sim.DesignPoint, beta float64) ([]assess.DesignValue, error) {
 	n := len(md.Sim.Vars)
 	char := make([]assess.Characteristic, n)
@@ -98,6 +99,12 @@ func (md *Model) DesignValues(p sim.DesignPoint, beta float64) ([]assess.DesignV
 			// Either sign of a bow is as bad: a larger magnitude acts
 			// against the member, whatever the sign of alpha.
 			d.Design, d.Role = math.Abs(d.Design), assess.Action
+		}
+		if md.isLoad(md.quantity(i)) {
+			// A load and its companion act on the member even where
+			// alpha is 0 (a load that does not enter the governing
+			// case of a combination): never a resistance.
+			d.Role = assess.Action
 		}
 		d.Factor = assess.PartialFactor(d.Role, d.Characteristic, d.Design)
 	}
