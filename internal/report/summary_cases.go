@@ -123,18 +123,7 @@ func sweepText(b *Bundle, beta func(*Point) string) string {
 		if showLam {
 			fmt.Fprintf(&w, " %8.3f", b.SweepLambda[x])
 		}
-		for s := range c.Grid {
-			pt := c.Grid[s][i]
-			switch {
-			case pt == nil:
-				fmt.Fprintf(&w, " %7s", "-")
-			case len(c.Grid) > 1:
-				fmt.Fprintf(&w, " %7s", beta(pt))
-			default:
-				fmt.Fprintf(&w, " %7s %10s", beta(pt), PfText(pt.Pf))
-			}
-		}
-		w.WriteString("\n")
+		writeCaseCells(&w, c.Grid, i, beta)
 	}
 	return w.String()
 }
@@ -158,4 +147,22 @@ func sweepDecimals(values []float64) int {
 		}
 	}
 	return min(dec, 6)
+}
+
+// writeCaseCells ends a row of a sweep's table with point i of each
+// series of grid: beta alone when there are several series, beta and pf
+// when there is one, "-" where the case has no result.
+func writeCaseCells(w *strings.Builder, grid [][]*Point, i int, beta func(*Point) string) {
+	for s := range grid {
+		pt := grid[s][i]
+		switch {
+		case pt == nil:
+			fmt.Fprintf(w, " %7s", "-")
+		case len(grid) > 1:
+			fmt.Fprintf(w, " %7s", beta(pt))
+		default:
+			fmt.Fprintf(w, " %7s %10s", beta(pt), PfText(pt.Pf))
+		}
+	}
+	w.WriteString("\n")
 }

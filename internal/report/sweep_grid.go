@@ -131,18 +131,7 @@ func gridText(b *Bundle, beta func(*Point) string) string {
 				fmt.Fprintf(&w, " %8.3f", l)
 			}
 		}
-		for s := range c.Grid {
-			pt := c.Grid[s][i]
-			switch {
-			case pt == nil:
-				fmt.Fprintf(&w, " %7s", "-")
-			case len(c.Grid) > 1:
-				fmt.Fprintf(&w, " %7s", beta(pt))
-			default:
-				fmt.Fprintf(&w, " %7s %10s", beta(pt), PfText(pt.Pf))
-			}
-		}
-		w.WriteString("\n")
+		writeCaseCells(&w, c.Grid, i, beta)
 	}
 	return w.String()
 }
