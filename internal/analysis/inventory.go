@@ -52,16 +52,16 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 		return memberRun(ctx, l.Study, i, ms, fs, same)
 	})
 	cut := len(outs) < len(inv.Members)
+	names, warns := make([]string, len(outs)), make([][]string, len(outs))
 	for i, o := range outs {
 		cut = cut || o.mr.Error == "interrupted"
-		for _, w := range o.warns {
-			ir.warnings = append(ir.warnings, fmt.Sprintf("member %q: %s", inv.Members[i].Name, w))
-		}
+		names[i], warns[i] = inv.Members[i].Name, o.warns
 		ir.doc.Members = append(ir.doc.Members, o.mr)
 		if o.md != nil {
 			sys = append(sys, systemMember{m: o.md.Sim, form: o.form})
 		}
 	}
+	ir.warnings = append(ir.warnings, groupMemberWarnings(names, warns, len(inv.Members))...)
 	if cut && ctx.Err() != nil {
 		ir.warnings = append(ir.warnings, "inventory: interrupted; the members not run are missing")
 	}
