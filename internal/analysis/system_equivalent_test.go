@@ -77,3 +77,43 @@ func TestFallbackMember(t *testing.T) {
 		}
 	}
 }
+
+// TestEquivalentAlphaChainRule checks the equivalent plane's direction,
+// taken per design point by the chain rule, against its definition
+// (Gollwitzer & Rackwitz 1983, from memory): the central difference of
+// the series system's index under a shift of the mean of U_k, on three
+// design points in four dimensions, to 1e-6.
+func TestEquivalentAlphaChainRule(t *testing.T) {
+	unit := func(v ...float64) []float64 {
+		var n float64
+		for _, x := range v {
+			n += x * x
+		}
+		for i := range v {
+			v[i] /= math.Sqrt(n)
+		}
+		return v
+	}
+	pts := []sim.DesignPoint{
+		{Beta: 3.1, Alpha: unit(0.6, 0.5, 0.3, 0.2)},
+		{Beta: 3.3, Alpha: unit(0.5, -0.2, 0.7, 0.1)},
+		{Beta: 3.6, Alpha: unit(0.7, 0.1, -0.1, 0.6)},
+	}
+	fr := &sim.FORMResult{Points: pts, Converged: true}
+	d := pointSensitivities(fr)
+	for k := range 4 {
+		const eps = 1e-4
+		at := func(e float64) float64 {
+			beta := make([]float64, len(pts))
+			alpha := make([][]float64, len(pts))
+			for j, p := range pts {
+				beta[j], alpha[j] = p.Beta+e*p.Alpha[k], p.Alpha
+			}
+			return sim.BetaFromPf(sim.SeriesPf(beta, alpha))
+		}
+		want := (at(eps) - at(-eps)) / (2 * eps)
+		if got := equivalentAlpha(fr, d, k); math.Abs(got-want) > 1e-6 {
+			t.Errorf("component %d: %.9f by the chain rule, %.9f by its definition", k, got, want)
+		}
+	}
+}

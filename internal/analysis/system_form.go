@@ -78,9 +78,11 @@ func linearise(fr *sim.FORMResult, shared []int) (linearMember, memberLinearForm
 	var a []float64
 	how := linearPoint
 	beta := fr.Points[0].Beta
+	var dBeta []float64
 	if len(fr.Points) > 1 {
 		how = linearEquivalent
 		beta = fr.Beta
+		dBeta = pointSensitivities(fr)
 	}
 	for k, j := range shared {
 		if j < 0 {
@@ -90,10 +92,32 @@ func linearise(fr *sim.FORMResult, shared []int) (linearMember, memberLinearForm
 		if how == linearPoint {
 			a = append(a, fr.Points[0].Alpha[k])
 		} else {
-			a = append(a, equivalentAlpha(fr, k))
+			a = append(a, equivalentAlpha(fr, dBeta, k))
 		}
 	}
 	return newLinearMember(beta, idx, a), how, true
+}
+
+// pointSensitivities are d beta_e / d beta_j of the index beta_e of the
+// member's series system of design points to the index of each point j,
+// by central differences.
+func pointSensitivities(fr *sim.FORMResult) []float64 {
+	const eps = 1e-4
+	beta := make([]float64, len(fr.Points))
+	alpha := make([][]float64, len(fr.Points))
+	for j, p := range fr.Points {
+		beta[j], alpha[j] = p.Beta, p.Alpha
+	}
+	d := make([]float64, len(fr.Points))
+	for j, p := range fr.Points {
+		beta[j] = p.Beta + eps
+		hi := sim.BetaFromPf(sim.SeriesPf(beta, alpha))
+		beta[j] = p.Beta - eps
+		lo := sim.BetaFromPf(sim.SeriesPf(beta, alpha))
+		beta[j] = p.Beta
+		d[j] = (hi - lo) / (2 * eps)
+	}
+	return d
 }
 
 // equivalentAlpha is component k of the unit direction of the plane
@@ -102,19 +126,15 @@ func linearise(fr *sim.FORMResult, shared []int) (linearMember, memberLinearForm
 // reliability", Reliability Engineering 5, 1983, from memory): the
 // sensitivity d beta_e / d eps of the system's index to a shift eps of
 // the mean of U_k, under which point j's index becomes beta_j + eps
-// alpha_jk; by central differences.
-func equivalentAlpha(fr *sim.FORMResult, k int) float64 {
-	const eps = 1e-4
-	beta := make([]float64, len(fr.Points))
-	alpha := make([][]float64, len(fr.Points))
-	at := func(e float64) float64 {
-		for j, p := range fr.Points {
-			beta[j] = p.Beta + e*p.Alpha[k]
-			alpha[j] = p.Alpha
-		}
-		return sim.BetaFromPf(sim.SeriesPf(beta, alpha))
+// alpha_jk, so by the chain rule the sum over the points of
+// dBeta[j] alpha_jk, dBeta being pointSensitivities: one pair of system
+// evaluations per design point, not per shared input.
+func equivalentAlpha(fr *sim.FORMResult, dBeta []float64, k int) float64 {
+	var a float64
+	for j, p := range fr.Points {
+		a += dBeta[j] * p.Alpha[k]
 	}
-	return (at(eps) - at(-eps)) / (2 * eps)
+	return a
 }
 
 // fallbackMember is a member without a usable design point, taken as
@@ -141,17 +161,22 @@ type formSystem struct {
 // bounds, in the order of sys.
 func linearSystem(sys []systemMember, forms []*sim.FORMResult, nShared int, names []string, pf, pfHigh []float64, seed uint64, workers int) formSystem {
 	lin := make([]linearMember, len(sys))
-	var out formSystem
-	for i := range sys {
+	hows := make([]memberLinearForm, len(sys))
+	parallelFor(len(sys), workers, func(i int) {
 		m, how, ok := linearise(forms[i], sys[i].shared)
-		switch {
-		case !ok:
-			m = fallbackMember(pf[i], pfHigh[i])
+		if !ok {
+			m, how = fallbackMember(pf[i], pfHigh[i]), linearFallback
+		}
+		lin[i], hows[i] = m, how
+	})
+	var out formSystem
+	for i, how := range hows {
+		switch how {
+		case linearFallback:
 			out.Fallback = append(out.Fallback, names[i])
-		case how == linearEquivalent:
+		case linearEquivalent:
 			out.Equivalent = append(out.Equivalent, names[i])
 		}
-		lin[i] = m
 	}
 	out.seriesIntegral = linearSeriesPf(lin, nShared, seed, workers)
 	return out
@@ -167,4 +192,25 @@ func (f *formSystem) describe() string {
 		s += fmt.Sprintf("; %d member(s) without a converged FORM taken as independent with their sampled pf", n)
 	}
 	return s
+}
+
+// parallelFor calls f(i) for i in 0..n-1 on up to workers goroutines;
+// f must write only to its own index.
+func parallelFor(n, workers int, f func(i int)) {
+	next := make(chan int)
+	var wg sync.WaitGroup
+	for range max(1, min(workers, n)) {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for i := range next {
+				f(i)
+			}
+		}()
+	}
+	for i := range n {
+		next <- i
+	}
+	close(next)
+	wg.Wait()
 }
