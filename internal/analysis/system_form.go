@@ -99,8 +99,9 @@ func linearise(fr *sim.FORMResult, shared []int) (linearMember, memberLinearForm
 }
 
 // pointSensitivities are d beta_e / d beta_j of the index beta_e of the
-// member's series system of design points to the index of each point j,
-// by central differences.
+// member's series system of design points to the index of each point j:
+// exact for up to three points (sim.SeriesPfGradient), else by central
+// differences.
 func pointSensitivities(fr *sim.FORMResult) []float64 {
 	const eps = 1e-4
 	beta := make([]float64, len(fr.Points))
@@ -109,6 +110,15 @@ func pointSensitivities(fr *sim.FORMResult) []float64 {
 		beta[j], alpha[j] = p.Beta, p.Alpha
 	}
 	d := make([]float64, len(fr.Points))
+	if g, ok := sim.SeriesPfGradient(beta, alpha); ok {
+		// d beta_e / d beta_j = -(d pf / d beta_j) / phi(beta_e).
+		be := sim.BetaFromPf(sim.SeriesPf(beta, alpha))
+		phi := math.Exp(-be*be/2) / math.Sqrt(2*math.Pi)
+		for j := range d {
+			d[j] = -g[j] / phi
+		}
+		return d
+	}
 	for j, p := range fr.Points {
 		beta[j] = p.Beta + eps
 		hi := sim.BetaFromPf(sim.SeriesPf(beta, alpha))
