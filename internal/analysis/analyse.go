@@ -4,6 +4,7 @@ import (
 	"context"
 	"fmt"
 	"math"
+	"runtime"
 
 	"strutrisk/internal/assess"
 	"strutrisk/internal/report"
@@ -40,6 +41,13 @@ type Result struct {
 // capacity model; workers 0 takes every core.
 func (l *Loaded) Settings(workers int) sim.Settings {
 	st := l.Study
+	if workers <= 0 {
+		// Resolved here, not left 0 for sim to resolve: the steps above
+		// sampling (inventory members, the joint sample of a system, the
+		// first-order system) share out work by this count, and took one
+		// core with 0.
+		workers = runtime.NumCPU()
+	}
 	s := l.Model.SimSettings(sim.Settings{
 		Method:    st.Analysis.Method,
 		Samples:   st.Analysis.Samples,
