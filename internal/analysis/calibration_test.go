@@ -70,20 +70,16 @@ range = [1.0, 2.0]
 func TestCalibrationClosedForm(t *testing.T) {
 	const target = 5.2 // EN 1990 Table B2, RC3, 1 year (from memory)
 	l := mustLoad(t, calibrationStudy("target_beta = 5.2\nweights = { study = 2, steady = 0.5 }\n"))
-	z05, z98 := distuv.UnitNormal.Quantile(0.05), distuv.UnitNormal.Quantile(0.98)
 	cases := []struct {
 		name      string
 		vr, vq, w float64
 	}{{"study", 0.07, 0.2, 2}, {"steady", 0.05, 0.1, 0.5}, {"snow", 0.10, 0.3, 1}}
-	var num, den float64
+	var sc []sweptCase
 	for _, c := range cases {
-		sr, sq := math.Sqrt(math.Log1p(c.vr*c.vr)), math.Sqrt(math.Log1p(c.vq*c.vq))
-		s := math.Hypot(sr, sq)
-		ci := math.Log(1.5) - z05*sr + z98*sq
-		num += c.w / s * (target - ci/s)
-		den += c.w / (s * s)
+		sc = append(sc, sweptCase{vr: c.vr, vq: c.vq, w: c.w})
 	}
-	want := math.Exp(num / den)
+	want := closedFormGamma(target, sc)
+	z05, z98 := distuv.UnitNormal.Quantile(0.05), distuv.UnitNormal.Quantile(0.98)
 	r, err := Run(context.Background(), l, ptr(l.Settings(1)), nil)
 	if err != nil {
 		t.Fatal(err)
@@ -227,16 +223,7 @@ values = [0.1, 0.3]`), 5.6, grid},
 // with the closed form over cases.
 func checkSweptCalibration(t *testing.T, text string, target float64, cases []sweptCase) {
 	l := mustLoad(t, text)
-	z05, z98 := distuv.UnitNormal.Quantile(0.05), distuv.UnitNormal.Quantile(0.98)
-	var num, den float64
-	for _, c := range cases {
-		sr, sq := math.Sqrt(math.Log1p(c.vr*c.vr)), math.Sqrt(math.Log1p(c.vq*c.vq))
-		s := math.Hypot(sr, sq)
-		ci := math.Log(1.5) - z05*sr + z98*sq
-		num += c.w / s * (target - ci/s)
-		den += c.w / (s * s)
-	}
-	want := math.Exp(num / den)
+	want := closedFormGamma(target, cases)
 	r, err := Run(context.Background(), l, ptr(l.Settings(1)), nil)
 	if err != nil {
 		t.Fatal(err)
@@ -289,4 +276,21 @@ func TestCalibrationProgress(t *testing.T) {
 			t.Errorf("stage %d is %q", i+1, s)
 		}
 	}
+}
+
+// closedFormGamma is the gamma_M1 that TestCalibrationClosedForm derives:
+// the weighted least squares of (beta_i - target) over cases of lognormal
+// R and Q normalised as its comment says, ln gamma* = sum (w_i/s_i)
+// (beta_t - c_i/s_i) / sum (w_i/s_i^2).
+func closedFormGamma(target float64, cases []sweptCase) float64 {
+	z05, z98 := distuv.UnitNormal.Quantile(0.05), distuv.UnitNormal.Quantile(0.98)
+	var num, den float64
+	for _, c := range cases {
+		sr, sq := math.Sqrt(math.Log1p(c.vr*c.vr)), math.Sqrt(math.Log1p(c.vq*c.vq))
+		s := math.Hypot(sr, sq)
+		ci := math.Log(1.5) - z05*sr + z98*sq
+		num += c.w / s * (target - ci/s)
+		den += c.w / (s * s)
+	}
+	return math.Exp(num / den)
 }
