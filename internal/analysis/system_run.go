@@ -45,9 +45,11 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 			}
 		}
 	}
-	maxN := max(int64(l.Study.Analysis.Samples), 1000)
+	// The run's budget and CoV (the study's, or --samples over it), as
+	// every member takes them.
+	maxN := max(s.Samples, 1000)
 	maxN = min(maxN, max(10_000, maxSystemEvaluations/int64(len(sys))))
-	c, err := jointSample(ctx, sys, len(si), maxN, l.Study.Analysis.TargetCoV, MemberSeed(s.Seed, -1), s) // split or merged: inventory_shard.go
+	c, err := jointSample(ctx, sys, len(si), maxN, s.TargetCoV, MemberSeed(s.Seed, -1), s) // split or merged: inventory_shard.go
 	if ctx.Err() != nil {
 		return fmt.Errorf("interrupted")
 	}
@@ -55,7 +57,7 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 		return err
 	}
 	if !s.Shard.Splits() {
-		ir.doc.System = ir.systemDoc(c, len(si), l.Study.Analysis.TargetCoV)
+		ir.doc.System = ir.systemDoc(c, len(si), s.TargetCoV)
 	}
 	return ir.addFormSystem(ctx, sys, len(si), s)
 }
