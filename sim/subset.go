@@ -63,7 +63,8 @@ func subsetLevelSize(n int64) int {
 // (gamma = 0 at level 0); it neglects the correlation between levels, so
 // it is somewhat optimistic (the tests' runs scatter 1.1-1.4 times more).
 // The interval is lognormal: Pf exp(±z s), s^2 = ln(1 + delta^2), with the
-// estimate as median. N is s.Samples/6 clamped to [500, 10000] (a budget
+// estimate as median; a run that stops at level 0 is crude Monte Carlo
+// and takes its binomial interval (binomialInterval). N is s.Samples/6 clamped to [500, 10000] (a budget
 // of 50000 then reaches about 1e-6 with full levels); levels stop when the
 // next would exceed s.Samples evaluations (a warning then says Pf is only
 // bounded). When the CoV of one run stays above s.TargetCoV, further
@@ -155,6 +156,7 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 	var delta2 float64
 	prevB := math.Inf(1)
 	upper := 0.0 // upper end of the interval when no sample fails
+	direct := -1 // failures of level 0 when the run stops there, else -1
 	accepted := make([]int, nc)
 	lambda := 0.6 // initial spread, Papaioannou et al. (2015)
 	for level := 0; ; level++ {
@@ -168,6 +170,9 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 		if nf >= nc || level+1 >= subsetMaxLevels || !budgetLeft {
 			pl := float64(nf) / float64(N)
 			above := pf // probability of the last intermediate level
+			if level == 0 {
+				direct = nf
+			}
 			pf *= pl
 			if level > 0 && nf > 0 {
 				delta2 += (1 - pl) / (pl * float64(N)) * (1 + subsetGamma(G, nc, ns, 0, pl))
@@ -240,6 +245,13 @@ func subsetRun(ctx context.Context, sp *uSpace, s *Settings, levelSize int) (*Re
 	} else {
 		res.PfCoV = math.Inf(1)
 		res.PfCI = [2]float64{0, upper}
+	}
+	if direct >= 0 {
+		// Stopped at level 0, direct Monte Carlo: its interval is the
+		// binomial one of crude sampling. The lognormal one has no width
+		// when every sample fails (delta = 0), which would claim pf = 1
+		// exactly from N samples.
+		res.PfCI = binomialInterval(int64(direct), int64(N), cfg.Confidence)
 	}
 	res.Beta = BetaFromPf(pf)
 	res.BetaCI = [2]float64{BetaFromPf(res.PfCI[1]), BetaFromPf(res.PfCI[0])}

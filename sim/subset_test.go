@@ -209,3 +209,38 @@ func TestSubsetStalls(t *testing.T) {
 		t.Errorf("error %v", err)
 	}
 }
+
+// TestSubsetStopsAtLevelZero: a run that stops at level 0 is crude Monte
+// Carlo of N samples, so its interval is the binomial one. When every
+// sample fails, pf = 1 is only bounded below, by the Clopper-Pearson bound
+// (alpha/2)^(1/N) (Clopper and Pearson 1934, closed form for k = n); the
+// lognormal interval of the levels had no width there and claimed pf = 1
+// and beta = -inf exactly.
+func TestSubsetStopsAtLevelZero(t *testing.T) {
+	for _, c := range []struct {
+		name string
+		b0   float64 // exact pf = Phi(-b0)
+	}{
+		{"every sample fails", -20},
+		{"half fail", 0},
+	} {
+		sp, s := linearSpace(2, c.b0), &Settings{Samples: 60000, Seed: 4}
+		first, err := subsetRun(context.Background(), sp, s, 0)
+		if err != nil {
+			t.Fatal(err)
+		}
+		r, err := subsetRepeat(context.Background(), sp, s, first)
+		if err != nil {
+			t.Fatal(err)
+		}
+		n := int64(r.Evaluations)
+		k := int64(math.Round(r.Pf * float64(n)))
+		want := binomialInterval(k, n, 0.95)
+		if r.PfCI != want {
+			t.Errorf("%s: interval %v from %d of %d failing, want the binomial %v", c.name, r.PfCI, k, n, want)
+		}
+		if !(r.PfCI[0] < 1) || math.IsInf(r.BetaCI[1], -1) {
+			t.Errorf("%s: interval of pf %v, of beta %v: pf = 1 claimed exactly", c.name, r.PfCI, r.BetaCI)
+		}
+	}
+}
