@@ -4,6 +4,7 @@ import (
 	"context"
 	"math"
 	"reflect"
+	"strings"
 	"testing"
 )
 
@@ -130,5 +131,29 @@ func TestBetaStatementOnce(t *testing.T) {
 	inf := &Result{Beta: math.Inf(1), PfCI: [2]float64{0, 1e-3}, BetaCI: [2]float64{3.09, math.Inf(1)}}
 	if inf.BetaStatement() == "" {
 		t.Error("an infinite beta without a warning of the method: no statement")
+	}
+}
+
+// TestBetaStatementAllFailed: when every evaluation fails the statement
+// gives the lower bound of pf with the digits that tell it from 1; with
+// 8192 failures of 8192 the Clopper-Pearson bound is 0.025^(1/8192) =
+// 0.99955 (Clopper and Pearson 1934, closed form for k = n), which %.3g
+// printed as "1".
+func TestBetaStatementAllFailed(t *testing.T) {
+	lo, _ := ClopperPearson(8192, 8192, 0.95)
+	r := &Result{Beta: math.Inf(-1), Evaluations: 8192, PfCI: [2]float64{lo, 1}, BetaCI: [2]float64{math.Inf(-1), BetaFromPf(lo)}}
+	st := r.BetaStatement()
+	if !strings.Contains(st, "pf is only known to be above 0.99955 ") {
+		t.Errorf("statement %q: want the bound 0.99955", st)
+	}
+	for _, c := range []struct {
+		p    float64
+		want string
+	}{
+		{0.5, "0.5"}, {0.999, "0.999"}, {0.99955, "0.99955"}, {1 - 3.7e-6, "0.9999963"},
+	} {
+		if got := pfNearOne(c.p); got != c.want {
+			t.Errorf("pfNearOne(%v) = %q, want %q", c.p, got, c.want)
+		}
 	}
 }
