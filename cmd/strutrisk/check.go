@@ -4,34 +4,17 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"strutrisk/internal/report"
 
+	"strutrisk/internal/cli"
 	"strutrisk/internal/outdir"
 )
-
-const checkHelp = `Usage: strutrisk check STUDY.toml [--json]
-
-Validates a study file and prints the deterministic picture at nominal
-values, without sampling: section properties per axis, slenderness and
-relative slenderness, Euler load, the K used, the capacity and which axis
-and limit govern it, the utilisation under the mean loads, and the code
-check beside beta (EN 1993-1-1 6.3.1 at characteristic values, the EN 1990
-6.10 design load, partial factors of [code_check]: recommended values by
-default, the National Annex may differ). A study with an [inventory] adds
-the check of every member (slenderness, governing axis, design load and
-resistance, utilisation, the code's verdict; --json: inventory_check).
-Every
-problem in the file is listed with its line; the exit status is then 2.
-
-Flags:
-`
 
 func checkCmd(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("check", flag.ContinueOnError)
 	asJSON := fs.Bool("json", false, "print the result document (without sampling fields) as JSON on standard output")
-	pos, help, err := parseArgs(fs, args)
+	pos, help, err := cli.ParseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, checkHelp+flagHelp(fs)+"\n"+report.CautionText+"\n")
+		fmt.Fprint(stdout, helpText(cli.CheckHelp, fs))
 		return exitOK
 	}
 	if err != nil {

@@ -2,48 +2,17 @@ package main
 
 import (
 	"encoding/json"
-	"errors"
 	"flag"
 	"fmt"
 	"io"
-	"strings"
+
+	"strutrisk/internal/cli"
+	"strutrisk/internal/report"
 )
 
-// parseArgs parses flags that may stand before or after the positional
-// arguments. It returns the positional arguments; help reports --help.
-func parseArgs(fs *flag.FlagSet, args []string) (pos []string, help bool, err error) {
-	fs.SetOutput(io.Discard)
-	for {
-		if err := fs.Parse(args); err != nil {
-			if errors.Is(err, flag.ErrHelp) {
-				return nil, true, nil
-			}
-			return nil, false, err
-		}
-		rest := fs.Args()
-		if len(rest) == 0 {
-			return pos, false, nil
-		}
-		if rest[0] == "--" {
-			return append(pos, rest[1:]...), false, nil
-		}
-		pos = append(pos, rest[0])
-		args = rest[1:]
-	}
-}
-
-// flagHelp lists the flags of fs for a help text.
-func flagHelp(fs *flag.FlagSet) string {
-	var b strings.Builder
-	fs.VisitAll(func(f *flag.Flag) {
-		name, use := flag.UnquoteUsage(f)
-		fmt.Fprintf(&b, "  --%s", f.Name)
-		if name != "" {
-			fmt.Fprintf(&b, " %s", name)
-		}
-		fmt.Fprintf(&b, "\n      %s\n", use)
-	})
-	return b.String()
+// helpText is a command's help: head, its flags and the caution.
+func helpText(head string, fs *flag.FlagSet) string {
+	return head + cli.FlagHelp(fs) + "\n" + report.CautionText + "\n"
 }
 
 // outputFlags adds to fs the flags run and merge share: --out, --json

@@ -35,6 +35,7 @@ import (
 	"io"
 	"os"
 	"runtime/debug"
+	"strutrisk/internal/cli"
 
 	"strutrisk/internal/analysis"
 	"strutrisk/internal/report"
@@ -51,25 +52,8 @@ const (
 	exitInternal = 3
 )
 
-var usage = `strutrisk estimates how likely a column or strut is to fail, and which
-uncertainty drives that, from a study file (TOML).
-
-Usage:
-  strutrisk run STUDY.toml [flags]     sample the study; print a summary, write results
-  strutrisk run STUDY.toml --shard K/N  sample part K of N (on many machines)
-  strutrisk merge DIR... [--out OUT]   join the parts into the results of one run
-  strutrisk check STUDY.toml [--json]  validate; deterministic check at nominal values
-  strutrisk new [NAME]                 print a commented starter study
-  strutrisk help keys                  every study-file table and key: meaning, units, default
-  strutrisk model-factor STUDY TESTS.csv  model uncertainty from tests (EN 1990 Annex D)
-  strutrisk --version                  print the version
-  strutrisk COMMAND --help             help on a command
-
-Exit status: 0 done (target met or not), 1 target not met with
---require-target, 2 bad input, 3 internal failure (or the results could
-not be written), 130 interrupted by Ctrl-C (SIGINT), 143 by SIGTERM.
-
-` + report.CautionText + "\n"
+// usage is strutrisk's help, the caution last.
+var usage = cli.Usage + report.CautionText + "\n"
 
 func main() {
 	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))

@@ -4,25 +4,10 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"strutrisk/internal/cli"
 
 	"strutrisk/internal/shardstate"
 )
-
-const mergeHelp = `Usage: strutrisk merge DIR... [flags]
-
-Joins the shards of a split run (strutrisk run STUDY --shard K/N, one
-output folder DIR per shard) into the results one machine would have
-written: results.json, summary.txt, the CSV files and the report, equal
-bit for bit but for the timings. Each DIR holds a ` + shardstate.FileName + `.
-The shards must be 0..N-1 of one split, each given once, of the same
-study file and inventory file (unchanged), tool version and settings; otherwise nothing is
-merged and the exit status is 2. The study is read from where the shards
-read it, unless --study names it (it must have the same content). Steps
-that follow from the merged estimate (FORM, sensitivities, reserve
-factor) run here.
-
-Flags:
-`
 
 // mergeCmd is strutrisk merge.
 func mergeCmd(args []string, stdout, stderr io.Writer) int {
@@ -32,9 +17,9 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 	outputFlags(fs, o)
 	fs.StringVar(&studyPath, "study", "", "the study `FILE` (default: the path the shards read)")
 	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores); results do not depend on it")
-	dirs, help, err := parseArgs(fs, args)
+	dirs, help, err := cli.ParseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, mergeHelp+flagHelp(fs))
+		fmt.Fprint(stdout, cli.MergeHelp+cli.FlagHelp(fs))
 		return exitOK
 	}
 	if err != nil {

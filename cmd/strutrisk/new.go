@@ -6,6 +6,8 @@ import (
 	"fmt"
 	"io"
 	"strings"
+
+	"strutrisk/internal/cli"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 )
@@ -13,18 +15,11 @@ import (
 //go:embed starter.toml
 var starter string
 
-const newHelp = `Usage: strutrisk new [NAME] > study.toml
-
-Prints a commented starter study on standard output; NAME, if given,
-becomes its title. The starter passes strutrisk check as it stands: edit
-its values to describe your column.
-`
-
 func newCmd(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("new", flag.ContinueOnError)
-	pos, help, err := parseArgs(fs, args)
+	pos, help, err := cli.ParseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, newHelp+"\n"+report.CautionText+"\n")
+		fmt.Fprint(stdout, cli.NewHelp+"\n"+report.CautionText+"\n")
 		return exitOK
 	}
 	if err != nil {

@@ -7,33 +7,14 @@ import (
 	"fmt"
 	"io"
 	"strings"
+	"strutrisk/internal/cli"
 
 	"strutrisk/internal/analysis"
 	"strutrisk/internal/outdir"
-	"strutrisk/internal/progress"
 	"strutrisk/internal/report"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
 )
-
-const runHelp = `Usage: strutrisk run STUDY.toml [flags]
-
-Estimates the probability that the column of the study fails and the
-reliability index, with 95 % intervals, and the inputs that drive them.
-Prints a short summary and writes results.json, samples.csv, summary.txt
-and the report files into the output folder: --out, else [output] dir
-(relative to the study file), else out/<study file name>. Each run replaces
-the folder as a whole; it must be new, empty or written by strutrisk, and
-is checked before sampling. Flags override the study's [analysis] settings and
-may stand before or after the study file. Ctrl-C stops sampling; what
-finished is written, marked "complete": false, and the exit status is
-130 (143 after SIGTERM).
-A study with [sweep] or [[variant]] tables runs each case after the study
-itself, with the same seed; the summary ends with their tables and the
-report draws them (sweep.csv holds every curve).
-
-Flags:
-`
 
 // baseContext is the context a run starts from; tests replace it.
 var baseContext = context.Background
@@ -80,9 +61,7 @@ func runAndWrite(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 	}
 	defer folder.Close()
 
-	bar := progress.New(stderr, drawsProgress(stderr, !o.json))
-	bar.OnStage = stageHook
-	ctx, sigs, stop := withSignals(baseContext(), stderr, bar.Phase)
+	bar, ctx, sigs, stop := startRun(stderr, !o.json)
 	defer stop()
 	settings.Progress = bar.Update
 	bar.TargetCoV = settings.TargetCoV
@@ -96,7 +75,7 @@ func runAndWrite(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", st.File, err)
 		return exitInternal
 	}
-	r.MarkInterrupted(ctx, sigs.name(), sigs.during())
+	r.MarkInterrupted(ctx, sigs.Name(), sigs.During())
 	b := r.Bundle()
 	if code := writeRun(o, b, st.Output.Formats, folder, stdout, stderr); code != exitOK {
 		return code
@@ -116,9 +95,9 @@ func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int
 	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
 	fs.StringVar(&o.shard, "shard", "", "run part `K/N` (K from 0) of the sampling and write its state for strutrisk merge; \"env\" takes K and N from the scheduler (SLURM_ARRAY_TASK_ID and SLURM_ARRAY_TASK_COUNT, or JOB_COMPLETION_INDEX with --shard-count or STRUTRISK_SHARD_COUNT)")
 	fs.IntVar(&o.shardCount, "shard-count", 0, "number of shards `N` when the index comes from JOB_COMPLETION_INDEX (Kubernetes Indexed Jobs); implies --shard env")
-	pos, help, err := parseArgs(fs, args)
+	pos, help, err := cli.ParseArgs(fs, args)
 	if help {
-		fmt.Fprint(stdout, runHelp+flagHelp(fs)+"\n"+report.CautionText+"\n")
+		fmt.Fprint(stdout, helpText(cli.RunHelp, fs))
 		return nil, "", exitOK
 	}
 	if err != nil {
@@ -129,8 +108,7 @@ func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int
 		fmt.Fprintf(stderr, "strutrisk run: give one study file (strutrisk run --help)\n")
 		return nil, "", exitInput
 	}
-	o.set = map[string]bool{}
-	fs.Visit(func(f *flag.Flag) { o.set[f.Name] = true })
+	o.set = cli.Set(fs)
 	if o.set["method"] {
 		if _, err := sim.ParseMethod(o.method); err != nil {
 			fmt.Fprintf(stderr, "strutrisk run: --method: %v\n", err)
@@ -200,10 +178,10 @@ func writeRun(o *runOptions, b *report.Bundle, formats []string, folder *outdir.
 // runStatus is the exit status of a run whose files are written: that of
 // the signal that interrupted it, else exitTarget when --require-target
 // is given and the target is not shown to be met.
-func runStatus(o *runOptions, r *analysis.Result, b *report.Bundle, sigs *interrupt, dir string, stderr io.Writer) int {
+func runStatus(o *runOptions, r *analysis.Result, b *report.Bundle, sigs *cli.Interrupt, dir string, stderr io.Writer) int {
 	if r.Incomplete != "" {
 		fmt.Fprintf(stderr, "strutrisk: %s; the results in %s are marked \"complete\": false\n", r.Incomplete, dir)
-		return sigs.code()
+		return interruptedStatus(sigs)
 	}
 	if why := r.TargetShortfall(b.Doc); o.requireTarget && why != "" {
 		fmt.Fprintf(stderr, "strutrisk: %s\n", why)

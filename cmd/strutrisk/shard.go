@@ -8,7 +8,6 @@ import (
 
 	"strutrisk/internal/analysis"
 	"strutrisk/internal/outdir"
-	"strutrisk/internal/progress"
 	"strutrisk/internal/shardstate"
 	"strutrisk/internal/study"
 	"strutrisk/sim"
@@ -43,17 +42,15 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		return code
 	}
 	defer folder.Close()
-	bar := progress.New(stderr, drawsProgress(stderr, true))
-	bar.OnStage = stageHook
-	ctx, sigs, stop := withSignals(baseContext(), stderr, bar.Phase)
+	bar, ctx, sigs, stop := startRun(stderr, true)
 	defer stop()
 	settings.Progress = bar.Update
 	settings.Shard = &sim.Shard{Index: k, Count: n}
 	err = analysis.RunShard(ctx, l, &settings, bar)
 	bar.Done()
 	if ctx.Err() != nil {
-		fmt.Fprintf(stderr, "strutrisk: interrupted by %s: no shard state written\n", sigs.name())
-		return sigs.code()
+		fmt.Fprintf(stderr, "strutrisk: interrupted by %s: no shard state written\n", sigs.Name())
+		return interruptedStatus(sigs)
 	}
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk: %s: %v\n", st.File, err)

@@ -2,12 +2,10 @@ package main
 
 import (
 	"context"
-	"fmt"
 	"io"
-	"os"
-	"os/signal"
-	"sync"
-	"syscall"
+
+	"strutrisk/internal/cli"
+	"strutrisk/internal/progress"
 )
 
 // Exit statuses of an interrupted run follow the shell's convention,
@@ -17,73 +15,38 @@ const (
 	exitTerminated  = 143 // SIGTERM
 )
 
-// interrupt records the signal that stopped a run.
-type interrupt struct {
-	mu  sync.Mutex
-	sig os.Signal
-	// phase is the step under way when it came.
-	phase string
-}
+// Hooks of the tests: signalHook, when set, is called once the signal
+// handlers are in place, with the run's context; stageHook as each step
+// of a run begins.
+var (
+	signalHook func(ctx context.Context)
+	stageHook  func(name string)
+)
 
-// signalHook, when set (by tests), is called once the signal handlers are
-// in place, with the run's context.
-var signalHook func(ctx context.Context)
-
-// withSignals returns a context derived from parent that SIGINT and
-// SIGTERM cancel, the record of which came, and a function that removes
-// the handlers; phase names the step under way. The first signal is told on stderr; after it the
-// handlers are removed, so a second one stops the process at once.
-func withSignals(parent context.Context, stderr io.Writer, phase func() string) (context.Context, *interrupt, func()) {
-	ctx, cancel := context.WithCancel(parent)
-	in := &interrupt{}
-	ch := make(chan os.Signal, 2)
-	signal.Notify(ch, os.Interrupt, syscall.SIGTERM)
-	done := make(chan struct{})
-	go func() {
-		select {
-		case s := <-ch:
-			signal.Stop(ch)
-			in.mu.Lock()
-			in.sig, in.phase = s, phase()
-			in.mu.Unlock()
-			fmt.Fprintf(stderr, "\nstrutrisk: %s: stopping; what has finished will be written (a second signal stops at once, writing nothing)\n", in.name())
-			cancel()
-		case <-done:
-		}
-	}()
-	stop := func() {
-		signal.Stop(ch)
-		close(done)
-		cancel()
-	}
+// startRun draws the progress line on stderr when allowed and it is a
+// terminal, and returns the run's context, which SIGINT and SIGTERM
+// cancel (cli.Watch), the record of the signal and the function that
+// removes the handlers.
+func startRun(stderr io.Writer, allowed bool) (*progress.Line, context.Context, *cli.Interrupt, func()) {
+	bar := progress.New(stderr, drawsProgress(stderr, allowed))
+	bar.OnStage = stageHook
+	ctx, sigs, stop := cli.Watch(baseContext(), stderr, bar.Phase)
 	if signalHook != nil {
 		signalHook(ctx)
 	}
-	return ctx, in, stop
+	return bar, ctx, sigs, stop
 }
 
-// name is the signal that came, "SIGINT" when the run was cancelled
-// otherwise (as a test does).
-func (in *interrupt) name() string {
-	in.mu.Lock()
-	defer in.mu.Unlock()
-	if in.sig == syscall.SIGTERM {
-		return "SIGTERM"
-	}
-	return "SIGINT"
-}
-
-// code is the exit status of a run stopped by the signal that came.
-func (in *interrupt) code() int {
-	if in.name() == "SIGTERM" {
+// interruptedStatus is the exit status of a run that sigs stopped.
+func interruptedStatus(sigs *cli.Interrupt) int {
+	if sigs.Terminated() {
 		return exitTerminated
 	}
 	return exitInterrupted
 }
 
-// during is the step under way when the signal came ("" if none came).
-func (in *interrupt) during() string {
-	in.mu.Lock()
-	defer in.mu.Unlock()
-	return in.phase
+// drawsProgress says whether the progress line is drawn on w: only when
+// allowed (not --json) and w is a terminal.
+func drawsProgress(w io.Writer, allowed bool) bool {
+	return allowed && cli.IsTerminal(w)
 }
