@@ -61,6 +61,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 			sys = append(sys, systemMember{m: o.md.Sim, form: o.form})
 		}
 	}
+	addCodeChecks(ir.doc.Members, outs) // inventory_check.go
 	ir.warnings = append(ir.warnings, groupMemberWarnings(names, warns, len(inv.Members))...)
 	if cut && ctx.Err() != nil {
 		ir.warnings = append(ir.warnings, "inventory: interrupted; the members not run are missing")

@@ -77,3 +77,25 @@ func (l *Loaded) CheckDocument() *report.Document {
 	d.InventoryCheck = l.InventoryCheck()
 	return d
 }
+
+// addCodeChecks gives each member run its code check (the same as check
+// gives it), members[i] being the row of outs[i]. When no member's check
+// can be made (a material other than steel, say) no member carries one,
+// nor the reason: the study's own warning gives it.
+func addCodeChecks(members []report.Member, outs []memberOutcome) {
+	made := false
+	for i, o := range outs {
+		if o.md == nil || i >= len(members) {
+			continue
+		}
+		cc, why := codeCheck(o.md)
+		members[i].CodeCheck = report.ShortCodeCheck(cc)
+		members[i].CodeCheckNotMade = strings.TrimPrefix(why, "code_check: not made: ")
+		made = made || cc != nil
+	}
+	if !made {
+		for i := range members {
+			members[i].CodeCheckNotMade = ""
+		}
+	}
+}

@@ -38,6 +38,12 @@ type Member struct {
 	// Share is the member's share of the system failure: the
 	// probability that it fails given that the system fails.
 	Share *float64 `json:"share_of_system_failure,omitempty"`
+	// CodeCheck is the member's code check (EN 1993-1-1 6.3.1 at
+	// characteristic values, as the study's code_check), absent when no
+	// member of the inventory has one; CodeCheckNotMade says why this
+	// member's was not made when another's was.
+	CodeCheck        *MemberCodeCheck `json:"code_check,omitempty"`
+	CodeCheckNotMade string           `json:"code_check_not_made,omitempty"`
 	// Cells are the member's cells in the inventory file, by column.
 	Cells map[string]string `json:"cells"`
 	// Error, when not empty, says why the member has no result.
@@ -81,11 +87,17 @@ type System struct {
 	Headline string `json:"headline,omitempty"`
 }
 
-// inventoryCSV writes one row a member, in the order of the document.
+// inventoryCSV writes one row a member, in the order of the document:
+// its results, its code check when any member has one (forces in kN,
+// codeCheckHead), then its cells in the inventory file.
 func inventoryCSV(inv *Inventory, columns []string) ([]byte, error) {
 	var buf bytes.Buffer
 	w := csv.NewWriter(&buf)
 	head := []string{"name", "line", "pf", "pf_low", "pf_high", "beta", "beta_low", "beta_high", "status", "verdict", "reserve_factor", "governing_axis", "mode", "share_of_system_failure"}
+	code := hasCodeCheck(inv)
+	if code {
+		head = append(head, codeCheckHead...)
+	}
 	if err := w.Write(csvCells(append(head, columns...))[0]); err != nil {
 		return nil, err
 	}
@@ -102,6 +114,9 @@ func inventoryCSV(inv *Inventory, columns []string) ([]byte, error) {
 			m.Status, m.Verdict, opt(m.ReserveFactor), m.GoverningAxis, m.Mode, opt(m.Share)}
 		if m.Error != "" {
 			row = []string{m.Name, strconv.Itoa(m.Line), "", "", "", "", "", "", "not run: " + m.Error, "", "", "", "", ""}
+		}
+		if code {
+			row = append(row, codeCheckCells(&m)...)
 		}
 		for _, c := range columns {
 			row = append(row, m.Cells[c])
