@@ -134,7 +134,9 @@ func (a *autoRun) finish(res *Result, reason string) *Result {
 // conditional runs conditional quasi-Monte Carlo on the model's linear
 // input; far in the tail, where the conditional integrand is a narrow
 // spike that the quasi-random points rarely hit, it tries importance
-// sampling too and keeps whichever estimate is the more precise.
+// sampling too and keeps whichever estimate is the more precise. A
+// conditional estimate still more than twice the target CoV is not
+// trusted (flagRoughConditional).
 func (a *autoRun) conditional() (*Result, error) {
 	m, s := a.m, a.s
 	res, err := conditionalQMC(a.ctx, m, a.t, s)
@@ -142,7 +144,11 @@ func (a *autoRun) conditional() (*Result, error) {
 		return nil, err
 	}
 	reason := fmt.Sprintf("the limit state is linear in %q, which is integrated exactly; the other inputs are drawn by randomised quasi-Monte Carlo (%s)", m.Vars[m.Linear.Index].Name, a.formNote)
-	if res.Incomplete || !a.formOK || !(res.PfCoV > 2*a.target) {
+	if res.Incomplete || !(res.PfCoV > conditionalRoughCoV(a.target)) {
+		return a.finish(res, reason), nil
+	}
+	if !a.formOK {
+		flagRoughConditional(res, a.target, "and FORM found no design point for importance sampling")
 		return a.finish(res, reason), nil
 	}
 	alt, aerr := importanceSampling(a.ctx, m, a.t, a.f, s)
@@ -151,7 +157,7 @@ func (a *autoRun) conditional() (*Result, error) {
 		alt.Evaluations += res.Evaluations
 		return a.finish(alt, fmt.Sprintf("%s: conditional quasi-Monte Carlo reached only CoV %.2g within the budget, so importance sampling around the design point was used", a.formNote, res.PfCoV)), nil
 	}
-	res.flag(BudgetSpent, fmt.Sprintf("conditional quasi-Monte Carlo reached CoV %.2g, above the target %.2g, and importance sampling did no better; treat pf as an order of magnitude", res.PfCoV, a.target)) // assess adds it to the warnings
+	flagRoughConditional(res, a.target, "and importance sampling did no better")
 	return a.finish(res, reason), nil
 }
 

@@ -32,7 +32,9 @@ const (
 	// zero: the median member already fails).
 	DesignPointUnreliable
 	// Imprecise: the CoV of pf is so large (above MaxTrustedCoV) that the
-	// normal approximation behind the interval fails.
+	// normal approximation behind the interval fails; for conditional
+	// quasi-Monte Carlo, above twice the target CoV, or pf exactly zero
+	// (flagRoughConditional): pf is then only an order of magnitude.
 	Imprecise
 	// Unsettled: the surrogate's budget ended before its Kriging model
 	// settled (some candidate's predicted sign still in doubt, U below
@@ -87,8 +89,10 @@ func (r *Result) flag(s Status, reason string) {
 }
 
 // assess sets the status of a finished result from its numbers: an
-// interrupted run, too few failures for crude sampling, a CoV too large
-// for the interval's normal approximation, a CoV above the target. A
+// interrupted run, too few failures for crude sampling, a conditional
+// quasi-Monte Carlo estimate too rough to decide anything
+// (flagRoughConditional), a CoV too large for the interval's normal
+// approximation, a CoV above the target. A
 // method's own, more specific status (degenerate weights, an unreliable
 // design point) is kept. It adds a warning for each trusted status short
 // of Converged that no warning of the method states already.
@@ -102,8 +106,10 @@ func assess(r *Result, targetCoV float64) {
 		// FORM has no sampling precision; its design point is checked
 		// where it is run.
 	case crude && r.Failures < MinFailures && r.Pf < 0.5:
-		r.flag(FewFailures, fmt.Sprintf("the estimate rests on %d failed samples of %d (fewer than %d): pf is rough and its interval wide", r.Failures, r.Evaluations, MinFailures))
+		r.flag(FewFailures, fmt.Sprintf("the estimate rests on %d failed samples of %d (fewer than %d): the point estimate of pf is rough; its binomial interval stands and a verdict rests on the interval alone", r.Failures, r.Evaluations, MinFailures))
 		warn = r.Failures > 0 // no failure at all has its own warning
+	case r.Method == ConditionalQMC && (r.Pf == 0 || r.PfCoV > conditionalRoughCoV(targetCoV)):
+		flagRoughConditional(r, targetCoV, "")
 	case !crude && r.Pf == 0:
 		r.flag(BudgetSpent, fmt.Sprintf("%s saw no failure within the budget: pf is only bounded from above", r.Method))
 		warn = false // the method says so

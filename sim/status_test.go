@@ -148,11 +148,10 @@ func TestFORMNotConvergedIsNotTrusted(t *testing.T) {
 }
 
 // TestAssessKeepsTheMethodsReason: a method that flags its own result
-// (auto's conditional quasi-Monte Carlo short of its target) keeps its
-// reason, and the reader gets it once as a warning, not twice in other
-// words.
+// short of its target keeps its reason, and the reader gets it once as a
+// warning, not twice in other words.
 func TestAssessKeepsTheMethodsReason(t *testing.T) {
-	r := &Result{Method: ConditionalQMC, Pf: 1e-4, PfCoV: 0.2}
+	r := &Result{Method: Importance, Pf: 1e-4, PfCoV: 0.2}
 	r.flag(BudgetSpent, "the method's own words")
 	assess(r, 0.05)
 	if r.Status != BudgetSpent || r.StatusReason != "the method's own words" || len(r.Warnings) != 1 || r.Warnings[0] != r.StatusReason {
