@@ -222,14 +222,15 @@ func shardSystemBlocks(ctx context.Context, ms []systemMember, nShared int, maxN
 	return total, nil
 }
 
-// replaySystem adds the noted blocks of the joint sample in batches of
-// systemBatch, stopping at the first batch boundary where the system's pf
-// has a coefficient of variation of targetCoV, as sampleSystem does.
+// replaySystem adds the noted blocks of the joint sample in the batches
+// of sampleSystem, stopping at the first look where the counts are
+// resolved, as sampleSystem does.
 func replaySystem(ms []systemMember, maxN int64, targetCoV float64, sh *sim.Shard) (*systemCounts, error) {
 	total := &systemCounts{members: make([]int64, len(ms))}
 	blocks := int((maxN + systemBlock - 1) / systemBlock)
-	for b0 := 0; b0 < blocks; b0 += systemBatch {
-		for b := b0; b < min(b0+systemBatch, blocks); b++ {
+	for b0 := 0; b0 < blocks; b0 = nextLook(b0) {
+		b1 := min(nextLook(b0), blocks)
+		for b := b0; b < b1; b++ {
 			var n systemNote
 			ok, err := sh.Recall(systemNoteKey(b), &n)
 			if !ok || err != nil {
@@ -244,7 +245,7 @@ func replaySystem(ms []systemMember, maxN int64, targetCoV float64, sh *sim.Shar
 			}
 			total.add(c)
 		}
-		if targetCoV > 0 && total.cov() <= targetCoV {
+		if resolved(total, targetCoV, b1) {
 			break
 		}
 	}

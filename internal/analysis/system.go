@@ -11,9 +11,9 @@ import (
 )
 
 // systemBlock is the number of joint samples drawn from one random
-// stream; systemBatch blocks are drawn before the coefficient of
-// variation is looked at, so where sampling stops does not depend on the
-// number of workers.
+// stream; systemBatch is the largest number of blocks drawn between two
+// looks at the counts (system_stop.go), so where sampling stops does not
+// depend on the number of workers.
 const (
 	systemBlock = 1000
 	systemBatch = 16
@@ -59,17 +59,19 @@ func (s *systemCounts) cov() float64 {
 
 // sampleSystem draws the members jointly, each sample one normal per
 // shared variable (nShared of them) and one per member variable that is
-// not shared, until the system's pf has a coefficient of variation of
-// targetCoV or maxN samples are drawn. Block b draws from a stream of
-// (seed, b) only, so the counts are the same for any worker count.
+// not shared, until the counts are resolved (system_stop.go: the
+// system's pf to a coefficient of variation of targetCoV, and the
+// largest member's share) or maxN samples are drawn. Block b draws from
+// a stream of (seed, b) only and the counts are looked at after blocks
+// that depend on nothing else, so they are the same for any worker count.
 func sampleSystem(ctx context.Context, ms []systemMember, nShared int, maxN int64, targetCoV float64, seed uint64, workers int) *systemCounts {
 	if workers < 1 {
 		workers = 1
 	}
 	total := &systemCounts{members: make([]int64, len(ms))}
 	blocks := int((maxN + systemBlock - 1) / systemBlock)
-	for b0 := 0; b0 < blocks && ctx.Err() == nil; b0 += systemBatch {
-		b1 := min(b0+systemBatch, blocks)
+	for b0 := 0; b0 < blocks && ctx.Err() == nil; b0 = nextLook(b0) {
+		b1 := min(nextLook(b0), blocks)
 		res := make([]*systemCounts, b1-b0)
 		var wg sync.WaitGroup
 		next := make(chan int)
@@ -92,7 +94,7 @@ func sampleSystem(ctx context.Context, ms []systemMember, nShared int, maxN int6
 		for _, c := range res {
 			total.add(c)
 		}
-		if targetCoV > 0 && total.cov() <= targetCoV {
+		if resolved(total, targetCoV, b1) {
 			break
 		}
 	}

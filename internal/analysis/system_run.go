@@ -19,13 +19,37 @@ const maxSystemEvaluations = 200_000_000
 // shared input one draw per group and sample, every other input one per
 // member.
 func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMember, s *sim.Settings) error {
-	inv := l.Study.Inventory
+	nShared, err := linkShared(l.Study.Inventory, sys)
+	if err != nil {
+		return err
+	}
+	// The run's budget and CoV (the study's, or --samples over it), as
+	// every member takes them.
+	maxN := max(s.Samples, 1000)
+	maxN = min(maxN, max(10_000, maxSystemEvaluations/int64(len(sys))))
+	c, err := jointSample(ctx, sys, nShared, maxN, s.TargetCoV, MemberSeed(s.Seed, -1), s) // split or merged: inventory_shard.go
+	if ctx.Err() != nil {
+		return fmt.Errorf("interrupted")
+	}
+	if err != nil {
+		return err
+	}
+	if !s.Shard.Splits() {
+		ir.doc.System = ir.systemDoc(c, nShared, s.TargetCoV)
+	}
+	return ir.addFormSystem(ctx, sys, nShared, s)
+}
+
+// linkShared gives each member of sys its transformation and, for each
+// of its variables, the index of the shared normal it takes (-1: its
+// own), and returns the number of shared normals.
+func linkShared(inv *study.Inventory, sys []systemMember) (int, error) {
 	by := map[string]string{}
 	si := sharedIndex{}
 	for i := range sys {
 		t, err := sim.NewTransform(sys[i].m)
 		if err != nil {
-			return fmt.Errorf("member %q: %v", inv.Members[i].Name, err)
+			return 0, fmt.Errorf("member %q: %v", inv.Members[i].Name, err)
 		}
 		for _, v := range t.Vars() {
 			if j := sharedOf(inv.Shared, v.Name); j >= 0 {
@@ -33,7 +57,7 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 			}
 		}
 		if err := checkSharedCorrelation(t, by); err != nil {
-			return fmt.Errorf("member %q: %v", inv.Members[i].Name, err)
+			return 0, fmt.Errorf("member %q: %v", inv.Members[i].Name, err)
 		}
 		groups := inv.Group(i)
 		sys[i].t = t
@@ -45,21 +69,7 @@ func (ir *inventoryRun) runSystem(ctx context.Context, l *Loaded, sys []systemMe
 			}
 		}
 	}
-	// The run's budget and CoV (the study's, or --samples over it), as
-	// every member takes them.
-	maxN := max(s.Samples, 1000)
-	maxN = min(maxN, max(10_000, maxSystemEvaluations/int64(len(sys))))
-	c, err := jointSample(ctx, sys, len(si), maxN, s.TargetCoV, MemberSeed(s.Seed, -1), s) // split or merged: inventory_shard.go
-	if ctx.Err() != nil {
-		return fmt.Errorf("interrupted")
-	}
-	if err != nil {
-		return err
-	}
-	if !s.Shard.Splits() {
-		ir.doc.System = ir.systemDoc(c, len(si), s.TargetCoV)
-	}
-	return ir.addFormSystem(ctx, sys, len(si), s)
+	return len(si), nil
 }
 
 // sharedOf returns the index of the shared input that variable name
