@@ -22,6 +22,8 @@ type cases struct {
 	keys     []string       // the swept keys with their units, one per axis
 	params   []string       // the swept key paths, one per axis
 	names    []string       // the names of grid's rows: the study, each variant
+	models   []string       // the capacity model of each of grid's rows
+	zipped   bool           // several keys swept in step (combine = "zip")
 	points   [][]float64    // points[i][a]: axis a at swept point i, internal units
 	lam      []float64      // nominal relative slenderness of the study at each point, about lamAxis
 	lamAxis  column.Axis    // the axis governing the study at its own values
@@ -117,6 +119,10 @@ func newCases(l *Loaded) *cases {
 	for _, va := range st.Variants {
 		c.names = append(c.names, va.Name)
 	}
+	for v := -1; v < len(st.Variants); v++ {
+		c.models = append(c.models, caseModel(st, v))
+	}
+	c.zipped = st.Grid != nil && st.Grid.Combine == "zip"
 	n := st.SweptPoints()
 	for i := 0; i < n; i++ {
 		c.points = append(c.points, st.PointValues(i))
@@ -286,7 +292,8 @@ func (c *cases) fill(b *report.Bundle) {
 	b.Series = c.series
 	b.SweepLabel = c.label
 	b.Cases = &report.CaseTable{StudyName: c.studyName, Values: c.values, Grid: c.grid,
-		Keys: c.keys, Params: c.params, Points: c.points, BaseLambda: c.baseLam, Names: c.names}
+		Keys: c.keys, Params: c.params, Points: c.points, BaseLambda: c.baseLam, Names: c.names,
+		Models: c.models, Zipped: c.zipped}
 	if lamVaries(c.lam) {
 		b.Cases.Lambda = c.lam
 		b.SweepLambdaAxis = c.lamAxis.String()

@@ -144,8 +144,13 @@ func Markdown(b *Bundle) string {
 
 	if len(v.Sweep) > 0 || len(v.Variants) > 0 || v.SweepCurves != nil {
 		w.WriteString("## Sweep and variants\n\n")
-		if newHeatGrid(b.Cases) != nil {
+		switch {
+		case newHeatGrid(b.Cases) != nil:
 			w.WriteString("The heat map of β over the two swept keys is heatmap.png (and .svg) beside this file, when pictures are written: one panel for the study and each variant, the cells coloured by classes of β about the target.\n\n")
+		case newHeatSlices(b.Cases) != nil:
+			w.WriteString("The heat maps of β over the first two swept keys, one for each combination of the other keys' values, are heatmap.png (and .svg) beside this file, when pictures are written: the study's first, then each variant's, the cells coloured by classes of β about the target.\n\n")
+		case len(b.Series) == 0 && b.Cases != nil && b.Cases.Zipped:
+			w.WriteString("β and pf over the swept points, the keys in step, are drawn in sweep.png (and .svg) beside this file, when pictures are written: one curve for the study and each variant, each point's value of every key written under it.\n\n")
 		}
 		if t := v.SweepCurves; t != nil {
 			w.WriteString("β of every curve (95% interval in brackets) at each swept value:\n\n")

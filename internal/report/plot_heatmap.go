@@ -30,19 +30,7 @@ func newHeatGrid(c *CaseTable) *heatGrid {
 	if c == nil || len(c.Keys) != 2 || len(c.Points) < 4 {
 		return nil
 	}
-	distinct := func(a int) []float64 {
-		seen := map[float64]bool{}
-		var out []float64
-		for _, p := range c.Points {
-			if !seen[p[a]] {
-				seen[p[a]] = true
-				out = append(out, p[a])
-			}
-		}
-		sort.Float64s(out)
-		return out
-	}
-	g := &heatGrid{xs: distinct(0), ys: distinct(1)}
+	g := &heatGrid{xs: distinctValues(c, 0), ys: distinctValues(c, 1)}
 	if len(g.xs) < 2 || len(g.ys) < 2 || len(g.xs)*len(g.ys) != len(c.Points) {
 		return nil
 	}
@@ -61,6 +49,21 @@ func newHeatGrid(c *CaseTable) *heatGrid {
 		g.at[ix][iy] = i
 	}
 	return g
+}
+
+// distinctValues are the distinct values of axis a over the points of c,
+// sorted.
+func distinctValues(c *CaseTable, a int) []float64 {
+	seen := map[float64]bool{}
+	var out []float64
+	for _, p := range c.Points {
+		if !seen[p[a]] {
+			seen[p[a]] = true
+			out = append(out, p[a])
+		}
+	}
+	sort.Float64s(out)
+	return out
 }
 
 // betaClass is a class of the heat map's colour scale: beta from Low
@@ -130,6 +133,9 @@ func (c betaClass) name() string {
 // dark line bounds the cells below it. A side panel gives the classes.
 func heatmapFigure(b *Bundle) *figure {
 	c := b.Cases
+	if c != nil && len(c.Keys) > 2 {
+		return multiHeatmapFigure(b)
+	}
 	g := newHeatGrid(c)
 	if g == nil {
 		return nil
@@ -140,7 +146,7 @@ func heatmapFigure(b *Bundle) *figure {
 	labelled := len(g.xs) <= 10 && len(g.ys) <= 14
 	var plots []*plot.Plot
 	for s := 0; s < n; s++ {
-		p := heatPanel(c, g, s, classes, target, labelled)
+		p := heatPanel(c, g, s, c.seriesName(s), classes, target, labelled)
 		if p == nil {
 			return nil
 		}
@@ -159,6 +165,16 @@ func heatmapFigure(b *Bundle) *figure {
 			fmt.Fprintf(&w, " (the first %d; every case is in cases.csv)", n-1)
 		}
 	}
+	w.WriteString(heatCaptionTail(labelled, target, anyDoubtful(c, n)))
+	f.Caption = w.String()
+	return f
+}
+
+// heatCaptionTail is what a heat map's caption says of its cells: the
+// colours, the numbers, the target's line and the grey of the estimates
+// not trusted (when doubt).
+func heatCaptionTail(labelled bool, target *float64, doubt bool) string {
+	var w strings.Builder
 	w.WriteString(". The colour of a cell is its class of β (legend)")
 	if labelled {
 		w.WriteString("; the number in it is β (inf: no sample failed, β only bounded below; -inf: every sample failed)")
@@ -169,16 +185,16 @@ func heatmapFigure(b *Bundle) *figure {
 		fmt.Fprintf(&w, ". Reds are below the target β = %s, blues at or above it; the dark line bounds the cells below the target", fixed(*target, 2))
 	}
 	w.WriteString(". A white cell did not run.")
-	if anyDoubtful(c, n) {
+	if doubt {
 		w.WriteString(" A grey cell, its β marked ?, has an estimate the engine does not trust (the warnings say why): it is not judged against the target.")
 	}
-	f.Caption = w.String()
-	return f
+	return w.String()
 }
 
-// heatPanel is the panel of series s (the study, then each variant).
-func heatPanel(c *CaseTable, g *heatGrid, s int, classes []betaClass, target *float64, labelled bool) *plot.Plot {
-	p := newPlot(c.seriesName(s), c.Keys[0], c.Keys[1])
+// heatPanel is the panel of series s (the study, then each variant) over
+// the cells of g, under the title.
+func heatPanel(c *CaseTable, g *heatGrid, s int, title string, classes []betaClass, target *float64, labelled bool) *plot.Plot {
+	p := newPlot(title, c.Keys[0], c.Keys[1])
 	p.X.Tick.Marker = indexTicks(g.xs, c.Keys[0], 6)
 	p.Y.Tick.Marker = indexTicks(g.ys, c.Keys[1], 12)
 	edge := 1.0 // white lines between the cells, thinner when they are many

@@ -17,10 +17,11 @@ var bandLegend = [2]string{"95% interval band", "(narrower than the line where n
 
 // sweepFigure draws, for each series (variant), the reliability index
 // against the swept parameter with its interval as a band, and next to it
-// the failure probability on a logarithmic axis.
+// the failure probability on a logarithmic axis; for a sweep of several
+// keys in step, zipFigure's picture.
 func sweepFigure(b *Bundle) *figure {
 	if len(b.Series) == 0 {
-		return nil
+		return zipFigure(b)
 	}
 	xlabel := b.SweepLabel
 	if xlabel == "" {

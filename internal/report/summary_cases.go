@@ -29,6 +29,12 @@ type CaseTable struct {
 	// Names are the names of the rows of Grid: the study's, then each
 	// variant's.
 	Names []string
+	// Models are the capacity models of the rows of Grid, as
+	// Series.Model names them (they choose the lines' styles).
+	Models []string
+	// Zipped is set when several keys are swept in step (combine =
+	// "zip"): Points are then a list, not every combination.
+	Zipped bool
 	// Grid[s][i] is series s (the study first, then each variant, as
 	// Bundle.Series) at swept point i; nil where the case did not run.
 	Grid [][]*Point
