@@ -6,7 +6,6 @@ import (
 	"io"
 
 	"strutrisk/internal/cli"
-	"strutrisk/internal/outdir"
 )
 
 func checkCmd(args []string, stdout, stderr io.Writer) int {
@@ -29,10 +28,7 @@ func checkCmd(args []string, stdout, stderr io.Writer) int {
 	if code != exitOK {
 		return code
 	}
-	if _, err := outdir.Resolve(outdir.Request{StudyFile: pos[0], Dir: l.Study.Output.Dir}); err != nil {
-		// Not a problem of the study itself: --out can stand in for it.
-		l.Study.Warnings = append(l.Study.Warnings, fmt.Sprintf("output.dir (line %d): %v; `strutrisk run` refuses it unless --out is given", l.Study.Output.DirLine, err))
-	}
+	l.WarnOutputDir(pos[0])
 	if *asJSON {
 		return printJSON(l.CheckDocument(), stdout, stderr)
 	}

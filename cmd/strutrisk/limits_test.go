@@ -7,6 +7,8 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+
+	"strutrisk/internal/analysis"
 )
 
 // TestHostileStudyFiles: huge, endless and deeply nested study files end
@@ -40,15 +42,15 @@ func TestHostileStudyFiles(t *testing.T) {
 // million workers took 3 GB).
 func TestWorkersCapped(t *testing.T) {
 	study := writeStudy(t, good)
-	for _, n := range []string{"1000000", strconv.Itoa(maxWorkers() + 1), "0"} {
+	for _, n := range []string{"1000000", strconv.Itoa(analysis.MaxWorkers() + 1), "0"} {
 		code, _, errs := invoke(t, "run", study, "--workers", n, "--out", t.TempDir())
-		want := "must be between 1 and " + strconv.Itoa(maxWorkers())
+		want := "must be between 1 and " + strconv.Itoa(analysis.MaxWorkers())
 		if code != exitInput || !strings.Contains(errs, want) {
 			t.Errorf("--workers %s: exit %d, stderr %q; want exit 2 and %q", n, code, errs, want)
 		}
 	}
-	if maxWorkers() < 64 || maxWorkers() < 16*runtime.NumCPU() {
-		t.Errorf("cap %d below 64 or 16 per core", maxWorkers())
+	if analysis.MaxWorkers() < 64 || analysis.MaxWorkers() < 16*runtime.NumCPU() {
+		t.Errorf("cap %d below 64 or 16 per core", analysis.MaxWorkers())
 	}
 }
 

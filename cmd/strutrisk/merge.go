@@ -49,7 +49,7 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 	if code != exitOK {
 		return code
 	}
-	if err := states[0].CheckInventory(inventoryPath(l.Study)); err != nil {
+	if err := states[0].CheckInventory(l.Study.InventoryPath()); err != nil {
 		fmt.Fprintf(stderr, "strutrisk merge: nothing merged: %v\n", err)
 		return exitInput
 	}

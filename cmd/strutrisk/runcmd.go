@@ -119,8 +119,8 @@ func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int
 		fmt.Fprintf(stderr, "strutrisk run: --samples %d must be between 1 and %s\n", o.samples, study.MaxSamplesText)
 		return nil, "", exitInput
 	}
-	if o.set["workers"] && (o.workers < 1 || o.workers > maxWorkers()) {
-		fmt.Fprintf(stderr, "strutrisk run: --workers %d must be between 1 and %d (16 per core, at least 64; results do not depend on it)\n", o.workers, maxWorkers())
+	if o.set["workers"] && (o.workers < 1 || o.workers > analysis.MaxWorkers()) {
+		fmt.Fprintf(stderr, "strutrisk run: --workers %d must be between 1 and %d (16 per core, at least 64; results do not depend on it)\n", o.workers, analysis.MaxWorkers())
 		return nil, "", exitInput
 	}
 	return o, pos[0], exitOK

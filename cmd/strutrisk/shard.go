@@ -4,12 +4,10 @@ import (
 	"fmt"
 	"io"
 	"os"
-	"path/filepath"
 
 	"strutrisk/internal/analysis"
 	"strutrisk/internal/outdir"
 	"strutrisk/internal/shardstate"
-	"strutrisk/internal/study"
 	"strutrisk/sim"
 )
 
@@ -29,10 +27,7 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		fmt.Fprintf(stderr, "strutrisk run: --json and --require-target belong to strutrisk merge, not to a shard\n")
 		return exitInput
 	}
-	id, err := shardstate.Identify(path)
-	if err == nil {
-		id.Inventory, err = shardstate.InventoryHash(inventoryPath(st))
-	}
+	id, err := shardstate.Identify(path, st.InventoryPath())
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 		return exitInput
@@ -65,15 +60,6 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		fmt.Fprintf(stderr, "strutrisk: the shard state was not written to %s: %v\n", folder.Path, err)
 		return exitInternal
 	}
-	fmt.Fprintf(stderr, "strutrisk: shard %d of %d: %d sampling run%s and %d other result%s recorded in %s\n", k, n, len(state.Runs), plural(len(state.Runs)), len(state.Notes), plural(len(state.Notes)), filepath.Join(folder.Path, shardstate.FileName))
+	fmt.Fprintf(stderr, "strutrisk: %s\n", state.Recorded(folder.Path))
 	return exitOK
-}
-
-// inventoryPath is where the study's inventory file was read from, ""
-// when it has none.
-func inventoryPath(st *study.Study) string {
-	if st.Inventory == nil {
-		return ""
-	}
-	return st.Inventory.Path
 }

@@ -16,8 +16,9 @@ type StudyID struct {
 	Inventory         string
 }
 
-// Identify reads the study file at path for its StudyID.
-func Identify(path string) (StudyID, error) {
+// Identify reads the study file at path, and its inventory file at
+// inventory ("" when it has none), for its StudyID.
+func Identify(path, inventory string) (StudyID, error) {
 	abs, err := filepath.Abs(path)
 	if err != nil {
 		return StudyID{}, err
@@ -26,7 +27,11 @@ func Identify(path string) (StudyID, error) {
 	if err != nil {
 		return StudyID{}, err
 	}
-	return StudyID{Path: path, Abs: abs, SHA256: hash}, nil
+	inv, err := InventoryHash(inventory)
+	if err != nil {
+		return StudyID{}, err
+	}
+	return StudyID{Path: path, Abs: abs, SHA256: hash, Inventory: inv}, nil
 }
 
 // Record is the state of a shard of the study id, run by the tool version

@@ -23,7 +23,7 @@ func TestRecordAndLocate(t *testing.T) {
 		t.Fatal(err)
 	}
 	sum := sha256.Sum256(text)
-	id, err := Identify(study)
+	id, err := Identify(study, "")
 	if err != nil || id.Abs != study || id.SHA256 != hex.EncodeToString(sum[:]) {
 		t.Fatalf("Identify: %+v, %v", id, err)
 	}
