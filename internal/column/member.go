@@ -81,27 +81,41 @@ func (m *Member) Validate(axis Axis) error {
 }
 
 // weaker evaluates the closed-form model on the requested axis, or on both
-// axes keeping the smaller resistance (a tie reports Minor). The model is
-// chosen by governs rather than passed as a function value so that the
-// member does not escape to the heap: a capacity evaluation stays free of
-// allocation for callers too.
+// axes keeping the smaller resistance. The model is chosen by governs
+// rather than passed as a function value so that the member does not
+// escape to the heap: a capacity evaluation stays free of allocation for
+// callers too.
 //
 // With Both, the modes that twist the section are evaluated too
-// (twisting); a twisting mode wins a tie.
+// (twisting). A tie of resistances, as on the plateau of the buckling
+// curves where every mode reaches the squash load, reports the mode of
+// the lowest elastic critical load (tieWins): a stocky solid bar is not
+// said to fail in torsional buckling.
 func weaker(m *Member, axis Axis, governs string) Result {
 	if axis != Both {
 		return Result{N: evalAxis(m, axis, governs), Axis: axis, Governs: governs, Mode: flexuralMode(axis)}
 	}
 	res := Result{N: evalAxis(m, Major, governs), Axis: Major, Governs: governs, Mode: ModeFlexuralMajor}
-	if n := evalAxis(m, Minor, governs); n <= res.N {
+	if n := evalAxis(m, Minor, governs); n < res.N || n == res.N && Euler(m, Minor) <= Euler(m, Major) {
 		res = Result{N: n, Axis: Minor, Governs: governs, Mode: ModeFlexuralMinor}
 	}
 	if m.Props.It != 0 {
-		if t := twisting(m, governs); t.N <= res.N {
+		if t := twisting(m, governs); t.N < res.N || t.N == res.N && tieWins(m, res.Mode) {
 			res = t
 		}
 	}
 	return res
+}
+
+// tieWins reports whether the twisting mode, tied in resistance with the
+// flexural mode f, has the lower (or equal) elastic critical load.
+func tieWins(m *Member, f Mode) bool {
+	a := Minor
+	if f == ModeFlexuralMajor {
+		a = Major
+	}
+	nt, _ := TwistingLoad(m)
+	return nt <= Euler(m, a)
 }
 
 // evalAxis runs the closed-form model named by governs about one axis.

@@ -164,3 +164,45 @@ func TestTorsionalModeDoublySymmetric(t *testing.T) {
 		t.Errorf("long member mode %v, want flexural-minor", mode)
 	}
 }
+
+// TestTieReportsLowestCriticalLoad: on the plateau of the buckling curves
+// (relative slenderness at most 0.2, EN 1993-1-1 6.3.1.2(4)) every mode
+// resists the squash load A fy, so the resistances tie; the mode reported
+// is the one of the lowest elastic critical load. A solid square bar
+// 100 x 100 mm, 200 mm long: flexural N_cr = pi^2 E I / L^2 = 4.2e8 N
+// (I = b^4/12, Timoshenko & Gere ch. 2) against a torsional
+// G It / i0^2 = 6.7e8 N (It = 0.1406 b^4, Timoshenko & Goodier, Theory of
+// Elasticity, torsion of a square bar), so flexure governs, not torsion.
+// Strictly lower resistances still decide: the short cruciform-like I of
+// TestTorsionalModeDoublySymmetric twists.
+func TestTieReportsLowestCriticalLoad(t *testing.T) {
+	bar, err := Section{Shape: ShapeRect, Depth: 100, Width: 100}.Properties()
+	if err != nil {
+		t.Fatal(err)
+	}
+	thin, err := Section{Shape: ShapeI, Depth: 300, Width: 300, Flange: 6, Web: 5}.Properties()
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range []struct {
+		name string
+		m    Member
+		want Mode
+	}{
+		{"stocky bar", Member{Props: bar, E: 210000, Fy: 355, Length: 200, K: [2]float64{1, 1}, Alpha: [2]float64{0.49, 0.49}}, ModeFlexuralMinor},
+		{"stocky bar, major axis longer", Member{Props: bar, E: 210000, Fy: 355, Length: 200, K: [2]float64{1.5, 1}, Alpha: [2]float64{0.49, 0.49}}, ModeFlexuralMajor},
+		{"short thin I", Member{Props: thin, E: 210000, Fy: 355, Length: 500, K: [2]float64{1, 1}, Alpha: [2]float64{0.34, 0.49}}, ModeTorsional},
+	} {
+		cv, err := Curve(&c.m, Both)
+		if err != nil {
+			t.Fatal(err)
+		}
+		fy, err := FirstYield(&c.m, Both)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if cv.Mode != c.want || fy.Mode != c.want {
+			t.Errorf("%s: curve mode %v, first-yield mode %v, want %v", c.name, cv.Mode, fy.Mode, c.want)
+		}
+	}
+}
