@@ -82,7 +82,7 @@ func FirstYieldFactor(m *Member, axis Axis, n float64, b *Bending) (Factor, erro
 		res = Factor{Factor: f, Axis: o, Mode: flexuralMode(o), Governs: GovernsFirstYield}
 	}
 	if m.Props.It != 0 {
-		if t := twisting(m, GovernsFirstYield); t.N/n <= res.Factor {
+		if t := twisting(m, GovernsFirstYield); TwistingGoverns(m, t.N/n, res.Factor, res.Axis) {
 			res = Factor{Factor: t.N / n, Axis: t.Axis, Mode: t.Mode, Governs: GovernsFirstYield}
 		}
 	}

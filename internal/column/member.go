@@ -96,23 +96,32 @@ func weaker(m *Member, axis Axis, governs string) Result {
 		return Result{N: evalAxis(m, axis, governs), Axis: axis, Governs: governs, Mode: flexuralMode(axis)}
 	}
 	res := Result{N: evalAxis(m, Major, governs), Axis: Major, Governs: governs, Mode: ModeFlexuralMajor}
-	if n := evalAxis(m, Minor, governs); n < res.N || n == res.N && Euler(m, Minor) <= Euler(m, Major) {
+	if n := evalAxis(m, Minor, governs); MinorGoverns(m, n, res.N) {
 		res = Result{N: n, Axis: Minor, Governs: governs, Mode: ModeFlexuralMinor}
 	}
 	if m.Props.It != 0 {
-		if t := twisting(m, governs); t.N < res.N || t.N == res.N && tieWins(m, res.Mode) {
+		if t := twisting(m, governs); TwistingGoverns(m, t.N, res.N, res.Axis) {
 			res = t
 		}
 	}
 	return res
 }
 
-// tieWins reports whether the twisting mode, tied in resistance with the
-// flexural mode f, has the lower (or equal) elastic critical load.
-func tieWins(m *Member, f Mode) bool {
-	a := Minor
-	if f == ModeFlexuralMajor {
-		a = Major
+// MinorGoverns reports whether the resistance minor about the minor axis
+// governs over major about the major axis: it is smaller, or equal (as
+// on the plateau of the buckling curves) with an elastic critical load
+// not above the major axis's.
+func MinorGoverns(m *Member, minor, major float64) bool {
+	return minor < major || minor == major && Euler(m, Minor) <= Euler(m, Major)
+}
+
+// TwistingGoverns reports whether the resistance twist of the modes that
+// twist the section (Twisting) governs over the resistance flexural about
+// axis a: it is smaller, or equal with an elastic critical load
+// (TwistingLoad) not above the flexural one.
+func TwistingGoverns(m *Member, twist, flexural float64, a Axis) bool {
+	if twist != flexural {
+		return twist < flexural
 	}
 	nt, _ := TwistingLoad(m)
 	return nt <= Euler(m, a)

@@ -188,7 +188,7 @@ func (md *Model) checkBuckling(c *CodeCheck, m *column.Member) error {
 	st := md.Study
 	best := math.Inf(1)
 	pick := func(n float64, a column.Axis, mode column.Mode, ncr float64) {
-		if n <= best {
+		if n < best || n == best && ncr <= c.Critical {
 			best, c.Axis, c.Mode, c.Critical = n, a, mode, ncr
 		}
 	}

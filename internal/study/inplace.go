@@ -101,8 +101,8 @@ func (im *imperfections) to(m *column.Member)   { m.Bow, m.Ecc, m.Sway = im.bow,
 // bothAxes evaluates both axes of a member whose imperfections differ by
 // axis, each with its own (axisMember), and the modes that twist the
 // section with the imperfections of column.TwistingAxis, as the column
-// models do with Both: the weaker governs, a tie reports minor (and the
-// twisting mode over a flexural one). It works on m itself: each mode
+// models do with Both: the weaker governs, a tie the mode of the lower
+// elastic critical load (column.MinorGoverns, column.TwistingGoverns). It works on m itself: each mode
 // sets its own imperfections on m (the column models never write to a
 // member), and m ends with those of the mode that governs.
 func (md *Model) bothAxes(m *column.Member, sec *column.Section, v *values) (column.Result, error) {
@@ -120,7 +120,7 @@ func (md *Model) bothAxes(m *column.Member, sec *column.Section, v *values) (col
 	if err != nil {
 		return res, err
 	}
-	if rj.N < res.N {
+	if !column.MinorGoverns(m, res.N, rj.N) {
 		res = rj
 	} else {
 		best.from(m)
@@ -136,7 +136,7 @@ func (md *Model) bothAxes(m *column.Member, sec *column.Section, v *values) (col
 		governs = column.GovernsCurve
 	}
 	rt, err := column.Twisting(m, governs)
-	if err != nil || rt.N <= res.N {
+	if err != nil || column.TwistingGoverns(m, rt.N, res.N, res.Axis) {
 		return rt, err
 	}
 	best.to(m)

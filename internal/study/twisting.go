@@ -33,7 +33,7 @@ func (md *Model) nominalTwisting(n *Nominal, m *column.Member) error {
 	if err != nil {
 		return fmt.Errorf("at nominal values, torsional mode: %v", err)
 	}
-	if c := n.ModelFactor * res.N; c <= n.Capacity {
+	if c := n.ModelFactor * res.N; column.TwistingGoverns(m, c, n.Capacity, n.Axis) {
 		n.Capacity, n.Axis, n.Governs, n.CapacityMode = c, column.Minor, res.Governs, res.Mode
 		n.ModeSlenderness = math.Sqrt(m.Props.EffectiveArea() * m.Fy / n.Twisting)
 	}

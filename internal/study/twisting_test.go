@@ -104,3 +104,50 @@ func TestCustomTorsionKeys(t *testing.T) {
 		t.Errorf("custom capacity %.10g, angle %.10g", custom.Capacity, angle.Capacity)
 	}
 }
+
+// TestStockyBarTieIsFlexural: a solid square bar 100 x 100 mm, 200 mm
+// long, sits on the plateau of its buckling curve (relative slenderness
+// 0.08, at most 0.2: chi = 1, EN 1993-1-1 6.3.1.2(4)) in every mode, so the
+// nominal capacity, the sampled limit state and the code check all resist
+// A fy; the mode they report is that of the lowest elastic critical load,
+// flexure (pi^2 E I / L^2 = 4.2e8 N, Timoshenko & Gere ch. 2) and not
+// torsion (G It / i0^2 = 6.7e8 N with It = 0.1406 b^4).
+func TestStockyBarTieIsFlexural(t *testing.T) {
+	text := `[member]
+length = 200
+ends = "pinned-pinned"
+[member.section]
+shape = "rect"
+depth = 100
+width = 100
+[material]
+modulus = 205000
+yield = { dist = "normal", mean = 300, cov = 0.1 }
+[capacity]
+model = "curve"
+curve = "a0"
+[loads]
+dead = { dist = "normal", mean = 1800000, cov = 0.1 }
+`
+	md, err := Build(parse(t, text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	n, err := md.Nominal()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if n.CapacityMode.Twists() || n.Mode.Twists() {
+		t.Errorf("nominal capacity mode %v, critical mode %v: a stocky bar does not twist", n.CapacityMode, n.Mode)
+	}
+	if math.Abs(n.Capacity-3e6) > 1e-6*3e6 {
+		t.Errorf("nominal capacity %.8g N, want A fy = 3e6 N", n.Capacity)
+	}
+	cc, err := md.CodeCheck()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if cc.Mode.Twists() {
+		t.Errorf("code check mode %v: a stocky bar does not twist", cc.Mode)
+	}
+}
