@@ -118,7 +118,7 @@ var keyTables = []*TableInfo{
 		{Name: "cost_of_safety", Takes: "text", Choices: []string{"low", "normal", "high"},
 			Meaning: "With consequence: the relative cost of safety measures of the ISO 2394:2015 / JCSS annual targets."},
 		{Name: "reference_period", Takes: "text (a duration)", Default: "50 years for consequence alone, 1 year with cost_of_safety",
-			Meaning: "The period the target applies to, e.g. \"50 years\"; a table target is converted to it by Phi(beta_n) = Phi(beta_1)^n (independent years); free text is a note, with a warning."},
+			Meaning: "The period the target applies to, e.g. \"50 years\"; a table target is converted to it by Phi(beta_n) = Phi(beta_1)^n (independent years); free text without a number is a note, with a warning; a number that is not a positive duration (\"-50 years\", \"50 kN\", \"50\") is an error."},
 		{Name: "reserve_on", Takes: "text", Choices: []string{"variable", "all"}, Default: "variable", Meaning: "The loads the reserve factor multiplies."},
 		{Name: "permanent", Takes: "list of load names", Default: "the loads named dead, permanent, self_weight, superimposed_dead",
 			Meaning: "The permanent loads; every other load is variable."},

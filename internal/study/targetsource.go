@@ -1,7 +1,9 @@
 package study
 
 import (
+	"strconv"
 	"strings"
+	"unicode"
 
 	"strutrisk/internal/assess"
 )
@@ -76,8 +78,18 @@ func (p *parser) targetBeta(t *table) {
 }
 
 // referencePeriod reads target.reference_period: a duration in years
-// (given reports that one was read). Free text is kept as a note.
+// (given reports that one was read). Free text without a number is kept
+// as a note; text that starts with a number but is not a positive
+// duration ("-50 years", "0 years", "NaN years", "50 kN", "50") is an
+// error, as no reader can tell what period such a target applies to.
 func (p *parser) referencePeriod(t *table) (years float64, given bool) {
+	if v, ok := t.get("reference_period"); ok {
+		switch v.(type) {
+		case int64, float64:
+			p.errorf(t.key("reference_period"), "must be text in quotes with a unit, e.g. \"50 years\", not the bare number %v", v)
+			return 0, false
+		}
+	}
 	s, ok := p.str(t, "reference_period")
 	if !ok {
 		return 0, false
@@ -85,10 +97,34 @@ func (p *parser) referencePeriod(t *table) (years float64, given bool) {
 	s = strings.TrimSpace(s)
 	p.st.ReferencePeriod = s
 	y, err := assess.ParseYears(s)
+	if err != nil && startsWithNumber(s) {
+		p.errorf(t.key("reference_period"), "%v; give a positive duration such as \"50 years\" or \"1 year\"", err)
+		return 0, false
+	}
 	if err != nil {
 		p.warnf("target.reference_period (line %d): %v; the text is read as a note only", p.line(t.key("reference_period")), err)
 		return 0, false
 	}
 	p.st.ReferencePeriod = assess.YearsText(y)
 	return y, true
+}
+
+// startsWithNumber reports whether the first word of s, or its part
+// before the first letter ("-50years"), reads as a number (NaN and Inf
+// too): such text means a quantity, not a note.
+func startsWithNumber(s string) bool {
+	f := strings.Fields(s)
+	if len(f) == 0 {
+		return false
+	}
+	w := strings.ReplaceAll(f[0], "_", "")
+	if _, err := strconv.ParseFloat(w, 64); err == nil {
+		return true
+	}
+	i := strings.IndexFunc(w, unicode.IsLetter)
+	if i <= 0 {
+		return false
+	}
+	_, err := strconv.ParseFloat(w[:i], 64)
+	return err == nil
 }
