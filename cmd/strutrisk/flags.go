@@ -1,7 +1,6 @@
 package main
 
 import (
-	"encoding/json"
 	"flag"
 	"fmt"
 	"io"
@@ -23,14 +22,15 @@ func outputFlags(fs *flag.FlagSet, o *runOptions) {
 	fs.BoolVar(&o.requireTarget, "require-target", false, "exit with status 1 when the target reliability index is not met")
 }
 
-// printJSON prints v as indented JSON on stdout; a value that cannot be
-// encoded is an internal failure.
-func printJSON(v any, stdout, stderr io.Writer) int {
-	out, err := json.MarshalIndent(v, "", "  ")
+// printJSON prints the document d on stdout as results.json holds it
+// (report.DocumentJSON); a document that cannot be encoded is an
+// internal failure.
+func printJSON(d *report.Document, stdout, stderr io.Writer) int {
+	out, err := report.DocumentJSON(d)
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 		return exitInternal
 	}
-	stdout.Write(append(out, '\n'))
+	stdout.Write(out)
 	return exitOK
 }

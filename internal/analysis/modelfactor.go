@@ -1,8 +1,6 @@
 package analysis
 
 import (
-	"encoding/json"
-
 	"strutrisk/internal/modelerror"
 	"strutrisk/internal/outdir"
 	"strutrisk/internal/report"
@@ -23,11 +21,11 @@ type ModelFactorOutput struct {
 
 // ModelFactor is the output of the evaluation ev.
 func ModelFactor(ev *modelerror.Evaluation) (*ModelFactorOutput, error) {
-	doc, err := json.MarshalIndent(ev, "", "  ")
+	doc, err := report.EncodeJSON(ev)
 	if err != nil {
 		return nil, err
 	}
-	return &ModelFactorOutput{Eval: ev, JSON: append(doc, '\n'), Text: ev.Text() + "\n" + report.CautionText + "\n"}, nil
+	return &ModelFactorOutput{Eval: ev, JSON: doc, Text: ev.Text() + "\n" + report.CautionText + "\n"}, nil
 }
 
 // Files are the files of the evaluation's folder: model-factor.json,

@@ -1,8 +1,6 @@
 package report
 
 import (
-	"bytes"
-	"encoding/json"
 	"errors"
 	"fmt"
 	"slices"
@@ -70,7 +68,7 @@ func Files(b *Bundle, formats []string) ([]outdir.File, error) {
 	want := func(f string) bool { return slices.Contains(formats, f) }
 
 	var files []outdir.File
-	js, err := documentJSON(b.Doc)
+	js, err := DocumentJSON(b.Doc)
 	if err != nil {
 		return nil, err
 	}
@@ -158,20 +156,4 @@ func renderPictures(b *Bundle, svg, png bool) (pics []picture, notes []string) {
 		pics = append(pics, p)
 	}
 	return pics, notes
-}
-
-// documentJSON encodes d as indented JSON with "warnings" always an array.
-func documentJSON(d *Document) ([]byte, error) {
-	c := *d
-	if c.Warnings == nil {
-		c.Warnings = []string{}
-	}
-	var buf bytes.Buffer
-	enc := json.NewEncoder(&buf)
-	enc.SetIndent("", "  ")
-	enc.SetEscapeHTML(false)
-	if err := enc.Encode(&c); err != nil {
-		return nil, fmt.Errorf("report: cannot encode the result document (a value is probably NaN or infinite): %w", err)
-	}
-	return buf.Bytes(), nil
 }
