@@ -2,7 +2,11 @@ package analysis
 
 import (
 	"context"
+	"strings"
 	"testing"
+
+	"strutrisk/internal/report"
+	"strutrisk/sim"
 )
 
 // TestInventorySystemTakesRunBudget checks that the joint sample of an
@@ -30,5 +34,27 @@ func TestInventorySystemTakesRunBudget(t *testing.T) {
 	}
 	if sys.Samples != 20_000 || sys.Status != "budget reached" {
 		t.Errorf("system: %d joint samples, status %q; want the run's 20000 and %q", sys.Samples, sys.Status, "budget reached")
+	}
+}
+
+// TestInventoryTargetShortfall checks that --require-target's shortfall
+// of a study that meets its target names the inventory's members that do
+// not (the study is a typical member, not the building), and that every
+// member meeting it leaves nothing to say.
+func TestInventoryTargetShortfall(t *testing.T) {
+	tb, met := 3.8, true
+	doc := &report.Document{TargetBeta: &tb, MeetsTarget: &met, Inventory: &report.Inventory{Members: []report.Member{
+		{Name: "F1-C3", Verdict: "not met", Status: "converged"},
+		{Name: "G-C3", Verdict: "undecided", Status: "converged"},
+		{Name: "G-B2", Verdict: "met", Status: "converged"},
+	}}}
+	r := &Result{Estimate: &sim.Result{Status: sim.Converged}}
+	why := r.TargetShortfall(doc)
+	if !strings.Contains(why, "not shown to be met by every member") || !strings.Contains(why, "NOT met by 1 of 3 members (F1-C3); undecided for 1 (G-C3)") {
+		t.Errorf("shortfall %q, want the members named", why)
+	}
+	doc.Inventory.Members = doc.Inventory.Members[2:]
+	if why := r.TargetShortfall(doc); why != "" {
+		t.Errorf("every member meets the target, yet the shortfall is %q", why)
 	}
 }

@@ -75,6 +75,7 @@ a{color:inherit;text-decoration:none}
 
 <section id="result">
 <h2>Result</h2>
+{{if .InvVerdict}}<p class="verdict {{.InvVerdictClass}}">{{.InvVerdict}}</p>{{end}}
 {{if .Verdict}}<p class="verdict {{.VerdictClass}}">{{.Verdict}}</p>{{end}}
 {{if .Result}}<table>{{range .Result}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>{{else}}<p>No sampling result: deterministic check only.</p>{{end}}
 {{if .Influence}}<p>Most influential inputs: {{.Influence}}. {{.RankingNote}}</p>{{end}}

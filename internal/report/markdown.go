@@ -19,6 +19,9 @@ func Markdown(b *Bundle) string {
 	fmt.Fprintf(&w, "> %s\n\n", v.Caution)
 
 	w.WriteString("## Result\n\n")
+	if v.InvVerdict != "" {
+		fmt.Fprintf(&w, "**%s**\n\n", mdText(v.InvVerdict))
+	}
 	if v.Verdict != "" {
 		fmt.Fprintf(&w, "**%s**\n\n", mdText(v.Verdict))
 	}

@@ -43,6 +43,7 @@ func SummaryText(b *Bundle) string {
 	}
 	w.WriteString(estimateText(&d))
 	w.WriteString(targetText(&d))
+	w.WriteString(inventoryTargetText(&d)) // inventory_verdict.go
 	summaryWrapped(&w, "code check", CodeCheckLine(d.CodeCheck))
 	summaryWrapped(&w, "load combination", CombinationLine(&d))
 	summaryWrapped(&w, "remaining life", plainGreek.Replace(LifeVerdict(&d)))

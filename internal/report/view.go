@@ -21,6 +21,10 @@ type view struct {
 	Result       []KV
 	Verdict      string
 	VerdictClass string // "met", "not-met", "undecided" or ""
+	// InvVerdict is an inventory's members against the target, beside
+	// Verdict (then the study's as written, a typical member's), with its
+	// class (inventory_verdict.go).
+	InvVerdict, InvVerdictClass string
 
 	Inputs   []inputRow
 	Check    []CheckRow
@@ -139,6 +143,9 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		v.Result = append(v.Result, KV{"target β", f2(*d.TargetBeta)})
 		v.Verdict = "Target " + verdictText(&d, vd) + "."
 		v.VerdictClass = map[Verdict]string{Met: "met", NotMet: "not-met", Undecided: "undecided"}[vd]
+		if v.InvVerdict, v.InvVerdictClass = inventoryVerdict(&d); v.InvVerdict != "" {
+			v.Verdict = "The study as written (a typical member): target " + verdictText(&d, vd) + "."
+		}
 	}
 	if d.ReserveFactor != nil {
 		v.Result = append(v.Result, KV{"reserve factor (load factor at which the target is just met)", factorText(*d.ReserveFactor)})
