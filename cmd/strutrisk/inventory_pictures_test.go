@@ -89,7 +89,7 @@ func TestInventoryPlotAgainst(t *testing.T) {
 	for _, c := range cases {
 		dir := t.TempDir()
 		study := filepath.Join(dir, "b.toml")
-		text := string(toml) + "plot_against = \"" + c.column + "\"\n"
+		text := withoutPlotAgainst(string(toml)) + "plot_against = \"" + c.column + "\"\n"
 		if err := os.WriteFile(study, []byte(text), 0o644); err != nil {
 			t.Fatal(err)
 		}
@@ -115,4 +115,16 @@ func TestInventoryPlotAgainst(t *testing.T) {
 			t.Errorf("plot_against = %q: the picture is not drawn against it", c.column)
 		}
 	}
+}
+
+// withoutPlotAgainst is the study text without its own plot_against line
+// (the demo names one), so that a test can give another.
+func withoutPlotAgainst(text string) string {
+	var keep []string
+	for _, l := range strings.Split(text, "\n") {
+		if !strings.HasPrefix(strings.TrimSpace(l), "plot_against") {
+			keep = append(keep, l)
+		}
+	}
+	return strings.Join(keep, "\n")
 }

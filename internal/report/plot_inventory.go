@@ -39,7 +39,9 @@ func inventoryPoints(inv *Inventory) (pts []invPoint, members []Member) {
 // addBetaBar draws one member's beta at position at, with its interval
 // as an error bar with end caps along the beta axis (horizontal when
 // horizontal is set), the estimate a ring of radius r so that a short bar
-// shows (red for a member of concern).
+// shows; bar and ring are red for a member of concern (the ring drawn
+// thicker, so that it reads at a glance beside the target's red line),
+// blue otherwise.
 func addBetaBar(p *plot.Plot, pt invPoint, at float64, horizontal bool, capHalf float64, r vg.Length) {
 	xy := func(beta, off float64) plotter.XY {
 		if horizontal {
@@ -47,22 +49,36 @@ func addBetaBar(p *plot.Plot, pt invPoint, at float64, horizontal bool, capHalf 
 		}
 		return plotter.XY{X: at + off, Y: beta}
 	}
+	c, ring := colCapacity, vg.Points(0.9)
+	if pt.concern {
+		c, ring = colFailure, vg.Points(1.8)
+	}
 	if finite(pt.lo) && finite(pt.hi) && pt.lo <= pt.hi {
 		for _, seg := range []plotter.XYs{{xy(pt.lo, 0), xy(pt.hi, 0)}, {xy(pt.lo, -capHalf), xy(pt.lo, capHalf)}, {xy(pt.hi, -capHalf), xy(pt.hi, capHalf)}} {
 			if ln, err := plotter.NewLine(seg); err == nil {
-				ln.LineStyle = lineStyle(colInk, 0.9, false)
+				ln.LineStyle = lineStyle(c, 0.9, false)
 				p.Add(ln)
 			}
 		}
 	}
 	if sc, err := plotter.NewScatter(plotter.XYs{xy(pt.beta, 0)}); err == nil {
-		c := colCapacity
-		if pt.concern {
-			c = colFailure
-		}
-		sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: r, Shape: draw.RingGlyph{}}
+		sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: r, Shape: thickRing{ring}}
 		p.Add(sc)
 	}
+}
+
+// thickRing is a ring glyph whose line is Width wide (draw.RingGlyph
+// takes a fixed hairline).
+type thickRing struct{ Width vg.Length }
+
+// DrawGlyph implements draw.GlyphDrawer.
+func (g thickRing) DrawGlyph(c *draw.Canvas, sty draw.GlyphStyle, pt vg.Point) {
+	c.SetLineStyle(draw.LineStyle{Color: sty.Color, Width: g.Width})
+	var p vg.Path
+	p.Move(vg.Point{X: pt.X + sty.Radius, Y: pt.Y})
+	p.Arc(pt, sty.Radius, 0, 2*math.Pi)
+	p.Close()
+	c.Stroke(p)
 }
 
 // betaRange is the smallest and largest beta and interval end of pts and
