@@ -184,12 +184,13 @@ func shardSystemBlocks(ctx context.Context, ms []systemMember, nShared int, maxN
 	res := make([]*systemCounts, len(todo))
 	done := make(chan struct{})
 	workers := max(1, min(s.Workers, len(todo)))
+	p := newSystemPlan(ms, nShared)
 	for range workers {
 		go func() {
-			w := newSystemWorker(ms, nShared)
+			w := p.worker()
 			for j := range next {
 				b := todo[j]
-				res[j] = w.block(ms, seed, uint64(b), min(int64(systemBlock), maxN-int64(b)*systemBlock))
+				res[j] = w.block(seed, uint64(b), min(int64(systemBlock), maxN-int64(b)*systemBlock))
 			}
 			done <- struct{}{}
 		}()

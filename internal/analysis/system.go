@@ -4,7 +4,6 @@ import (
 	"context"
 	"fmt"
 	"math"
-	"math/rand/v2"
 	"sync"
 
 	"strutrisk/sim"
@@ -70,6 +69,7 @@ func sampleSystem(ctx context.Context, ms []systemMember, nShared int, maxN int6
 	}
 	total := &systemCounts{members: make([]int64, len(ms))}
 	blocks := int((maxN + systemBlock - 1) / systemBlock)
+	p := newSystemPlan(ms, nShared)
 	for b0 := 0; b0 < blocks && ctx.Err() == nil; b0 = nextLook(b0) {
 		b1 := min(nextLook(b0), blocks)
 		res := make([]*systemCounts, b1-b0)
@@ -79,10 +79,10 @@ func sampleSystem(ctx context.Context, ms []systemMember, nShared int, maxN int6
 			wg.Add(1)
 			go func() {
 				defer wg.Done()
-				w := newSystemWorker(ms, nShared)
+				w := p.worker()
 				for b := range next {
 					n := min(int64(systemBlock), maxN-int64(b)*systemBlock)
-					res[b-b0] = w.block(ms, seed, uint64(b), n)
+					res[b-b0] = w.block(seed, uint64(b), n)
 				}
 			}()
 		}
@@ -99,53 +99,6 @@ func sampleSystem(ctx context.Context, ms []systemMember, nShared int, maxN int6
 		}
 	}
 	return total
-}
-
-// systemWorker holds one worker's buffers.
-type systemWorker struct {
-	z, u, x []float64
-}
-
-func newSystemWorker(ms []systemMember, nShared int) *systemWorker {
-	d := 0
-	for _, m := range ms {
-		d = max(d, m.t.Dim())
-	}
-	return &systemWorker{z: make([]float64, nShared), u: make([]float64, d), x: make([]float64, d)}
-}
-
-// block draws n joint samples from the stream of (seed, b).
-func (w *systemWorker) block(ms []systemMember, seed, b uint64, n int64) *systemCounts {
-	c := &systemCounts{n: n, members: make([]int64, len(ms))}
-	r := rand.New(rand.NewPCG(seed, b))
-	for range n {
-		for k := range w.z {
-			w.z[k] = r.NormFloat64()
-		}
-		failing := int64(0)
-		for i := range ms {
-			m := &ms[i]
-			d := m.t.Dim()
-			u, x := w.u[:d], w.x[:d]
-			for k, s := range m.shared {
-				if s >= 0 {
-					u[k] = w.z[s]
-				} else {
-					u[k] = r.NormFloat64()
-				}
-			}
-			m.t.ToX(x, u)
-			if m.m.G(x, nil) < 0 {
-				c.members[i]++
-				failing++
-			}
-		}
-		if failing > 0 {
-			c.failures++
-			c.failing += failing
-		}
-	}
-	return c
 }
 
 // sharedIndex maps each (shared input, group) to the index of its shared
