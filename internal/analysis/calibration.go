@@ -115,17 +115,14 @@ func caseSlenderness(st *study.Study, v, i int) float64 {
 
 // calibrate runs assess.Calibrate on the cases of st's calibration
 // (calibrationCases), each weighted by its variant's name ("study" for the
-// study itself). obs is told of each value tried.
+// study itself) and its swept point (CalibrationSpec.Weight). obs is told
+// of each value tried.
 func calibrate(ctx context.Context, st *study.Study, fs *sim.FORMSettings, obs Observer) (*assess.Calibration, error) {
 	cs := st.Calibration
 	list := calibrationCases(st)
 	cases := make([]assess.CalibrationCase, len(list))
 	for k, c := range list {
-		key := study.CalibrationStudy
-		if c.v >= 0 {
-			key = st.Variants[c.v].Name
-		}
-		cases[k] = assess.CalibrationCase{Name: c.name, Weight: weightOf(cs, key)}
+		cases[k] = assess.CalibrationCase{Name: c.name, Weight: cs.Weight(st, c.v, c.i)}
 	}
 	trial := 0
 	beta := func(x float64, k int) (float64, error) {
@@ -163,14 +160,6 @@ func addInitial(cal *assess.Calibration, x float64, beta func(float64, int) (flo
 	for i := range cal.Cases {
 		cal.Cases[i].BetaInitial = &bs[i]
 	}
-}
-
-// weightOf is the weight of the case name: calibration.weights or 1.
-func weightOf(cs *study.CalibrationSpec, name string) float64 {
-	if w, ok := cs.Weights[name]; ok {
-		return w
-	}
-	return 1
 }
 
 // calibrationBeta is the FORM beta of variant v (-1 the study) at swept

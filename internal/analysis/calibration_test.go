@@ -120,6 +120,11 @@ func TestCalibrationRefused(t *testing.T) {
 		{calibrationStudy("weights = { nowhere = 1 }\n"), "calibration.weights.nowhere"},
 		{calibrationStudy("weights = { snow = -1 }\n"), "calibration.weights.snow"},
 		{strings.Replace(calibrationStudy(""), `normalise = "design"`, ``, 1), "calibration.factor"},
+		{calibrationStudy("point_weights = [1, 2]\n"), "calibration.point_weights: weights swept points, but the study has no [sweep]"},
+		{swapVariants(calibrationStudy("point_weights = [1, 2, 3]\n"), sweptYieldCoV), "calibration.point_weights: has 3 weights, but the sweep has 2 points"},
+		{swapVariants(calibrationStudy("point_weights = [1, -2]\n"), sweptYieldCoV), "calibration.point_weights[1]: the weight -2 must be a positive number"},
+		{swapVariants(calibrationStudy("point_weights = [1, \"2\"]\n"), sweptYieldCoV), "calibration.point_weights[1]: must be a number"},
+		{swapVariants(calibrationStudy("point_weights = 2\n"), sweptYieldCoV), "calibration.point_weights: must be a list of numbers"},
 	} {
 		_, err := Load(writeStudy(t, c.text))
 		if err == nil || !strings.Contains(err.Error(), c.want) {
@@ -163,6 +168,12 @@ name = "snow"
 set = { "material.yield.cov" = 0.10, "loads.imposed.cov" = 0.3 }`, tail, 1)
 }
 
+// sweptYieldCoV is a [sweep] of the yield CoV over two values, in place
+// of calibrationStudy's variants.
+const sweptYieldCoV = `[sweep]
+parameter = "material.yield.cov"
+values = [0.05, 0.10]`
+
 // sweptCase is one calibration case of TestCalibrationSweptCases: its
 // name's start, the CoVs of yield and load, its weight.
 type sweptCase struct {
@@ -172,18 +183,21 @@ type sweptCase struct {
 
 // TestCalibrationSweptCases: with a [sweep], the cases are the study and
 // each variant at every swept point (a plain sweep of the yield CoV 0.05
-// and 0.10 crossed with three load CoVs as variants; a grid of both CoVs
-// without variants), each weighted by its variant's weight; the
+// and 0.10 crossed with three load CoVs as variants, also with weights
+// by swept point; a grid of both CoVs without variants), each weighted by
+// its variant's weight times its point's; the
 // calibrated factor is the closed form of TestCalibrationClosedForm over
 // these cases, to 0.005.
 func TestCalibrationSweptCases(t *testing.T) {
-	var crossed, grid []sweptCase
+	var crossed, pointWeighted, grid []sweptCase
 	for _, va := range []struct {
 		name  string
 		vq, w float64
 	}{{"study", 0.2, 2}, {"steady", 0.1, 0.5}, {"snow", 0.3, 1}} {
-		for _, vr := range []float64{0.05, 0.10} {
+		for k, vr := range []float64{0.05, 0.10} {
 			crossed = append(crossed, sweptCase{va.name + ", material.yield.cov = ", vr, va.vq, va.w})
+			// point_weights = [4, 0.25]: the variant's weight times the point's.
+			pointWeighted = append(pointWeighted, sweptCase{va.name + ", material.yield.cov = ", vr, va.vq, va.w * []float64{4, 0.25}[k]})
 		}
 	}
 	for _, vr := range []float64{0.05, 0.10} {
@@ -207,6 +221,15 @@ set = { "loads.imposed.cov" = 0.1 }
 [[variant]]
 name = "snow"
 set = { "loads.imposed.cov" = 0.3 }`), 5.2, crossed},
+		{"sweep, variants and point weights", swapVariants(calibrationStudy("target_beta = 5.2\nweights = { study = 2, steady = 0.5 }\npoint_weights = [4, 0.25]\n"), `[sweep]
+parameter = "material.yield.cov"
+values = [0.05, 0.10]
+[[variant]]
+name = "steady"
+set = { "loads.imposed.cov" = 0.1 }
+[[variant]]
+name = "snow"
+set = { "loads.imposed.cov" = 0.3 }`), 5.2, pointWeighted},
 		{"grid", swapVariants(calibrationStudy("target_beta = 5.6\n"), `[sweep]
 [[sweep.axis]]
 parameter = "material.yield.cov"

@@ -18,6 +18,28 @@ type CalibrationSpec struct {
 	// Weights are the cases' weights by name ("study" for the study
 	// itself, a variant's name for the variant); an unlisted case has 1.
 	Weights map[string]float64
+	// PointWeights, with a [sweep], are the swept points' weights in the
+	// order of the sweep (a grid's last axis changing fastest): a case's
+	// weight is its variant's times its point's. Nil: 1 each.
+	PointWeights []float64
+}
+
+// Weight is the weight of variant v (-1 the study itself) at swept point
+// i (-1 none): its name's in Weights times its point's in PointWeights,
+// 1 where unlisted.
+func (cs *CalibrationSpec) Weight(s *Study, v, i int) float64 {
+	name := CalibrationStudy
+	if v >= 0 && v < len(s.Variants) {
+		name = s.Variants[v].Name
+	}
+	w := 1.0
+	if x, ok := cs.Weights[name]; ok {
+		w = x
+	}
+	if i >= 0 && i < len(cs.PointWeights) {
+		w *= cs.PointWeights[i]
+	}
+	return w
 }
 
 // calibrationFactors are the [code_check] keys a calibration may fit.
@@ -55,6 +77,7 @@ func (p *parser) calibration(top *table) {
 		cs.Target = p.st.Target
 	}
 	p.calibrationWeights(t, cs)
+	p.calibrationPointWeights(t, cs)
 	p.unknown(t)
 	p.st.Calibration = cs
 }
@@ -128,6 +151,47 @@ func (p *parser) calibrationWeights(t *table, cs *CalibrationSpec) {
 			cs.Weights[k] = w
 		}
 	}
+}
+
+// calibrationPointWeights reads calibration.point_weights: with a
+// [sweep], one positive weight per swept point.
+func (p *parser) calibrationPointWeights(t *table, cs *CalibrationSpec) {
+	v, ok := t.get("point_weights")
+	if !ok {
+		return
+	}
+	list, isList := v.([]any)
+	if !isList {
+		p.errorf(t.key("point_weights"), "must be a list of numbers, one weight per swept point in the order of the sweep, e.g. [1, 2, 2, 1]")
+		return
+	}
+	n := p.st.SweptPoints()
+	switch {
+	case p.edit != nil: // a case read again has no sweep: the study checked them
+	case n == 0:
+		p.errorf(t.key("point_weights"), "weights swept points, but the study has no [sweep]: weight its cases by name in calibration.weights")
+		return
+	case len(list) != n:
+		p.errorf(t.key("point_weights"), "has %d weights, but the sweep has %d points: give one per swept point, in the order of the sweep (a grid's last axis changing fastest)", len(list), n)
+		return
+	}
+	ws := make([]float64, len(list))
+	for i, e := range list {
+		key := fmt.Sprintf("%s[%d]", t.key("point_weights"), i)
+		switch x := e.(type) {
+		case int64:
+			ws[i] = float64(x)
+		case float64:
+			ws[i] = x
+		default:
+			p.errorf(key, "must be a number, not %s", tomlType(e))
+			continue
+		}
+		if !(ws[i] > 0) || ws[i] > 1e6 {
+			p.errorf(key, "the weight %g must be a positive number", ws[i])
+		}
+	}
+	cs.PointWeights = ws
 }
 
 // CalibrationCase returns the case of the calibration (v an index of

@@ -218,6 +218,8 @@ var keyTables = []*TableInfo{
 		{Name: "target_beta", Takes: "number", Default: "the study's target beta", Meaning: "The beta the cases are brought close to."},
 		{Name: "weights", Takes: "table of case names and numbers", Default: "1 for every case",
 			Meaning: "Each case's weight: \"study\" for the study itself, a variant's name for the variant; with a [sweep], at every swept point."},
+		{Name: "point_weights", Takes: "list of numbers", Default: "1 for every swept point",
+			Meaning: "With a [sweep], each swept point's weight, one per point in the order of the sweep (a grid's last axis changing fastest); a case's weight is its variant's (weights) times its point's."},
 	}},
 	{Path: "output", Meaning: "Where the results go.", Keys: []KeyInfo{
 		{Name: "dir", Takes: "text (a folder)", Default: "out/<study name>", Meaning: "The output folder."},
