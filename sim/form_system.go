@@ -12,7 +12,9 @@ import (
 // normals Z with correlation R_ij = alpha_i·alpha_j, that is
 // 1 - Phi_m(beta; R), computed as a union so that tiny probabilities keep
 // their relative accuracy. One point is exact, two use a 1-D integral
-// (formUnion2), more use Genz's separation of variables (formUnionGenz).
+// (formUnion2), three nested 1-D integrals (formUnion3), more, and three
+// of which two are (nearly) parallel or opposite, Genz's separation of
+// variables (formUnionGenz).
 func formSeriesPf(beta []float64, alpha [][]float64) float64 {
 	switch len(beta) {
 	case 0:
@@ -30,6 +32,11 @@ func formSeriesPf(beta []float64, alpha [][]float64) float64 {
 			r[i][j] = formDot(alpha[i], alpha[j])
 		}
 		r[i][i] = 1
+	}
+	if m == 3 {
+		if pf, ok := formUnion3(beta, r); ok {
+			return pf
+		}
 	}
 	return formUnionGenz(beta, r)
 }
@@ -64,8 +71,11 @@ func formUnion2(b1, b2, rho float64) float64 {
 
 // formJoint2 is P(Z1 > b1, Z2 > b2) for correlation |rho| < 1 by adaptive
 // Simpson quadrature of the conditional integral, split where the inner
-// Phi steps (z = b2/rho).
-func formJoint2(b1, b2, rho float64) float64 {
+// Phi steps (z = b2/rho), to 1e-12 of P(Z1 > b1).
+func formJoint2(b1, b2, rho float64) float64 { return formJoint2Tol(b1, b2, rho, 1e-12) }
+
+// formJoint2Tol is formJoint2 to the tolerance rel P(Z1 > b1).
+func formJoint2Tol(b1, b2, rho, rel float64) float64 {
 	s := math.Sqrt(1 - rho*rho)
 	f := func(z float64) float64 {
 		return distuv.UnitNormal.Prob(z) * distuv.UnitNormal.CDF((rho*z-b2)/s)
@@ -79,7 +89,7 @@ func formJoint2(b1, b2, rho float64) float64 {
 		}
 	}
 	cuts = append(cuts, hi)
-	tol := 1e-12 * formTail(b1)
+	tol := rel * formTail(b1)
 	var sum float64
 	for i := 0; i+1 < len(cuts); i++ {
 		sum += formSimpson(f, cuts[i], cuts[i+1], tol)
