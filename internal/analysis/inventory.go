@@ -23,7 +23,9 @@ type inventoryRun struct {
 
 // MemberSeed is the seed of member i of an inventory run with seed: each
 // member draws its own stream, a function of (seed, i) only, so members
-// can be run in any order or on other machines.
+// can be run in any order or on other machines. A member equal to an
+// earlier row of the file (the same keys set to the same values) draws
+// with that row's seed: it is the same study, with the same estimate.
 func MemberSeed(seed uint64, i int) uint64 {
 	// SplitMix64's finaliser (Steele, Lea & Flood 2014) of seed and i.
 	z := seed + uint64(i+1)*0x9e3779b97f4a7c15
@@ -44,7 +46,7 @@ func runInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.FOR
 	settings := caseSettings(s)
 	fs := memberFORM(s.FORM, main)
 	sys := make([]systemMember, 0, len(inv.Members))
-	same := &sameMembers{}
+	same := newSameMembers(inv)
 	outs := runMembers(ctx, l.Study, &settings, obs, func(i int, ms *sim.Settings) memberOutcome {
 		if ms.Shard.Replays() { // a merge's from the shards (inventory_shard.go)
 			return memberResult(l.Study, i, ms.Shard)
@@ -85,9 +87,10 @@ func runMember(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs 
 	return o.mr, o.md, o.warns
 }
 
-// memberRun is runMember, giving the member's FORM result too; same,
-// when not nil, holds the reserve factors of the member studies run
-// before.
+// memberRun is runMember, giving the member's FORM result too. The
+// member draws with the seed of the first row of the file equal to it
+// (sameMembers.seedRow); same, when not nil, holds the estimates and
+// reserve factors of the member studies run before, shared by equal rows.
 func memberRun(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs *sim.FORMSettings, same *sameMembers) memberOutcome {
 	m := st.Inventory.Members[i]
 	mr := report.Member{Name: m.Name, Line: m.Line, Cells: m.Cells}
@@ -115,8 +118,9 @@ func memberRun(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs 
 	warns = append(append(warns, md.Plausibility(nom)...), md.Adequacy(nom)...)
 	mr.GoverningAxis, mr.Mode = nom.Axis.String(), nom.CapacityMode.String()
 	settings := md.SimSettings(*s)
-	settings.Seed = MemberSeed(s.Seed, i)
-	res, err := sim.Run(ctx, md.Sim, &settings)
+	key := memberKey(&m)
+	settings.Seed = MemberSeed(s.Seed, same.seedRow(st.Inventory, i, key))
+	res, err := same.estimateOf(key, func() (*sim.Result, error) { return sim.Run(ctx, md.Sim, &settings) })
 	if err != nil {
 		return fail(err)
 	}
@@ -132,7 +136,7 @@ func memberRun(ctx context.Context, st *study.Study, i int, s *sim.Settings, fs 
 	}
 	if ms.HasTarget {
 		mr.Verdict = memberVerdict(ms, res)
-		f, w := same.reserveOf(ctx, memberKey(&m), func() (*float64, string) {
+		f, w := same.reserveOf(ctx, key, func() (*float64, string) {
 			return memberReserve(ctx, md, ms.Target, fs, settings.FORM, res)
 		})
 		if mr.ReserveFactor = f; w != "" {

@@ -26,7 +26,7 @@ func TestSameMembersReserve(t *testing.T) {
 	s := l.Settings(1)
 	cs := caseSettings(&s)
 	fs := memberFORM(s.FORM, nil)
-	same := &sameMembers{}
+	same := newSameMembers(inv)
 	for i := range inv.Members {
 		o := memberRun(context.Background(), l.Study, i, &cs, fs, same)
 		alone, _, _ := runMember(context.Background(), l.Study, i, &cs, fs)
@@ -36,5 +36,43 @@ func TestSameMembersReserve(t *testing.T) {
 	}
 	if same.found != 2 {
 		t.Errorf("%d reserve searches for two distinct member studies", same.found)
+	}
+}
+
+// TestSameMembersEstimate: equal rows share one estimate, run once, drawn
+// with the seed of the first of them, so the rows show the same pf, the
+// one each finds alone (runMember, which remembers nothing) and the one
+// found when the rows run in the reverse order; a row that differs draws
+// its own.
+func TestSameMembersEstimate(t *testing.T) {
+	l := loadInventory(t, benchInventory, sameRows)
+	inv := l.Study.Inventory
+	s := l.Settings(1)
+	cs := caseSettings(&s)
+	fs := memberFORM(s.FORM, nil)
+	same := newSameMembers(inv)
+	pf := make([]float64, len(inv.Members))
+	for i := range inv.Members {
+		o := memberRun(context.Background(), l.Study, i, &cs, fs, same)
+		alone, _, _ := runMember(context.Background(), l.Study, i, &cs, fs)
+		if o.mr.Error != "" || o.mr.Pf != alone.Pf || o.mr.Beta != alone.Beta || o.mr.PfCI != alone.PfCI {
+			t.Errorf("member %s: pf %v (%s), alone %v", o.mr.Name, o.mr.Pf, o.mr.Error, alone.Pf)
+		}
+		pf[i] = o.mr.Pf
+	}
+	if same.runs != 2 {
+		t.Errorf("%d estimates run for two distinct member studies", same.runs)
+	}
+	if pf[0] != pf[2] || pf[0] == pf[1] {
+		t.Errorf("pf %v: rows 1 and 3 are the same study, row 2 another", pf)
+	}
+	back := newSameMembers(inv)
+	for i := len(inv.Members) - 1; i >= 0; i-- {
+		if o := memberRun(context.Background(), l.Study, i, &cs, fs, back); o.mr.Pf != pf[i] {
+			t.Errorf("member %s run last to first: pf %v, first to last %v", o.mr.Name, o.mr.Pf, pf[i])
+		}
+	}
+	if back.seedRow(inv, 2, memberKey(&inv.Members[2])) != 0 || same.seedRow(nil, 1, memberKey(&inv.Members[1])) != 1 {
+		t.Error("seedRow: row 3 draws with row 1's seed, row 2 with its own")
 	}
 }

@@ -108,7 +108,7 @@ func shardInventory(ctx context.Context, l *Loaded, s *sim.Settings, main *sim.F
 	settings := caseSettings(s)
 	settings.Shard = nil // a member is run whole by the shard that owns it
 	fs := memberFORM(s.FORM, main)
-	same := &sameMembers{}
+	same := newSameMembers(inv)
 	outs := runMembers(ctx, l.Study, &settings, obs, func(i int, ms *sim.Settings) memberOutcome {
 		if s.Shard.Owns(i) {
 			return memberRun(ctx, l.Study, i, ms, fs, same)
