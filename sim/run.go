@@ -9,9 +9,14 @@ import (
 
 // Progress reports the state of a running estimate.
 type Progress struct {
-	// Done and Total count evaluations (Total is the budget).
+	// Done and Total count evaluations (Total is the budget, or the
+	// method's own bound on them when sooner; 0 when not known yet).
 	Done, Total int64
 	Pf, CoV     float64
+	// Phase names the step of the method under way when it has several
+	// (the surrogate: "FORM", its learning with the least U, the
+	// classification of its candidates); empty otherwise.
+	Phase string
 }
 
 // Settings control Run. The zero value of each field means its default.

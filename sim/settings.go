@@ -39,6 +39,12 @@ type SurrogateSettings struct {
 	Population int
 	// MaxPopulation bounds the candidates; default 200000.
 	MaxPopulation int
+	// MaxLearning bounds the model evaluations the learning adds after
+	// FORM's, each followed by a refit of the Kriging model whose cost
+	// grows with the cube of its points; default 300
+	// (DefaultSurrogateMaxLearning). A run that reaches it before the
+	// model settles is Unsettled, as one whose budget ends.
+	MaxLearning int
 }
 
 // surrogate returns the surrogate settings with defaults.
@@ -52,6 +58,9 @@ func (s *Settings) surrogate() SurrogateSettings {
 	}
 	if c.MaxPopulation <= 0 {
 		c.MaxPopulation = DefaultSurrogateMaxPopulation
+	}
+	if c.MaxLearning <= 0 {
+		c.MaxLearning = DefaultSurrogateMaxLearning
 	}
 	return c
 }
@@ -109,8 +118,8 @@ func (s *Settings) checkMethods() error {
 		return fmt.Errorf("sim: ConditionalQMC.Replicates must be at least 2, got %d", s.replicates())
 	case s.Importance != nil && s.Importance.MinFailures < 0:
 		return fmt.Errorf("sim: Importance.MinFailures must be zero (default) or positive, got %d", s.Importance.MinFailures)
-	case s.Surrogate != nil && (s.Surrogate.Population < 0 || s.Surrogate.MaxPopulation < 0):
-		return fmt.Errorf("sim: Surrogate.Population and MaxPopulation must be zero (default) or positive, got %d and %d", s.Surrogate.Population, s.Surrogate.MaxPopulation)
+	case s.Surrogate != nil && (s.Surrogate.Population < 0 || s.Surrogate.MaxPopulation < 0 || s.Surrogate.MaxLearning < 0):
+		return fmt.Errorf("sim: Surrogate.Population, MaxPopulation and MaxLearning must be zero (default) or positive, got %d, %d and %d", s.Surrogate.Population, s.Surrogate.MaxPopulation, s.Surrogate.MaxLearning)
 	case s.Subset != nil && s.Subset.LevelSize != 0 && s.Subset.LevelSize < 100:
 		return fmt.Errorf("sim: Subset.LevelSize must be zero (default) or at least 100, got %d", s.Subset.LevelSize)
 	}

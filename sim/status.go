@@ -36,7 +36,8 @@ const (
 	// quasi-Monte Carlo, above twice the target CoV, or pf exactly zero
 	// (flagRoughConditional): pf is then only an order of magnitude.
 	Imprecise
-	// Unsettled: the surrogate's budget ended before its Kriging model
+	// Unsettled: the surrogate's budget, or its cap on the learning
+	// (SurrogateSettings.MaxLearning), ended before its Kriging model
 	// settled (some candidate's predicted sign still in doubt, U below
 	// 2): the interval rests on the model's own, unverified, predictive
 	// spread.

@@ -33,9 +33,15 @@ const streamSurrogate uint64 = 0x4b
 // block of candidates is drawn (up to Surrogate.MaxPopulation) and the
 // learning goes on. The model evaluations, FORM's included, are bounded
 // by Settings.Samples (FORM itself is not cut short: a budget below what
-// FORM needs ends the learning at once). A budget that ends before the
-// model settles leaves the result Unsettled, not trusted: the interval
-// would rest on the Kriging model's own predictive spread alone.
+// FORM needs ends the learning at once), and those the learning adds by
+// Surrogate.MaxLearning: each is followed by a refit and by predictions
+// that cost the square of the training points per candidate, and a limit
+// state the model cannot settle on (candidates closer to g = 0 than the
+// nugget's floor under the predictive spread, which only evaluating each
+// of them decides) would otherwise run on for hours. A budget or a cap
+// that ends before the model settles leaves the result Unsettled, not
+// trusted: the interval would rest on the Kriging model's own predictive
+// spread alone.
 //
 // The estimate counts the candidates the mean predicts failed, weighted
 // as in importance sampling. Its error has two parts, both in PfCoV and
@@ -53,21 +59,25 @@ func surrogate(ctx context.Context, m *Model, t *Transform, s *Settings) (*Resul
 	ss := cfg.surrogate()
 	sp := modelSpace(m, t)
 	rec := &recordSpace{dim: sp.dim}
+	res := &Result{Method: Surrogate, Confidence: cfg.Confidence}
+	tr := newTracer(&cfg, res)
+	tr.report(Progress{Phase: "FORM"})
 	form := formRunRecorded(ctx, sp, surrogateFORM(cfg.formFor(m)), rec.add)
 	for i := range form.Points {
 		p := &form.Points[i]
 		p.X = make([]float64, t.Dim())
 		t.ToX(p.X, p.U)
 	}
-	res := &Result{Method: Surrogate, Confidence: cfg.Confidence, FORM: form}
+	res.FORM = form
 	if ctx.Err() != nil {
 		r := interruptedResult(Surrogate, int64(rec.evals()))
 		r.FORM = form
 		return r, nil
 	}
-	a := &akRun{ctx: ctx, cfg: &cfg, ss: ss, g: sp.newG(), dim: sp.dim, res: res, tr: newTracer(&cfg, res),
+	a := &akRun{ctx: ctx, cfg: &cfg, ss: ss, g: sp.newG(), dim: sp.dim, res: res, tr: tr,
 		k: newKriging(sp.dim), z: distuv.UnitNormal.Quantile(0.5 + cfg.Confidence/2)}
 	a.evals = rec.evals()
+	a.stop = min(int(cfg.Samples), a.evals+ss.MaxLearning)
 	a.mixture(form, a.target())
 	a.train(rec)
 	if err := a.learn(); err != nil {
@@ -103,6 +113,14 @@ func (r *recordSpace) evals() int { return len(r.gv) }
 const (
 	DefaultSurrogatePopulation    = 10000
 	DefaultSurrogateMaxPopulation = 200000
+	// DefaultSurrogateMaxLearning is the default of
+	// SurrogateSettings.MaxLearning: published active-learning Kriging
+	// examples of up to some ten inputs settle within a few hundred
+	// evaluations (Echard, Gayton and Lemaire 2011: 126 for the
+	// four-branch system; from memory), and a Kriging model of about
+	// 300 points is still refitted and predicted in well under a second
+	// per step.
+	DefaultSurrogateMaxLearning = 300
 	// surrogateU is the learning threshold of AK-MCS: min U >= 2.
 	surrogateU = 2.0
 	// surrogateMaxDim is the largest number of inputs auto gives the
@@ -123,7 +141,10 @@ type akRun struct {
 	k     *kriging
 	z     float64
 	evals int
-	nan   int
+	// stop is the evaluations at which the learning ends: the budget,
+	// or FORM's evaluations and Surrogate.MaxLearning when sooner.
+	stop int
+	nan  int
 
 	mix   *isMixture
 	cu    []float64 // candidates, row-major
@@ -225,7 +246,7 @@ func (a *akRun) train(rec *recordSpace) {
 		}
 		a.k.add(u, g)
 	}
-	for i := 0; a.k.n() < 2*d+2 && i < len(a.cw) && a.evals < int(a.cfg.Samples); i++ {
+	for i := 0; a.k.n() < 2*d+2 && i < len(a.cw) && a.evals < a.stop; i++ {
 		a.evaluate(i)
 	}
 }

@@ -13,10 +13,11 @@ import (
 // (and the loop goes on if any is then uncertain), so the stop rests on
 // all of them.
 func (a *akRun) learn() error {
-	budget, target := int(a.cfg.Samples), a.target()
+	target := a.target()
 	if _, err := a.refit(); err != nil {
 		return err
 	}
+	a.phase(0)
 	a.predictAll()
 	for {
 		best, minU := a.argminU()
@@ -29,9 +30,11 @@ func (a *akRun) learn() error {
 			return nil
 		case settled && e.cov > target && len(a.cw) < a.ss.MaxPopulation:
 			// More candidates first: the check of all comes last.
+			a.phase(minU)
 			a.growPredicted(e.cov, target)
 			continue
 		case settled && a.stale:
+			a.phase(minU)
 			a.predictAll()
 			continue
 		case settled:
@@ -40,13 +43,14 @@ func (a *akRun) learn() error {
 			}
 			a.finish(e, minU)
 			return nil
-		case a.evals >= budget || best < 0:
+		case a.evals >= a.stop || best < 0:
 			if a.stale {
+				a.phase(minU)
 				a.predictAll()
 				best, minU = a.argminU()
 				e = a.estimate()
 			}
-			a.res.flag(Unsettled, fmt.Sprintf("the budget of %d model evaluations ended before the surrogate settled (least U %.2f, below %.0f): the signs of some candidates are in doubt; raise samples", budget, minU, surrogateU))
+			a.res.flag(Unsettled, a.unsettledReason(minU))
 			a.finish(e, minU)
 			return nil
 		}
@@ -58,8 +62,33 @@ func (a *akRun) learn() error {
 		a.stale = true
 		e = a.estimate()
 		a.tr.point(ConvergencePoint{Evaluations: int64(a.evals), Pf: e.pf, PfCI: [2]float64{e.lo, e.hi}, PfCoV: e.cov})
-		a.tr.report(Progress{Done: int64(a.evals), Total: a.cfg.Samples, Pf: e.pf, CoV: e.cov})
+		if a.tr.watching() {
+			a.tr.report(Progress{Done: int64(a.evals), Total: int64(a.stop), Pf: e.pf, CoV: e.cov, Phase: fmt.Sprintf("learning, least U %.2f of %.0f", minU, surrogateU)})
+		}
 	}
+}
+
+// phase reports that every candidate is being predicted (classified),
+// after learning to least U minU (0 before the learning).
+func (a *akRun) phase(minU float64) {
+	if !a.tr.watching() {
+		return
+	}
+	p := fmt.Sprintf("classifying %d candidates", len(a.cw))
+	if minU > 0 {
+		p = fmt.Sprintf("least U %.2f, classifying the candidates", minU)
+	}
+	a.tr.report(Progress{Done: int64(a.evals), Total: int64(a.stop), Phase: p})
+}
+
+// unsettledReason says why the learning ended before the model settled
+// at least U minU: the budget of model evaluations, or the cap on the
+// learning's own (Surrogate.MaxLearning), which more samples do not lift.
+func (a *akRun) unsettledReason(minU float64) string {
+	if a.stop < int(a.cfg.Samples) {
+		return fmt.Sprintf("the surrogate's learning reached its cap of %d model evaluations after FORM's before its Kriging model settled (least U %.2f, below %.0f): the signs of some candidates are in doubt and more samples do not lift the cap; use another method (importance or subset) for this limit state", a.ss.MaxLearning, minU, surrogateU)
+	}
+	return fmt.Sprintf("the budget of %d model evaluations ended before the surrogate settled (least U %.2f, below %.0f): the signs of some candidates are in doubt; raise samples", a.cfg.Samples, minU, surrogateU)
 }
 
 // predictAll predicts every candidate and sets the active ones.
