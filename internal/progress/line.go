@@ -15,8 +15,10 @@ import (
 
 // Line draws a one-line progress report on a writer, when on and only
 // once a run has lasted about a second: the step under way (main run,
-// FORM, Sobol indices, reserve confirmation, case k of n...), how far its
-// sampling is, and an estimate of the time left. It is the
+// FORM, Sobol indices, reserve confirmation, case k of n...), the phase
+// of the method within it when it has several (the surrogate's FORM,
+// learning and classification), how far its sampling is, and an estimate
+// of the time left. It is the
 // analysis.Observer of a run and, through Update, the
 // sim.Settings.Progress of its sampling.
 type Line struct {
@@ -135,21 +137,24 @@ func (p *Line) casesLeft(now time.Time, inCase time.Duration, known bool) (time.
 // phaseLeft estimates the time a sampling run needs to finish after
 // running for elapsed: its evaluations go on to the budget s.Total or,
 // sooner, to the number at which the CoV of pf reaches targetCoV (the
-// CoV falls as one over the square root of the evaluations). ok is false
-// before there is enough to go on.
+// CoV falls as one over the square root of the evaluations). A method
+// that names its phase (the surrogate) stops by a rule of its own (its
+// model settles), which the CoV does not foretell: only s.Total bounds
+// it. ok is false before there is enough to go on.
 func phaseLeft(s sim.Progress, targetCoV float64, elapsed time.Duration) (left time.Duration, ok bool) {
 	if s.Done <= 0 || s.Total <= 0 || elapsed < 500*time.Millisecond {
 		return 0, false
 	}
 	end := float64(s.Total)
-	if targetCoV > 0 && s.Pf > 0 && s.CoV > 0 {
+	if targetCoV > 0 && s.Pf > 0 && s.CoV > 0 && s.Phase == "" {
 		end = min(end, float64(s.Done)*(s.CoV/targetCoV)*(s.CoV/targetCoV))
 	}
 	rest := max(0, end-float64(s.Done))
 	return time.Duration(float64(elapsed) * rest / float64(s.Done)), true
 }
 
-// progressLine is the report of a sampling run in the step name.
+// progressLine is the report of a sampling run in the step name, with
+// the method's own phase when it reports one.
 func progressLine(name string, s sim.Progress, left time.Duration, known bool) string {
 	frac := 0.0
 	if s.Total > 0 {
@@ -160,6 +165,9 @@ func progressLine(name string, s sim.Progress, left time.Duration, known bool) s
 	var b strings.Builder
 	if name != "" {
 		b.WriteString(Clip(name, 72) + "  ")
+	}
+	if s.Phase != "" {
+		b.WriteString(Clip(s.Phase, 48) + "  ")
 	}
 	fmt.Fprintf(&b, "[%s%s] %3.0f%%  %s evaluations", strings.Repeat("#", n), strings.Repeat(".", width-n), 100*frac, countText(s.Done))
 	if s.Pf > 0 {

@@ -25,6 +25,7 @@ func TestPhaseLeft(t *testing.T) {
 		{"target CoV before the budget", sim.Progress{Done: 1000, Total: 1e6, Pf: 1e-2, CoV: 0.2}, 0.1, 10 * time.Second, 30 * time.Second, true},
 		{"budget before the target CoV", sim.Progress{Done: 1000, Total: 2000, Pf: 1e-2, CoV: 0.2}, 0.1, 10 * time.Second, 10 * time.Second, true},
 		{"target reached", sim.Progress{Done: 1000, Total: 1e6, Pf: 1e-2, CoV: 0.05}, 0.1, 10 * time.Second, 0, true},
+		{"a phase ends by its own rule, not the CoV", sim.Progress{Done: 250, Total: 1000, Pf: 1e-2, CoV: 0.05, Phase: "learning"}, 0.1, 10 * time.Second, 30 * time.Second, true},
 		{"too early", sim.Progress{Done: 10, Total: 1000}, 0, 100 * time.Millisecond, 0, false},
 	} {
 		got, ok := phaseLeft(c.s, c.target, c.elapsed)
@@ -87,6 +88,17 @@ func TestClip(t *testing.T) {
 	} {
 		if got := Clip(c.s, c.n); got != c.want {
 			t.Errorf("Clip(%q, %d) = %q, want %q", c.s, c.n, got, c.want)
+		}
+	}
+}
+
+// TestProgressLinePhase: a method's own phase (the surrogate's learning)
+// follows the step's name on the line.
+func TestProgressLinePhase(t *testing.T) {
+	line := progressLine("reserve confirmation (sampling run 1 of at most 3)", sim.Progress{Done: 300, Total: 600, Phase: "learning, least U 0.42 of 2"}, 0, false)
+	for _, want := range []string{"reserve confirmation (sampling run 1 of at most 3)  learning, least U 0.42 of 2  [", "50%", "300 evaluations"} {
+		if !strings.Contains(line, want) {
+			t.Errorf("line %q lacks %q", line, want)
 		}
 	}
 }
