@@ -165,6 +165,9 @@ func analyse(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) (*Re
 	}
 	if ctx.Err() == nil {
 		r.target = runTarget(ctx, l, s, obs)
+		if r.target != nil && r.target.cut != "" {
+			r.warnings = append(r.warnings, r.target.cut)
+		}
 	}
 	return r, nil
 }

@@ -26,6 +26,9 @@ type targetRun struct {
 	// added is the largest added load after correction (NaN: none).
 	added float64
 	notes []string
+	// cut, when not empty, is the warning that a confirmation run was
+	// cut before its estimator settled (cutWarning).
+	cut string
 }
 
 // maxConfirm bounds the sampling runs that correct the reserve factor.
@@ -74,6 +77,11 @@ func runTarget(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *t
 			t.confirmed = true
 			break
 		}
+		if res.Status == sim.Unsettled {
+			t.cut = cutWarning(res, t.factor, k > 0)
+			t.notes = append(t.notes, "the reserve factor is not confirmed: its confirmation was cut (see the warnings)")
+			break
+		}
 		if !usable {
 			// Too little to correct FORM by: say what was found.
 			t.notes = append(t.notes, fmt.Sprintf("the reserve factor is not confirmed: the sampling run there (%s) %s", res.Method, why))
@@ -108,6 +116,20 @@ func runTarget(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *t
 		t.notes = append(t.notes, fmt.Sprintf("FORM and sampling differ by %.2f in beta here; the reserve factor and the added load are corrected for it (FORM alone gives a factor of %.3f)", d, rv.Factor))
 	}
 	return t
+}
+
+// cutWarning says that the confirmation run res at the reserve factor
+// was cut (the surrogate's learning ended, at its cap or the budget,
+// before its Kriging model settled) and what the factor then is: FORM's,
+// corrected by an earlier run when corrected, unconfirmed, so that no
+// verdict may rest on it.
+func cutWarning(res *sim.Result, factor float64, corrected bool) string {
+	whose := "FORM's alone"
+	if corrected {
+		whose = "FORM's, corrected by an earlier sampling run"
+	}
+	return fmt.Sprintf("reserve confirmation cut after %d model evaluations: the %s run at the reserve factor %.3f ended before it settled (%s); the factor is %s and unconfirmed: it says roughly how far the reserve loads may grow, not that the member meets the target there",
+		res.Evaluations, res.Method, factor, res.StatusReason, whose)
 }
 
 // confirmation says whether the sampling run res at the reserve factor
