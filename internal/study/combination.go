@@ -88,6 +88,22 @@ func (c *Combination) owns(q *Quantity) bool {
 	return false
 }
 
+// companionOf returns the load whose companion q is in a case of
+// Turkstra's rule, or nil when q is none.
+func (c *Combination) companionOf(q *Quantity) *Quantity {
+	if c == nil {
+		return nil
+	}
+	for _, cs := range c.Cases {
+		for k, x := range cs.Loads {
+			if x == q && x != cs.Leading && k < len(c.Loads) {
+				return c.Loads[k]
+			}
+		}
+	}
+	return nil
+}
+
 // replaces reports whether q is a load the combined load of FerryBorges
 // takes the place of.
 func (c *Combination) replaces(q *Quantity) bool {

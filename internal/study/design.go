@@ -22,6 +22,12 @@ import (
 //     annual maxima have the distribution F^(1/n) and the value is
 //     F^-1(0.98^n). A point-in-time load has no maxima: its own 98 %
 //     fractile is taken, and the basis says so;
+//   - a load's companion in a Turkstra case (its value while another
+//     load leads, not a maximum over any period): the combination value
+//     psi_0 Q_k of the load it stands for (EN 1990 6.10 and Table A1.1),
+//     Q_k that load's characteristic value as above and psi_0 that of
+//     [code_check], so that its partial factor x_d / (psi_0 Q_k) compares
+//     with gamma_Q as 6.10 applies it to an accompanying action;
 //   - geometric inputs (length, section, K, end springs, bow,
 //     eccentricity, thickness loss), the model and the effect factor:
 //     their mean, the nominal value (bow and eccentricity: the mean of
@@ -35,18 +41,31 @@ func (md *Model) Characteristic(i int) assess.Characteristic {
 		return assess.Characteristic{Value: d.Quantile(0.05), Basis: "5 % fractile"}
 	case q == st.Bow || q == st.Ecc:
 		return assess.Characteristic{Value: meanMagnitude(d), Basis: "mean of the magnitude"}
+	case st.Combination.companionOf(q) != nil:
+		of := st.Combination.companionOf(q)
+		qk := md.variableCharacteristic(of)
+		psi := st.CodeCheck.Psi0
+		return assess.Characteristic{Value: psi * qk.Value,
+			Basis: fmt.Sprintf("combination value psi_0 Q_k of %s (EN 1990 6.10): psi_0 = %g (code_check.psi_0) times Q_k, its %s", of.Path, psi, qk.Basis)}
 	case (md.isLoad(q) || st.bendingAction(q)) && !md.isPermanent(q):
-		n := q.MaximaYears(st.ReferenceYears)
-		if n == 0 {
-			return assess.Characteristic{Value: d.Quantile(0.98), Basis: "98 % fractile of the point-in-time value (period = point-in-time: no annual maxima given)"}
-		}
-		basis := "98 % fractile of annual maxima"
-		if n != 1 {
-			basis += fmt.Sprintf(" (%s maxima: fractile 0.98^%g)", assess.YearsText(n), n)
-		}
-		return assess.Characteristic{Value: d.Quantile(math.Pow(0.98, n)), Basis: basis}
+		return md.variableCharacteristic(q)
 	}
 	return assess.Characteristic{Value: q.MeanValue(), Basis: "mean"}
+}
+
+// variableCharacteristic is the characteristic value of the variable load
+// q: the 98 % fractile of its annual maxima (see Characteristic).
+func (md *Model) variableCharacteristic(q *Quantity) assess.Characteristic {
+	d := q.Dist
+	n := q.MaximaYears(md.Study.ReferenceYears)
+	if n == 0 {
+		return assess.Characteristic{Value: d.Quantile(0.98), Basis: "98 % fractile of the point-in-time value (period = point-in-time: no annual maxima given)"}
+	}
+	basis := "98 % fractile of annual maxima"
+	if n != 1 {
+		basis += fmt.Sprintf(" (%s maxima: fractile 0.98^%g)", assess.YearsText(n), n)
+	}
+	return assess.Characteristic{Value: d.Quantile(math.Pow(0.98, n)), Basis: basis}
 }
 
 func (md *Model) isLoad(q *Quantity) bool {
