@@ -490,6 +490,7 @@ func (p *parser) member(top *table) {
 				hasEnds = false
 			}
 			endK = k
+			p.fixedEndsNote(canon, k, p.line(t.key("ends")))
 		}
 	}
 	for a, axis := range []string{"major", "minor"} {
