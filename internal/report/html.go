@@ -35,6 +35,7 @@ body{font-family:"Liberation Sans",Arial,Helvetica,sans-serif;color:#222;max-wid
 h1{font-size:1.6rem;margin-bottom:.2rem}h2{font-size:1.25rem;border-bottom:1px solid #ccc;padding-bottom:.2rem;margin-top:2.2rem}h3{font-size:1.05rem;margin-top:1.5rem}
 table{border-collapse:collapse;margin:.6rem 0;font-size:.92rem}th,td{padding:.25rem .7rem;border-bottom:1px solid #e2e2e2;text-align:left;vertical-align:top}th{background:#f4f4f4}
 td.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}
+td.nw{white-space:nowrap}
 figure{margin:1.2rem 0}figure svg{width:100%;max-width:48rem;height:auto}#fig-sweep svg,#fig-beam-column svg{max-width:100%}figcaption{font-size:.88rem;color:#555}
 .verdict{font-weight:bold;padding:.4rem .7rem;display:inline-block;border-radius:3px}
 .met{background:#e3f1e7}.not-met{background:#f7e1de}.undecided{background:#fbf0d9}
@@ -184,8 +185,8 @@ a{color:inherit;text-decoration:none}
 {{with .Inventory}}<p>{{.Head}}.</p>
 <table>{{range .System}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>
 <p>{{.Listing}}</p>
-{{if .Rows}}<table><tr><th>member</th><th>β (–)</th><th>95% interval of β (–)</th><th>verdict</th><th>reserve factor (–)</th><th>governs</th>{{if .HasNote}}<th>note</th>{{end}}</tr>
-{{range .Rows}}<tr><td>{{.Name}}</td><td class="n">{{.Beta}}</td><td class="n">{{.BetaCI}}</td><td{{if .Class}} class="{{.Class}}"{{end}}>{{.Verdict}}</td><td class="n">{{.Reserve}}</td><td>{{.Governs}}</td>{{if $.Inventory.HasNote}}<td>{{.Note}}</td>{{end}}</tr>
+{{if .Rows}}<table><tr><th>member</th><th>β (–)</th><th>95% interval of β (–)</th><th>verdict</th><th>reserve factor (–)</th>{{if .HasCode}}<th>code check N_Ed/N_Rd</th>{{end}}<th>governs</th>{{if .HasNote}}<th>note</th>{{end}}</tr>
+{{range .Rows}}<tr><td>{{.Name}}</td><td class="n">{{.Beta}}</td><td class="n">{{.BetaCI}}</td><td{{if .Class}} class="{{.Class}}"{{end}}>{{.Verdict}}</td><td class="n">{{.Reserve}}</td>{{if $.Inventory.HasCode}}<td class="nw">{{.Code}}</td>{{end}}<td class="nw">{{.Governs}}</td>{{if $.Inventory.HasNote}}<td>{{.Note}}</td>{{end}}</tr>
 {{end}}</table>{{end}}
 {{if .NotRun}}<p>Members not run:</p><ul>{{range .NotRun}}<li>{{.Name}}: {{.Note}}</li>{{end}}</ul>{{end}}
 {{if .Rest}}<p>{{.Rest}}</p>{{end}}{{end}}

@@ -55,3 +55,41 @@ func TestInventoryCSVCodeCheck(t *testing.T) {
 		t.Errorf("no member has a code check, yet inventory.csv has its columns:\n%s", data)
 	}
 }
+
+// TestInventoryListingCodeCheck checks that the members listed in the
+// summary, the Markdown and the HTML report carry their code check beside
+// their beta (the demo's F1-C3 misses beta 3.8 at a utilisation of 0.84).
+func TestInventoryListingCodeCheck(t *testing.T) {
+	tb, trusted, beta := 3.8, true, Index(3.9)
+	d := &Document{TargetBeta: &tb, Trusted: &trusted, Beta: &beta, BetaCI: Indices(3.85, 3.95), Inventory: &Inventory{Members: []Member{
+		{Name: "F1-C3", Verdict: "not met", Status: "converged", Beta: 3.76, BetaCI: [2]Index{3.75, 3.77},
+			CodeCheck: &MemberCodeCheck{Utilisation: 0.8375, Verdict: "satisfied"}},
+		{Name: "X", Verdict: "not met", Status: "converged", Beta: 3.5, BetaCI: [2]Index{3.4, 3.6},
+			CodeCheck: &MemberCodeCheck{Utilisation: 1.116, Verdict: "not satisfied"}},
+		{Name: "Y", Verdict: "undecided", Status: "converged", Beta: 3.8, BetaCI: [2]Index{3.7, 3.9}, CodeCheckNotMade: "class 4 CHS"},
+	}}}
+	b := &Bundle{Doc: d}
+	html, err := htmlReport(b, nil, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range []struct{ where, text, want string }{
+		{"summary", SummaryText(b), "0.838 satisfied"},
+		{"summary", SummaryText(b), "1.116 NOT satisfied"},
+		{"summary", SummaryText(b), "code check"},
+		{"summary.md", Markdown(b), "| F1-C3 | 3.76 | \\[3.75, 3.77\\] | not met | – | 0.838 satisfied |"},
+		{"summary.md", Markdown(b), "| not made |"},
+		{"report.html", string(html), `<th>code check N_Ed/N_Rd</th>`},
+		{"report.html", string(html), `<td class="nw">1.116 NOT satisfied</td>`},
+	} {
+		if !strings.Contains(c.text, c.want) {
+			t.Errorf("%s lacks %q:\n%s", c.where, c.want, c.text)
+		}
+	}
+	for i := range d.Inventory.Members {
+		d.Inventory.Members[i].CodeCheck, d.Inventory.Members[i].CodeCheckNotMade = nil, ""
+	}
+	if s := SummaryText(b); strings.Contains(s, "code check") {
+		t.Errorf("no member has a code check, yet the summary has its column:\n%s", s)
+	}
+}

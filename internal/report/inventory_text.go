@@ -29,7 +29,7 @@ func inventoryText(d *Document) string {
 	}
 	summaryWrapped(&w, "members", plainGreek.Replace(v.Listing))
 	if len(v.Rows) > 0 {
-		w.WriteString(memberTable(v.Rows))
+		w.WriteString(memberTable(v.Rows, v.HasCode))
 	}
 	for _, r := range v.NotRun {
 		for i, l := range WrapText(r.Name+": not run, "+r.Note, summaryWrap) {
@@ -56,23 +56,27 @@ var systemLabels = map[string]string{
 }
 
 // memberTable lays out the listed members in columns, the name as wide
-// as the longest (at most 24 characters, clipped beyond).
-func memberTable(rows []invRow) string {
+// as the longest (at most 24 characters, clipped beyond), with their code
+// check when code is set.
+func memberTable(rows []invRow, code bool) string {
 	nw := len("member")
 	for _, r := range rows {
 		nw = max(nw, min(len(r.Name), 24))
 	}
 	var w strings.Builder
-	line := func(name, beta, ci, verdict, reserve, governs, note string) {
+	line := func(name, beta, ci, verdict, reserve, cc, governs, note string) {
+		if code {
+			reserve = fmt.Sprintf("%7s  %-19s", reserve, cc)
+		}
 		s := fmt.Sprintf("    %-*s %6s  %-16s %-10s %7s  %s", nw, name, beta, ci, verdict, reserve, governs)
 		if note != "" {
 			s += "  " + note
 		}
 		w.WriteString(strings.TrimRight(s, " ") + "\n")
 	}
-	line("member", "beta", "95 % interval", "verdict", "reserve", "governs", "")
+	line("member", "beta", "95 % interval", "verdict", "reserve", "code check", "governs", "")
 	for _, r := range rows {
-		line(clipName(r.Name, 24), r.Beta, r.BetaCI, strings.ReplaceAll(r.Verdict, "–", "-"), strings.ReplaceAll(r.Reserve, "–", "-"), r.Governs, plainGreek.Replace(r.Note))
+		line(clipName(r.Name, 24), r.Beta, r.BetaCI, strings.ReplaceAll(r.Verdict, "–", "-"), strings.ReplaceAll(r.Reserve, "–", "-"), r.Code, r.Governs, plainGreek.Replace(r.Note))
 	}
 	return w.String()
 }
@@ -95,13 +99,24 @@ func mdInventory(w *strings.Builder, v *invView) {
 	fmt.Fprintf(w, "## Inventory\n\n%s.\n\n", mdText(v.Head))
 	mdKV(w, v.System)
 	fmt.Fprintf(w, "%s\n\n", mdText(v.Listing))
-	head := []string{"member", "β (–)", "95% interval of β (–)", "verdict", "reserve factor (–)", "governs", "note"}
-	if !v.HasNote {
-		head = head[:len(head)-1]
+	head := []string{"member", "β (–)", "95% interval of β (–)", "verdict", "reserve factor (–)"}
+	if v.HasCode {
+		head = append(head, "code check N_Ed/N_Rd")
+	}
+	head = append(head, "governs")
+	if v.HasNote {
+		head = append(head, "note")
 	}
 	rows := make([][]string, len(v.Rows))
 	for i, r := range v.Rows {
-		rows[i] = []string{r.Name, r.Beta, r.BetaCI, r.Verdict, r.Reserve, r.Governs, r.Note}[:len(head)]
+		rows[i] = []string{r.Name, r.Beta, r.BetaCI, r.Verdict, r.Reserve}
+		if v.HasCode {
+			rows[i] = append(rows[i], r.Code)
+		}
+		rows[i] = append(rows[i], r.Governs)
+		if v.HasNote {
+			rows[i] = append(rows[i], r.Note)
+		}
 	}
 	mdTable(w, head, rows)
 	if len(v.NotRun) > 0 {

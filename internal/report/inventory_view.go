@@ -24,8 +24,9 @@ type invView struct {
 	// Listing introduces Rows: which members they are.
 	Listing string
 	Rows    []invRow
-	// HasNote is set when a listed member has a note.
-	HasNote bool
+	// HasNote is set when a listed member has a note, HasCode when one
+	// has a code check.
+	HasNote, HasCode bool
 	// NotRun are the members without a result, with the reason.
 	NotRun []invRow
 	// Rest counts the members not listed and says where they are.
@@ -35,6 +36,8 @@ type invView struct {
 // invRow is one listed member, formatted.
 type invRow struct {
 	Name, Beta, BetaCI, Verdict, Reserve, Governs, Note string
+	// Code is the member's code check: its utilisation and verdict.
+	Code string
 	// Class is "met", "not-met", "undecided" or "" (for the HTML).
 	Class string
 }
@@ -81,6 +84,7 @@ func inventoryView(d *Document, interval func(lo, hi string) string) *invView {
 		}
 		v.Rows = append(v.Rows, memberRow(m))
 		v.HasNote = v.HasNote || v.Rows[i].Note != ""
+		v.HasCode = v.HasCode || v.Rows[i].Code != ""
 	}
 	for i, m := range notRun {
 		if i == maxListedMembers {
@@ -146,6 +150,7 @@ func memberRow(m Member) invRow {
 	if m.ReserveFactor != nil {
 		r.Reserve = factorText(*m.ReserveFactor)
 	}
+	r.Code = memberCodeText(m)
 	r.Class = map[string]string{"met": "met", "not met": "not-met", "undecided": "undecided"}[r.Verdict]
 	if r.Verdict == "" {
 		r.Verdict = "–"
@@ -255,4 +260,22 @@ func systemStatus(s *System) string {
 // complementary error function.
 func normQuantile(p float64) float64 {
 	return -math.Sqrt2 * math.Erfcinv(2*p)
+}
+
+// memberCodeText is member m's code check in a listing: "0.837
+// satisfied", "1.12 NOT satisfied", "0.9 no verdict", "not made"; "" when
+// the inventory has none.
+func memberCodeText(m Member) string {
+	c := m.CodeCheck
+	switch {
+	case c == nil && m.CodeCheckNotMade != "":
+		return "not made"
+	case c == nil:
+		return ""
+	}
+	v := c.Verdict
+	if v == "not satisfied" {
+		v = "NOT satisfied"
+	}
+	return fixed(c.Utilisation, 3) + " " + v
 }
