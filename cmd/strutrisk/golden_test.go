@@ -51,6 +51,10 @@ func TestDemoGolden(t *testing.T) {
 			if slowDemo[name] && !*slowDemos && !*update {
 				t.Skip("slow demo: run with -slowdemos")
 			}
+			// The demos run side by side (-parallel at a time): each
+			// writes its own folder, and results do not depend on the
+			// workers each run gets.
+			t.Parallel()
 			got := goldenRun(t, f, demoFlags[name]...)
 			path := filepath.Join("testdata", "golden", name+".json")
 			if *update {

@@ -9,10 +9,10 @@ import (
 	"testing"
 )
 
-// TestInventoryPictures checks that a study with an inventory draws its
-// members ranked by beta and against a column of the inventory, as PNG
-// and SVG files and in the HTML report, and that a study without one
-// draws neither.
+// TestInventoryPictures checks that a study with an inventory (the demo
+// on a smaller budget) draws its members ranked by beta and against a
+// column of the inventory, as PNG and SVG files and in the HTML report,
+// and that a study without one draws neither.
 func TestInventoryPictures(t *testing.T) {
 	pics := []string{"inventory-ranked", "inventory-against"}
 	cases := []struct {
@@ -20,7 +20,7 @@ func TestInventoryPictures(t *testing.T) {
 		flags []string
 		want  bool
 	}{
-		{"../../studies/building-inventory.toml", nil, true},
+		{cheapInventory(t, "30_000", nil), nil, true},
 		{"../../studies/eccentric-strut.toml", []string{"--samples", "20000", "--method", "monte-carlo"}, false},
 	}
 	for _, c := range cases {
@@ -64,19 +64,11 @@ func TestInventoryPictures(t *testing.T) {
 	}
 }
 
-// TestInventoryPlotAgainst checks [inventory] plot_against: a numeric
-// column named is the one beta is drawn against; a column the file does
-// not have, or one that is not numeric, is a study-file error naming the
-// key (exit 2).
+// TestInventoryPlotAgainst checks [inventory] plot_against (on the demo
+// with a smaller budget): a numeric column named is the one beta is drawn
+// against; a column the file does not have, or one that is not numeric,
+// is a study-file error naming the key (exit 2).
 func TestInventoryPlotAgainst(t *testing.T) {
-	toml, err := os.ReadFile("../../studies/building-inventory.toml")
-	if err != nil {
-		t.Fatal(err)
-	}
-	csv, err := os.ReadFile("../../studies/building-inventory.csv")
-	if err != nil {
-		t.Fatal(err)
-	}
 	cases := []struct {
 		column string
 		code   int
@@ -87,15 +79,10 @@ func TestInventoryPlotAgainst(t *testing.T) {
 		{"floor", exitInput, "is not a number"},
 	}
 	for _, c := range cases {
-		dir := t.TempDir()
-		study := filepath.Join(dir, "b.toml")
-		text := withoutPlotAgainst(string(toml)) + "plot_against = \"" + c.column + "\"\n"
-		if err := os.WriteFile(study, []byte(text), 0o644); err != nil {
-			t.Fatal(err)
-		}
-		if err := os.WriteFile(filepath.Join(dir, "building-inventory.csv"), csv, 0o644); err != nil {
-			t.Fatal(err)
-		}
+		study := cheapInventory(t, "30_000", func(s string) string {
+			return withoutPlotAgainst(s) + "plot_against = \"" + c.column + "\"\n"
+		})
+		dir := filepath.Dir(study)
 		out := filepath.Join(dir, "out")
 		code, _, errs := invoke(t, "run", study, "--out", out)
 		if code != c.code {

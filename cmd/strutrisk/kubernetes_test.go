@@ -11,6 +11,7 @@ import (
 	"strconv"
 	"strings"
 	"sync"
+	"sync/atomic"
 	"testing"
 )
 
@@ -203,10 +204,12 @@ func emulateIndexedJob(t *testing.T, shardsYAML, mergeYAML, study string) (strin
 	}
 	root := map[string]string{claim: data}
 	// The pods run parallelism at a time, as Kubernetes runs them, but at
-	// most 4 on this machine.
+	// most 4 on this machine. Once a pod has failed the Job has failed:
+	// no more pods start (the rest would only cost the test time).
 	errs := make([]error, sj.completions)
 	next := make(chan int)
 	var wg sync.WaitGroup
+	var failed atomic.Bool
 	for range max(1, min(sj.parallelism, 4)) {
 		wg.Add(1)
 		go func() {
@@ -214,11 +217,15 @@ func emulateIndexedJob(t *testing.T, shardsYAML, mergeYAML, study string) (strin
 			for k := range next {
 				if out, err := execJob(sj, root, bin, "JOB_COMPLETION_INDEX="+itoa(k)); err != nil {
 					errs[k] = fmt.Errorf("shard pod %d: %v: %s", k, err, out)
+					failed.Store(true)
 				}
 			}
 		}()
 	}
 	for k := range sj.completions {
+		if failed.Load() {
+			break
+		}
 		next <- k
 	}
 	close(next)

@@ -19,23 +19,7 @@ func TestShardInventoryMembers(t *testing.T) {
 	dir := t.TempDir()
 	// The inventory demo with a budget of 30000 samples, which the joint
 	// sample of the system takes too (30 blocks of 1000).
-	text, err := os.ReadFile("../../studies/building-inventory.toml")
-	if err != nil {
-		t.Fatal(err)
-	}
-	s := strings.Replace(string(text), "samples    = 1_000_000", "samples    = 30_000", 1)
-	s = strings.Replace(s, `method     = "auto"`, `method     = "monte-carlo"`, 1)
-	if !strings.Contains(s, "samples    = 30_000") || !strings.Contains(s, `method     = "monte-carlo"`) {
-		t.Fatal("the demo's [analysis] lines moved: update the test")
-	}
-	csv, err := os.ReadFile("../../studies/building-inventory.csv")
-	if err != nil {
-		t.Fatal(err)
-	}
-	inv := writeStudy(t, s)
-	if err := os.WriteFile(filepath.Join(filepath.Dir(inv), "building-inventory.csv"), csv, 0o644); err != nil {
-		t.Fatal(err)
-	}
+	inv := cheapInventory(t, "30_000", nil)
 	var flags []string
 	single := filepath.Join(dir, "single")
 	if code, _, errs := invoke(t, append([]string{"run", inv, "--out", single}, flags...)...); code != exitOK {
@@ -98,17 +82,11 @@ func TestShardInventoryMembers(t *testing.T) {
 // did not cover the CSV before.)
 func TestShardInventoryFileChanged(t *testing.T) {
 	dir := t.TempDir()
-	text, err := os.ReadFile("../../studies/building-inventory.toml")
-	if err != nil {
-		t.Fatal(err)
-	}
-	s := strings.Replace(string(text), "samples    = 1_000_000", "samples    = 4_000", 1)
-	s = strings.Replace(s, `method     = "auto"`, `method     = "monte-carlo"`, 1)
+	inv := cheapInventory(t, "4_000", nil)
 	csv, err := os.ReadFile("../../studies/building-inventory.csv")
 	if err != nil {
 		t.Fatal(err)
 	}
-	inv := writeStudy(t, s)
 	file := filepath.Join(filepath.Dir(inv), "building-inventory.csv")
 	write := func(data []byte) {
 		if err := os.WriteFile(file, data, 0o644); err != nil {
