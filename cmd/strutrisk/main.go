@@ -1,29 +1,13 @@
-// Command strutrisk runs reliability and sensitivity studies of columns.
+// Command strutrisk runs reliability and sensitivity studies of columns:
+// run samples a study (or a shard of it, joined by merge), check validates
+// it and prints the deterministic picture at nominal values, new prints a
+// starter study, help keys lists every key of a study file, model-factor
+// estimates a model factor from tests. `strutrisk --help` prints the usage
+// (internal/cli/help/usage.txt) and `strutrisk COMMAND --help` the flags.
 //
-// Usage:
-//
-//	strutrisk run STUDY.toml [--out DIR] [--seed N] [--samples N] [--method M] [--json] [--require-target] [--workers N]
-//	strutrisk run STUDY.toml --shard K/N [--out DIR] ...
-//	strutrisk merge DIR... [--out OUT] [--study STUDY.toml] [--json] [--require-target]
-//	strutrisk check STUDY.toml [--json]
-//	strutrisk new [NAME]
-//	strutrisk help keys
-//	strutrisk model-factor STUDY.toml TESTS.csv [--design] [--out DIR] [--json]
-//	strutrisk --version
-//
-// run estimates the probability that the column of a study fails and the
-// inputs that drive it, prints a summary and writes results.json,
-// samples.csv, summary.txt and the report files into the output folder.
-// check validates a study and prints the deterministic picture at nominal
-// values without sampling. new prints a commented starter study. help keys
-// lists every table and key of a study file with its meaning, units and
-// default, from the registry the study parser uses.
-//
-// Exit status: 0 the command completed (whether or not the target was
-// met); 1 the target was not met and --require-target was given; 2 bad
-// input (a problem in the study file, an unknown flag, a missing file);
-// 3 an internal failure; 130 the run was interrupted by SIGINT (Ctrl-C),
-// 143 by SIGTERM (what finished is written, marked "complete": false).
+// Exit status: 0 done (target met or not); 1 target not met with
+// --require-target; 2 bad input; 3 an internal failure; 130 interrupted
+// by SIGINT, 143 by SIGTERM (what finished is written, "complete": false).
 //
 // Results depend entirely on the inputs and models stated in the study.
 // strutrisk supports, and never replaces, the judgement of a licensed

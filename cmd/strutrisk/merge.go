@@ -16,7 +16,7 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("merge", flag.ContinueOnError)
 	outputFlags(fs, o)
 	fs.StringVar(&studyPath, "study", "", "the study `FILE` (default: the path the shards read)")
-	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores); results do not depend on it")
+	fs.IntVar(&o.ov.Workers, "workers", 0, "number of worker goroutines `N` (default: all cores); results do not depend on it")
 	dirs, help, err := cli.ParseArgs(fs, args)
 	if help {
 		fmt.Fprint(stdout, cli.MergeHelp+cli.FlagHelp(fs))
@@ -53,7 +53,7 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "strutrisk merge: nothing merged: %v\n", err)
 		return exitInput
 	}
-	settings := l.Settings(o.workers)
+	settings := l.Settings(o.ov.Workers)
 	states[0].Settings.Apply(&settings)
 	settings.Shard = replay
 	return runAndWrite(o, studyPath, l, settings, stdout, stderr)

@@ -7,12 +7,11 @@ import (
 	"fmt"
 	"io"
 	"strings"
-	"strutrisk/internal/cli"
 
 	"strutrisk/internal/analysis"
+	"strutrisk/internal/cli"
 	"strutrisk/internal/outdir"
 	"strutrisk/internal/report"
-	"strutrisk/internal/study"
 	"strutrisk/sim"
 )
 
@@ -22,12 +21,10 @@ var baseContext = context.Background
 // runOptions are the flags of run.
 type runOptions struct {
 	out           string
-	seed          uint64
-	samples       int64
-	method        string
 	json          bool
 	requireTarget bool
-	workers       int
+	ov            analysis.Overrides // --method, --samples, --workers, --seed
+	seed          uint64
 	shard         string
 	shardCount    int
 	set           map[string]bool
@@ -55,9 +52,10 @@ func runCmd(args []string, stdout, stderr io.Writer) int {
 // runAndWrite runs the study of l with settings and writes its folder.
 func runAndWrite(o *runOptions, path string, l *analysis.Loaded, settings sim.Settings, stdout, stderr io.Writer) int {
 	st := l.Study
-	folder, code := prepareOutput(path, st, o.out, stderr)
-	if code != exitOK {
-		return code
+	folder, err := l.PrepareOutput(path, o.out)
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
+		return exitInput
 	}
 	defer folder.Close()
 
@@ -90,9 +88,9 @@ func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int
 	fs := flag.NewFlagSet("run", flag.ContinueOnError)
 	outputFlags(fs, o)
 	fs.Uint64Var(&o.seed, "seed", 0, "seed of every random stream (`N`; default: [analysis] seed)")
-	fs.Int64Var(&o.samples, "samples", 0, "at most `N` model evaluations (default: [analysis] samples)")
-	fs.StringVar(&o.method, "method", "", "estimator `M`: "+strings.Join(sim.MethodNames(), ", "))
-	fs.IntVar(&o.workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
+	fs.Int64Var(&o.ov.Samples, "samples", 0, "at most `N` model evaluations (default: [analysis] samples)")
+	fs.StringVar((*string)(&o.ov.Method), "method", "", "estimator `M`: "+strings.Join(sim.MethodNames(), ", "))
+	fs.IntVar(&o.ov.Workers, "workers", 0, "number of worker goroutines `N` (default: all cores; at most 16 per core, at least 64); results do not depend on it")
 	fs.StringVar(&o.shard, "shard", "", "run part `K/N` (K from 0) of the sampling and write its state for strutrisk merge; \"env\" takes K and N from the scheduler (SLURM_ARRAY_TASK_ID and SLURM_ARRAY_TASK_COUNT, or JOB_COMPLETION_INDEX with --shard-count or STRUTRISK_SHARD_COUNT)")
 	fs.IntVar(&o.shardCount, "shard-count", 0, "number of shards `N` when the index comes from JOB_COMPLETION_INDEX (Kubernetes Indexed Jobs); implies --shard env")
 	pos, help, err := cli.ParseArgs(fs, args)
@@ -109,19 +107,12 @@ func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int
 		return nil, "", exitInput
 	}
 	o.set = cli.Set(fs)
-	if o.set["method"] {
-		if _, err := sim.ParseMethod(o.method); err != nil {
-			fmt.Fprintf(stderr, "strutrisk run: --method: %v\n", err)
-			return nil, "", exitInput
-		}
-	}
-	if o.set["samples"] && (o.samples < 1 || o.samples > study.MaxSamples) {
-		fmt.Fprintf(stderr, "strutrisk run: --samples %d must be between 1 and %s\n", o.samples, study.MaxSamplesText)
+	if err := o.ov.CheckFlags(o.set); err != nil {
+		fmt.Fprintf(stderr, "strutrisk run: %v\n", err)
 		return nil, "", exitInput
 	}
-	if o.set["workers"] && (o.workers < 1 || o.workers > analysis.MaxWorkers()) {
-		fmt.Fprintf(stderr, "strutrisk run: --workers %d must be between 1 and %d (16 per core, at least 64; results do not depend on it)\n", o.workers, analysis.MaxWorkers())
-		return nil, "", exitInput
+	if o.set["seed"] {
+		o.ov.Seed = &o.seed
 	}
 	return o, pos[0], exitOK
 }
@@ -129,11 +120,7 @@ func parseRun(args []string, stdout, stderr io.Writer) (*runOptions, string, int
 // runSettings are the study's settings with the flags given over them;
 // a study run cannot take is refused with a non-zero status.
 func runSettings(o *runOptions, l *analysis.Loaded, stderr io.Writer) (sim.Settings, int) {
-	ov := analysis.Overrides{Method: sim.Method(o.method), Samples: o.samples, Workers: o.workers}
-	if o.set["seed"] {
-		ov.Seed = &o.seed
-	}
-	settings, note, err := l.RunSettings(ov)
+	settings, note, err := l.RunSettings(o.ov)
 	if err != nil {
 		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 		return sim.Settings{}, exitInput

@@ -32,9 +32,10 @@ func runShardCmd(o *runOptions, path string, l *analysis.Loaded, settings sim.Se
 		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
 		return exitInput
 	}
-	folder, code := prepareOutput(path, st, o.out, stderr)
-	if code != exitOK {
-		return code
+	folder, err := l.PrepareOutput(path, o.out)
+	if err != nil {
+		fmt.Fprintf(stderr, "strutrisk: %v\n", err)
+		return exitInput
 	}
 	defer folder.Close()
 	bar, ctx, sigs, stop := startRun(stderr, true)
