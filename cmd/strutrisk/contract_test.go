@@ -22,6 +22,7 @@ import (
 // TestContractCommands: flags before or after the file, --json alone on
 // standard output, check --json without sampling fields, exit statuses.
 func TestContractCommands(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	s := fmt.Sprintf(ctRS, `{ dist = "normal", mean = 200, sd = 20 }`, `{ dist = "normal", mean = "100 kN", sd = "30 kN" }`)
 	study := writeStudy(t, s)
 	dir := t.TempDir()

@@ -29,6 +29,7 @@ import (
 // permanent load its mean. gamma = x_k / x_d (resistance), x_d / x_k
 // (action). Checked to 1e-6 against FORM's design values.
 func TestRunDesignValuesClosedForm(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	logs := func(mean, cov float64) (lambda, zeta float64) {
 		zeta = math.Sqrt(math.Log1p(cov * cov))
 		return math.Log(mean) - zeta*zeta/2, zeta

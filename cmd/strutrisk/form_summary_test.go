@@ -10,6 +10,7 @@ import (
 // so the summary gives no sampling interval or CoV for it (an interval of
 // zero width would read as certainty).
 func TestRunFORMSummaryNoInterval(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	var out, errs strings.Builder
 	study := filepath.Join("..", "..", "studies", "eccentric-strut.toml")
 	if code := run([]string{"run", study, "--method", "form", "--out", t.TempDir()}, &out, &errs); code != exitOK {

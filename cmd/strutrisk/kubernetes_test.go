@@ -249,6 +249,7 @@ func emulateIndexedJob(t *testing.T, shardsYAML, mergeYAML, study string) (strin
 // single run's byte for byte; and that the emulation fails when the
 // manifest's completions, shard count or use of the index disagree.
 func TestKubernetesIndexedJob(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	if _, err := exec.LookPath("sh"); err != nil {
 		t.Skip("no sh to run the manifests' commands")
 	}

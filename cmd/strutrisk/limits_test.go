@@ -59,6 +59,7 @@ func TestWorkersCapped(t *testing.T) {
 // refuses more cases than the cap, naming it, with exit 2 (issue 10,
 // item 6).
 func TestManyCases(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	variants := func(n int) string {
 		var b strings.Builder
 		b.WriteString(good)

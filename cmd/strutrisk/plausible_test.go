@@ -113,6 +113,7 @@ func TestPlausibilityGuards(t *testing.T) {
 // -inf means beside it and in the warnings; one with no failure says what
 // +inf means; a study in between has neither statement.
 func TestRunInfiniteBeta(t *testing.T) {
+	t.Parallel()                                                                   // sets no hook: runs beside the other slow tests
 	crushed := edit(15, `dead = { dist = "normal", mean = "5000 kN", cov = 0.1 }`) // 12 times what the bar carries
 	for _, c := range []struct {
 		name, study string

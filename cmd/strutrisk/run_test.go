@@ -22,6 +22,7 @@ const (
 )
 
 func TestRunLognormalClosedForm(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	for _, method := range []string{"auto", "monte-carlo", "form"} {
 		t.Run(method, func(t *testing.T) {
 			dir := t.TempDir()

@@ -12,6 +12,7 @@ import (
 // for byte, with a budget it spends and with a target CoV that stops it
 // before.
 func TestShardConditionalQMC(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	dir := t.TempDir()
 	text, err := os.ReadFile("../../studies/bench/reference-strut.toml")
 	if err != nil {

@@ -16,6 +16,7 @@ import (
 // merge, which runs neither again, writes the files of a single run byte
 // for byte; with more shards than members too.
 func TestShardInventoryMembers(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	dir := t.TempDir()
 	// The inventory demo with a budget of 30000 samples, which the joint
 	// sample of the system takes too (30 blocks of 1000).

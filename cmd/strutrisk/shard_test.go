@@ -57,6 +57,7 @@ func itoa(i int) string { return strconv.Itoa(i) }
 // for 1, 3 and 7 shards, and on a sweep with variants and a target CoV
 // that stops sampling early.
 func TestShardMergeEqualsSingleRun(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	dir := t.TempDir()
 	ref := "../../studies/bench/reference-strut.toml"
 	flags := []string{"--samples", "120000", "--method", "monte-carlo"}

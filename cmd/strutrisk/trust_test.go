@@ -44,6 +44,7 @@ func overloadedRetrofit(t *testing.T, dead string) string {
 // Importance sampling around a design point with beta -10.7 once reported
 // pf 9e-9 and "target met".
 func TestNoVerdictFromAnUntrustedEstimate(t *testing.T) {
+	t.Parallel() // sets no hook: runs beside the other slow tests
 	for _, c := range []struct{ dead, method string }{
 		{"15000 kN", "importance"},
 		{"15000 kN", "auto"},
