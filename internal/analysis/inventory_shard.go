@@ -155,14 +155,14 @@ type systemNote struct {
 }
 
 // jointSample is sampleSystem for a run that may be split: a shard
-// evaluates and notes its blocks of the whole budget (the counts it
+// evaluates and notes its blocks that a merge can need (the counts it
 // returns are of its blocks only); a merge adds the noted blocks as
 // sampleSystem adds them, stopping where it stops.
 func jointSample(ctx context.Context, ms []systemMember, nShared int, maxN int64, targetCoV float64, seed uint64, s *sim.Settings) (*systemCounts, error) {
 	sh := s.Shard
 	switch {
 	case sh.Splits():
-		return shardSystemBlocks(ctx, ms, nShared, maxN, seed, s)
+		return shardSystemBlocks(ctx, ms, nShared, maxN, targetCoV, seed, s)
 	case sh.Replays():
 		return replaySystem(ms, maxN, targetCoV, sh)
 	}
@@ -170,52 +170,62 @@ func jointSample(ctx context.Context, ms []systemMember, nShared int, maxN int64
 }
 
 // shardSystemBlocks evaluates and notes the shard's blocks of the joint
-// sample of maxN samples.
-func shardSystemBlocks(ctx context.Context, ms []systemMember, nShared int, maxN int64, seed uint64, s *sim.Settings) (*systemCounts, error) {
+// sample of maxN samples that a merge can need. The first looks of
+// sampleSystem, as far as a shard's share of the blocks goes, every
+// shard draws whole (as every shard of a sampling run draws block 0): the
+// same counts in every shard, so each finds where a single run stops if
+// it stops there, and notes only its blocks up to that look (a system
+// resolved after one block costs each shard one block, not its share of
+// the budget); else each draws and notes its blocks of the whole budget,
+// at most twice its share.
+func shardSystemBlocks(ctx context.Context, ms []systemMember, nShared int, maxN int64, targetCoV float64, seed uint64, s *sim.Settings) (*systemCounts, error) {
 	blocks := int((maxN + systemBlock - 1) / systemBlock)
+	share := (blocks + s.Shard.Count - 1) / s.Shard.Count
+	p := newSystemPlan(ms, nShared)
+	drawn := map[int]*systemCounts{}
+	seen := &systemCounts{members: make([]int64, len(ms))}
+	end := blocks
+	for b0 := 0; nextLook(b0) <= min(share, blocks); b0 = nextLook(b0) {
+		b1 := nextLook(b0)
+		res := drawBlocks(ctx, p, blockRange(b0, b1), maxN, seed, s.Workers)
+		if ctx.Err() != nil {
+			return seen, ctx.Err()
+		}
+		for j, c := range res {
+			drawn[b0+j] = c
+			seen.add(c)
+		}
+		if resolved(seen, targetCoV, b1) {
+			end = b1
+			break
+		}
+	}
 	var todo []int
-	for b := range blocks {
-		if s.Shard.Owns(b) {
+	for b := range end {
+		if _, ok := drawn[b]; !ok && s.Shard.Owns(b) {
 			todo = append(todo, b)
 		}
 	}
-	total := &systemCounts{members: make([]int64, len(ms))}
-	next := make(chan int)
-	res := make([]*systemCounts, len(todo))
-	done := make(chan struct{})
-	workers := max(1, min(s.Workers, len(todo)))
-	p := newSystemPlan(ms, nShared)
-	for range workers {
-		go func() {
-			w := p.worker()
-			for j := range next {
-				b := todo[j]
-				res[j] = w.block(seed, uint64(b), min(int64(systemBlock), maxN-int64(b)*systemBlock))
-			}
-			done <- struct{}{}
-		}()
-	}
-	for j := range todo {
-		if ctx.Err() != nil {
-			break
-		}
-		next <- j
-	}
-	close(next)
-	for range workers {
-		<-done
-	}
+	res := drawBlocks(ctx, p, todo, maxN, seed, s.Workers)
 	if ctx.Err() != nil {
-		return total, ctx.Err()
+		return seen, ctx.Err()
 	}
 	for j, c := range res {
+		drawn[todo[j]] = c
+	}
+	total := &systemCounts{members: make([]int64, len(ms))}
+	for b := range end {
+		if !s.Shard.Owns(b) {
+			continue
+		}
+		c := drawn[b]
 		n := systemNote{N: c.n, Failures: c.failures, Failing: c.failing}
 		for i, k := range c.members {
 			if k != 0 {
 				n.Members = append(n.Members, int64(i), k)
 			}
 		}
-		if err := s.Shard.Note(systemNoteKey(todo[j]), n); err != nil {
+		if err := s.Shard.Note(systemNoteKey(b), n); err != nil {
 			return total, err
 		}
 		total.add(c)

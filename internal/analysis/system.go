@@ -64,33 +64,15 @@ func (s *systemCounts) cov() float64 {
 // a stream of (seed, b) only and the counts are looked at after blocks
 // that depend on nothing else, so they are the same for any worker count.
 func sampleSystem(ctx context.Context, ms []systemMember, nShared int, maxN int64, targetCoV float64, seed uint64, workers int) *systemCounts {
-	if workers < 1 {
-		workers = 1
-	}
 	total := &systemCounts{members: make([]int64, len(ms))}
 	blocks := int((maxN + systemBlock - 1) / systemBlock)
 	p := newSystemPlan(ms, nShared)
 	for b0 := 0; b0 < blocks && ctx.Err() == nil; b0 = nextLook(b0) {
 		b1 := min(nextLook(b0), blocks)
-		res := make([]*systemCounts, b1-b0)
-		var wg sync.WaitGroup
-		next := make(chan int)
-		for range min(workers, b1-b0) {
-			wg.Add(1)
-			go func() {
-				defer wg.Done()
-				w := p.worker()
-				for b := range next {
-					n := min(int64(systemBlock), maxN-int64(b)*systemBlock)
-					res[b-b0] = w.block(seed, uint64(b), n)
-				}
-			}()
+		res := drawBlocks(ctx, p, blockRange(b0, b1), maxN, seed, workers)
+		if ctx.Err() != nil {
+			break
 		}
-		for b := b0; b < b1; b++ {
-			next <- b
-		}
-		close(next)
-		wg.Wait()
 		for _, c := range res {
 			total.add(c)
 		}
@@ -99,6 +81,44 @@ func sampleSystem(ctx context.Context, ms []systemMember, nShared int, maxN int6
 		}
 	}
 	return total
+}
+
+// blockRange returns the blocks b0 to b1 - 1.
+func blockRange(b0, b1 int) []int {
+	bs := make([]int, 0, b1-b0)
+	for b := b0; b < b1; b++ {
+		bs = append(bs, b)
+	}
+	return bs
+}
+
+// drawBlocks draws the blocks bs of a joint sample of maxN samples on
+// workers goroutines and returns their counts in the order of bs; when
+// ctx ends some are left nil.
+func drawBlocks(ctx context.Context, p *systemPlan, bs []int, maxN int64, seed uint64, workers int) []*systemCounts {
+	res := make([]*systemCounts, len(bs))
+	var wg sync.WaitGroup
+	next := make(chan int)
+	for range max(1, min(workers, len(bs))) {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			w := p.worker()
+			for j := range next {
+				b := bs[j]
+				res[j] = w.block(seed, uint64(b), min(int64(systemBlock), maxN-int64(b)*systemBlock))
+			}
+		}()
+	}
+	for j := range bs {
+		if ctx.Err() != nil {
+			break
+		}
+		next <- j
+	}
+	close(next)
+	wg.Wait()
+	return res
 }
 
 // sharedIndex maps each (shared input, group) to the index of its shared
