@@ -83,6 +83,14 @@ func TestInventoryCodeCheckColumns(t *testing.T) {
 			t.Errorf("%s: code check %+v, want %+v", m.Name, *c, w)
 		}
 	}
+	// The run's check of each member is the one check gives.
+	for _, mc := range l.InventoryCheck().Members {
+		for _, m := range inv.Members {
+			if m.Name == mc.Name && (mc.CodeCheck == nil || *m.CodeCheck != *report.ShortCodeCheck(mc.CodeCheck)) {
+				t.Errorf("%s: the run's code check %+v differs from check's %+v", m.Name, *m.CodeCheck, mc.CodeCheck)
+			}
+		}
+	}
 	files, err := report.Files(r.Bundle(), []string{"json"})
 	if err != nil {
 		t.Fatal(err)
