@@ -20,6 +20,7 @@ func codeCheck(md *study.Model) (*report.CodeCheck, string) {
 		RelativeSlenderness: c.RelSlenderness, CriticalLoad: c.Critical, Axis: c.Axis.String(), Mode: c.Mode.String(),
 		Yield: c.Fy, EffectiveArea: c.EffectiveArea, SectionClass: c.Class,
 		Characteristic: map[string]float64{}, CharacteristicBasis: map[string]string{}, CharacteristicUnits: map[string]string{},
+		Psi0Loads:   c.Factors.Psi0By,
 		LoadFactors: map[string]float64{}, LeadingLoad: c.Combination.Leading, EffectFactor: c.EffectFactor,
 		Combination: c.Rule(), Notes: c.Notes, AxialOnly: c.AxialOnly,
 	}

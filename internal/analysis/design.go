@@ -46,7 +46,11 @@ func (r *Result) fillDesign(ff *report.FORM) {
 		"An input is a resistance when alpha > 0 (the margin grows with it), an action when alpha < 0; bow and eccentricity act by their magnitude; a load and its companion are actions whatever alpha. " +
 		"Partial factor x_k / x_d for a resistance, x_d / x_k for an action."
 	if c := st.Combination; c != nil && len(c.Cases) > 0 {
-		ff.DesignNote += fmt.Sprintf(" A companion's characteristic value is the combination value psi_0 Q_k of the load it stands for (EN 1990 6.10, psi_0 = %g), not a fractile of its own distribution, so its partial factor compares with gamma_Q.", st.CodeCheck.Psi0)
+		psi := fmt.Sprintf("psi_0 = %g", st.CodeCheck.Psi0)
+		if len(st.CodeCheck.Psi0By) > 0 {
+			psi = "psi_0 of that load in code_check.psi_0, else " + fmt.Sprint(st.CodeCheck.Psi0)
+		}
+		ff.DesignNote += fmt.Sprintf(" A companion's characteristic value is the combination value psi_0 Q_k of the load it stands for (EN 1990 6.10, %s), not a fractile of its own distribution, so its partial factor compares with gamma_Q.", psi)
 	}
 	if len(f.Points) > 1 {
 		ff.DesignNote += fmt.Sprintf(" FORM found %d design points; the values follow the most probable one only.", len(f.Points))

@@ -4,6 +4,8 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"sort"
+	"strings"
 
 	"strutrisk/internal/assess"
 	"strutrisk/internal/column"
@@ -14,6 +16,9 @@ import (
 // values the study sets itself.
 type CodeCheckSpec struct {
 	GammaM0, GammaM1, GammaG, GammaQ, Psi0 float64
+	// Psi0By holds the combination factors code_check.psi_0 gives named
+	// loads, by the load's path ("loads.snow"); the others take Psi0.
+	Psi0By map[string]float64
 	// Characteristic holds characteristic values given in the study, by
 	// the random input's path (N, mm, MPa).
 	Characteristic map[string]float64
@@ -24,6 +29,15 @@ type CodeCheckSpec struct {
 	Normalise            string
 	LoadRatio            float64
 	NormalisedResistance float64
+}
+
+// Psi0Of returns the combination factor of the load at path: its own
+// from code_check.psi_0 written as a table, else Psi0.
+func (cs *CodeCheckSpec) Psi0Of(path string) float64 {
+	if v, ok := cs.Psi0By[path]; ok {
+		return v
+	}
+	return cs.Psi0
 }
 
 // CheckInput is one input of the code check at its characteristic value.
@@ -86,7 +100,7 @@ func (md *Model) CodeCheck() (*CodeCheck, error) {
 		return nil, fmt.Errorf("the code check is that of EN 1993-1-1 for carbon steel; the material is %s", st.Material.Kind)
 	}
 	cs := st.CodeCheck
-	c := &CodeCheck{GammaM0: cs.GammaM0, GammaM1: cs.GammaM1, Factors: assess.LoadFactors{GammaG: cs.GammaG, GammaQ: cs.GammaQ, Psi0: cs.Psi0}}
+	c := &CodeCheck{GammaM0: cs.GammaM0, GammaM1: cs.GammaM1, Factors: assess.LoadFactors{GammaG: cs.GammaG, GammaQ: cs.GammaQ, Psi0: cs.Psi0, Psi0By: cs.Psi0By}}
 	v, char := md.characteristicValues(c)
 	m, sec, err := md.member(&v)
 	if err == nil {
@@ -254,7 +268,19 @@ func (c *CodeCheck) Rule() string {
 	if c.Combination.Leading != "" {
 		s += " (" + c.Combination.Leading + ")"
 	}
-	s += fmt.Sprintf(", gamma_Q psi_0 = %g x %g on the others; favourable loads 1.0 (permanent) or 0 (variable)", c.Factors.GammaQ, c.Factors.Psi0)
+	s += fmt.Sprintf(", gamma_Q psi_0 = %g x %g on the others", c.Factors.GammaQ, c.Factors.Psi0)
+	if len(c.Factors.Psi0By) > 0 {
+		names := make([]string, 0, len(c.Factors.Psi0By))
+		for n := range c.Factors.Psi0By {
+			names = append(names, n)
+		}
+		sort.Strings(names)
+		for i, n := range names {
+			names[i] = fmt.Sprintf("%s %g", n, c.Factors.Psi0By[n])
+		}
+		s += " (psi_0 of " + strings.Join(names, ", ") + ")"
+	}
+	s += "; favourable loads 1.0 (permanent) or 0 (variable)"
 	if c.EffectFactor != 1 {
 		s += fmt.Sprintf("; times the effect factor %g", c.EffectFactor)
 	}

@@ -17,6 +17,7 @@ func (p *parser) codeCheck(top *table) {
 	*cs = CodeCheckSpec{GammaM0: assess.GammaM0, GammaM1: assess.GammaM1, GammaG: assess.GammaG, GammaQ: assess.GammaQ, Psi0: assess.Psi0}
 	t := p.sub(top, "code_check")
 	var defaulted []string
+	psiTable := p.psi0ByLoad(t)
 	for _, f := range []struct {
 		key      string
 		to       *float64
@@ -29,6 +30,9 @@ func (p *parser) codeCheck(top *table) {
 		{"gamma_q", &cs.GammaQ, 1, 2, "EN 1990 Table A1.2(B)"},
 		{"psi_0", &cs.Psi0, 0, 1, "EN 1990 Table A1.1, imposed loads"},
 	} {
+		if f.key == "psi_0" && psiTable {
+			continue
+		}
 		x, ok := p.number(t, f.key)
 		if _, given := t.get(f.key); !given {
 			defaulted = append(defaulted, fmt.Sprintf("%s = %g (%s)", f.key, *f.to, f.source))
@@ -94,4 +98,61 @@ func (p *parser) checkCharacteristic(t *table) {
 		}
 		p.st.CodeCheck.Characteristic[path] = x.v
 	}
+}
+
+// psi0ByLoad reads code_check.psi_0 written as a table of load names and
+// combination factors, { snow = 0.5, stock = 1.0 } (EN 1990 Table A1.1
+// gives each kind of variable action its own psi_0), into
+// CodeCheckSpec.Psi0By; the loads it does not name keep the recommended
+// 0.7. It reports whether psi_0 is such a table.
+func (p *parser) psi0ByLoad(t *table) bool {
+	v, ok := t.get("psi_0")
+	m, isTable := v.(map[string]any)
+	if !ok || !isTable {
+		return false
+	}
+	key := t.key("psi_0")
+	names := make([]string, 0, len(m))
+	for k := range m {
+		names = append(names, k)
+	}
+	sort.Strings(names)
+	cs := &p.st.CodeCheck
+	for _, name := range names {
+		at := key + "." + name
+		path := "loads." + strings.TrimPrefix(name, "loads.")
+		if !p.isLoad(path) {
+			p.errorf(at, "%q is not a load of [loads]: name a load as in [loads], e.g. psi_0 = { snow = 0.5 }", name)
+			continue
+		}
+		var x float64
+		switch n := m[name].(type) {
+		case int64:
+			x = float64(n)
+		case float64:
+			x = n
+		default:
+			p.errorf(at, "must be a number from 0 to 1, not %s", tomlType(m[name]))
+			continue
+		}
+		if !(x >= 0 && x <= 1) {
+			p.errorf(at, "psi_0 = %g is outside 0 to 1", x)
+			continue
+		}
+		if cs.Psi0By == nil {
+			cs.Psi0By = map[string]float64{}
+		}
+		cs.Psi0By[path] = x
+	}
+	return true
+}
+
+// isLoad reports whether path names a load of [loads].
+func (p *parser) isLoad(path string) bool {
+	for _, q := range p.st.Loads {
+		if q.Path == path {
+			return true
+		}
+	}
+	return false
 }

@@ -44,7 +44,7 @@ func (md *Model) Characteristic(i int) assess.Characteristic {
 	case st.Combination.companionOf(q) != nil:
 		of := st.Combination.companionOf(q)
 		qk := md.variableCharacteristic(of)
-		psi := st.CodeCheck.Psi0
+		psi := st.CodeCheck.Psi0Of(of.Path)
 		return assess.Characteristic{Value: psi * qk.Value,
 			Basis: fmt.Sprintf("combination value psi_0 Q_k of %s (EN 1990 6.10): psi_0 = %g (code_check.psi_0) times Q_k, its %s", of.Path, psi, qk.Basis)}
 	case (md.isLoad(q) || st.bendingAction(q)) && !md.isPermanent(q):

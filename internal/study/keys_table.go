@@ -128,7 +128,7 @@ var keyTables = []*TableInfo{
 		{Name: "gamma_m1", Takes: "number (1 to 2)", Default: "1.0 (EN 1993-1-1 6.1 note 2B, recommended)", Meaning: "The partial factor of the buckling resistance N_b,Rd."},
 		{Name: "gamma_g", Takes: "number (1 to 2)", Default: "1.35 (EN 1990 Table A1.2(B), recommended)", Meaning: "The factor of unfavourable permanent loads (favourable ones take 1.0)."},
 		{Name: "gamma_q", Takes: "number (1 to 2)", Default: "1.5 (EN 1990 Table A1.2(B), recommended)", Meaning: "The factor of unfavourable variable loads (favourable ones take 0)."},
-		{Name: "psi_0", Takes: "number (0 to 1)", Default: "0.7 (EN 1990 Table A1.1, imposed loads)", Meaning: "The combination factor of the accompanying variable loads (expression 6.10)."},
+		{Name: "psi_0", Takes: "number (0 to 1), or a table of load names and numbers, e.g. { snow = 0.5, stock = 1.0 }", Default: "0.7 (EN 1990 Table A1.1, imposed loads)", Meaning: "The combination factor of the accompanying variable loads (expression 6.10); a table gives each named load its own (EN 1990 Table A1.1: storage 1.0, snow 0.5 below 1000 m, wind 0.6), the others 0.7."},
 		{Name: "characteristic", Takes: "table of random input paths and quantities, e.g. { \"loads.imposed\" = \"150 kN\" }",
 			Default: "5 % fractile of the yield, mean of permanent loads and of the rest, 98 % fractile of annual maxima of variable loads",
 			Meaning: "Characteristic values the study sets instead of those taken from the distributions."},
