@@ -36,7 +36,7 @@ h1{font-size:1.6rem;margin-bottom:.2rem}h2{font-size:1.25rem;border-bottom:1px s
 table{border-collapse:collapse;margin:.6rem 0;font-size:.92rem}th,td{padding:.25rem .7rem;border-bottom:1px solid #e2e2e2;text-align:left;vertical-align:top}th{background:#f4f4f4}
 td.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}
 td.nw{white-space:nowrap}
-figure{margin:1.2rem 0}figure svg{width:100%;max-width:48rem;height:auto}#fig-sweep svg,#fig-beam-column svg{max-width:100%}figcaption{font-size:.88rem;color:#555}
+figure{margin:1.2rem 0}figure svg{width:100%;max-width:48rem;height:auto}#fig-sweep svg,#fig-heatmap svg,#fig-beam-column svg{max-width:100%}figcaption{font-size:.88rem;color:#555}
 .verdict{font-weight:bold;padding:.4rem .7rem;display:inline-block;border-radius:3px}
 .met{background:#e3f1e7}.not-met{background:#f7e1de}.undecided{background:#fbf0d9}
 .caution{border-left:4px solid #c0392b;padding:.5rem .9rem;background:#fbf3f2}

@@ -13,7 +13,7 @@ import (
 // more keys draws; maxMultiCols the most side by side.
 const (
 	maxMultiPanels = 12
-	maxMultiCols   = 4
+	maxMultiCols   = 3
 )
 
 // heatSlice is the grid of the first two keys at one combination of the

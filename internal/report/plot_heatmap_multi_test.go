@@ -82,7 +82,7 @@ func TestMultiHeatmapFigure(t *testing.T) {
 		caption, notCaption string
 	}{
 		{"three slices, a variant", 3, 1, 6, 0, 3, "the study's heat maps first, then each variant's", "are drawn"},
-		{"five slices wrap", 5, 1, 10, 6, maxMultiCols, "each starting a row", "are drawn"},
+		{"five slices wrap", 5, 1, 10, 2, maxMultiCols, "each starting a row", "are drawn"},
 		{"too many slices", 15, 1, maxMultiPanels, 0, maxMultiCols, "only the first 12 of the 15 combinations of the other keys are drawn; only the study is drawn, not its variants", ""},
 		{"too many variants", 3, 6, maxMultiPanels, 0, 3, "only the study and its first 3 variants of 6 are drawn", ""},
 	} {
