@@ -87,7 +87,7 @@ func runCases(ctx context.Context, l *Loaded, s *sim.Settings, obs Observer) *ca
 		}
 		switch {
 		case i < 0:
-			c.variants = append(c.variants, report.Variant{Name: st.Variants[v].Name, Pf: pt.Pf, Beta: pt.Beta, PfCI: pt.PfCI})
+			c.variants = append(c.variants, variantOf(st.Variants[v].Name, pt))
 		case v < 0:
 			c.sweep = append(c.sweep, *pt)
 		}
@@ -268,7 +268,10 @@ func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings
 		status = res.StatusReason
 	}
 	pt = &report.Point{Pf: res.Pf, Beta: report.Index(res.Beta), PfCI: [2]float64{res.PfCI[0], res.PfCI[1]},
-		Doubtful: !res.Status.Trusted()}
+		Doubtful: !res.Status.Trusted(), Status: res.Status.String()}
+	if res.Status != sim.Converged {
+		pt.StatusReason = res.StatusReason
+	}
 	if i >= 0 {
 		values := st.PointValues(i)
 		pt.Value = values[0]
@@ -430,4 +433,12 @@ func valueText(v float64, unit string) string {
 		return fmt.Sprintf("%.4g", v)
 	}
 	return fmt.Sprintf("%.4g %s", v, unit)
+}
+
+// variantOf is the result document's entry of the variant named name
+// whose case at the study's values gave pt, with its trust status.
+func variantOf(name string, pt *report.Point) report.Variant {
+	trusted := !pt.Doubtful
+	return report.Variant{Name: name, Pf: pt.Pf, Beta: pt.Beta, PfCI: pt.PfCI,
+		Status: pt.Status, StatusReason: pt.StatusReason, Trusted: &trusted}
 }

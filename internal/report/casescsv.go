@@ -13,7 +13,9 @@ import (
 // key and per result, the unit of every column in its head. When the
 // sweep changes it, a column gives the study's nominal relative
 // slenderness at the case's swept point (at its own values for the rows
-// of no swept point). A case that did not run has no row.
+// of no swept point). The last column, trusted, is "false" for a case
+// whose estimate the engine does not trust (no result), "true" otherwise
+// and empty when unknown. A case that did not run has no row.
 func casesCSV(b *Bundle) ([]byte, error) {
 	c, d := b.Cases, b.Doc
 	keys, points := caseColumns(b)
@@ -23,10 +25,10 @@ func casesCSV(b *Bundle) ([]byte, error) {
 	if lam {
 		head = append(head, lambdaHead(b)+" (-)")
 	}
-	head = append(head, "pf (-)", "pf_low (-)", "pf_high (-)", "beta (-)")
+	head = append(head, "pf (-)", "pf_low (-)", "pf_high (-)", "beta (-)", "trusted")
 	rows := [][]string{head}
 	g := func(v float64) string { return strconv.FormatFloat(v, 'g', 8, 64) }
-	row := func(name string, i int, pt Point) {
+	row := func(name string, i int, pt Point, trusted *bool) {
 		r := []string{name}
 		for a := range keys {
 			if i >= 0 {
@@ -41,7 +43,11 @@ func casesCSV(b *Bundle) ([]byte, error) {
 				r[len(r)-1] = strconv.FormatFloat(l, 'f', 4, 64)
 			}
 		}
-		rows = append(rows, append(r, g(pt.Pf), g(pt.PfCI[0]), g(pt.PfCI[1]), csvIndex(pt.Beta)))
+		t := ""
+		if trusted != nil {
+			t = strconv.FormatBool(*trusted)
+		}
+		rows = append(rows, append(r, g(pt.Pf), g(pt.PfCI[0]), g(pt.PfCI[1]), csvIndex(pt.Beta), t))
 	}
 	study := "study"
 	if c.StudyName != "" {
@@ -52,10 +58,10 @@ func casesCSV(b *Bundle) ([]byte, error) {
 		if len(d.PfCI) == 2 {
 			pt.PfCI = [2]float64{d.PfCI[0], d.PfCI[1]}
 		}
-		row(study, -1, pt)
+		row(study, -1, pt, d.Trusted)
 	}
 	for _, v := range d.Variants {
-		row(v.Name, -1, Point{Pf: v.Pf, Beta: v.Beta, PfCI: v.PfCI})
+		row(v.Name, -1, Point{Pf: v.Pf, Beta: v.Beta, PfCI: v.PfCI}, v.Trusted)
 	}
 	for s, line := range c.Grid {
 		name := study
@@ -68,7 +74,8 @@ func casesCSV(b *Bundle) ([]byte, error) {
 		}
 		for i, pt := range line {
 			if pt != nil && i < len(points) {
-				row(name, i, *pt)
+				trusted := !pt.Doubtful
+				row(name, i, *pt, &trusted)
 			}
 		}
 	}

@@ -204,12 +204,26 @@ type Point struct {
 	Pf       float64    `json:"pf"`
 	Beta     Index      `json:"beta"`
 	PfCI     [2]float64 `json:"pf_ci"`
+	// Status and StatusReason are the case's trust status and why it is
+	// not converged, as Document's (kept for the variants' entries).
+	Status       string `json:"-"`
+	StatusReason string `json:"-"`
 }
 
-// Variant is one named alternative of a study.
+// Variant is one named alternative of a study, at the study's values.
 type Variant struct {
 	Name string     `json:"name"`
 	Pf   float64    `json:"pf"`
 	Beta Index      `json:"beta"`
 	PfCI [2]float64 `json:"pf_ci"`
+	// Status, StatusReason and Trusted are as Document's: no verdict may
+	// be drawn from a variant whose Trusted is false, and every table and
+	// picture of the variants marks it. Trusted is nil when unknown.
+	Status       string `json:"status,omitempty"`
+	StatusReason string `json:"status_reason,omitempty"`
+	Trusted      *bool  `json:"trusted,omitempty"`
 }
+
+// Untrusted tells whether the engine does not trust the variant's
+// estimate.
+func (v *Variant) Untrusted() bool { return v.Trusted != nil && !*v.Trusted }

@@ -158,15 +158,15 @@ a{color:inherit;text-decoration:none}
 {{with .Picture "sweep"}}{{template "fig" .}}{{end}}
 {{with .Picture "heatmap"}}{{template "fig" .}}{{end}}
 {{with .Picture "variants"}}{{template "fig" .}}{{end}}
-{{if .Sweep}}<table><tr><th>{{if .SweepLabel}}{{.SweepLabel}}{{else}}value{{end}}</th><th>pf (–)</th><th>95% interval of pf (–)</th><th>β (–)</th></tr>
-{{range .Sweep}}<tr><td class="n">{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td></tr>
+{{if .Sweep}}<table><tr><th>{{if .SweepLabel}}{{.SweepLabel}}{{else}}value{{end}}</th><th>pf (–)</th><th>95% interval of pf (–)</th><th>β (–)</th>{{if .SweepNoted}}<th>trust</th>{{end}}</tr>
+{{range .Sweep}}<tr><td class="n">{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td>{{if $.SweepNoted}}<td>{{.Note}}</td>{{end}}</tr>
 {{end}}</table>{{end}}
 {{with .SweepCurves}}<p>β of every curve (95% interval in brackets) at each swept value:</p>
 <table><tr>{{range .Head}}<th>{{.}}</th>{{end}}</tr>
 {{range .Rows}}<tr>{{range .}}<td class="n">{{.}}</td>{{end}}</tr>
 {{end}}</table>{{end}}
-{{if .Variants}}<table><tr><th>variant</th><th>pf (–)</th><th>95% interval of pf (–)</th><th>β (–)</th></tr>
-{{range .Variants}}<tr><td>{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td></tr>
+{{if .Variants}}<table><tr><th>variant</th><th>pf (–)</th><th>95% interval of pf (–)</th><th>β (–)</th>{{if .VariantsNoted}}<th>trust</th>{{end}}</tr>
+{{range .Variants}}<tr><td>{{.Name}}</td><td class="n">{{.Pf}}</td><td class="n">{{.PfCI}}</td><td class="n">{{.Beta}}</td>{{if $.VariantsNoted}}<td>{{.Note}}</td>{{end}}</tr>
 {{end}}</table>{{end}}
 </section>{{end}}
 

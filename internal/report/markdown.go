@@ -164,17 +164,26 @@ func Markdown(b *Bundle) string {
 			label = "value"
 		}
 		for _, t := range []struct {
-			head string
-			pts  []pointRow
-		}{{label, v.Sweep}, {"variant", v.Variants}} {
+			head  string
+			pts   []pointRow
+			noted bool
+		}{{label, v.Sweep, v.SweepNoted}, {"variant", v.Variants, v.VariantsNoted}} {
 			if len(t.pts) == 0 {
 				continue
 			}
 			rows = rows[:0]
-			for _, p := range t.pts {
-				rows = append(rows, []string{p.Name, p.Pf, p.PfCI, p.Beta})
+			head := []string{t.head, "pf (–)", "95% interval of pf (–)", "β (–)"}
+			if t.noted {
+				head = append(head, "trust")
 			}
-			mdTable(&w, []string{t.head, "pf (–)", "95% interval of pf (–)", "β (–)"}, rows)
+			for _, p := range t.pts {
+				r := []string{p.Name, p.Pf, p.PfCI, p.Beta}
+				if t.noted {
+					r = append(r, p.Note)
+				}
+				rows = append(rows, r)
+			}
+			mdTable(&w, head, rows)
 		}
 	}
 	mdCalibration(&w, v.Calibration)

@@ -23,6 +23,7 @@ func variantsFigure(b *Bundle) *figure {
 	type row struct {
 		name, model  string
 		beta, lo, hi float64
+		untrusted    bool
 	}
 	var rows []row
 	if d.Beta != nil && len(d.PfCI) == 2 {
@@ -30,10 +31,10 @@ func variantsFigure(b *Bundle) *figure {
 		if b.StudyModel != "" {
 			name += " (" + b.StudyModel + ")"
 		}
-		rows = append(rows, row{name, b.StudyModel, float64(*d.Beta), sim.BetaFromPf(d.PfCI[1]), sim.BetaFromPf(d.PfCI[0])})
+		rows = append(rows, row{name, b.StudyModel, float64(*d.Beta), sim.BetaFromPf(d.PfCI[1]), sim.BetaFromPf(d.PfCI[0]), d.Trusted != nil && !*d.Trusted})
 	}
 	for _, v := range d.Variants {
-		rows = append(rows, row{v.Name, b.VariantModels[v.Name], float64(v.Beta), sim.BetaFromPf(v.PfCI[1]), sim.BetaFromPf(v.PfCI[0])})
+		rows = append(rows, row{v.Name, b.VariantModels[v.Name], float64(v.Beta), sim.BetaFromPf(v.PfCI[1]), sim.BetaFromPf(v.PfCI[0]), v.Untrusted()})
 	}
 	models := make([]string, len(rows))
 	for i, r := range rows {
@@ -46,11 +47,20 @@ func variantsFigure(b *Bundle) *figure {
 	names := make([]string, n)
 	xmin, xmax := math.Inf(1), math.Inf(-1)
 	drawn := 0
+	// The cases the engine does not trust: a hollow grey ring marked ?,
+	// without an interval, as in the sweep picture.
+	var doubts plotter.XYs
 	for i, r := range rows {
 		// The study on top, the variants below in the order of the file.
 		y := float64(n - 1 - i)
 		names[n-1-i] = r.name
 		if !finite(r.beta) || r.beta > 1e300 {
+			continue
+		}
+		xmin, xmax = math.Min(xmin, r.beta), math.Max(xmax, r.beta)
+		drawn++
+		if r.untrusted {
+			doubts = append(doubts, plotter.XY{X: r.beta, Y: y})
 			continue
 		}
 		c := modelStyle(r.model).Color
@@ -69,11 +79,14 @@ func variantsFigure(b *Bundle) *figure {
 		}
 		sc.GlyphStyle = draw.GlyphStyle{Color: c, Radius: vg.Points(3.5), Shape: glyphs[i]}
 		p.Add(sc)
-		xmin, xmax = math.Min(xmin, r.beta), math.Max(xmax, r.beta)
-		drawn++
 	}
 	if drawn == 0 {
 		return nil
+	}
+	caption := "Reliability index β (dimensionless) of the study and of each variant (bar: its 95% interval), all from the same random numbers; dashed: the target. The colour is the capacity model's, the same in every picture; a second case of one model takes another mark."
+	doubt := addDoubts(p, doubts)
+	if doubt != nil {
+		caption += " A hollow grey ring marked ? is a case whose estimate the engine does not trust (the warnings and the tables say why): it is no result, it has no interval drawn and it is not judged against the target."
 	}
 	if d.TargetBeta != nil && finite(*d.TargetBeta) {
 		t := *d.TargetBeta
@@ -85,6 +98,9 @@ func variantsFigure(b *Bundle) *figure {
 			xmin, xmax = math.Min(xmin, t), math.Max(xmax, t)
 		}
 	}
+	if doubt != nil {
+		p.Legend.Add(doubtLegend, doubt)
+	}
 	span := math.Max(xmax-xmin, 0.2)
 	p.X.Min, p.X.Max = xmin-0.15*span, xmax+0.15*span
 	// A free band above the rows holds the legend, clear of the target line.
@@ -92,5 +108,5 @@ func variantsFigure(b *Bundle) *figure {
 	p.NominalY(names...)
 	p.Y.Tick.Label.Font.Size = 9
 	h := vg.Length(3.5+0.9*float64(n)) * vg.Centimeter
-	return &figure{Name: "variants", Caption: "Reliability index β (dimensionless) of the study and of each variant (bar: its 95% interval), all from the same random numbers; dashed: the target. The colour is the capacity model's, the same in every picture; a second case of one model takes another mark.", W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
+	return &figure{Name: "variants", Caption: caption, W: 16 * vg.Centimeter, H: h, Plots: []*plot.Plot{p}}
 }

@@ -69,12 +69,20 @@ func casesText(b *Bundle, d *Document) string {
 	return w.String()
 }
 
-// variantsText is the table of the study and its variants.
+// variantsText is the table of the study and its variants. A case whose
+// estimate the engine does not trust is marked "not trusted (?)" and
+// said below the table, with the reason: it is no result.
 func variantsText(c *CaseTable, d *Document, beta func(*Point) string) string {
 	var w strings.Builder
-	row := func(name string, pf float64, ci [2]float64, b Index) {
+	var doubts []string
+	row := func(name string, pf float64, ci [2]float64, b Index, untrusted bool, reason string) {
 		pt := &Point{Pf: pf, Beta: b}
-		fmt.Fprintf(&w, "    %-28s %10s  [%9s, %9s]  %6s\n", name, PfText(pf), PfText(ci[0]), PfText(ci[1]), beta(pt))
+		fmt.Fprintf(&w, "    %-28s %10s  [%9s, %9s]  %6s", name, PfText(pf), PfText(ci[0]), PfText(ci[1]), beta(pt))
+		if untrusted {
+			w.WriteString("  " + untrustedMark)
+			doubts = append(doubts, untrustedLine(name, reason))
+		}
+		w.WriteString("\n")
 	}
 	summaryLine(&w, "variants", "(same seed and blocks as the main run)")
 	fmt.Fprintf(&w, "    %-28s %10s  %-22s  %6s\n", "variant", "pf", "95 % interval", "beta")
@@ -88,9 +96,12 @@ func variantsText(c *CaseTable, d *Document, beta func(*Point) string) string {
 	if d.Beta != nil {
 		b = *d.Beta
 	}
-	row("study ("+c.StudyName+")", pf, ci, b)
+	row("study ("+c.StudyName+")", pf, ci, b, d.Trusted != nil && !*d.Trusted, d.StatusReason)
 	for _, v := range d.Variants {
-		row(v.Name, v.Pf, v.PfCI, v.Beta)
+		row(v.Name, v.Pf, v.PfCI, v.Beta, v.Untrusted(), v.StatusReason)
+	}
+	for _, s := range doubts {
+		w.WriteString("    " + s + "\n")
 	}
 	return w.String()
 }

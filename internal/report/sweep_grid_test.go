@@ -28,7 +28,7 @@ func TestCasesCSVKeys(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	head := []string{"variant", "member.length (mm)", "imperfection.bow (fraction of L)", "relative_slenderness (nominal, minor axis) (-)", "pf (-)", "pf_low (-)", "pf_high (-)", "beta (-)"}
+	head := []string{"variant", "member.length (mm)", "imperfection.bow (fraction of L)", "relative_slenderness (nominal, minor axis) (-)", "pf (-)", "pf_low (-)", "pf_high (-)", "beta (-)", "trusted"}
 	if strings.Join(rows[0], "|") != strings.Join(head, "|") {
 		t.Fatalf("head %q\nwant %q", rows[0], head)
 	}

@@ -50,6 +50,9 @@ type view struct {
 	SweepCurves *table // every curve's β at every swept value
 	Sweep       []pointRow
 	Variants    []pointRow
+	// SweepNoted and VariantsNoted are set when a row of Sweep or of
+	// Variants has a Note: its table gains the column.
+	SweepNoted, VariantsNoted bool
 	// Inventory is the study's inventory (inventory_view.go).
 	Inventory *invView
 	// Calibration is the partial-factor calibration (calibration_view.go).
@@ -80,7 +83,10 @@ type sobolRow struct{ Variable, First, FirstCI, Total, TotalCI string }
 
 type formRow struct{ Variable, DesignPoint, Importance string }
 
-type pointRow struct{ Name, Pf, PfCI, Beta string }
+// pointRow is a case of a sweep or a variant in the report's tables;
+// Note says, for a case whose estimate is not trusted, that it is no
+// result and why ("" otherwise).
+type pointRow struct{ Name, Pf, PfCI, Beta, Note string }
 
 type updateRow struct{ Variable, Prior, After, Unit, N, Picture string }
 
@@ -275,10 +281,20 @@ func makeView(b *Bundle, pics []picture, notes []string) *view {
 		if b.Cases.manyKeys() {
 			name = pointName(pointOf(b.Cases, p))
 		}
-		v.Sweep = append(v.Sweep, pointRow{name, prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta))})
+		r := pointRow{name, prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta)), ""}
+		if p.Doubtful {
+			r.Note = untrustedNote(p.StatusReason)
+			v.SweepNoted = true
+		}
+		v.Sweep = append(v.Sweep, r)
 	}
 	for _, p := range d.Variants {
-		v.Variants = append(v.Variants, pointRow{p.Name, prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta))})
+		r := pointRow{p.Name, prob(p.Pf), intervalText(p.PfCI[:], prob), BetaText(float64(p.Beta)), ""}
+		if p.Untrusted() {
+			r.Note = untrustedNote(p.StatusReason)
+			v.VariantsNoted = true
+		}
+		v.Variants = append(v.Variants, r)
 	}
 	v.Target, v.Measured = targetRows(&d), measuredRows(&d)
 	v.CodeCheck = CodeCheckRows(d.CodeCheck)
