@@ -19,9 +19,9 @@ import (
 	"io"
 	"os"
 	"runtime/debug"
-	"strutrisk/internal/cli"
 
 	"strutrisk/internal/analysis"
+	"strutrisk/internal/cli"
 	"strutrisk/internal/report"
 )
 

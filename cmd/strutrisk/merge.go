@@ -4,8 +4,8 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"strutrisk/internal/cli"
 
+	"strutrisk/internal/cli"
 	"strutrisk/internal/shardstate"
 )
 
@@ -31,17 +31,8 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 		return exitInput
 	}
 	o.set = map[string]bool{}
-	states, err := shardstate.ReadAll(dirs)
+	first, replay, studyPath, err := shardstate.Open(dirs, studyPath)
 	if err != nil {
-		fmt.Fprintf(stderr, "strutrisk merge: %v\n", err)
-		return exitInput
-	}
-	replay, err := shardstate.Join(states, dirs)
-	if err != nil {
-		fmt.Fprintf(stderr, "strutrisk merge: nothing merged: %v\n", err)
-		return exitInput
-	}
-	if studyPath, err = states[0].Locate(studyPath); err != nil {
 		fmt.Fprintf(stderr, "strutrisk merge: %v\n", err)
 		return exitInput
 	}
@@ -49,12 +40,12 @@ func mergeCmd(args []string, stdout, stderr io.Writer) int {
 	if code != exitOK {
 		return code
 	}
-	if err := states[0].CheckInventory(l.Study.InventoryPath()); err != nil {
+	if err := first.CheckInventory(l.Study.InventoryPath()); err != nil {
 		fmt.Fprintf(stderr, "strutrisk merge: nothing merged: %v\n", err)
 		return exitInput
 	}
 	settings := l.Settings(o.ov.Workers)
-	states[0].Settings.Apply(&settings)
+	first.Settings.Apply(&settings)
 	settings.Shard = replay
 	return runAndWrite(o, studyPath, l, settings, stdout, stderr)
 }

@@ -4,9 +4,9 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"strutrisk/internal/cli"
 
 	"strutrisk/internal/analysis"
+	"strutrisk/internal/cli"
 	"strutrisk/internal/modelerror"
 	"strutrisk/internal/outdir"
 )
