@@ -7,8 +7,18 @@ import (
 )
 
 // autoCrudeLimit is the largest number of samples auto spends on plain
-// Monte Carlo; a target that needs more goes to importance sampling.
+// Monte Carlo by default (Settings.AutoCrudeLimit); a target that needs
+// more goes to importance sampling.
 const autoCrudeLimit = 5e6
+
+// crudeLimit is the largest number of samples auto spends on plain Monte
+// Carlo with settings s.
+func (s *Settings) crudeLimit() float64 {
+	if s.AutoCrudeLimit > 0 {
+		return float64(s.AutoCrudeLimit)
+	}
+	return autoCrudeLimit
+}
 
 // auto chooses an estimator. For a Model marked Expensive with at most
 // surrogateMaxDim (10) inputs it learns a surrogate (the surrogate
@@ -20,7 +30,8 @@ const autoCrudeLimit = 5e6
 //     input, since it is exact in that input and smooth in the others;
 //   - plain Monte Carlo when FORM's pf is large enough for the budget to
 //     reach the target CoV, n >= (1 - pf)/(pf CoV^2), and that n is at most
-//     autoCrudeLimit (beyond it importance sampling is far quicker);
+//     Settings.AutoCrudeLimit, default autoCrudeLimit (beyond it importance
+//     sampling is far quicker);
 //   - importance sampling around the design points otherwise;
 //   - subset simulation when FORM fails or importance sampling fails or
 //     flags its own result.
@@ -71,7 +82,7 @@ func autoSampling(ctx context.Context, m *Model, t *Transform, s *Settings, note
 		return a.subset(a.formNote)
 	}
 	need := (1 - a.f.Pf) / (a.f.Pf * a.target * a.target)
-	if a.f.Pf > 0 && need <= float64(s.Samples) && need <= autoCrudeLimit {
+	if a.f.Pf > 0 && need <= float64(s.Samples) && need <= s.crudeLimit() {
 		return a.mc(fmt.Sprintf("%s: plain Monte Carlo reaches CoV %.3g within about %.3g of the %d samples allowed", a.formNote, a.target, need, s.Samples))
 	}
 	return a.importance(need)
@@ -197,5 +208,5 @@ func (a *autoRun) importance(need float64) (*Result, error) {
 	if math.IsNaN(res.Pf) {
 		return a.subset(a.formNote + ": importance sampling returned no estimate")
 	}
-	return a.finish(res, fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples (budget %d, and auto spends at most %.0g on it); importance sampling around the design point", a.formNote, need, a.s.Samples, autoCrudeLimit)), nil
+	return a.finish(res, fmt.Sprintf("%s: plain Monte Carlo would need about %.3g samples (budget %d, and auto spends at most %.3g on it); importance sampling around the design point", a.formNote, need, a.s.Samples, a.s.crudeLimit())), nil
 }

@@ -123,3 +123,30 @@ func TestAutoPrefersImportanceForLongCrudeRuns(t *testing.T) {
 		t.Errorf("beta %v, exact %v", res.Beta, beta)
 	}
 }
+
+// TestAutoCrudeLimit checks Settings.AutoCrudeLimit: lognormal R/S with
+// beta about 2.46 (pf about 7e-3, exact by the lognormal closed form) at
+// CoV 0.05 needs about 5.7e4 crude samples, which auto spends by default;
+// with a limit of 25,000 it samples around the design point instead, and
+// its pf holds the exact one in its interval.
+func TestAutoCrudeLimit(t *testing.T) {
+	t.Parallel()
+	m, beta := lnRS(170, 0.10, 100, 0.20)
+	want := math.Erfc(beta/math.Sqrt2) / 2
+	for _, c := range []struct {
+		limit  int64
+		method Method
+	}{{0, MonteCarlo}, {25_000, Importance}} {
+		res, err := Run(context.Background(), m, &Settings{Samples: 1_000_000, Seed: 5, TargetCoV: 0.05, AutoCrudeLimit: c.limit})
+		if err != nil {
+			t.Fatal(err)
+		}
+		t.Logf("limit %d, exact pf %.4g: %v, pf %.4g, %d evaluations; %s", c.limit, want, res.Method, res.Pf, res.Evaluations, res.Reason)
+		if res.Method != c.method {
+			t.Errorf("limit %d: auto used %v, want %v", c.limit, res.Method, c.method)
+		}
+		if !(res.PfCI[0] <= want && want <= res.PfCI[1]) {
+			t.Errorf("limit %d: pf interval %v misses the exact %v", c.limit, res.PfCI, want)
+		}
+	}
+}

@@ -27,6 +27,11 @@ type Settings struct {
 	Samples int64
 	// TargetCoV stops sampling once the CoV of Pf is this small; 0 never.
 	TargetCoV float64
+	// AutoCrudeLimit is the most samples Auto spends on plain Monte Carlo:
+	// a target CoV that needs more goes to importance sampling; default
+	// 5e6. A caller running many small studies (an inventory's members)
+	// sets it lower.
+	AutoCrudeLimit int64
 	// Seed seeds every random stream.
 	Seed uint64
 	// Workers is the number of goroutines; default runtime.NumCPU().
