@@ -24,8 +24,8 @@ const union3Rel = 1e-8
 //	sum_i p_i - sum_{i<j} p_ij + p_123,
 //
 // each pair's joint tail p_ij from the exact one-dimensional integral of
-// formJoint2 (by formJointTail), and the triple's from one more level of conditioning on
-// the variable k least correlated with the other two,
+// formJoint2 (by formJointTail), and the triple's from one more level of
+// conditioning on the variable k least correlated with the other two,
 //
 //	p_123 = ∫_{b_k}^∞ phi(z) P(Z_i > b_i, Z_j > b_j | Z_k = z) dz,
 //
@@ -73,12 +73,12 @@ func formUnion3(b []float64, r [][]float64) (pf float64, ok bool) {
 	si, sj := math.Sqrt(1-r[i][k]*r[i][k]), math.Sqrt(1-r[j][k]*r[j][k])
 	rho := (r[i][j] - r[i][k]*r[j][k]) / (si * sj)
 	// An error d in the inner probability moves the triple by at most d
-	// P(Z_k > b_k), so d = tol / (8 P(Z_k > b_k)) leaves half of the
-	// triple's quarter to the outer integral.
-	inner := tol / (8 * p[k])
+	// P(Z_k > b_k), so the inner probability needs d <= tol / (8 P(Z_k >
+	// b_k)), at least union3Rel/8 as P(Z_k > b_k) <= top: bvnUpper's
+	// absolute 1e-15 is far below.
 	f := func(z float64) float64 {
 		x, y := (b[i]-r[i][k]*z)/si, (b[j]-r[j][k]*z)/sj
-		return distuv.UnitNormal.Prob(z) * formJointTail(x, y, rho, inner)
+		return distuv.UnitNormal.Prob(z) * math.Max(0, bvnUpper(x, y, rho))
 	}
 	triple := kronrodAdaptive(f, b[k], math.Max(b[k], 0)+9, tol/8)
 	return p[0] + p[1] + p[2] - pairs + triple, true
