@@ -1,5 +1,7 @@
 package study
 
+import "math"
+
 // designK holds, by end condition with a fixed end, the effective length
 // factor design practice takes in place of the theoretical one, since a
 // real connection is never fully fixed (common practice; the values of
@@ -21,4 +23,23 @@ func (p *parser) fixedEndsNote(ends string, k float64, line int) {
 	}
 	p.warnf("member.ends (line %d): %s takes K = %.3g, the theoretical value for a fixed end that cannot rotate at all; a real connection or base rotates a little, and design practice takes K = %.3g or more (common practice): give k (a value or a distribution) or spring_top and spring_bottom for the fixity you can justify",
 		line, ends, k, dk)
+}
+
+// rigidSpringsNote warns, once per key, of an end spring written "rigid":
+// an end that cannot rotate at all, as with a fixed end of member.ends.
+func (p *parser) rigidSpringsNote() {
+	seen := map[string]bool{}
+	for _, e := range p.st.Ends {
+		if e.How != "springs" {
+			continue
+		}
+		for _, q := range []*Quantity{e.Top, e.Bottom} {
+			if q == nil || q.Dist != nil || !math.IsInf(q.Value, 1) || seen[q.Path] {
+				continue
+			}
+			seen[q.Path] = true
+			p.warnf("%s (line %d): \"rigid\" is an end that cannot rotate at all, which gives the theoretical K of a fixed end; a real connection or base rotates a little (common practice): give the rotational stiffness you can justify, or a distribution of it",
+				q.Path, q.Line)
+		}
+	}
 }

@@ -54,3 +54,46 @@ model = "curve"
 		}
 	}
 }
+
+// TestRigidSpringsWarn: an end spring written "rigid" is a fixed end as
+// well (K = 0.5 with both ends rigid, Timoshenko & Gere ch. 2), warned of
+// once per key with its line; a finite stiffness is not.
+func TestRigidSpringsWarn(t *testing.T) {
+	for _, c := range []struct {
+		springs string
+		want    []string
+	}{
+		{"spring_top = \"rigid\"\nspring_bottom = \"rigid\"", []string{"member.spring_top (line 3): \"rigid\"", "member.spring_bottom (line 4): \"rigid\""}},
+		{"spring_top = \"rigid\"\nspring_bottom = { major = \"rigid\", minor = 0 }", []string{"member.spring_top (line 3)", "member.spring_bottom.major (line 4)"}},
+		{"spring_top = 5e9\nspring_bottom = 0", nil},
+	} {
+		text := "[member]\nlength = 3000\n" + c.springs + `
+[member.section]
+shape = "rect"
+depth = 100
+width = 100
+[material]
+modulus = 210000
+yield = 355
+[loads]
+dead = "100 kN"
+[capacity]
+model = "curve"
+`
+		var got []string
+		for _, w := range parse(t, text).Warnings {
+			if strings.HasPrefix(w, "member.spring") {
+				got = append(got, w)
+			}
+		}
+		if len(got) != len(c.want) {
+			t.Errorf("%s: warnings %q, want %d", c.springs, got, len(c.want))
+			continue
+		}
+		for i, w := range c.want {
+			if !strings.HasPrefix(got[i], w) || !strings.Contains(got[i], "cannot rotate at all") {
+				t.Errorf("%s: warning %q, want it to start %q", c.springs, got[i], w)
+			}
+		}
+	}
+}

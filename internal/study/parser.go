@@ -541,6 +541,7 @@ func (p *parser) member(top *table) {
 		}
 		p.st.Ends[a] = spec
 	}
+	p.rigidSpringsNote()
 	p.section(t)
 	p.unknown(t)
 }
