@@ -41,7 +41,7 @@ type SurrogateSettings struct {
 	MaxPopulation int
 	// MaxLearning bounds the model evaluations the learning adds after
 	// FORM's, each followed by a refit of the Kriging model whose cost
-	// grows with the cube of its points; default 300
+	// grows with the cube of its points; default 600
 	// (DefaultSurrogateMaxLearning). A run that reaches it before the
 	// model settles is Unsettled, as one whose budget ends.
 	MaxLearning int
