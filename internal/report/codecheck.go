@@ -101,7 +101,7 @@ func CodeCheckRows(c *CodeCheck) []KV {
 		{"buckling resistance N_b,Rd = chi A fy / gamma_M1", fmt.Sprintf("%s: chi %s, gamma_M1 %s", kN(c.BucklingResistance), fixed(c.Chi, 3), sig(c.GammaM1, 3))},
 		{"cross-section resistance N_c,Rd = A fy / gamma_M0", fmt.Sprintf("%s: A %s, fy %s, gamma_M0 %s", kN(c.CrossSectionResistance), withUnit(c.EffectiveArea, "mm2"), withUnit(c.Yield, "MPa"), sig(c.GammaM0, 3))},
 		{"governing mode", fmt.Sprintf("%s (%s axis), N_cr %s, relative slenderness %s, %s", c.Mode, c.Axis, kN(c.CriticalLoad), fixed(c.RelativeSlenderness, 3), curve)},
-		{"load factors", fmt.Sprintf("gamma_G %s, gamma_Q %s, psi_0 %s%s", sig(c.GammaG, 3), sig(c.GammaQ, 3), sig(c.Psi0, 2), psi0Loads(c.Psi0Loads))},
+		{"load factors", fmt.Sprintf("gamma_G %s, gamma_Q %s, %s", sig(c.GammaG, 3), sig(c.GammaQ, 3), psi0Text(c))},
 	}
 	for _, k := range sortedKeys(c.Characteristic) {
 		s := withUnit(c.Characteristic[k], c.CharacteristicUnits[k]) + " (" + c.CharacteristicBasis[k]
@@ -142,11 +142,21 @@ func CodeCheckLine(c *CodeCheck) string {
 		return ""
 	}
 	verdict := verdictOf(c)
-	return fmt.Sprintf("utilisation %s, %s: N_Ed %s / N_Rd %s at characteristic values (EN 1993-1-1 6.3.1, EN 1990 6.10; gamma_M0 %s, gamma_M1 %s, gamma_G %s, gamma_Q %s, psi_0 %s). Recommended factors unless set: the National Annex may differ.",
-		fixed(c.Utilisation, 3), verdict, kN(c.DesignLoad), kN(c.Resistance), sig(c.GammaM0, 3), sig(c.GammaM1, 3), sig(c.GammaG, 3), sig(c.GammaQ, 3), sig(c.Psi0, 2))
+	return fmt.Sprintf("utilisation %s, %s: N_Ed %s / N_Rd %s at characteristic values (EN 1993-1-1 6.3.1, EN 1990 6.10; gamma_M0 %s, gamma_M1 %s, gamma_G %s, gamma_Q %s, %s). Recommended factors unless set: the National Annex may differ.",
+		fixed(c.Utilisation, 3), verdict, kN(c.DesignLoad), kN(c.Resistance), sig(c.GammaM0, 3), sig(c.GammaM1, 3), sig(c.GammaG, 3), sig(c.GammaQ, 3), psi0Text(c))
 }
 
-// psi0Loads lists the combination factors of named loads, "; psi_0 of
+// psi0Text gives the combination factors of c: "psi_0 0.7", or with
+// factors by load "psi_0 of loads.snow 0.5, loads.stock 1, of the other
+// loads 0.7".
+func psi0Text(c *CodeCheck) string {
+	if len(c.Psi0Loads) == 0 {
+		return "psi_0 " + sig(c.Psi0, 2)
+	}
+	return psi0Loads(c.Psi0Loads) + ", of the other loads " + sig(c.Psi0, 2)
+}
+
+// psi0Loads lists the combination factors of named loads, "psi_0 of
 // loads.snow 0.5, loads.stock 1", or "" when there are none.
 func psi0Loads(m map[string]float64) string {
 	if len(m) == 0 {
@@ -156,5 +166,5 @@ func psi0Loads(m map[string]float64) string {
 	for _, k := range sortedKeys(m) {
 		parts = append(parts, k+" "+sig(m[k], 2))
 	}
-	return "; psi_0 of " + strings.Join(parts, ", ")
+	return "psi_0 of " + strings.Join(parts, ", ")
 }
