@@ -268,8 +268,10 @@ func (c *CodeCheck) Rule() string {
 	if c.Combination.Leading != "" {
 		s += " (" + c.Combination.Leading + ")"
 	}
-	s += fmt.Sprintf(", gamma_Q psi_0 = %g x %g on the others", c.Factors.GammaQ, c.Factors.Psi0)
-	if len(c.Factors.Psi0By) > 0 {
+	if len(c.Factors.Psi0By) == 0 {
+		s += fmt.Sprintf(", gamma_Q psi_0 = %g x %g on the others", c.Factors.GammaQ, c.Factors.Psi0)
+	} else {
+		// Each load its own psi_0: no one product stands for the others.
 		names := make([]string, 0, len(c.Factors.Psi0By))
 		for n := range c.Factors.Psi0By {
 			names = append(names, n)
@@ -278,7 +280,7 @@ func (c *CodeCheck) Rule() string {
 		for i, n := range names {
 			names[i] = fmt.Sprintf("%s %g", n, c.Factors.Psi0By[n])
 		}
-		s += " (psi_0 of " + strings.Join(names, ", ") + ")"
+		s += fmt.Sprintf(", gamma_Q %g times psi_0 on the others (psi_0 of %s, of the other loads %g)", c.Factors.GammaQ, strings.Join(names, ", "), c.Factors.Psi0)
 	}
 	s += "; favourable loads 1.0 (permanent) or 0 (variable)"
 	if c.EffectFactor != 1 {
