@@ -68,13 +68,18 @@ func sci(x float64, n int) string {
 }
 
 // prob formats a probability: scientific below 0.01, else 3 significant
-// digits.
+// digits, or above 0.999 as many as tell it from 1.
 func prob(p float64) string {
 	if !finite(p) {
 		return notAvailable
 	}
 	if p != 0 && math.Abs(p) < 0.01 {
 		return sci(p, 3)
+	}
+	if p > 0.999 && p < 1 {
+		// Enough digits to tell it from 1: the lower end of the interval
+		// when every sample failed, 0.99963, is not certainty.
+		return strconv.FormatFloat(p, 'g', int(math.Ceil(-math.Log10(1-p)))+2, 64)
 	}
 	return sig(p, 3)
 }

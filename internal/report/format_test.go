@@ -23,6 +23,12 @@ func TestFormat(t *testing.T) {
 		{prob(0.00184), "1.84e-3"},
 		{prob(0.25), "0.25"},
 		{prob(0), "0"},
+		// The Clopper-Pearson lower bound of pf when all of 10000
+		// samples fail, 0.025^(1/10000) = 0.999631 (Clopper and Pearson
+		// 1934, closed form for k = n), printed "1" with 3 digits.
+		{prob(math.Pow(0.025, 1.0/10000)), "0.999631"},
+		{prob(1), "1"},
+		{prob(0.9985), "0.999"},
 		{percent(0.0233), "2.3%"},
 		{fixed(math.Inf(-1), 2), notAvailable},
 		{thousands(1000000), "1 000 000"},
