@@ -12,9 +12,9 @@ import (
 // normals Z with correlation R_ij = alpha_i·alpha_j, that is
 // 1 - Phi_m(beta; R), computed as a union so that tiny probabilities keep
 // their relative accuracy. One point is exact, two use a 1-D integral
-// (formUnion2), three nested 1-D integrals (formUnion3), more, and three
-// of which two are (nearly) parallel or opposite, Genz's separation of
-// variables (formUnionGenz).
+// (formUnion2), three nested 1-D integrals (formUnion3), four one more
+// level (formUnion4); more, and three or four of which two are (nearly)
+// parallel or opposite, Genz's separation of variables (formUnionGenz).
 func formSeriesPf(beta []float64, alpha [][]float64) float64 {
 	switch len(beta) {
 	case 0:
@@ -33,8 +33,13 @@ func formSeriesPf(beta []float64, alpha [][]float64) float64 {
 		}
 		r[i][i] = 1
 	}
-	if m == 3 {
+	switch m {
+	case 3:
 		if pf, ok := formUnion3(beta, r); ok {
+			return pf
+		}
+	case 4:
+		if pf, ok := formUnion4(beta, r); ok {
 			return pf
 		}
 	}
