@@ -272,6 +272,8 @@ func runDerived(ctx context.Context, st, cs *study.Study, i int, s *sim.Settings
 	if res.Status != sim.Converged {
 		pt.StatusReason = res.StatusReason
 	}
+	trusted := res.Status.Trusted()
+	pt.Trusted = &trusted
 	if i >= 0 {
 		values := st.PointValues(i)
 		pt.Value = values[0]

@@ -204,10 +204,12 @@ type Point struct {
 	Pf       float64    `json:"pf"`
 	Beta     Index      `json:"beta"`
 	PfCI     [2]float64 `json:"pf_ci"`
-	// Status and StatusReason are the case's trust status and why it is
-	// not converged, as Document's (kept for the variants' entries).
-	Status       string `json:"-"`
-	StatusReason string `json:"-"`
+	// Status, StatusReason and Trusted are the case's trust status, why
+	// it is not converged and whether a verdict may be drawn from it, as
+	// Document's; Trusted is nil when unknown.
+	Status       string `json:"status,omitempty"`
+	StatusReason string `json:"status_reason,omitempty"`
+	Trusted      *bool  `json:"trusted,omitempty"`
 }
 
 // Variant is one named alternative of a study, at the study's values.
