@@ -119,8 +119,8 @@ const (
 	// evaluations (Echard, Gayton and Lemaire 2011: 126 for the
 	// four-branch system; from memory); of the demos, the store's two
 	// loads settled after 460 and the measured retrofit after 312, and a
-	// Kriging model of 600 points beyond FORM's still takes about a
-	// second per step.
+	// Kriging model of 600 points beyond FORM's takes a second or two
+	// per step.
 	DefaultSurrogateMaxLearning = 600
 	// surrogateU is the learning threshold of AK-MCS: min U >= 2.
 	surrogateU = 2.0

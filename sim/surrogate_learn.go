@@ -8,8 +8,8 @@ import (
 
 // learn is the active-learning loop of the surrogate (see surrogate).
 // After each model evaluation only the active candidates, those whose U
-// was below surrogateActiveU when all were last predicted and has stayed
-// below it since, are predicted again; before the loop may stop every candidate is predicted again
+// was below surrogateActiveU when all were last predicted, are predicted
+// again; before the loop may stop every candidate is predicted again
 // (and the loop goes on if any is then uncertain), so the stop rests on
 // all of them.
 func (a *akRun) learn() error {
@@ -59,7 +59,6 @@ func (a *akRun) learn() error {
 			return err
 		}
 		a.predict(a.active)
-		a.active = a.activeAmong(a.active)
 		a.stale = true
 		e = a.estimate()
 		a.tr.point(ConvergencePoint{Evaluations: int64(a.evals), Pf: e.pf, PfCI: [2]float64{e.lo, e.hi}, PfCoV: e.cov})
@@ -163,21 +162,6 @@ func (a *akRun) activeIn(list []int, from int) []int {
 		}
 	}
 	return list
-}
-
-// activeAmong keeps, in place, the candidates of list not evaluated whose
-// U, just predicted, is still below surrogateActiveU: those the model has
-// become sure of cost a prediction at every step and can no longer be the
-// least U; the prediction of all before the loop may stop brings back any
-// whose U fell again.
-func (a *akRun) activeAmong(list []int) []int {
-	keep := list[:0]
-	for _, i := range list {
-		if !a.taken[i] && !(math.Abs(a.mu[i]) >= surrogateActiveU*a.sd[i]) {
-			keep = append(keep, i)
-		}
-	}
-	return keep
 }
 
 // predict predicts the candidates listed (all for nil), in chunks over
