@@ -18,8 +18,10 @@ var (
 )
 
 // bvnUpper returns P(X > h, Y > k) for standard normals X and Y with
-// correlation r, to about 1e-15 absolute (not relative: use formJoint2
-// where a tiny probability must keep its digits), by Genz's method (A.
+// correlation r, to an absolute error Genz gives as about 1e-15 (checked
+// here to within formJoint2's own accuracy, 1e-11 of the larger limit's
+// tail; absolute, not relative: use formJoint2 where a tiny probability
+// must keep its digits), by Genz's method (A.
 // Genz, "Numerical computation of rectangular bivariate and trivariate
 // normal and t probabilities", Statistics and Computing 14, 2004,
 // 251-260; from memory): for |r| < 0.925 Gauss-Legendre quadrature of
