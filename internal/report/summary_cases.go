@@ -49,9 +49,14 @@ func casesText(b *Bundle, d *Document) string {
 	}
 	var w strings.Builder
 	infinite := false // a beta printed as inf or -inf needs its statement
+	doubted := false  // a case marked ? needs its statement
 	beta := func(pt *Point) string {
 		s := caseBeta(pt)
 		infinite = infinite || strings.Contains(s, "inf")
+		if pt.Doubtful {
+			s += "?"
+			doubted = true
+		}
 		return s
 	}
 	if len(d.Variants) > 0 {
@@ -62,6 +67,9 @@ func casesText(b *Bundle, d *Document) string {
 		w.WriteString(gridText(b, beta))
 	case len(c.Values) > 0:
 		w.WriteString(sweepText(b, beta))
+	}
+	if doubted {
+		w.WriteString("    (beta followed by ?: the case's estimate is not trusted, it is no result and no verdict is drawn from it; the warnings say why)\n")
 	}
 	if infinite {
 		w.WriteString("    (beta inf: no sample of the case failed, beta is only bounded below; -inf: every sample failed, not a result to read before the inputs are checked)\n")

@@ -71,7 +71,11 @@ func gridCasesTable(b *Bundle) *table {
 			}
 			// The upper pf gives the lower β.
 			ci := Indices(sim.BetaFromPf(p.PfCI[1]), sim.BetaFromPf(p.PfCI[0]))
-			row = append(row, caseBeta(p)+" ("+betaIntervalText(ci)+")")
+			cell := caseBeta(p) + " (" + betaIntervalText(ci) + ")"
+			if p.Doubtful {
+				cell += " " + untrustedMark
+			}
+			row = append(row, cell)
 		}
 		t.Rows = append(t.Rows, row)
 	}

@@ -100,3 +100,36 @@ func TestUntrustedVariantMarked(t *testing.T) {
 		t.Error("the picture marks a trusted variant")
 	}
 }
+
+// TestUntrustedSweepCaseMarked: a sweep case whose estimate is not
+// trusted is marked in the summary's sweep table (beta followed by ?,
+// with the statement below it) and in the report's table of a sweep of
+// several keys; a trusted one is not.
+func TestUntrustedSweepCaseMarked(t *testing.T) {
+	t.Parallel()
+	pts := []*Point{
+		{Value: 3000, Pf: 2.1e-5, Beta: 4.10, PfCI: [2]float64{1.6e-5, 2.7e-5}},
+		{Value: 4000, Pf: 2.4e-4, Beta: 3.49, PfCI: [2]float64{2.1e-4, 2.7e-4}, Doubtful: true},
+	}
+	b := &Bundle{Doc: &Document{}, SweepLabel: "member length (mm)",
+		Cases: &CaseTable{StudyName: "perry-robertson", Values: []float64{3000, 4000}, Grid: [][]*Point{pts}}}
+	text := casesText(b, b.Doc)
+	if !strings.Contains(text, "3.49?") || !strings.Contains(text, "beta followed by ?: the case's estimate is not trusted") {
+		t.Errorf("summary's sweep table:\n%s", text)
+	}
+	for _, l := range strings.Split(text, "\n") {
+		if strings.Contains(l, "3000") && strings.Contains(l, "?") {
+			t.Errorf("summary marks a trusted case: %q", l)
+		}
+	}
+	b.Cases = &CaseTable{StudyName: "perry-robertson", Keys: []string{"member.length (mm)", "imperfection.bow (mm)"},
+		Points: [][]float64{{3000, 1}, {4000, 1}}, Grid: [][]*Point{pts}}
+	tab := gridCasesTable(b)
+	if tab == nil || len(tab.Rows) != 2 {
+		t.Fatalf("grid table %+v", tab)
+	}
+	last := func(r []string) string { return r[len(r)-1] }
+	if strings.Contains(last(tab.Rows[0]), untrustedMark) || !strings.Contains(last(tab.Rows[1]), untrustedMark) {
+		t.Errorf("grid table rows %q", tab.Rows)
+	}
+}
