@@ -22,13 +22,24 @@ const (
 // by importance sampling the union of the members' failures (Owen,
 // Maximov & Chertkov, "Importance sampling the union of rare events with
 // an application to power systems analysis", Electronic Journal of
-// Statistics 13, 2019, from memory), conditioned on the shared normals:
-// member j is picked with probability p_j / P (p_j = Phi(-beta_j), P =
-// sum p_j), then the shared normals s given that j fails; the density of
-// s is then phi(s) sum_j P_j(s) / P, P_j(s) = P(j fails | s), and each
-// sample contributes P q(s) / sum_j P_j(s), q(s) = P(some member fails |
-// s), which lies between P/n and P: every failing member's region is
-// sampled, however many there are, and no weight is large.
+// Statistics 13, 2019, from memory), conditioned on the shared normals,
+// and, where the union is not rare, made defensive (Hesterberg,
+// "Weighted average importance sampling and defensive mixture
+// distributions", Technometrics 37, 1995, from memory). Member j is
+// picked with probability p_j / P (p_j = Phi(-beta_j), P = sum p_j), then
+// s given that j fails; the density of s is then phi(s) R(s), R(s) =
+// sum_j P_j(s) / P with P_j(s) = P(j fails | s), and each sample
+// contributes q(s) / R(s) = P q(s) / sum_j P_j(s), q(s) = P(some member
+// fails | s), which lies between P/n and P: every failing member's region
+// is sampled however many there are. With P above 1 (many members likely
+// to fail) a sample can contribute more than 1: the 2,000-member
+// benchmark's union (P = 63) came out at 1.0001 +- 0.044 beside a joint
+// sample of 0.949. There a second, defensive sample is drawn too, half
+// its s from phi itself (density phi(s) (1 + R(s)) / 2, each sample
+// contributing 2 q(s) / (1 + R(s)), below 2 q(s): as good as plain
+// sampling), and the estimate with the smaller standard error is kept
+// (the first is exact for members that all fail together). The estimate
+// is kept within [0, 1].
 func sampleSeries(ms []linearMember, nShared, used int, seed uint64, workers int) seriesIntegral {
 	cum := make([]float64, len(ms))
 	total := 0.0
@@ -39,6 +50,23 @@ func sampleSeries(ms []linearMember, nShared, used int, seed uint64, workers int
 	if !(total > 0) {
 		return seriesIntegral{Method: "no member can fail at first order"}
 	}
+	mean, se := unionSample(ms, nShared, cum, seed, 0, false, workers)
+	defensive := false
+	if total > 1 {
+		if m, e := unionSample(ms, nShared, cum, seed, seriesSamples/seriesBlock, true, workers); e < se {
+			mean, se, defensive = m, e, true
+		}
+	}
+	return seriesIntegral{Pf: math.Min(1, mean), Err: se,
+		Method: fmt.Sprintf("%d shared normals: %d samples of them, %s (importance sampling of the union); the error is the standard error", used, seriesSamples, seriesDraw(defensive))}
+}
+
+// unionSample draws seriesSamples of the shared normals for sampleSeries,
+// defensive or not, block b from the stream of (seed, first + b), and
+// returns the mean and standard error of their contributions. cum are the
+// members' summed probabilities Phi(-beta_j).
+func unionSample(ms []linearMember, nShared int, cum []float64, seed uint64, first int, defensive bool, workers int) (mean, se float64) {
+	total := cum[len(cum)-1]
 	blocks := seriesSamples / seriesBlock
 	sums := make([][2]float64, blocks)
 	next := make(chan int)
@@ -49,12 +77,27 @@ func sampleSeries(ms []linearMember, nShared, used int, seed uint64, workers int
 			defer wg.Done()
 			s := make([]float64, nShared)
 			for b := range next {
-				r := rand.New(rand.NewPCG(seed, uint64(b)))
+				r := rand.New(rand.NewPCG(seed, uint64(first+b)))
 				var sum, sum2 float64
 				for range seriesBlock {
-					j := sort.SearchFloat64s(cum, r.Float64()*total)
-					drawGivenFailure(s, &ms[min(j, len(ms)-1)], r)
-					v := total * unionRatio(ms, s)
+					if defensive && r.Float64() < 0.5 {
+						for k := range s {
+							s[k] = r.NormFloat64()
+						}
+					} else {
+						j := sort.SearchFloat64s(cum, r.Float64()*total)
+						drawGivenFailure(s, &ms[min(j, len(ms)-1)], r)
+					}
+					q, sumP := unionParts(ms, s)
+					var v float64
+					switch {
+					case defensive:
+						v = 2 * q / (1 + sumP/total)
+					case sumP == 0:
+						v = total // s where no member can fail is never drawn
+					default:
+						v = total * q / sumP
+					}
 					sum += v
 					sum2 += v * v
 				}
@@ -73,10 +116,8 @@ func sampleSeries(ms []linearMember, nShared, used int, seed uint64, workers int
 		sum2 += b[1]
 	}
 	n := float64(seriesSamples)
-	mean := sum / n
-	se := math.Sqrt(math.Max(0, sum2/n-mean*mean) / (n - 1))
-	return seriesIntegral{Pf: mean, Err: se,
-		Method: fmt.Sprintf("%d shared normals: %d samples of them, each given one member's failure (importance sampling of the union); the error is the standard error", used, seriesSamples)}
+	mean = sum / n
+	return mean, math.Sqrt(math.Max(0, sum2/n-mean*mean) / (n - 1))
 }
 
 // drawGivenFailure draws the shared normals s given that member m fails:
@@ -104,11 +145,11 @@ func drawGivenFailure(s []float64, m *linearMember, r *rand.Rand) {
 	}
 }
 
-// unionRatio is q(s) / sum_j P_j(s): the probability that some member
-// fails given s over the sum of the members' probabilities, with q by
-// expm1 of the summed log survivals.
-func unionRatio(ms []linearMember, s []float64) float64 {
-	logSurv, sumP := 0.0, 0.0
+// unionParts are q(s), the probability that some member fails given s,
+// by expm1 of the summed log survivals, and sum_j P_j(s), the sum of the
+// members' probabilities given s.
+func unionParts(ms []linearMember, s []float64) (q, sumP float64) {
+	logSurv := 0.0
 	for i := range ms {
 		m := &ms[i]
 		x := m.Beta
@@ -127,8 +168,13 @@ func unionRatio(ms []linearMember, s []float64) float64 {
 			logSurv += logPhi(x)
 		}
 	}
-	if sumP == 0 {
-		return 1 // s where no member can fail is never drawn
+	return -math.Expm1(logSurv), sumP
+}
+
+// seriesDraw says how sampleSeries drew the shared normals.
+func seriesDraw(defensive bool) string {
+	if defensive {
+		return "half drawn as they come, half given one member's failure"
 	}
-	return -math.Expm1(logSurv) / sumP
+	return "each given one member's failure"
 }
