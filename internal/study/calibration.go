@@ -92,10 +92,7 @@ func (p *parser) calibrationRange(t *table, cs *CalibrationSpec) {
 	list, isList := v.([]any)
 	var xs []float64
 	for _, e := range list {
-		switch x := e.(type) {
-		case int64:
-			xs = append(xs, float64(x))
-		case float64:
+		if x, ok := tomlNumber(e); ok {
 			xs = append(xs, x)
 		}
 	}
@@ -132,13 +129,8 @@ func (p *parser) calibrationWeights(t *table, cs *CalibrationSpec) {
 	}
 	sort.Strings(keys)
 	for _, k := range keys {
-		var w float64
-		switch x := m[k].(type) {
-		case int64:
-			w = float64(x)
-		case float64:
-			w = x
-		default:
+		w, ok := tomlNumber(m[k])
+		if !ok {
 			p.errorf(t.key("weights")+"."+k, "must be a number, not %s", tomlType(m[k]))
 			continue
 		}
@@ -178,15 +170,12 @@ func (p *parser) calibrationPointWeights(t *table, cs *CalibrationSpec) {
 	ws := make([]float64, len(list))
 	for i, e := range list {
 		key := fmt.Sprintf("%s[%d]", t.key("point_weights"), i)
-		switch x := e.(type) {
-		case int64:
-			ws[i] = float64(x)
-		case float64:
-			ws[i] = x
-		default:
+		x, ok := tomlNumber(e)
+		if !ok {
 			p.errorf(key, "must be a number, not %s", tomlType(e))
 			continue
 		}
+		ws[i] = x
 		if !(ws[i] > 0) || ws[i] > 1e6 {
 			p.errorf(key, "the weight %g must be a positive number", ws[i])
 		}

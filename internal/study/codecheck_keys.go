@@ -125,13 +125,8 @@ func (p *parser) psi0ByLoad(t *table) bool {
 			p.errorf(at, "%q is not a load of [loads]: name a load as in [loads], e.g. psi_0 = { snow = 0.5 }", name)
 			continue
 		}
-		var x float64
-		switch n := m[name].(type) {
-		case int64:
-			x = float64(n)
-		case float64:
-			x = n
-		default:
+		x, ok := tomlNumber(m[name])
+		if !ok {
 			p.errorf(at, "must be a number from 0 to 1, not %s", tomlType(m[name]))
 			continue
 		}

@@ -138,13 +138,8 @@ func (p *parser) combinationKey(spec *distSpec, kp, k string, v any, o qopt) boo
 		spec.companion = q
 		return q != nil
 	}
-	var r float64
-	switch x := v.(type) {
-	case int64:
-		r = float64(x)
-	case float64:
-		r = x
-	default:
+	r, ok := tomlNumber(v)
+	if !ok {
 		p.errorf(kp, "repetitions must be a whole number, the independent values (pulses) of the load in the reference period, e.g. 50")
 		return false
 	}

@@ -231,16 +231,26 @@ func (p *parser) choice(t *table, key string, options []string) (string, bool) {
 	return "", false
 }
 
+// tomlNumber is the value v of a TOML document as a float64, and
+// whether it is a number (an integer or a float, NaN and infinities
+// included: callers bound it).
+func tomlNumber(v any) (float64, bool) {
+	switch x := v.(type) {
+	case int64:
+		return float64(x), true
+	case float64:
+		return x, true
+	}
+	return 0, false
+}
+
 // number reads a plain number (not a quantity).
 func (p *parser) number(t *table, key string) (float64, bool) {
 	v, ok := t.get(key)
 	if !ok {
 		return 0, false
 	}
-	switch x := v.(type) {
-	case int64:
-		return float64(x), true
-	case float64:
+	if x, ok := tomlNumber(v); ok {
 		if math.IsNaN(x) || math.IsInf(x, 0) {
 			p.errorf(t.key(key), "%v is not a usable number", x)
 			return 0, false
@@ -872,13 +882,8 @@ func (p *parser) count(t *table, key string, max float64) (float64, bool) {
 	if !ok {
 		return 0, false
 	}
-	var f float64
-	switch x := v.(type) {
-	case int64:
-		f = float64(x)
-	case float64:
-		f = x
-	default:
+	f, ok := tomlNumber(v)
+	if !ok {
 		p.errorf(t.key(key), "must be a whole number, not %s", tomlType(v))
 		return 0, false
 	}
